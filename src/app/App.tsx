@@ -1,0 +1,43 @@
+// The page: a top bar, a side panel and the section view filling the rest.
+import { useCallback, useState } from 'react';
+import { SectionView } from '../canvas/SectionView';
+import { ScanControls } from '../panels/ScanControls';
+import { openScanFile } from '../io/openScanFile';
+import { MessageBar } from './MessageBar';
+import { useKeyboardShortcuts } from './useKeyboardShortcuts';
+
+export function App() {
+  const [dropping, setDropping] = useState(false);
+  useKeyboardShortcuts();
+  const onDrop = useCallback((e: React.DragEvent) => {
+    e.preventDefault();
+    setDropping(false);
+    const file = e.dataTransfer.files?.[0];
+    if (file) void openScanFile(file);
+  }, []);
+  return (
+    <div className="app">
+      <header className="top-bar">
+        <span className="app-name">Foldroot</span>
+        <span className="app-tagline">depth to detachment by area balance</span>
+        <MessageBar />
+      </header>
+      <div className="workspace">
+        <aside className="side-panel" aria-label="Controls">
+          <ScanControls />
+        </aside>
+        <main
+          className={`view-box${dropping ? ' dropping' : ''}`}
+          onDragOver={(e) => {
+            e.preventDefault();
+            setDropping(true);
+          }}
+          onDragLeave={() => setDropping(false)}
+          onDrop={onDrop}
+        >
+          <SectionView />
+        </main>
+      </div>
+    </div>
+  );
+}

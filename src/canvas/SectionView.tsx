@@ -1,0 +1,108 @@
+// The section view: a react-konva Stage filling its box. Wheel zooms about the cursor; dragging with the
+// space bar held or the middle button pans. The camera is the Stage's own scale and position.
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { Stage } from 'react-konva';
+import type Konva from 'konva';
+import { useSessionStore } from '../state/sessionStore';
+import { zoomAbout } from '../state/camera';
+import { ScanLayer } from './ScanLayer';
+
+const WHEEL_ZOOM_STEP = 1.0015;
+
+export function SectionView() {
+  const boxRef = useRef<HTMLDivElement>(null);
+  const camera = useSessionStore((s) => s.camera);
+  const viewport = useSessionStore((s) => s.viewport);
+  const [spaceHeld, setSpaceHeld] = useState(false);
+  const [panning, setPanning] = useState(false);
+  const panStart = useRef<{ px: number; py: number; cx: number; cy: number } | null>(null);
+
+  useEffect(() => {
+    const box = boxRef.current;
+    if (!box) return;
+    const ro = new ResizeObserver(() => useSessionStore.getState().setViewport(box.clientWidth, box.clientHeight));
+    ro.observe(box);
+    useSessionStore.getState().setViewport(box.clientWidth, box.clientHeight);
+    return () => ro.disconnect();
+  }, []);
+
+  useEffect(() => {
+    const typing = (t: EventTarget | null) => t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
+    const down = (e: KeyboardEvent) => {
+      if (e.code === 'Space' && !typing(e.target)) {
+        setSpaceHeld(true);
+        e.preventDefault();
+      }
+    };
+    const up = (e: KeyboardEvent) => {
+      if (e.code === 'Space') setSpaceHeld(false);
+    };
+    const blur = () => {
+      setSpaceHeld(false);
+      setPanning(false);
+      panStart.current = null;
+    };
+    window.addEventListener('keydown', down);
+    window.addEventListener('keyup', up);
+    window.addEventListener('blur', blur);
+    return () => {
+      window.removeEventListener('keydown', down);
+      window.removeEventListener('keyup', up);
+      window.removeEventListener('blur', blur);
+    };
+  }, []);
+
+  const onWheel = useCallback((e: Konva.KonvaEventObject<WheelEvent>) => {
+    e.evt.preventDefault();
+    const stage = e.target.getStage();
+    const p = stage?.getPointerPosition();
+    if (!p) return;
+    const { camera: cam, setCamera } = useSessionStore.getState();
+    setCamera(zoomAbout(cam, p.x, p.y, Math.pow(WHEEL_ZOOM_STEP, -e.evt.deltaY)));
+  }, []);
+
+  const onPointerDown = useCallback(
+    (e: Konva.KonvaEventObject<PointerEvent>) => {
+      if (!(spaceHeld || e.evt.button === 1)) return;
+      e.evt.preventDefault();
+      e.cancelBubble = true;
+      const cam = useSessionStore.getState().camera;
+      panStart.current = { px: e.evt.clientX, py: e.evt.clientY, cx: cam.x, cy: cam.y };
+      setPanning(true);
+    },
+    [spaceHeld],
+  );
+
+  const onPointerMove = useCallback((e: Konva.KonvaEventObject<PointerEvent>) => {
+    const start = panStart.current;
+    if (!start) return;
+    const { camera: cam, setCamera } = useSessionStore.getState();
+    setCamera({ ...cam, x: start.cx + e.evt.clientX - start.px, y: start.cy + e.evt.clientY - start.py });
+  }, []);
+
+  const endPan = useCallback(() => {
+    panStart.current = null;
+    setPanning(false);
+  }, []);
+
+  const cursor = panning ? 'grabbing' : spaceHeld ? 'grab' : 'crosshair';
+  return (
+    <div ref={boxRef} className="section-view" data-testid="section-view" style={{ cursor }} onContextMenu={(e) => e.preventDefault()} onAuxClick={(e) => e.preventDefault()}>
+      <Stage
+        width={viewport.width}
+        height={viewport.height}
+        scaleX={camera.scale}
+        scaleY={camera.scale}
+        x={camera.x}
+        y={camera.y}
+        onWheel={onWheel}
+        onPointerDown={onPointerDown}
+        onPointerMove={onPointerMove}
+        onPointerUp={endPan}
+        onPointerLeave={endPan}
+      >
+        <ScanLayer />
+      </Stage>
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+// The document slice: the saved, undoable project, with one undo entry per gesture.
+// Every edit is a pure command (doc -> doc) from src/core; this store only applies them.
+import { create } from 'zustand';
+import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
+
+export type DocCommand = (doc: ProjectDoc) => ProjectDoc;
+
+const HISTORY_LIMIT = 500;
+
+export interface DocState {
+  doc: ProjectDoc;
+  past: ProjectDoc[];
+  future: ProjectDoc[];
+  /** The document at the start of the gesture in progress, or null. */
+  gestureStart: ProjectDoc | null;
+  /** Bumped whenever the document changes (autosave and dirty tracking listen to it). */
+  revision: number;
+  /** Revision of the last save or open, to warn before closing with unsaved changes. */
+  savedRevision: number;
+  apply: (command: DocCommand) => void;
+  beginGesture: () => void;
+  endGesture: () => void;
+  cancelGesture: () => void;
+  undo: () => void;
+  redo: () => void;
+  /** Replaces the document (open, new, restore) and clears the history. */
+  replace: (doc: ProjectDoc) => void;
+  markSaved: () => void;
+}
+
+export const useDocStore = create<DocState>()((set, get) => ({
+  doc: emptyProjectDoc(),
+  past: [],
+  future: [],
+  gestureStart: null,
+  revision: 0,
+  savedRevision: 0,
+  apply: (command) => {
+    const { doc, past, gestureStart, revision } = get();
+    const next = command(doc);
+    if (next === doc) return;
+    if (gestureStart) set({ doc: next, revision: revision + 1 });
+    else set({ doc: next, past: [...past, doc].slice(-HISTORY_LIMIT), future: [], revision: revision + 1 });
+  },
+  beginGesture: () => {
+    if (!get().gestureStart) set({ gestureStart: get().doc });
+  },
+  endGesture: () => {
+    const { gestureStart, doc, past } = get();
+    if (!gestureStart) return;
+    if (gestureStart === doc) set({ gestureStart: null });
+    else set({ gestureStart: null, past: [...past, gestureStart].slice(-HISTORY_LIMIT), future: [] });
+  },
+  cancelGesture: () => {
+    const { gestureStart, revision } = get();
+    if (gestureStart) set({ doc: gestureStart, gestureStart: null, revision: revision + 1 });
+  },
+  undo: () => {
+    const { past, doc, future, gestureStart, revision } = get();
+    if (gestureStart || past.length === 0) return;
+    set({ doc: past[past.length - 1], past: past.slice(0, -1), future: [doc, ...future], revision: revision + 1 });
+  },
+  redo: () => {
+    const { past, doc, future, gestureStart, revision } = get();
+    if (gestureStart || future.length === 0) return;
+    set({ doc: future[0], past: [...past, doc], future: future.slice(1), revision: revision + 1 });
+  },
+  replace: (doc) => {
+    const revision = get().revision + 1;
+    set({ doc, past: [], future: [], gestureStart: null, revision, savedRevision: revision });
+  },
+  markSaved: () => set({ savedRevision: get().revision }),
+}));
