@@ -2,6 +2,10 @@
 import { useCallback, useState } from 'react';
 import { SectionView } from '../canvas/SectionView';
 import { ScanControls } from '../panels/ScanControls';
+import { WorkspacePanel } from '../panels/WorkspacePanel';
+import { ResultsStrip } from '../panels/ResultsStrip';
+import { InterpretationPane } from '../panels/InterpretationPane';
+import { FileMenu } from '../panels/FileMenu';
 import { openScanFile } from '../io/openScanFile';
 import { MessageBar } from './MessageBar';
 import { useKeyboardShortcuts } from './useKeyboardShortcuts';
@@ -20,11 +24,13 @@ export function App() {
       <header className="top-bar">
         <span className="app-name">Foldroot</span>
         <span className="app-tagline">depth to detachment by area balance</span>
+        <FileMenu />
         <MessageBar />
       </header>
       <div className="workspace">
         <aside className="side-panel" aria-label="Controls">
           <ScanControls />
+          <WorkspacePanel />
         </aside>
         <main
           className={`view-box${dropping ? ' dropping' : ''}`}
@@ -36,7 +42,9 @@ export function App() {
           onDrop={onDrop}
         >
           <SectionView />
+          <ResultsStrip />
         </main>
+        <InterpretationPane />
       </div>
     </div>
   );

@@ -6,6 +6,9 @@ import type Konva from 'konva';
 import { useSessionStore } from '../state/sessionStore';
 import { zoomAbout } from '../state/camera';
 import { ScanLayer } from './ScanLayer';
+import { ShapesLayer } from './ShapesLayer';
+import { DetachmentLayer } from './DetachmentLayer';
+import { OverlayLayer } from './OverlayLayer';
 
 const WHEEL_ZOOM_STEP = 1.0015;
 
@@ -102,6 +105,9 @@ export function SectionView() {
         onPointerLeave={endPan}
       >
         <ScanLayer />
+        <ShapesLayer />
+        <DetachmentLayer />
+        <OverlayLayer />
       </Stage>
     </div>
   );

@@ -19,7 +19,7 @@ test('opening a generated PNG shows it fitted in the view', async ({ page }) => 
   expect(Math.abs(r - 128)).toBeLessThan(8);
   expect(Math.abs(g - 128)).toBeLessThan(8);
   expect(b).toBe(90);
-  await page.screenshot({ path: 'test-results/shell-with-scan.png' });
+  await page.screenshot({ path: test.info().outputPath('shell-with-scan.png') });
 });
 
 test('the wheel zooms about the cursor', async ({ page }) => {

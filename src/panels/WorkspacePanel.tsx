@@ -1,0 +1,4 @@
+// Calibration, horizons, pins and regionals (section workspace).
+export function WorkspacePanel() {
+  return null;
+}
