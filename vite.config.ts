@@ -22,6 +22,7 @@ export default defineConfig({
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
+    setupFiles: ['tests/setup/fastCheck.ts'],
     reporters: ['default'],
   },
 });

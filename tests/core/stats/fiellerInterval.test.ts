@@ -53,9 +53,12 @@ describe('fiellerInterval(fit, y0, level)', () => {
           expect(result.lo).toBeLessThanOrEqual(result.estimate);
           expect(result.estimate).toBeLessThanOrEqual(result.hi);
           for (const xe of [result.lo, result.hi]) {
-            const lhs = (fit.intercept + fit.slope * xe - y0) ** 2;
-            const rhs = t * t * fit.s * fit.s * (1 / fit.n + (xe - fit.xMean) ** 2 / fit.sxx);
-            expect(Math.abs(lhs - rhs)).toBeLessThanOrEqual(1e-8 * (rhs + Math.abs(y0) ** 2 * 1e-6 + 1e-12));
+            // Compared as |a + b x − y0| against t s √(…): rounding in a + b x − y0 is absolute, about
+            // eps times the size of the terms (and of the data), so it cannot be judged relative to a tiny s.
+            const lhs = Math.abs(fit.intercept + fit.slope * xe - y0);
+            const rhs = t * fit.s * Math.sqrt(1 / fit.n + (xe - fit.xMean) ** 2 / fit.sxx);
+            const rounding = 1e-13 * (Math.abs(fit.intercept) + Math.abs(fit.slope * xe) + Math.abs(y0) + Math.abs(fit.yMean));
+            expect(Math.abs(lhs - rhs)).toBeLessThanOrEqual(1e-9 * rhs + rounding);
           }
         },
       ),

@@ -1,0 +1,46 @@
+// The README written beside the demo files.
+import type { ForwardTruth } from '../../src/core/forward/forwardSpec';
+
+/** Returns public/demo/README.md for the given truth. */
+export function demoReadme(truth: ForwardTruth): string {
+  return `# Demo section (invented)
+
+Everything here is invented for Foldroot: the Corrowan Fold Belt, Section F–F′, the ridge and valley
+names and the unit names (Harrel Beds, Vennick Sandstone, …) are made up. No real place, formation or
+published section is shown. Rebuild with \`npm run make-demo\` (scripts/makeDemo.ts, scripts/demo/).
+
+The section was built with the forward model (src/core/forward): six horizons above one detachment,
+each with excess area exactly D · (regional elevation − detachment elevation) (Epard & Groshong 1993),
+folded as a box anticline, a syncline below the regional, an east-verging overturned anticline and a
+small rounded anticline, over a gently curved regional. The detachment is not drawn.
+
+| file | what it holds |
+| --- | --- |
+| section.png | the drawing, ${'2400 × 1200'} px, styled as a scanned hand-drafted section: vertical exaggeration 2:1, turned ${'0.4°'} clockwise, with paper tone and scan noise |
+| section.json | the digitised answer in section units (metres), plain section format (units, pins, horizons with line and regional) |
+| truth.json | \`{ units, displacement, detachmentElevation }\`: D = ${truth.displacement} m, detachment at ${truth.detachmentElevation} m (${truth.detachmentDepth} m below the highest regional, ${truth.referenceElevation} m) |
+| calibration.json | the mapping between image pixels and section coordinates, both directions, and control points |
+
+## calibration.json
+
+Image pixels: \`u\` to the right, \`v\` down, origin at the top-left corner of the image (pixel (i, j) covers
+[i, i+1) × [j, j+1), so its centre is (i + 0.5, j + 0.5)). Section: \`x\` horizontal distance, \`z\` elevation (m).
+
+- \`sectionToImage\`: \`u = u[0]·x + u[1]·z + u[2]\`, \`v = v[0]·x + v[1]·z + v[2]\`.
+- \`imageToSection\`: \`x = x[0]·u + x[1]·v + x[2]\`, \`z = z[0]·u + z[1]·v + z[2]\` (the exact inverse).
+- \`controlPoints\`: \`{ u, v, x, z }\` at the frame corners and at sea level on both frame edges — marks that
+  can be seen on the image, usable as an affine calibration with three or more points.
+
+The mapping is the drawing's scale (0.08 px per metre across, 0.16 px per metre up: vertical
+exaggeration 2) followed by the rotation θ = 0.4° about the image centre (cx, cy) = (1200, 600):
+\`u = cx + cos θ (u0 − cx) − sin θ (v0 − cy)\`, \`v = cy + sin θ (u0 − cx) + cos θ (v0 − cy)\`, where (u0, v0) is the
+unrotated drawing position. To draw section.json on the image, apply \`sectionToImage\` to every vertex.
+
+## Cautions
+
+Depth-to-detachment estimates are interpretations. They depend on the regional, the pins, plane strain
+and area conservation; they are non-unique and must be checked against wells, seismic and balanced
+restorations. Where they inform drilling, tunnelling, foundations, storage or hazard work, the decision
+belongs to a licensed professional under local codes.
+`;
+}

@@ -1,0 +1,58 @@
+// Builds the demo section (npm run make-demo): an invented fold belt, made with the forward model and
+// drawn to public/demo/section.png as if hand-drafted and scanned, with the answer beside it.
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { forwardSection } from '../src/core/forward/forwardSection';
+import { demoEnds, demoPlaces, demoSectionName, demoSpec, demoTitle, demoUnits } from './demo/demoSpec';
+import { apply, image, invert, rotationDegrees, sectionToImage, verticalExaggeration, window } from './demo/layout';
+import { topography } from './demo/topography';
+import { renderSvg } from './demo/renderSvg';
+import { rasterise } from './demo/rasterise';
+import { inkShare } from './demo/checkInk';
+import { compactPng } from './demo/compactPng';
+import { demoReadme } from './demo/demoReadme';
+
+const outDir = join(dirname(fileURLToPath(import.meta.url)), '..', 'public', 'demo');
+
+async function main(): Promise<void> {
+  const { section, truth } = forwardSection(demoSpec);
+  const surface = topography(section.horizons[0].line, window.xMin, window.xMax);
+  const svg = renderSvg({
+    section, surface, units: demoUnits, places: demoPlaces, title: demoTitle, sectionName: demoSectionName, ends: demoEnds,
+    labels: [[0, 12900], [1, 5700], [2, 5700], [3, 5700], [4, 5700], [5, 5700], [6, 5700]],
+  });
+  const png = compactPng(await rasterise(svg, { width: image.width, height: image.height, rotationDegrees, seed: 20260 }), 2);
+  const toImage = sectionToImage();
+  const toSection = invert(toImage);
+  const share = inkShare(png, section, toImage);
+  if (share < 0.97) throw new Error(`demo check failed: only ${(share * 100).toFixed(1)}% of horizon points land on ink`);
+  const corners: [number, number][] = [[window.xMin, window.zMax], [window.xMax, window.zMax], [window.xMax, window.zMin], [window.xMin, window.zMin], [window.xMin, 0], [window.xMax, 0]];
+  const calibration = {
+    description: 'Image pixel <-> section mapping of section.png (invented demo). u right, v down, origin at the top-left corner of the image.',
+    imageWidthPx: image.width,
+    imageHeightPx: image.height,
+    units: section.units,
+    verticalExaggeration,
+    rotationDegrees,
+    sectionToImage: { u: [toImage.a, toImage.b, toImage.c], v: [toImage.d, toImage.e, toImage.f] },
+    imageToSection: { x: [toSection.a, toSection.b, toSection.c], z: [toSection.d, toSection.e, toSection.f] },
+    controlPoints: corners.map(([x, z]) => {
+      const [u, v] = apply(toImage, [x, z]);
+      return { u, v, x, z };
+    }),
+  };
+  mkdirSync(outDir, { recursive: true });
+  writeFileSync(join(outDir, 'section.png'), png);
+  writeFileSync(join(outDir, 'section.json'), JSON.stringify(section, null, 1) + '\n');
+  writeFileSync(join(outDir, 'truth.json'), JSON.stringify({ units: truth.units, displacement: truth.displacement, detachmentElevation: truth.detachmentElevation }, null, 2) + '\n');
+  writeFileSync(join(outDir, 'calibration.json'), JSON.stringify(calibration, null, 2) + '\n');
+  writeFileSync(join(outDir, 'README.md'), demoReadme(truth));
+  console.log(`demo written to ${outDir}: ${(png.length / 1e6).toFixed(2)} MB PNG, ${(share * 100).toFixed(1)}% of horizon points on ink`);
+  console.log(`D = ${truth.displacement} m, detachment elevation ${truth.detachmentElevation} m (depth ${truth.detachmentDepth} m below ${truth.referenceElevation} m)`);
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof Error ? err.message : String(err));
+  process.exit(1);
+});

@@ -1,0 +1,38 @@
+import type { SectionAnalysis } from '../core/analysis/analyseSection';
+import { SECTION_CAUTION } from '../core/analysis/caution';
+
+/** The --json shape of issue 3, keys exactly as listed there; non-finite numbers become null; the caution ends the notes. */
+export interface JsonReport {
+  pinWidth: number;
+  referenceElevation: number;
+  horizons: {
+    name: string; excessArea: number; bedLength: number; regionalLength: number; regionalElevation: number;
+    depth: number; chamberlinDepth: number | null; lpsStrain: number | null; included: boolean;
+  }[];
+  areaDepth: {
+    n: number; slope: number; intercept: number; displacement: number; detachmentDepth: number | null;
+    detachmentElevation: number | null; r2: number; detachmentDepthCI95: [number, number] | null;
+    displacementCI95: [number, number] | null;
+  } | null;
+  notes: string[];
+}
+
+/** The analysis reduced to the CLI's JSON report (section units, areas in units²). */
+export function toJsonReport(a: SectionAnalysis): JsonReport {
+  const d = a.areaDepth;
+  return {
+    pinWidth: a.pinWidth,
+    referenceElevation: a.referenceElevation,
+    horizons: a.horizons.map((h) => ({
+      name: h.name, excessArea: h.excessArea, bedLength: h.bedLength, regionalLength: h.regionalLength,
+      regionalElevation: h.regionalElevation, depth: h.depth, chamberlinDepth: h.chamberlinDepth,
+      lpsStrain: h.lpsStrain, included: h.included,
+    })),
+    areaDepth: d && {
+      n: d.n, slope: d.slope, intercept: d.intercept, displacement: d.displacement,
+      detachmentDepth: d.detachmentDepth, detachmentElevation: d.detachmentElevation, r2: d.r2,
+      detachmentDepthCI95: d.detachmentDepthCI95, displacementCI95: d.displacementCI95,
+    },
+    notes: [...a.notes, SECTION_CAUTION],
+  };
+}

@@ -1,0 +1,64 @@
+import type { LengthUnit, Section } from '../model/section';
+import type { SectionProblem } from '../model/validateSection';
+import { chamberlinDepth } from './chamberlinDepth';
+import { fitAreaDepth, type AreaDepthResult } from './fitAreaDepth';
+import { layerParallelStrain } from './layerParallelStrain';
+import { prepareSection, type PreparedSection } from './prepareSection';
+
+export type { SectionProblem, SectionProblemCode } from '../model/validateSection';
+export type { AreaDepthResult } from './fitAreaDepth';
+
+export interface HorizonResult {
+  name: string; included: boolean; excessArea: number; bedLength: number; regionalLength: number;
+  regionalElevation: number; depth: number; chamberlinDepth: number | null; lpsStrain: number | null;
+  projectedAreaShare: number; projectedLength: number; residual: number | null;
+}
+
+export interface SectionAnalysis {
+  units: LengthUnit; pinWidth: number; referenceElevation: number;
+  horizons: HorizonResult[]; areaDepth: AreaDepthResult | null; notes: string[];
+}
+
+export type AnalysisOutcome = { ok: true; analysis: SectionAnalysis; warnings: SectionProblem[] }
+  | { ok: false; problems: SectionProblem[] };
+
+/** Full area-balance analysis (units and units² of the section); input problems as { ok: false, problems }, never thrown. */
+export function analyseSection(section: Section, options: { referenceElevation?: number } = {}): AnalysisOutcome {
+  const prep = prepareSection(section, options);
+  if (!prep.ok) return { ok: false, problems: prep.problems };
+  return { ok: true, analysis: analysePrepared(prep.prepared), warnings: [] };
+}
+
+/** The analysis of an already prepared section (same result as analyseSection). */
+export function analysePrepared(p: PreparedSection): SectionAnalysis {
+  const depths = p.horizons.map((h) => p.referenceElevation - h.regionalElevation);
+  const fitIdx = p.horizons.map((h, i) => (h.included ? i : -1)).filter((i) => i >= 0);
+  const area = fitAreaDepth(fitIdx.map((i) => depths[i]), fitIdx.map((i) => p.areas[i]), p.referenceElevation);
+  const ad = area.result;
+  const useD = ad !== null && !ad.noDetachment;
+  const residuals = new Map(fitIdx.map((i, k) => [i, area.fit ? area.fit.residuals[k] : null]));
+  const notes = [...area.notes];
+  const horizons = p.horizons.map((h, i): HorizonResult => {
+    const chamberlin = chamberlinDepth(h.excessArea, h.bedLength, h.regionalLength);
+    if (h.projectedLength > 0) {
+      notes.push(`Horizon "${h.name}": ${(100 * h.projectedAreaShare).toFixed(1)}% of its excess area and ${round(h.projectedLength)} ${p.units} of its bed length are projected (interpreted); treat its values as projected, not measured.`);
+    }
+    return {
+      name: h.name, included: h.included, excessArea: h.excessArea, bedLength: h.bedLength,
+      regionalLength: h.regionalLength, regionalElevation: h.regionalElevation, depth: depths[i],
+      chamberlinDepth: chamberlin,
+      lpsStrain: useD ? layerParallelStrain(h.bedLength, h.regionalLength, ad.displacement) : null,
+      projectedAreaShare: h.projectedAreaShare, projectedLength: h.projectedLength,
+      residual: residuals.get(i) ?? null,
+    };
+  });
+  const noChamberlin = horizons.filter((h) => h.chamberlinDepth === null).map((h) => `"${h.name}"`);
+  if (noChamberlin.length > 0) {
+    notes.push(`No Chamberlin depth for ${noChamberlin.join(', ')}: bed length does not exceed regional length.`);
+  }
+  return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes };
+}
+
+function round(v: number): string {
+  return Number(v.toPrecision(4)).toString();
+}

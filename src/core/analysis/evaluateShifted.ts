@@ -1,0 +1,53 @@
+import { leastSquares } from '../stats/leastSquares';
+import type { PreparedSection } from './prepareSection';
+import { shiftRegionals, type AdjustedMeasures, type SectionAdjustment } from './shiftRegionals';
+
+// The cheap inner step of sensitivity sweeps and Monte Carlo: adjusted measures, then the
+// area–depth least squares over the included horizons (Epard & Groshong 1993), point values only.
+
+/** Point estimates of the area–depth line (units as the section; slope in units, intercept in units²). */
+export interface QuickDetachment {
+  n: number;
+  slope: number;
+  intercept: number;
+  /** D = −slope. */
+  displacement: number;
+  /** slope ≥ 0: no detachment below these horizons. */
+  noDetachment: boolean;
+  /** zd = −intercept/slope below the reference, and zref·k − zd; null when noDetachment. */
+  detachmentDepth: number | null;
+  detachmentElevation: number | null;
+}
+
+/** Reusable buffers for evaluateShifted (one set per worker / sweep). */
+export interface EvaluationScratch { measures: AdjustedMeasures; x: Float64Array; y: Float64Array }
+
+/** Scratch buffers sized for a prepared section. */
+export function createEvaluationScratch(prepared: PreparedSection): EvaluationScratch {
+  const n = prepared.horizons.length;
+  return {
+    measures: { areas: new Float64Array(n), regionalElevations: new Float64Array(n), depths: new Float64Array(n), regionalLengths: new Float64Array(n) },
+    x: new Float64Array(n), y: new Float64Array(n),
+  };
+}
+
+/** Area–depth point estimates after an adjustment; null when fewer than 2 included horizons or all at one depth. */
+export function evaluateShifted(prepared: PreparedSection, adj: SectionAdjustment = {}, scratch = createEvaluationScratch(prepared)): QuickDetachment | null {
+  const m = shiftRegionals(prepared, adj, scratch.measures);
+  let n = 0;
+  for (let i = 0; i < prepared.horizons.length; i++) {
+    if (!prepared.included[i]) continue;
+    scratch.x[n] = m.depths[i];
+    scratch.y[n] = m.areas[i];
+    n++;
+  }
+  const fit = leastSquares(scratch.x.subarray(0, n), scratch.y.subarray(0, n));
+  if (!fit) return null;
+  const noDetachment = !(fit.slope < 0);
+  const depth = noDetachment ? null : -fit.intercept / fit.slope;
+  const zref = prepared.referenceElevation * (adj.scale ?? 1);
+  return {
+    n, slope: fit.slope, intercept: fit.intercept, displacement: -fit.slope, noDetachment,
+    detachmentDepth: depth, detachmentElevation: depth === null ? null : zref - depth,
+  };
+}

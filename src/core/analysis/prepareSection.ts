@@ -1,0 +1,71 @@
+import { toCoordinateArrays } from '../geometry/toCoordinateArrays';
+import type { LengthUnit, Section } from '../model/section';
+import { validateSection, type SectionProblem } from '../model/validateSection';
+import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
+import { projectedSegmentFlags } from './projectedSegmentFlags';
+
+// The fast path's starting point: validate once, clip every horizon and regional to the pins
+// once, and keep typed arrays plus the base measures. Live dragging, sensitivity sweeps and
+// Monte Carlo then re-evaluate from this (shiftRegionals, evaluateShifted) without re-clipping;
+// a run that perturbs vertices re-clips one horizon with prepareHorizon.
+
+export interface PreparedSection {
+  units: LengthUnit;
+  pins: [number, number];
+  /** W0 = pR − pL (units). */
+  pinWidth: number;
+  /** zref (units): the option, else the section's value, else the highest regional elevation of all horizons. */
+  referenceElevation: number;
+  /** In input order. */
+  horizons: PreparedHorizon[];
+  /** Per horizon, in input order: A (units²), r (units), 1 if included in the fit. */
+  areas: Float64Array;
+  regionalElevations: Float64Array;
+  included: Uint8Array;
+}
+
+export type SectionPreparation = { ok: true; prepared: PreparedSection } | { ok: false; problems: SectionProblem[] };
+
+/** The section validated, clipped and measured once; every problem found (structure, pins, self-crossing) instead of throwing. */
+export function prepareSection(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
+  const v = validateSection(section);
+  if (!v.ok) return { ok: false, problems: v.problems };
+  const s = v.section;
+  const option = options.referenceElevation;
+  if (option !== undefined && !Number.isFinite(option)) {
+    return { ok: false, problems: [{ code: 'not-finite', message: 'The reference elevation option is not a finite number; pass a real elevation or leave it out.' }] };
+  }
+  if (s.horizons.length === 0) {
+    return { ok: false, problems: [{ code: 'empty-section', message: 'The section has no horizons; add at least one horizon with its line and regional.' }] };
+  }
+  const problems: SectionProblem[] = [];
+  const horizons: PreparedHorizon[] = [];
+  for (const h of s.horizons) {
+    const line = toCoordinateArrays(h.line);
+    const reg = toCoordinateArrays(h.regional);
+    const flags = projectedSegmentFlags(h.projected, h.line.length);
+    const p = prepareHorizon(h.name, line.xs, line.zs, reg.xs, reg.zs, s.pins, h.include !== false, flags);
+    if (p.ok) horizons.push(p.horizon);
+    else problems.push(...p.problems);
+  }
+  if (problems.length > 0) return { ok: false, problems };
+  const n = horizons.length;
+  const areas = new Float64Array(n);
+  const regionalElevations = new Float64Array(n);
+  const included = new Uint8Array(n);
+  let highest = -Infinity;
+  horizons.forEach((h, i) => {
+    areas[i] = h.excessArea;
+    regionalElevations[i] = h.regionalElevation;
+    included[i] = h.included ? 1 : 0;
+    highest = Math.max(highest, h.regionalElevation);
+  });
+  return {
+    ok: true,
+    prepared: {
+      units: s.units, pins: s.pins, pinWidth: s.pins[1] - s.pins[0],
+      referenceElevation: option ?? s.referenceElevation ?? highest,
+      horizons, areas, regionalElevations, included,
+    },
+  };
+}
