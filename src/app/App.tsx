@@ -1,18 +1,35 @@
 // The page: a top bar, a side panel and the section view filling the rest.
-import { useCallback, useState } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import { SectionView } from '../canvas/SectionView';
 import { ScanControls } from '../panels/ScanControls';
 import { WorkspacePanel } from '../panels/WorkspacePanel';
 import { ResultsStrip } from '../panels/ResultsStrip';
 import { InterpretationPane } from '../panels/InterpretationPane';
 import { FileMenu } from '../panels/FileMenu';
-import { openScanFile } from '../io/openScanFile';
+import { openScanFile, scanFileFromClipboard } from '../io/openScanFile';
 import { MessageBar } from './MessageBar';
 import { useKeyboardShortcuts } from './useKeyboardShortcuts';
+import { startApp } from './startApp';
+import { useSessionStore } from '../state/sessionStore';
 
 export function App() {
   const [dropping, setDropping] = useState(false);
+  const started = useSessionStore((s) => s.started);
   useKeyboardShortcuts();
+  useEffect(() => startApp(), []);
+  useEffect(() => {
+    // Ctrl/Cmd+V of an image (a screenshot, a figure copied from a report) opens it as the scan.
+    const onPaste = (e: ClipboardEvent) => {
+      const t = e.target;
+      if (t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || (t instanceof HTMLElement && t.isContentEditable)) return;
+      const file = scanFileFromClipboard(e.clipboardData);
+      if (!file) return;
+      e.preventDefault();
+      void openScanFile(file);
+    };
+    window.addEventListener('paste', onPaste);
+    return () => window.removeEventListener('paste', onPaste);
+  }, []);
   const onDrop = useCallback((e: React.DragEvent) => {
     e.preventDefault();
     setDropping(false);
@@ -20,7 +37,7 @@ export function App() {
     if (file) void openScanFile(file);
   }, []);
   return (
-    <div className="app">
+    <div className="app" data-startup={started ? 'done' : 'running'}>
       <header className="top-bar">
         <span className="app-name">Foldroot</span>
         <span className="app-tagline">depth to detachment by area balance</span>

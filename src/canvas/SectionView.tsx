@@ -9,16 +9,24 @@ import { ScanLayer } from './ScanLayer';
 import { ShapesLayer } from './ShapesLayer';
 import { DetachmentLayer } from './DetachmentLayer';
 import { OverlayLayer } from './OverlayLayer';
+import { GridLayer } from './GridLayer';
+import { CursorReadout } from './CursorReadout';
+import { usePinchZoom } from './usePinchZoom';
+import { toolPointerDown, useToolDispatch } from './toolDispatch';
 
 const WHEEL_ZOOM_STEP = 1.0015;
+/** A trackpad pinch arrives as a wheel with ctrlKey and small deltas: a stronger step per unit. */
+const PINCH_ZOOM_STEP = 1.01;
 
 export function SectionView() {
   const boxRef = useRef<HTMLDivElement>(null);
+  useToolDispatch(boxRef);
   const camera = useSessionStore((s) => s.camera);
   const viewport = useSessionStore((s) => s.viewport);
   const [spaceHeld, setSpaceHeld] = useState(false);
   const [panning, setPanning] = useState(false);
   const panStart = useRef<{ px: number; py: number; cx: number; cy: number } | null>(null);
+  usePinchZoom(boxRef);
 
   useEffect(() => {
     const box = boxRef.current;
@@ -61,12 +69,15 @@ export function SectionView() {
     const p = stage?.getPointerPosition();
     if (!p) return;
     const { camera: cam, setCamera } = useSessionStore.getState();
-    setCamera(zoomAbout(cam, p.x, p.y, Math.pow(WHEEL_ZOOM_STEP, -e.evt.deltaY)));
+    setCamera(zoomAbout(cam, p.x, p.y, Math.pow(e.evt.ctrlKey ? PINCH_ZOOM_STEP : WHEEL_ZOOM_STEP, -e.evt.deltaY)));
   }, []);
 
   const onPointerDown = useCallback(
     (e: Konva.KonvaEventObject<PointerEvent>) => {
-      if (!(spaceHeld || e.evt.button === 1)) return;
+      if (!(spaceHeld || e.evt.button === 1)) {
+        toolPointerDown(e.evt);
+        return;
+      }
       e.evt.preventDefault();
       e.cancelBubble = true;
       const cam = useSessionStore.getState().camera;
@@ -105,10 +116,12 @@ export function SectionView() {
         onPointerLeave={endPan}
       >
         <ScanLayer />
+        <GridLayer />
         <ShapesLayer />
         <DetachmentLayer />
         <OverlayLayer />
       </Stage>
+      <CursorReadout />
     </div>
   );
 }

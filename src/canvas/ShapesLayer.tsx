@@ -1,6 +1,117 @@
-// Digitised horizons, regionals, pins and excess-area fills (section workspace).
-import { Layer } from 'react-konva';
+// Digitised horizons, regionals, pins and excess-area fills (section workspace). Nothing here listens:
+// the tools pick shapes from the document themselves. Each shape selects only its own data.
+import { memo, useMemo } from 'react';
+import { Group, Layer, Line } from 'react-konva';
+import { useShallow } from 'zustand/react/shallow';
+import { pinXs } from '../core/model/commands/pinXs';
+import { sectionFrame } from '../core/model/commands/sectionFrame';
+import { activeScenario } from '../core/model/docToSection';
+import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { excessFillGeometry } from './excessFillGeometry';
+import { pinLinePx } from './pinLinePx';
+
+export const FILL_ABOVE = 'rgba(232, 121, 30, 0.30)';
+export const FILL_BELOW = 'rgba(38, 104, 199, 0.30)';
+const PROJECTED_DASH = [7, 5];
+const REGIONAL_DASH = [14, 4, 3, 4];
+
+/** Splits a horizon into runs of solid and projected segments, as flat point arrays. */
+function runsOf(h: DocHorizon): { points: number[]; projected: boolean }[] {
+  const n = h.pointsPx.length;
+  const flags = new Array<boolean>(Math.max(0, n - 1)).fill(false);
+  for (const [a, b] of h.projected) for (let s = Math.max(0, a); s < Math.min(b, n - 1); s++) flags[s] = true;
+  const runs: { points: number[]; projected: boolean }[] = [];
+  for (let s = 0; s < n - 1; s++) {
+    const last = runs[runs.length - 1];
+    if (last && last.projected === flags[s]) last.points.push(h.pointsPx[s + 1][0], h.pointsPx[s + 1][1]);
+    else runs.push({ projected: flags[s], points: [h.pointsPx[s][0], h.pointsPx[s][1], h.pointsPx[s + 1][0], h.pointsPx[s + 1][1]] });
+  }
+  if (n === 1) runs.push({ projected: false, points: [h.pointsPx[0][0], h.pointsPx[0][1]] });
+  return runs;
+}
+
+const HorizonShape = memo(function HorizonShape({ id }: { id: string }) {
+  const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
+  const selected = useSessionStore((s) => s.selectedHorizonId === id);
+  const runs = useMemo(() => (h ? runsOf(h) : []), [h]);
+  if (!h || !h.visible) return null;
+  return (
+    <Group>
+      {runs.map((r, i) => (
+        <Line key={i} points={r.points} stroke={h.colour} strokeWidth={selected ? 3.5 : 2.2} strokeScaleEnabled={false} lineJoin="round" lineCap="round"
+          dash={r.projected ? PROJECTED_DASH : undefined} perfectDrawEnabled={false} listening={false} />
+      ))}
+    </Group>
+  );
+});
+
+const RegionalShape = memo(function RegionalShape({ id }: { id: string }) {
+  const regional = useDocStore((s) => activeScenario(s.doc).regionals[id]);
+  const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
+  const selected = useSessionStore((s) => s.selectedHorizonId === id);
+  const points = useMemo(() => (regional ? regional.flat() : []), [regional]);
+  if (!regional || !h || !h.visible) return null;
+  return <Line points={points} stroke={h.colour} opacity={0.9} strokeWidth={selected ? 2.5 : 1.6} dash={REGIONAL_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} />;
+});
+
+function clipTo(poly: number[]) {
+  return (ctx: { beginPath: () => void; moveTo: (x: number, y: number) => void; lineTo: (x: number, y: number) => void; closePath: () => void }) => {
+    ctx.beginPath();
+    ctx.moveTo(poly[0], poly[1]);
+    for (let i = 2; i < poly.length; i += 2) ctx.lineTo(poly[i], poly[i + 1]);
+    ctx.closePath();
+  };
+}
+
+const FillShape = memo(function FillShape({ id }: { id: string }) {
+  const regional = useDocStore((s) => activeScenario(s.doc).regionals[id]);
+  const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
+  const frame = useDocStore((s) => sectionFrame(s.doc));
+  const pinsPx = useDocStore((s) => activeScenario(s.doc).pinsPx);
+  const geometry = useMemo(() => {
+    if (!h || !regional || !pinsPx) return null;
+    const pins = pinXs(pinsPx, frame);
+    return pins ? excessFillGeometry(h.pointsPx, regional, pins, frame) : null;
+  }, [h, regional, pinsPx, frame]);
+  if (!geometry || !h?.visible) return null;
+  return (
+    <Group listening={false}>
+      <Group clipFunc={clipTo(geometry.above)}>
+        <Line points={geometry.loop} closed fill={FILL_ABOVE} perfectDrawEnabled={false} listening={false} />
+      </Group>
+      <Group clipFunc={clipTo(geometry.below)}>
+        <Line points={geometry.loop} closed fill={FILL_BELOW} perfectDrawEnabled={false} listening={false} />
+      </Group>
+    </Group>
+  );
+});
+
+const PinLines = memo(function PinLines() {
+  const pinsPx = useDocStore((s) => activeScenario(s.doc).pinsPx);
+  const frame = useDocStore((s) => sectionFrame(s.doc));
+  const scan = useDocStore((s) => s.doc.scan);
+  if (!pinsPx) return null;
+  return (
+    <>
+      {pinsPx.map((p: ImagePx, i) => {
+        const x = frame.a[0] + frame.a[1] * p[0] + frame.a[2] * p[1];
+        return <Line key={i} points={pinLinePx(frame, x, scan)} stroke="#263238" strokeWidth={1.8} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />;
+      })}
+    </>
+  );
+});
 
 export function ShapesLayer() {
-  return <Layer />;
+  const ids = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
+  const showFills = useDocStore((s) => s.doc.settings.showFills);
+  return (
+    <Layer listening={false}>
+      {showFills && ids.map((id) => <FillShape key={`f-${id}`} id={id} />)}
+      {ids.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
+      {ids.map((id) => <HorizonShape key={`h-${id}`} id={id} />)}
+      <PinLines />
+    </Layer>
+  );
 }

@@ -1,37 +1,75 @@
-// Decodes a scan file into an ImageBitmap off the main thread (createImageBitmap), with clear messages.
+// Decodes a scan file into an ImageBitmap off the main thread where the browser allows (createImageBitmap
+// for PNG, JPEG and WebP; a Web Worker for TIFF; the PDF library's own worker for PDF), with clear messages.
 import { sniffImageType, type ImageKind } from './sniffImageType';
+import { decodeImageSize } from './decodeImageSize';
+import { decodeTiff } from './decodeTiff';
+import { decodePdf } from './decodePdf';
 
 /** Largest scan accepted, in megapixels. */
 export const MAX_SCAN_MEGAPIXELS = 200;
+const MAX_PIXELS = MAX_SCAN_MEGAPIXELS * 1e6;
 
 export type DecodeResult =
-  | { ok: true; bitmap: ImageBitmap; kind: ImageKind; widthPx: number; heightPx: number; mime: string }
-  | { ok: false; message: string };
+  | {
+      ok: true;
+      bitmap: ImageBitmap;
+      kind: ImageKind;
+      widthPx: number;
+      heightPx: number;
+      mime: string;
+      /** Page opened in a multi-page file (0-based), and how many it has. */
+      page?: number;
+      pageCount?: number;
+      /** Resolution a PDF page was rendered at. */
+      dpi?: number;
+    }
+  | { ok: false; message: string; cancelled?: boolean };
 
-const MIME: Record<string, string> = { png: 'image/png', jpeg: 'image/jpeg', webp: 'image/webp' };
+/** Reopening a saved scan: the page to take and, for a PDF, the width it was rendered at (no questions asked). */
+export interface DecodeOptions { page?: number; widthPx?: number }
 
-/** Returns the decoded scan, or a message saying why the file cannot be opened. */
-export async function decodeScan(file: Blob & { name?: string }): Promise<DecodeResult> {
-  const name = file.name ?? 'the file';
-  if (file.size === 0) return { ok: false, message: `${name} is empty.` };
-  const head = new Uint8Array(await file.slice(0, 16).arrayBuffer());
-  const kind = sniffImageType(head);
-  if (kind === 'unknown') {
-    return { ok: false, message: `${name} is not a PNG, JPEG, WebP, TIFF or PDF image. Choose a scanned section image.` };
-  }
-  if (kind === 'tiff' || kind === 'pdf') {
-    return { ok: false, message: `${name} is a ${kind.toUpperCase()} file; this build opens PNG, JPEG and WebP scans.` };
-  }
+const MIME: Record<string, string> = { png: 'image/png', jpeg: 'image/jpeg', webp: 'image/webp', tiff: 'image/tiff', pdf: 'application/pdf' };
+/** Leading bytes read to find the pixel size (a JPEG's frame header can follow a long metadata block). */
+const HEAD_BYTES = 256 * 1024;
+
+function tooLarge(name: string, w: number, h: number): string {
+  return `${name} is ${((w * h) / 1e6).toFixed(0)} megapixels (${w} × ${h} px); the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels.`;
+}
+
+async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Promise<DecodeResult> {
+  const size = decodeImageSize(new Uint8Array(await file.slice(0, HEAD_BYTES).arrayBuffer()), kind);
+  if (size && size.widthPx * size.heightPx > MAX_PIXELS) return { ok: false, message: tooLarge(name, size.widthPx, size.heightPx) };
   let bitmap: ImageBitmap;
   try {
     bitmap = await createImageBitmap(new Blob([file], { type: MIME[kind] }));
   } catch {
     return { ok: false, message: `${name} looks like a ${kind.toUpperCase()} file but could not be decoded: it may be damaged or truncated.` };
   }
-  const mp = (bitmap.width * bitmap.height) / 1e6;
-  if (mp > MAX_SCAN_MEGAPIXELS) {
-    bitmap.close();
-    return { ok: false, message: `${name} is ${mp.toFixed(0)} megapixels; the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels.` };
-  }
   return { ok: true, bitmap, kind, widthPx: bitmap.width, heightPx: bitmap.height, mime: MIME[kind] };
+}
+
+/** Returns the decoded scan, or a message saying why the file cannot be opened (cancelled: the user said no). */
+export async function decodeScan(file: Blob & { name?: string }, options: DecodeOptions = {}): Promise<DecodeResult> {
+  const name = file.name || 'the file';
+  if (file.size === 0) return { ok: false, message: `${name} is empty.` };
+  const kind = sniffImageType(new Uint8Array(await file.slice(0, 16).arrayBuffer()));
+  if (kind === 'unknown') {
+    return { ok: false, message: `${name} is not a PNG, JPEG, WebP, TIFF or PDF image. Choose a scanned section image.` };
+  }
+  let result: DecodeResult;
+  if (kind === 'tiff') {
+    const r = await decodeTiff(file, name, MAX_PIXELS, options.page);
+    result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.tiff, page: r.page, pageCount: r.pageCount } : r;
+  } else if (kind === 'pdf') {
+    const r = await decodePdf(file, name, MAX_PIXELS, options.page, options.widthPx);
+    result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.pdf, page: r.page, pageCount: r.pageCount, dpi: r.dpi } : r;
+  } else {
+    result = await decodeBrowserImage(file, name, kind);
+  }
+  // The header check cannot see every file's size (and a PDF page's size depends on the resolution).
+  if (result.ok && result.widthPx * result.heightPx > MAX_PIXELS) {
+    result.bitmap.close();
+    return { ok: false, message: tooLarge(name, result.widthPx, result.heightPx) };
+  }
+  return result;
 }

@@ -4,30 +4,68 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { putScan } from '../state/scanCache';
 import { fitCamera } from '../state/camera';
+import { ensureTilePyramid } from '../canvas/scanTilesPyramid';
 import { decodeScan } from './decodeScan';
 
 let scanCounter = 0;
+let opening = false;
 
 /** Decodes the file and, if it is a usable scan, puts it in the open project and fits the view to it. */
 export async function openScanFile(file: File): Promise<boolean> {
   const session = useSessionStore.getState();
+  if (opening) {
+    session.showMessage('info', `Still opening the previous file; try ${file.name} again in a moment.`);
+    return false;
+  }
+  opening = true;
   session.setBusy(`Opening ${file.name} …`);
   try {
     const result = await decodeScan(file);
     if (!result.ok) {
-      session.showMessage('error', result.message);
+      session.showMessage(result.cancelled ? 'info' : 'error', result.message);
       return false;
     }
     const id = `scan-${Date.now().toString(36)}-${++scanCounter}`;
+    try {
+      // Tiles are cut now, while the progress shows, so that the first frame of the new scan is smooth.
+      await ensureTilePyramid(id, result.bitmap, (done) => session.setBusy(`Opening ${file.name} — preparing ${Math.round(done * 100)}%`));
+    } catch {
+      result.bitmap.close();
+      session.showMessage('error', `${file.name} was decoded but could not be prepared for display: the browser may be short of memory.`);
+      return false;
+    }
     putScan(id, { bitmap: result.bitmap, bytes: file });
     useDocStore.getState().apply((doc) =>
-      setScan(doc, { id, name: file.name, widthPx: result.widthPx, heightPx: result.heightPx, type: result.mime }),
+      setScan(doc, {
+        id,
+        name: file.name,
+        widthPx: result.widthPx,
+        heightPx: result.heightPx,
+        type: result.mime,
+        ...(result.page !== undefined && (result.pageCount ?? 1) > 1 ? { page: result.page } : {}),
+        ...(result.kind === 'pdf' ? { page: result.page ?? 0 } : {}),
+      }),
     );
     const { viewport } = useSessionStore.getState();
     session.setCamera(fitCamera(result.widthPx, result.heightPx, viewport.width, viewport.height));
-    session.showMessage('info', `Opened ${file.name} (${result.widthPx} × ${result.heightPx} px).`);
+    const where = result.pageCount && result.pageCount > 1 ? `, page ${(result.page ?? 0) + 1} of ${result.pageCount}` : '';
+    const dpi = result.dpi ? ` at ${result.dpi} dpi` : '';
+    session.showMessage('info', `Opened ${file.name}${where}${dpi} (${result.widthPx} × ${result.heightPx} px).`);
     return true;
   } finally {
+    opening = false;
     session.setBusy(null);
   }
+}
+
+/** Returns the image file on the clipboard of a paste event (named for the user), or null. */
+export function scanFileFromClipboard(data: DataTransfer | null): File | null {
+  if (!data) return null;
+  const fromFiles = Array.from(data.files ?? []).find((f) => f.type.startsWith('image/') || f.type === 'application/pdf');
+  const fromItems = Array.from(data.items ?? []).find((i) => i.kind === 'file' && (i.type.startsWith('image/') || i.type === 'application/pdf'))?.getAsFile();
+  const file = fromFiles ?? fromItems ?? null;
+  if (!file) return null;
+  const ext = file.type.split('/')[1]?.replace('jpeg', 'jpg') ?? 'png';
+  const generic = !file.name || /^image\.\w+$/i.test(file.name);
+  return generic ? new File([file], `pasted image.${ext}`, { type: file.type }) : file;
 }

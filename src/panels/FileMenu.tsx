@@ -1,4 +1,150 @@
-// Project save/open, imports and exports (files and reports).
+// Project save/open, imports and exports (files and reports), and the autosave banners.
+import { useEffect, useRef, useState } from 'react';
+import { selectAnalysis } from '../state/selectors';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { useAutosaveStatus } from '../state/autosaveStatus';
+import { downloadFile, safeFileName } from '../io/downloadFile';
+import { currentFigureSvg, PNG_SIZES, svgToPng } from '../io/exportFigure';
+import { docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
+import { writeHorizonsCsv } from '../io/csvHorizons';
+import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
+import { newProject, openProjectFile, saveProjectFile } from '../io/projectActions';
+import { ImportDialog } from './files/ImportDialog';
+import { readImport, type ImportKind, type PendingImport } from './files/readImport';
+import { ReportPage } from './files/ReportPage';
+import { StorageBanner } from './files/StorageBanner';
+import './files/files.css';
+
+type MenuId = 'project' | 'import' | 'export' | null;
+
+
+function exportText(text: string | null, type: string, ext: string, empty: string): void {
+  const { doc } = useDocStore.getState();
+  if (text === null) {
+    useSessionStore.getState().showMessage('error', empty);
+    return;
+  }
+  downloadFile(new Blob([text], { type }), safeFileName(doc.title, ext));
+}
+
+async function exportPng(sizeId: string): Promise<void> {
+  const size = PNG_SIZES.find((s) => s.id === sizeId) ?? PNG_SIZES[0];
+  const session = useSessionStore.getState();
+  session.setBusy(`Drawing the figure at ${size.width} × ${size.height} px …`);
+  try {
+    const png = await svgToPng(await currentFigureSvg(), size.width, size.height);
+    if (!png.ok) session.showMessage('error', png.message);
+    else downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
+  } finally {
+    session.setBusy(null);
+  }
+}
+
+function horizonsOrNull(kind: 'csv' | 'geojson'): string | null {
+  const doc = useDocStore.getState().doc;
+  const hs = docHorizonsInSection(doc);
+  if (hs.length === 0) return null;
+  return kind === 'csv' ? writeHorizonsCsv(hs, doc.units) : writeHorizonsGeoJson(hs, doc.units);
+}
+
 export function FileMenu() {
-  return null;
+  const [menu, setMenu] = useState<MenuId>(null);
+  const [pending, setPending] = useState<PendingImport | null>(null);
+  const [report, setReport] = useState(false);
+  const [pngSize, setPngSize] = useState<string>('a4-150');
+  const lastSaved = useAutosaveStatus((s) => s.lastSavedAt);
+  const dirty = useDocStore((s) => s.revision !== s.savedRevision);
+  const revision = useDocStore((s) => s.revision);
+  const kept = useAutosaveStatus((s) => s.keptRevision === revision);
+  const openRef = useRef<HTMLInputElement>(null);
+  const importRefs = { csv: useRef<HTMLInputElement>(null), geojson: useRef<HTMLInputElement>(null), svg: useRef<HTMLInputElement>(null) };
+  const rootRef = useRef<HTMLDivElement>(null);
+
+  useEffect(() => {
+    if (!menu) return;
+    const close = (e: PointerEvent) => {
+      if (!rootRef.current?.contains(e.target as Node)) setMenu(null);
+    };
+    window.addEventListener('pointerdown', close);
+    return () => window.removeEventListener('pointerdown', close);
+  }, [menu]);
+
+  const choose = (action: () => void) => () => {
+    setMenu(null);
+    action();
+  };
+  const onImportFile = (kind: ImportKind) => async (e: React.ChangeEvent<HTMLInputElement>) => {
+    const file = e.currentTarget.files?.[0];
+    e.currentTarget.value = '';
+    if (file) setPending(await readImport(kind, file));
+  };
+  const toggle = (id: MenuId) => () => setMenu((m) => (m === id ? null : id));
+
+  return (
+    <div className="file-menu" ref={rootRef}>
+      <input ref={openRef} type="file" hidden data-testid="open-project" accept=".json,.foldroot,application/json"
+        onChange={(e) => {
+          const file = e.currentTarget.files?.[0];
+          e.currentTarget.value = '';
+          if (file) void openProjectFile(file);
+        }} />
+      <input ref={importRefs.csv} type="file" hidden data-testid="import-csv" accept=".csv,text/csv,text/plain" onChange={(e) => void onImportFile('csv')(e)} />
+      <input ref={importRefs.geojson} type="file" hidden data-testid="import-geojson" accept=".geojson,.json,application/geo+json" onChange={(e) => void onImportFile('geojson')(e)} />
+      <input ref={importRefs.svg} type="file" hidden data-testid="import-svg" accept=".svg,image/svg+xml" onChange={(e) => void onImportFile('svg')(e)} />
+
+      <div className="menu">
+        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'project'} onClick={toggle('project')} data-testid="menu-project">Project ▾</button>
+        {menu === 'project' && (
+          <div className="menu-list" role="menu">
+            <button type="button" role="menuitem" onClick={choose(newProject)}>New</button>
+            <button type="button" role="menuitem" onClick={choose(() => openRef.current?.click())}>Open… <span className="hint">project or section file</span></button>
+            <button type="button" role="menuitem" onClick={choose(() => void saveProjectFile())} data-testid="save-project">Save…</button>
+          </div>
+        )}
+      </div>
+      <div className="menu">
+        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'import'} onClick={toggle('import')} data-testid="menu-import">Import ▾</button>
+        {menu === 'import' && (
+          <div className="menu-list" role="menu">
+            <button type="button" role="menuitem" onClick={choose(() => importRefs.csv.current?.click())}>Horizons from CSV…</button>
+            <button type="button" role="menuitem" onClick={choose(() => importRefs.geojson.current?.click())}>Horizons from GeoJSON…</button>
+            <button type="button" role="menuitem" onClick={choose(() => importRefs.svg.current?.click())}>Horizons from an SVG drawing…</button>
+          </div>
+        )}
+      </div>
+      <div className="menu">
+        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={toggle('export')} data-testid="menu-export">Export ▾</button>
+        {menu === 'export' && (
+          <div className="menu-list" role="menu">
+            <button type="button" role="menuitem" data-testid="export-svg" onClick={choose(() => void currentFigureSvg().then((svg) => exportText(svg, 'image/svg+xml', '.svg', '')))}>Section figure as SVG</button>
+            <label className="menu-field">
+              PNG size
+              <select data-testid="png-size" value={pngSize} onChange={(e) => setPngSize(e.currentTarget.value)}>
+                {PNG_SIZES.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+              </select>
+            </label>
+            <button type="button" role="menuitem" data-testid="export-png" onClick={choose(() => void exportPng(pngSize))}>Section figure as PNG</button>
+            <hr />
+            <button type="button" role="menuitem" data-testid="export-results-csv"
+              onClick={choose(() => exportText(resultsCsv(useDocStore.getState().doc, selectAnalysis(useDocStore.getState().doc)), 'text/csv', '-results.csv', 'No results to export yet: place the pins and draw regionals for at least one horizon.'))}>Results table (CSV)</button>
+            <button type="button" role="menuitem" data-testid="export-horizons-csv" onClick={choose(() => exportText(horizonsOrNull('csv'), 'text/csv', '-horizons.csv', 'No calibrated horizons to export yet.'))}>Horizons (CSV)</button>
+            <button type="button" role="menuitem" data-testid="export-horizons-geojson" onClick={choose(() => exportText(horizonsOrNull('geojson'), 'application/geo+json', '-horizons.geojson', 'No calibrated horizons to export yet.'))}>Horizons (GeoJSON)</button>
+            <button type="button" role="menuitem" data-testid="export-section-file"
+              onClick={choose(() => {
+                const r = sectionFileText(selectAnalysis(useDocStore.getState().doc));
+                exportText(r.ok ? r.text : null, 'application/json', '-section.json', r.ok ? '' : r.message);
+              })}>Section file for the command line</button>
+          </div>
+        )}
+      </div>
+      <button type="button" onClick={() => { setMenu(null); setReport(true); }} data-testid="open-report">Report</button>
+      <span className="autosave-state" data-testid="autosave-status" title={lastSaved ? `Kept in this browser at ${new Date(lastSaved).toLocaleTimeString()}` : 'Not yet kept in this browser'}>
+        {dirty ? 'Unsaved changes' : 'Saved'}{kept ? ' · kept in browser' : ''}
+      </span>
+      <StorageBanner />
+      {pending && <ImportDialog pending={pending} onClose={() => setPending(null)} />}
+      {report && <ReportPage onClose={() => setReport(false)} />}
+    </div>
+  );
 }

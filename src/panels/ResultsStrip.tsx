@@ -1,4 +1,54 @@
-// The compact live results beside the section (section workspace).
+// The compact live results beside the section (section workspace): each horizon's excess area and the
+// detachment depth and displacement of the area–depth line, following every drag (liveResults).
+import { SECTION_CAUTION } from '../core/analysis/caution';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { formatArea, formatLength } from './workspace/formatQuantity';
+import { liveResults } from './workspace/liveResults';
+import './workspace/workspace.css';
+
+export const SHORT_CAUTION = 'Interpretation, not measurement: depends on the regional, the pins, plane strain and area conservation; check against wells, seismic and restorations.';
+
 export function ResultsStrip() {
-  return null;
+  const doc = useDocStore((s) => s.doc);
+  const selectHorizon = useSessionStore((s) => s.selectHorizon);
+  const selectedId = useSessionStore((s) => s.selectedHorizonId);
+  if (doc.horizons.length === 0 && !doc.calibration) return null;
+  const live = liveResults(doc);
+  return (
+    <div className="results-strip" data-testid="results-strip" aria-label="Live results">
+      <div className="strip-main">
+        {live.ready ? (
+          <>
+            <span className="strip-figure">
+              <span className="strip-label">Detachment depth</span>
+              <strong data-testid="strip-detachment-depth">{live.detachmentDepth === null ? '—' : formatLength(live.detachmentDepth, live.units)}</strong>
+              {live.detachmentElevation !== null && (
+                <span className="strip-aside" data-testid="strip-detachment-elevation">below {formatLength(live.referenceElevation, live.units)} (elevation {formatLength(live.detachmentElevation, live.units)})</span>
+              )}
+            </span>
+            <span className="strip-figure">
+              <span className="strip-label">Displacement</span>
+              <strong data-testid="strip-displacement">{live.displacement === null || live.noDetachment ? '—' : formatLength(live.displacement, live.units)}</strong>
+            </span>
+            {live.note && <span className="strip-note" data-testid="strip-note">{live.note}</span>}
+          </>
+        ) : (
+          <span className="strip-note" data-testid="strip-note">{live.message}</span>
+        )}
+      </div>
+      {live.horizons.length > 0 && (
+        <div className="strip-areas" aria-label="Excess area per horizon">
+          {live.horizons.map((h) => (
+            <button type="button" key={h.id} className={`strip-area${h.id === selectedId ? ' selected' : ''}${h.included ? '' : ' excluded'}`} onClick={() => selectHorizon(h.id)} title={`Excess area of ${h.name}${h.included ? '' : ' (left out of the fit)'}`}>
+              <span className="swatch" style={{ background: h.colour }} />
+              <span className="strip-area-name">{h.name}</span>
+              <span data-testid={`strip-area-${h.id}`}>{h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units) : '—'}</span>
+            </button>
+          ))}
+        </div>
+      )}
+      <p className="strip-caution" data-testid="strip-caution" title={SECTION_CAUTION}>{SHORT_CAUTION}</p>
+    </div>
+  );
 }

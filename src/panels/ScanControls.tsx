@@ -1,8 +1,13 @@
 // Opening a scan and fitting the view: the first things a user does.
+import { useEffect } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { fitCamera, zoomAbout } from '../state/camera';
 import { openScanFile } from '../io/openScanFile';
+import { ScanPageDialog } from './ScanPageDialog';
+import './scanControls.css';
+
+const ACCEPT = 'image/png,image/jpeg,image/webp,image/tiff,application/pdf,.png,.jpg,.jpeg,.webp,.tif,.tiff,.pdf';
 
 export function zoomToFit(): void {
   const scan = useDocStore.getState().doc.scan;
@@ -15,9 +20,35 @@ export function zoomByStep(factor: number): void {
   setCamera(zoomAbout(camera, viewport.width / 2, viewport.height / 2, factor));
 }
 
+/** Shows the scan at one image pixel per screen pixel, keeping the view's centre where it is. */
+export function zoomToActualSize(): void {
+  const { camera } = useSessionStore.getState();
+  zoomByStep(1 / camera.scale);
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  return target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement || target instanceof HTMLSelectElement || (target instanceof HTMLElement && target.isContentEditable);
+}
+
+function setShowGrid(showGrid: boolean): void {
+  useDocStore.getState().apply((doc) => (doc.settings.showGrid === showGrid ? doc : { ...doc, settings: { ...doc.settings, showGrid } }));
+}
+
 export function ScanControls() {
   const scan = useDocStore((s) => s.doc.scan);
+  const showGrid = useDocStore((s) => s.doc.settings.showGrid);
+  const calibrated = useDocStore((s) => s.doc.calibration !== null);
   const scale = useSessionStore((s) => s.camera.scale);
+  useEffect(() => {
+    // "1" shows the scan at actual size (one image pixel per screen pixel).
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key !== '1' || e.ctrlKey || e.metaKey || e.altKey || isTyping(e.target)) return;
+      e.preventDefault();
+      zoomToActualSize();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
   return (
     <section className="panel-section" aria-label="Scan">
       <h2>Scan</h2>
@@ -26,7 +57,7 @@ export function ScanControls() {
         <input
           type="file"
           data-testid="open-image"
-          accept="image/png,image/jpeg,image/webp,.png,.jpg,.jpeg,.webp"
+          accept={ACCEPT}
           hidden
           onChange={(e) => {
             const file = e.currentTarget.files?.[0];
@@ -35,10 +66,10 @@ export function ScanControls() {
           }}
         />
       </label>
-      <p className="hint">or drop an image on the section view</p>
+      <p className="hint">PNG, JPEG, WebP, TIFF or a PDF page — or drop an image on the section view, or paste one (Ctrl+V)</p>
       {scan && (
         <p className="scan-name" data-testid="scan-name" title={scan.name}>
-          {scan.name} — {scan.widthPx} × {scan.heightPx} px
+          {scan.name}{scan.page !== undefined ? ` (page ${scan.page + 1})` : ''} — {scan.widthPx} × {scan.heightPx} px
         </p>
       )}
       <div className="button-row">
@@ -46,7 +77,13 @@ export function ScanControls() {
         <span className="zoom-readout" data-testid="zoom-readout">{(scale * 100).toFixed(scale < 0.1 ? 1 : 0)}%</span>
         <button type="button" onClick={() => zoomByStep(1.25)} title="Zoom in (+)">+</button>
         <button type="button" onClick={zoomToFit} title="Zoom to fit (F)" data-testid="zoom-fit">Fit</button>
+        <button type="button" onClick={zoomToActualSize} title="Actual size: one scan pixel per screen pixel (1)" data-testid="zoom-actual">1:1</button>
       </div>
+      <label className="scan-toggle" title={calibrated ? 'Grid lines in section units' : 'Calibrate the scan to see a grid in section units'}>
+        <input type="checkbox" checked={showGrid} onChange={(e) => setShowGrid(e.currentTarget.checked)} data-testid="toggle-grid" />
+        Grid{calibrated ? ' in section units' : ' (scan pixels until calibrated)'}
+      </label>
+      <ScanPageDialog />
     </section>
   );
 }

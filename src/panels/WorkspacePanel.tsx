@@ -1,4 +1,49 @@
-// Calibration, horizons, pins and regionals (section workspace).
+// Calibration, horizons, pins and regionals (section workspace): the tool bar and the panels that go
+// with it, and the keyboard-shortcut overlay.
+import { setSettings } from '../core/model/commands/setSettings';
+import { useToolSession } from '../canvas/toolDispatch';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { toolEntry, TOOLS } from '../tools/toolRegistry';
+import { CalibrationPanel } from './workspace/CalibrationPanel';
+import { HelpOverlay } from './workspace/HelpOverlay';
+import { HorizonList } from './workspace/HorizonList';
+import { PinsPanel } from './workspace/PinsPanel';
+import './workspace/workspace.css';
+
+function ToolBar() {
+  const active = useSessionStore((s) => s.activeTool);
+  const setTool = useSessionStore((s) => s.setTool);
+  const stateName = useToolSession((s) => s.stateName);
+  const showFills = useDocStore((s) => s.doc.settings.showFills);
+  return (
+    <section className="panel-section" aria-label="Tools">
+      <h2 className="with-action">Tools
+        <button type="button" className="icon" aria-label="Keyboard shortcuts" title="Keyboard shortcuts (?)" onClick={() => useToolSession.getState().setHelpOpen(true)} data-testid="help-button">? keys</button>
+      </h2>
+      <div className="tool-bar" role="toolbar" aria-label="Tools">
+        {TOOLS.map((t) => (
+          <button key={t.tool.id} type="button" aria-pressed={active === t.tool.id} className={active === t.tool.id ? 'on' : ''} data-testid={`tool-${t.tool.id}`}
+            title={`${t.hint} (${t.key.toUpperCase()})`} onClick={() => setTool(t.tool.id)}>{t.label}</button>
+        ))}
+      </div>
+      <p className="hint tool-hint" data-testid="tool-hint" data-state={stateName}>{toolEntry(active).hint}</p>
+      <label className="check">
+        <input type="checkbox" checked={showFills} onChange={(e) => useDocStore.getState().apply((d) => setSettings(d, { showFills: e.currentTarget.checked }))} />
+        excess-area fills <span className="fill-key above" /> above <span className="fill-key below" /> below regional
+      </label>
+    </section>
+  );
+}
+
 export function WorkspacePanel() {
-  return null;
+  return (
+    <>
+      <ToolBar />
+      <CalibrationPanel />
+      <HorizonList />
+      <PinsPanel />
+      <HelpOverlay />
+    </>
+  );
 }

@@ -19,6 +19,8 @@ export interface SessionState {
   selectedHorizonId: string | null;
   message: Message | null;
   busy: string | null;
+  /** False until start-up (restore or demo) has finished. */
+  started: boolean;
   setCamera: (camera: Camera) => void;
   setViewport: (width: number, height: number) => void;
   setTool: (tool: string) => void;
@@ -26,6 +28,7 @@ export interface SessionState {
   showMessage: (kind: MessageKind, text: string) => void;
   clearMessage: () => void;
   setBusy: (text: string | null) => void;
+  setStarted: () => void;
 }
 
 let messageId = 0;
@@ -37,6 +40,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
   selectedHorizonId: null,
   message: null,
   busy: null,
+  started: false,
   setCamera: (camera) => set({ camera }),
   setViewport: (width, height) => set({ viewport: { width, height } }),
   setTool: (activeTool) => set({ activeTool }),
@@ -44,4 +48,5 @@ export const useSessionStore = create<SessionState>()((set) => ({
   showMessage: (kind, text) => set({ message: { kind, text, id: ++messageId } }),
   clearMessage: () => set({ message: null }),
   setBusy: (busy) => set({ busy }),
+  setStarted: () => set({ started: true }),
 }));

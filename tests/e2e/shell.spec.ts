@@ -1,16 +1,24 @@
 // The app shell: load, open a scan, zoom about the cursor, refuse a corrupt file, stay offline.
 import { test, expect } from './guard';
+import { gotoStarted } from './startup';
 import { gradientPng } from './pngFixture';
 import { viewPixel } from './canvasPixels';
+import type { Page } from '@playwright/test';
 
-test('the page loads with the section view and no console errors', async ({ page }) => {
-  await page.goto('/');
+/** Opens the app and waits for the demo section, which opens at start. */
+async function openApp(page: Page) {
+  await gotoStarted(page);
+  await expect(page.getByTestId('scan-name')).toContainText('demo/section.png');
+}
+
+test('the page loads with the section view and the demo, and no console errors', async ({ page }) => {
+  await openApp(page);
   await expect(page.getByText('Foldroot', { exact: true })).toBeVisible();
   await expect(page.getByTestId('section-view').locator('canvas').first()).toBeVisible();
 });
 
 test('opening a generated PNG shows it fitted in the view', async ({ page }) => {
-  await page.goto('/');
+  await openApp(page);
   await page.getByTestId('open-image').setInputFiles({ name: 'gradient.png', mimeType: 'image/png', buffer: gradientPng(400, 200) });
   await expect(page.getByTestId('scan-name')).toContainText('gradient.png — 400 × 200 px');
   const box = (await page.getByTestId('section-view').boundingBox())!;
@@ -23,7 +31,7 @@ test('opening a generated PNG shows it fitted in the view', async ({ page }) => 
 });
 
 test('the wheel zooms about the cursor', async ({ page }) => {
-  await page.goto('/');
+  await openApp(page);
   await page.getByTestId('open-image').setInputFiles({ name: 'gradient.png', mimeType: 'image/png', buffer: gradientPng(600, 300) });
   await expect(page.getByTestId('scan-name')).toBeVisible();
   const box = (await page.getByTestId('section-view').boundingBox())!;
@@ -45,7 +53,7 @@ test('the wheel zooms about the cursor', async ({ page }) => {
 });
 
 test('space-drag pans the view', async ({ page }) => {
-  await page.goto('/');
+  await openApp(page);
   await page.getByTestId('open-image').setInputFiles({ name: 'gradient.png', mimeType: 'image/png', buffer: gradientPng(600, 300) });
   await expect(page.getByTestId('scan-name')).toBeVisible();
   const box = (await page.getByTestId('section-view').boundingBox())!;
@@ -63,7 +71,7 @@ test('space-drag pans the view', async ({ page }) => {
 });
 
 test('a corrupt image gives a clear message and changes nothing', async ({ page }) => {
-  await page.goto('/');
+  await openApp(page);
   await page.getByTestId('open-image').setInputFiles({ name: 'good.png', mimeType: 'image/png', buffer: gradientPng(300, 150) });
   await expect(page.getByTestId('scan-name')).toContainText('good.png');
   const truncated = gradientPng(300, 150).subarray(0, 80);

@@ -1,0 +1,20 @@
+// What happens once when the page opens: the last kept work comes back if there is any worth
+// restoring; otherwise the demo section opens, ready to explore. Autosave starts after either,
+// so that the restore itself is not mistaken for new work.
+import { openDemo } from '../io/openDemo';
+import { restoreAutosave, startAutosave } from '../state/autosave';
+import { useSessionStore } from '../state/sessionStore';
+
+let started = false;
+
+/** Runs the start-up sequence once per page load (safe under React's double effects). */
+export function startApp(): void {
+  if (started) return;
+  started = true;
+  void (async () => {
+    const restored = await restoreAutosave();
+    if (!restored) await openDemo();
+    startAutosave();
+    useSessionStore.getState().setStarted();
+  })();
+}

@@ -1,0 +1,73 @@
+// An optional grid in section units above the scan, with labels along the view's top and left edges.
+// Drawn in screen pixels (lines stay one pixel wide at every zoom); it reads the camera when the layer
+// draws, so panning redraws it without re-rendering React.
+import { memo, useMemo } from 'react';
+import type Konva from 'konva';
+import { Layer, Shape } from 'react-konva';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { fitCalibration, type FittedCalibration } from '../core/calibration/fitCalibration';
+import { gridLines, type GridLine } from './gridTicks';
+
+const LINE = 'rgba(31, 111, 139, 0.45)';
+const LABEL = '#17404f';
+const LABEL_BACK = 'rgba(255, 255, 255, 0.8)';
+
+/** Where a grid line crosses the horizontal screen line y (or vertical line x), or null if it runs along it. */
+function crossing(l: GridLine, along: 'x' | 'y', at: number): number | null {
+  const [a, b] = along === 'y' ? [1, 0] : [0, 1];
+  const d = l.to[a] - l.from[a];
+  if (Math.abs(d) < 1e-9) return null;
+  const t = (at - l.from[a]) / d;
+  return l.from[b] + t * (l.to[b] - l.from[b]);
+}
+
+function drawGrid(ctx: Konva.Context, shape: Konva.Shape, fit: FittedCalibration | null, unit: string): void {
+  const { camera, viewport } = useSessionStore.getState();
+  const ratio = shape.getLayer()?.getCanvas().getPixelRatio() ?? 1;
+  ctx.setTransform(ratio, 0, 0, ratio, 0, 0);
+  const grid = gridLines(fit, camera, viewport.width, viewport.height);
+  ctx.beginPath();
+  for (const l of [...grid.x, ...grid.z]) {
+    ctx.moveTo(Math.round(l.from[0]) + 0.5, Math.round(l.from[1]) + 0.5);
+    ctx.lineTo(Math.round(l.to[0]) + 0.5, Math.round(l.to[1]) + 0.5);
+  }
+  ctx.setAttr('strokeStyle', LINE);
+  ctx.setAttr('lineWidth', 1);
+  ctx.stroke();
+  ctx.setAttr('font', '11px system-ui, sans-serif');
+  ctx.setAttr('textBaseline', 'middle');
+  const label = (text: string, x: number, y: number) => {
+    const w = ctx.measureText(text).width;
+    ctx.setAttr('fillStyle', LABEL_BACK);
+    ctx.fillRect(x - 2, y - 7, w + 4, 14);
+    ctx.setAttr('fillStyle', LABEL);
+    ctx.fillText(text, x, y);
+  };
+  const suffix = fit ? ` ${unit}` : ' px';
+  for (const l of grid.x) {
+    const sx = crossing(l, 'y', 10);
+    if (sx !== null && sx > 40 && sx < viewport.width - 220) label(`${fit ? 'x' : 'u'} ${l.value.toFixed(grid.decimalsX)}${suffix}`, sx + 3, 10);
+  }
+  for (const l of grid.z) {
+    const sy = crossing(l, 'x', 4);
+    if (sy !== null && sy > 24 && sy < viewport.height - 12) label(`${fit ? 'z' : 'v'} ${l.value.toFixed(grid.decimalsZ)}${suffix}`, 4, sy - 8);
+  }
+}
+
+export const GridLayer = memo(function GridLayer() {
+  const show = useDocStore((s) => s.doc.settings.showGrid && s.doc.scan !== null);
+  const calibration = useDocStore((s) => s.doc.calibration);
+  const unit = useDocStore((s) => s.doc.units);
+  const fit = useMemo(() => {
+    if (!calibration) return null;
+    const r = fitCalibration(calibration);
+    return r.ok ? r.fit : null;
+  }, [calibration]);
+  // The layer stays mounted (its place in the stack is fixed); only its content comes and goes.
+  return (
+    <Layer listening={false}>
+      {show && <Shape listening={false} perfectDrawEnabled={false} sceneFunc={(ctx, shape) => drawGrid(ctx, shape, fit, unit)} />}
+    </Layer>
+  );
+});

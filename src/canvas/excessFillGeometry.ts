@@ -1,0 +1,49 @@
+// Polygons for the translucent excess-area fills, in image pixels: the loop between a horizon and its
+// regional across the pins (METHOD.md's construction), and the half-planes above and below the
+// regional used as clip regions, so lobes above the regional and below it get different fills.
+import type { FittedCalibration } from '../core/calibration/fitCalibration';
+import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
+import { clipPolylineToPins } from '../core/geometry/clipPolylineToPins';
+import type { ImagePx } from '../core/model/projectDoc';
+
+export interface ExcessFillGeometry {
+  /** Flat [u0, v0, u1, v1, …] of the closed loop horizon (left pin → right pin) then regional back. */
+  loop: number[];
+  above: number[];
+  below: number[];
+}
+
+function flatPx(frame: FittedCalibration, xs: ArrayLike<number>, zs: ArrayLike<number>, reverse: boolean, out: number[]): void {
+  const n = xs.length;
+  for (let k = 0; k < n; k++) {
+    const i = reverse ? n - 1 - k : k;
+    const p = sectionToImage(frame, [xs[i], zs[i]]);
+    out.push(p[0], p[1]);
+  }
+}
+
+/** Returns the fill polygons for one horizon, or null when the horizon or regional does not cross both pins once. */
+export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration): ExcessFillGeometry | null {
+  const line = linePx.map((p) => imageToSection(frame, p));
+  const reg = regionalPx.map((p) => imageToSection(frame, p));
+  const lc = clipPolylineToPins(line.map((q) => q[0]), line.map((q) => q[1]), pins[0], pins[1]).clipped;
+  const rc = clipPolylineToPins(reg.map((q) => q[0]), reg.map((q) => q[1]), pins[0], pins[1]).clipped;
+  if (!lc || !rc) return null;
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  for (const z of [...lc.zs, ...rc.zs]) {
+    zMin = Math.min(zMin, z);
+    zMax = Math.max(zMax, z);
+  }
+  const margin = (zMax - zMin) + (pins[1] - pins[0]);
+  const loop: number[] = [];
+  flatPx(frame, lc.xs, lc.zs, false, loop);
+  flatPx(frame, rc.xs, rc.zs, true, loop);
+  const above: number[] = [];
+  flatPx(frame, rc.xs, rc.zs, false, above);
+  flatPx(frame, [pins[1], pins[0]], [zMax + margin, zMax + margin], false, above);
+  const below: number[] = [];
+  flatPx(frame, rc.xs, rc.zs, false, below);
+  flatPx(frame, [pins[1], pins[0]], [zMin - margin, zMin - margin], false, below);
+  return { loop, above, below };
+}

@@ -1,0 +1,214 @@
+// Routes pointer and key events from the section view to the active tool and carries out the
+// commands it returns (edits, gestures, selection, previews, messages). Only this file turns DOM
+// pointer positions into image pixels for the tools.
+import { useEffect, type RefObject } from 'react';
+import { create } from 'zustand';
+import { sectionFrame } from '../core/model/commands/sectionFrame';
+import type { CalibrationPointRef } from '../core/model/commands/calibrationPointRef';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { screenToImage } from '../state/camera';
+import { toolEntry, TOOLS } from '../tools/toolRegistry';
+import { runTool, type CalibrationPick, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
+
+/** Pointer tolerance for picking, in screen pixels. */
+const PICK_TOLERANCE_SCREEN_PX = 7;
+
+export interface ToolSession {
+  calibrationPick: CalibrationPick;
+  /** The calibration point whose value field the panel should focus, with a counter to refocus. */
+  focusRef: { ref: CalibrationPointRef; n: number } | null;
+  /** Name of the active tool's state (idle, placing, dragging …), for hints and tests. */
+  stateName: string;
+  helpOpen: boolean;
+  setCalibrationPick: (pick: CalibrationPick) => void;
+  setHelpOpen: (open: boolean) => void;
+}
+
+export const useToolSession = create<ToolSession>()((set) => ({
+  calibrationPick: 'points',
+  focusRef: null,
+  stateName: 'idle',
+  helpOpen: false,
+  setCalibrationPick: (calibrationPick) => set({ calibrationPick }),
+  setHelpOpen: (helpOpen) => set({ helpOpen }),
+}));
+
+// The tool preview is ephemeral: kept outside React; the overlay subscribes and redraws its node.
+let preview: ToolPreview | null = null;
+const previewListeners = new Set<() => void>();
+
+/** Returns the current tool preview (image pixels), or null. */
+export function getToolPreview(): ToolPreview | null {
+  return preview;
+}
+
+/** Subscribes to preview changes; returns the unsubscribe function. */
+export function subscribeToolPreview(listener: () => void): () => void {
+  previewListeners.add(listener);
+  return () => previewListeners.delete(listener);
+}
+
+function setPreview(next: ToolPreview | null): void {
+  preview = next;
+  previewListeners.forEach((l) => l());
+}
+
+let toolId = useSessionStore.getState().activeTool;
+let toolState: { name: string } = toolEntry(toolId).tool.initial;
+let dragging = false;
+
+function context(): ToolContext {
+  const doc = useDocStore.getState().doc;
+  const session = useSessionStore.getState();
+  return {
+    doc,
+    frame: sectionFrame(doc),
+    tolerancePx: PICK_TOLERANCE_SCREEN_PX / session.camera.scale,
+    selectedHorizonId: session.selectedHorizonId,
+    calibrationPick: useToolSession.getState().calibrationPick,
+  };
+}
+
+function execute(commands: ToolCommand[]): void {
+  const store = useDocStore.getState();
+  for (const c of commands) {
+    switch (c.type) {
+      case 'edit':
+        useDocStore.getState().apply(c.edit);
+        break;
+      case 'beginGesture':
+        store.beginGesture();
+        break;
+      case 'gestureEdit': {
+        const start = useDocStore.getState().gestureStart;
+        if (start) useDocStore.getState().apply(() => c.edit(start));
+        break;
+      }
+      case 'endGesture':
+        useDocStore.getState().endGesture();
+        break;
+      case 'cancelGesture':
+        useDocStore.getState().cancelGesture();
+        break;
+      case 'select':
+        useSessionStore.getState().selectHorizon(c.horizonId);
+        break;
+      case 'focusCalibrationPoint':
+        useToolSession.setState((s) => ({ focusRef: { ref: c.ref, n: (s.focusRef?.n ?? 0) + 1 } }));
+        break;
+      case 'preview':
+        setPreview(c.preview);
+        break;
+      case 'message':
+        useSessionStore.getState().showMessage(c.kind, c.text);
+        break;
+    }
+  }
+}
+
+/** Sends one event to the active tool and carries out its commands. */
+export function dispatchToolEvent(event: ToolEvent): void {
+  const entry = toolEntry(toolId);
+  const { state, commands } = runTool(entry.tool, toolState, event, context());
+  toolState = state;
+  execute(commands);
+  if (useToolSession.getState().stateName !== state.name) useToolSession.setState({ stateName: state.name });
+}
+
+/** Cancels whatever the active tool is doing (Esc, blur, tool switch). */
+export function cancelTool(): void {
+  dragging = false;
+  dispatchToolEvent({ type: 'cancel' });
+}
+
+useSessionStore.subscribe((s) => {
+  if (s.activeTool === toolId) return;
+  cancelTool();
+  toolId = s.activeTool;
+  toolState = toolEntry(toolId).tool.initial;
+  useToolSession.setState({ stateName: toolState.name });
+});
+
+function imagePoint(box: HTMLElement, clientX: number, clientY: number): [number, number] {
+  const r = box.getBoundingClientRect();
+  return screenToImage(useSessionStore.getState().camera, clientX - r.left, clientY - r.top);
+}
+
+let boxElement: HTMLElement | null = null;
+
+/** A second press within this time and distance counts as a double-click (pointer events carry no click count). */
+const DOUBLE_CLICK_MS = 450;
+const DOUBLE_CLICK_SCREEN_PX = 6;
+let lastPress = { t: -Infinity, x: 0, y: 0, clicks: 0 };
+
+function clickCount(evt: PointerEvent): number {
+  const t = evt.timeStamp;
+  const near = Math.hypot(evt.clientX - lastPress.x, evt.clientY - lastPress.y) <= DOUBLE_CLICK_SCREEN_PX;
+  const clicks = near && t - lastPress.t <= DOUBLE_CLICK_MS ? lastPress.clicks + 1 : 1;
+  lastPress = { t, x: evt.clientX, y: evt.clientY, clicks };
+  return clicks;
+}
+
+/** Forwards a pointer-down on the stage (not a pan) to the active tool. */
+export function toolPointerDown(evt: PointerEvent): void {
+  if (!boxElement) return;
+  dragging = true;
+  dispatchToolEvent({ type: 'pointerDown', p: imagePoint(boxElement, evt.clientX, evt.clientY), button: evt.button, clicks: clickCount(evt), shift: evt.shiftKey, alt: evt.altKey });
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  return target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement || target instanceof HTMLSelectElement || (target instanceof HTMLElement && target.isContentEditable);
+}
+
+/** Keys for the tools; the tool shortcuts (v, c, d, e, j, p, r) switch tools. */
+function onKey(e: KeyboardEvent): void {
+  if (isTyping(e.target) || e.ctrlKey || e.metaKey) return;
+  if (e.key === 'Escape') {
+    cancelTool();
+    useToolSession.getState().setHelpOpen(false);
+    return;
+  }
+  if (e.key === '?') {
+    useToolSession.getState().setHelpOpen(!useToolSession.getState().helpOpen);
+    return;
+  }
+  if (e.key === 'Enter' || e.key === 'Backspace' || e.key === 'Delete') {
+    e.preventDefault();
+    dispatchToolEvent({ type: 'key', key: e.key });
+    return;
+  }
+  if (e.altKey || e.shiftKey) return;
+  const entry = TOOLS.find((t) => t.key === e.key);
+  if (entry) useSessionStore.getState().setTool(entry.tool.id);
+}
+
+/** Installs the window listeners that feed the tools (moves and releases anywhere, keys, blur). */
+export function useToolDispatch(boxRef: RefObject<HTMLElement | null>): void {
+  useEffect(() => {
+    boxElement = boxRef.current;
+    const move = (e: PointerEvent) => {
+      if (!boxElement) return;
+      const inside = e.target instanceof Node && boxElement.contains(e.target);
+      if (!dragging && !inside) return;
+      dispatchToolEvent({ type: 'pointerMove', p: imagePoint(boxElement, e.clientX, e.clientY), shift: e.shiftKey });
+    };
+    const up = (e: PointerEvent) => {
+      if (!dragging || !boxElement) return;
+      dragging = false;
+      dispatchToolEvent({ type: 'pointerUp', p: imagePoint(boxElement, e.clientX, e.clientY) });
+    };
+    const blur = () => cancelTool();
+    window.addEventListener('pointermove', move);
+    window.addEventListener('pointerup', up);
+    window.addEventListener('keydown', onKey);
+    window.addEventListener('blur', blur);
+    return () => {
+      window.removeEventListener('pointermove', move);
+      window.removeEventListener('pointerup', up);
+      window.removeEventListener('keydown', onKey);
+      window.removeEventListener('blur', blur);
+      boxElement = null;
+    };
+  }, [boxRef]);
+}

@@ -1,0 +1,35 @@
+import { imageToSection, sectionToImage } from '../../calibration/mapPoints';
+import { activeScenario } from '../docToSection';
+import type { ProjectDoc } from '../projectDoc';
+import { pinXs } from './pinXs';
+import { sectionFrame } from './sectionFrame';
+import { setRegional } from './setRegional';
+
+/** Share of the pin width searched on each side of a pin for the horizon's lowest point (our choice). */
+export const PROPOSE_WINDOW = 0.15;
+
+/**
+ * Returns the document with a straight regional proposed for the horizon through its lowest vertex within
+ * ±15% of the pin width around each pin (beds are back at regional near the pins, METHOD.md), extended
+ * 5% beyond each pin so it crosses both; unchanged without pins or without vertices near both pins.
+ */
+export function proposeRegional(doc: ProjectDoc, horizonId: string, scenarioId?: string): ProjectDoc {
+  const h = doc.horizons.find((k) => k.id === horizonId);
+  const frame = sectionFrame(doc);
+  const pins = pinXs(activeScenario(doc, scenarioId).pinsPx, frame);
+  if (!h || !pins) return doc;
+  const w0 = pins[1] - pins[0];
+  const pts = h.pointsPx.map((p) => imageToSection(frame, p));
+  const lowest = pins.map((x) => {
+    let best: [number, number] | null = null;
+    for (const q of pts) if (Math.abs(q[0] - x) <= PROPOSE_WINDOW * w0 && (!best || q[1] < best[1])) best = q;
+    return best;
+  });
+  const [a, b] = lowest;
+  if (!a || !b || a[0] === b[0]) return doc;
+  const slope = (b[1] - a[1]) / (b[0] - a[0]);
+  const x0 = pins[0] - 0.05 * w0;
+  const x1 = pins[1] + 0.05 * w0;
+  const ends: [number, number][] = [[x0, a[1] + slope * (x0 - a[0])], [x1, a[1] + slope * (x1 - a[0])]];
+  return setRegional(doc, horizonId, ends.map((q) => sectionToImage(frame, q)), scenarioId);
+}

@@ -1,0 +1,19 @@
+// The project file's envelope: a format name and a version, around the document and the scan bytes.
+import type { ProjectDoc } from '../projectDoc';
+
+export const PROJECT_FORMAT = 'foldroot-project';
+/** The version this build writes; older ones are migrated one step at a time, newer ones refused. */
+export const PROJECT_FILE_VERSION = 1;
+
+/** The scan embedded in a project file: MIME type, file name and the original bytes in base64. */
+export interface EmbeddedScan { type: string; name: string; dataBase64: string }
+
+export interface ProjectFileV1 {
+  format: typeof PROJECT_FORMAT;
+  version: 1;
+  savedAt?: string;
+  /** contentCheck(checkedText(doc, scan base64)); optional, verified when present. */
+  check?: string;
+  doc: ProjectDoc;
+  scan: EmbeddedScan | null;
+}

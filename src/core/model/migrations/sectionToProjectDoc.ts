@@ -1,0 +1,40 @@
+// Turns the engine's plain section (section units) into a project document (image pixels) on a
+// stand-in canvas, so a section file opens with its horizons, regionals and pins in place.
+import { fitCalibration } from '../../calibration/fitCalibration';
+import { sectionToImage } from '../../calibration/mapPoints';
+import { emptyProjectDoc, type DocHorizon, type ImagePx, type ProjectDoc } from '../projectDoc';
+import type { Section, XZ } from '../section';
+import { canvasCalibration } from './canvasCalibration';
+
+/** Colours given to horizons in order (our own palette, readable on white and on a grey scan). */
+export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d35400', '#16a085', '#7f6000', '#b03a78'];
+
+/** Returns a project document holding the section, calibrated onto a true-scale canvas; title is the given name. */
+export function sectionToProjectDoc(section: Section, title = 'Section'): ProjectDoc {
+  const all: XZ[] = section.horizons.flatMap((h) => [...h.line, ...h.regional]);
+  const zs = all.map((p) => p[1]);
+  const zMid = zs.length ? (Math.min(...zs) + Math.max(...zs)) / 2 : 0;
+  all.push([section.pins[0], zMid], [section.pins[1], zMid]);
+  const calibration = canvasCalibration(all);
+  const fitted = fitCalibration(calibration);
+  if (!fitted.ok) throw new Error(`canvasCalibration produced an unusable calibration: ${fitted.message}`);
+  const toPx = (q: XZ): ImagePx => sectionToImage(fitted.fit, q);
+  const doc = emptyProjectDoc();
+  const horizons: DocHorizon[] = section.horizons.map((h, i) => ({
+    id: `horizon-${i + 1}`,
+    name: h.name,
+    colour: HORIZON_COLOURS[i % HORIZON_COLOURS.length],
+    visible: true,
+    locked: false,
+    pointsPx: h.line.map(toPx),
+    projected: (h.projected ?? []).map(([a, b]) => [a, b] as [number, number]),
+  }));
+  const scenario = {
+    ...doc.scenarios[0],
+    pinsPx: [toPx([section.pins[0], zMid]), toPx([section.pins[1], zMid])] as [ImagePx, ImagePx],
+    regionals: Object.fromEntries(section.horizons.map((h, i) => [horizons[i].id, h.regional.map(toPx)])),
+    excluded: section.horizons.flatMap((h, i) => (h.include === false ? [horizons[i].id] : [])),
+    ...(section.referenceElevation !== undefined ? { referenceElevation: section.referenceElevation } : {}),
+  };
+  return { ...doc, title, units: section.units, calibration, horizons, scenarios: [scenario] };
+}

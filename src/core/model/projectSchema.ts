@@ -1,0 +1,83 @@
+// The schema of the project document (schemaVersion 1), checked on every open and restore.
+// Written with zod (a registry schema library) so the shape is declared once and the messages
+// name the exact path of each problem. Limits keep hostile files from exhausting memory.
+import { z } from 'zod';
+import type { ProjectDoc } from './projectDoc';
+
+/** Largest counts accepted in a project file: generous for real work, finite for hostile input. */
+export const PROJECT_LIMITS = { horizons: 2000, pointsPerLine: 200_000, scenarios: 200, nameLength: 500, calibrationPoints: 1000 };
+
+const num = z.number().finite();
+const px = z.tuple([num, num]);
+const line = z.array(px).max(PROJECT_LIMITS.pointsPerLine);
+const name = z.string().max(PROJECT_LIMITS.nameLength);
+const id = z.string().min(1).max(200);
+
+const axisPoint = z.object({ u: num, v: num, value: num });
+const controlPoint = z.object({ u: num, v: num, x: num, z: num });
+
+const calibration = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('axes'), xPoints: z.array(axisPoint).max(PROJECT_LIMITS.calibrationPoints), zPoints: z.array(axisPoint).max(PROJECT_LIMITS.calibrationPoints) }),
+  z.object({ kind: z.literal('affine'), points: z.array(controlPoint).max(PROJECT_LIMITS.calibrationPoints) }),
+]);
+
+const scanRef = z.object({
+  id, name,
+  widthPx: z.number().int().positive().max(1_000_000),
+  heightPx: z.number().int().positive().max(1_000_000),
+  type: z.string().max(100),
+  page: z.number().int().nonnegative().optional(),
+});
+
+const horizon = z.object({
+  id, name,
+  colour: z.string().max(64),
+  visible: z.boolean(),
+  locked: z.boolean(),
+  pointsPx: line,
+  projected: z.array(z.tuple([z.number().int().nonnegative(), z.number().int().nonnegative()])).max(PROJECT_LIMITS.pointsPerLine),
+});
+
+const scenario = z.object({
+  id, name,
+  pinsPx: z.tuple([px, px]).nullable(),
+  regionals: z.record(z.string().max(200), line),
+  excluded: z.array(z.string().max(200)).max(PROJECT_LIMITS.horizons),
+  referenceElevation: num.optional(),
+});
+
+/** The zod schema of a schemaVersion-1 project document; unknown keys are kept (loose) so newer optional fields survive. */
+export const projectDocSchema = z.looseObject({
+  schemaVersion: z.literal(1),
+  title: name,
+  author: name,
+  units: z.enum(['m', 'ft']),
+  scan: scanRef.nullable(),
+  calibration: calibration.nullable(),
+  horizons: z.array(horizon).max(PROJECT_LIMITS.horizons),
+  scenarios: z.array(scenario).min(1).max(PROJECT_LIMITS.scenarios),
+  activeScenarioId: id,
+  settings: z.looseObject({ showDetachment: z.boolean(), showGrid: z.boolean(), showFills: z.boolean() }),
+});
+
+export type ProjectDocCheck = { ok: true; doc: ProjectDoc } | { ok: false; message: string };
+
+/** Returns the value as a checked project document, or a message naming the first few problems by path; never throws. */
+export function checkProjectDoc(value: unknown): ProjectDocCheck {
+  const r = projectDocSchema.safeParse(value);
+  if (!r.success) {
+    const issues = r.error.issues.slice(0, 3).map((i) => `${i.path.length ? i.path.join('.') : 'document'}: ${i.message}`);
+    const more = r.error.issues.length > 3 ? ` (and ${r.error.issues.length - 3} more)` : '';
+    return { ok: false, message: `The project document is not valid — ${issues.join('; ')}${more}.` };
+  }
+  const doc = r.data as unknown as ProjectDoc;
+  const ids = new Set<string>();
+  for (const h of doc.horizons) {
+    if (ids.has(h.id)) return { ok: false, message: `The project document is not valid — two horizons share the id "${h.id}".` };
+    ids.add(h.id);
+  }
+  if (!doc.scenarios.some((s) => s.id === doc.activeScenarioId)) {
+    return { ok: false, message: 'The project document is not valid — activeScenarioId names no scenario.' };
+  }
+  return { ok: true, doc };
+}

@@ -1,0 +1,81 @@
+// Horizons as CSV: a header, then one row per vertex (horizon name, x, z), vertices in file order.
+// Units come from the header ("x_m", "x (ft)", "x [m]") or a "# units: m" line; else the caller chooses.
+import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { LengthUnit, XZ } from '../core/model/section';
+import { parseCsvRows, toCsv } from './csvText';
+import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
+
+const NAME_COLUMNS = ['horizon', 'name', 'horizon_name', 'horizon name', 'layer'];
+
+function columnUnit(header: string): { base: string; unit: LengthUnit | null } {
+  const m = /^\s*([a-z]+)\s*(?:[_\s]|\(|\[)\s*([a-z-]+)\s*[)\]]?\s*$/i.exec(header);
+  if (m) return { base: m[1].toLowerCase(), unit: readUnit(m[2]) };
+  return { base: header.trim().toLowerCase(), unit: null };
+}
+
+function parseNumber(s: string): number | null {
+  const t = s.trim();
+  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return null;
+  const v = Number(t);
+  return Number.isFinite(v) ? v : null;
+}
+
+/** Returns the horizons in a CSV text (section units), each bad row listed with its line number; never throws. */
+export function parseHorizonsCsv(text: string): HorizonImport {
+  const problems: RowProblem[] = [];
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The CSV file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  const rows = parseCsvRows(text);
+  let units: LengthUnit | null = null;
+  let line = 0;
+  while (line < rows.length && (rows[line].join('').trim() === '' || rows[line][0].trim().startsWith('#'))) {
+    const m = /units?\s*[:=]\s*([a-z-]+)/i.exec(rows[line].join(','));
+    if (m) units = readUnit(m[1]) ?? units;
+    line++;
+  }
+  if (line >= rows.length) return { ok: false, message: 'The CSV file has no header row (expected columns horizon, x, z).', problems };
+  const header = rows[line].map(columnUnit);
+  const nameCol = header.findIndex((h) => NAME_COLUMNS.includes(h.base));
+  const xCol = header.findIndex((h) => h.base === 'x');
+  const zCol = header.findIndex((h) => h.base === 'z' || h.base === 'elevation');
+  if (nameCol < 0 || xCol < 0 || zCol < 0) {
+    return { ok: false, message: 'The CSV header must name three columns: horizon (or name), x and z (e.g. "horizon,x_m,z_m").', problems };
+  }
+  const headerUnits = [header[xCol].unit, header[zCol].unit].filter((u): u is LengthUnit => u !== null);
+  if (headerUnits.length === 2 && headerUnits[0] !== headerUnits[1]) {
+    return { ok: false, message: 'The x and z columns are in different units; convert them to one unit.', problems };
+  }
+  units = headerUnits[0] ?? units;
+  const byName = new Map<string, XZ[]>();
+  const counter = { n: 0 };
+  for (let r = line + 1; r < rows.length; r++) {
+    const row = rows[r];
+    if (row.join('').trim() === '' || row[0].trim().startsWith('#')) continue;
+    const where = `line ${r + 1}`;
+    const name = (row[nameCol] ?? '').trim();
+    if (name === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
+    if (name.length > 500) { pushProblem(problems, { where, message: 'horizon name longer than 500 characters' }, counter); continue; }
+    const x = parseNumber(row[xCol] ?? '');
+    const z = parseNumber(row[zCol] ?? '');
+    if (x === null || z === null) {
+      pushProblem(problems, { where, message: `${x === null ? 'x' : 'z'} is not a finite number (${JSON.stringify((row[x === null ? xCol : zCol] ?? '').slice(0, 40))})` }, counter);
+      continue;
+    }
+    let pts = byName.get(name);
+    if (!pts) { pts = []; byName.set(name, pts); }
+    pts.push([x, z]);
+  }
+  const horizons: ImportedHorizon[] = [];
+  for (const [name, pts] of byName) {
+    if (pts.length < 2) pushProblem(problems, { where: `horizon "${name}"`, message: 'has only one vertex; a horizon needs at least two' }, counter);
+    else horizons.push({ name, line: pts });
+  }
+  if (horizons.length === 0) return { ok: false, message: 'The CSV file holds no horizon with at least two valid vertices.', problems };
+  return { ok: true, horizons, units, problems };
+}
+
+/** Returns horizons (section units) as CSV text with a "horizon,x_<unit>,z_<unit>" header. */
+export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit): string {
+  const rows: (string | number)[][] = [['horizon', `x_${units}`, `z_${units}`]];
+  for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, x, z]);
+  return toCsv(rows);
+}

@@ -1,0 +1,78 @@
+// Renders one page of a PDF (a figure in a report) to a bitmap. The PDF library and its worker are
+// bundled with the app and loaded only when a PDF is opened; nothing is fetched from elsewhere.
+import { requestScanChoice } from './decodeScanChoice';
+
+export type PdfDecodeResult =
+  | { ok: true; bitmap: ImageBitmap; page: number; dpi: number; pageCount: number }
+  | { ok: false; message: string; cancelled?: boolean };
+
+/** Resolutions offered for rendering a page, dots per inch. */
+export const PDF_DPI_CHOICES = [72, 150, 200, 300, 400, 600];
+export const PDF_DEFAULT_DPI = 300;
+/** Longest side a browser canvas reliably renders, pixels. */
+export const PDF_MAX_SIDE_PX = 32767;
+
+/** Returns the pixel size of a page of the given size in points at `dpi`. */
+export function pdfPagePixels(widthPt: number, heightPt: number, dpi: number): { widthPx: number; heightPx: number } {
+  return { widthPx: Math.round((widthPt * dpi) / 72), heightPx: Math.round((heightPt * dpi) / 72) };
+}
+
+async function loadPdfjs() {
+  const [pdfjs, worker] = await Promise.all([import('pdfjs-dist'), import('pdfjs-dist/build/pdf.worker.min.mjs?url')]);
+  pdfjs.GlobalWorkerOptions.workerSrc = worker.default;
+  return pdfjs;
+}
+
+/**
+ * Returns the chosen page rendered on white, or a message. With `page` (0-based) and `widthPx` given
+ * (reopening a saved project) no question is asked and the page is rendered at that width.
+ */
+export async function decodePdf(file: Blob, name: string, maxPixels: number, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
+  const pdfjs = await loadPdfjs();
+  let doc: Awaited<ReturnType<typeof pdfjs.getDocument>['promise']>;
+  try {
+    doc = await pdfjs.getDocument({ data: new Uint8Array(await file.arrayBuffer()), verbosity: 0 }).promise;
+  } catch (e) {
+    const locked = e instanceof Error && e.name === 'PasswordException';
+    return { ok: false, message: locked ? `${name} is protected by a password; save the page as an image first.` : `${name} looks like a PDF but could not be read: it may be damaged or truncated.` };
+  }
+  try {
+    const pageSize = async (n: number) => {
+      const vp = (await doc.getPage(n)).getViewport({ scale: 1 });
+      return { widthPt: vp.width, heightPt: vp.height };
+    };
+    let pageNo = (page ?? 0) + 1;
+    let dpi = PDF_DEFAULT_DPI;
+    if (page === undefined || widthPx === undefined) {
+      const choice = await requestScanChoice({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
+      if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
+      pageNo = choice.page + 1;
+      dpi = choice.dpi ?? PDF_DEFAULT_DPI;
+    }
+    if (pageNo < 1 || pageNo > doc.numPages) return { ok: false, message: `${name} has no page ${pageNo}.` };
+    const pdfPage = await doc.getPage(pageNo);
+    const base = pdfPage.getViewport({ scale: 1 });
+    const scale = widthPx !== undefined && page !== undefined ? widthPx / base.width : dpi / 72;
+    const viewport = pdfPage.getViewport({ scale });
+    const w = Math.round(viewport.width);
+    const h = Math.round(viewport.height);
+    if (w * h > maxPixels || Math.max(w, h) > PDF_MAX_SIDE_PX) {
+      return { ok: false, message: `Page ${pageNo} of ${name} at ${dpi} dpi would be ${((w * h) / 1e6).toFixed(0)} megapixels; choose a lower resolution (the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels).` };
+    }
+    const canvas = document.createElement('canvas');
+    canvas.width = w;
+    canvas.height = h;
+    try {
+      await pdfPage.render({ canvas, viewport, background: '#ffffff' }).promise;
+      const bitmap = await createImageBitmap(canvas);
+      return { ok: true, bitmap, page: pageNo - 1, dpi: Math.round(scale * 72), pageCount: doc.numPages };
+    } finally {
+      canvas.width = 0;
+      canvas.height = 0;
+    }
+  } catch {
+    return { ok: false, message: `A page of ${name} could not be rendered: the PDF may be damaged.` };
+  } finally {
+    void doc.loadingTask.destroy();
+  }
+}

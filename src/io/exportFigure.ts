@@ -1,0 +1,85 @@
+// The annotated section as SVG or PNG, drawn from renderSectionSvg. The PNG is the SVG drawn onto
+// a canvas at the chosen size; the scan is inlined as a data: URL so the canvas stays readable.
+import { selectAnalysis } from '../state/selectors';
+import { useDocStore } from '../state/docStore';
+import { getScan } from '../state/scanCache';
+import type { ProjectDoc } from '../core/model/projectDoc';
+import { FIGURE_HEIGHT, FIGURE_WIDTH, renderSectionSvg } from './renderSectionSvg';
+
+/** PNG sizes offered; the last is A3 landscape at 300 dpi (420 × 297 mm). */
+export const PNG_SIZES = [
+  { id: 'screen', label: 'Screen (1400 × 990 px)', width: 1400, height: 990 },
+  { id: 'a4-150', label: 'A4 at 150 dpi (1754 × 1240 px)', width: 1754, height: 1240 },
+  { id: 'a4-300', label: 'A4 at 300 dpi (3508 × 2480 px)', width: 3508, height: 2480 },
+  { id: 'a3-300', label: 'A3 at 300 dpi (4961 × 3508 px)', width: 4961, height: 3508 },
+] as const;
+
+function blobToDataUrl(blob: Blob): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const r = new FileReader();
+    r.onload = () => resolve(String(r.result));
+    r.onerror = () => reject(r.error);
+    r.readAsDataURL(blob);
+  });
+}
+
+/** Returns the scan as a data: URL the SVG can embed (re-encoded as PNG when the browser cannot show the original type), or null. */
+export async function scanDataUrl(doc: ProjectDoc): Promise<string | null> {
+  const cached = getScan(doc.scan?.id);
+  if (!doc.scan || !cached) return null;
+  if (/^image\/(png|jpeg|webp)$/.test(doc.scan.type)) return blobToDataUrl(new Blob([cached.bytes], { type: doc.scan.type }));
+  const canvas = document.createElement('canvas');
+  canvas.width = cached.bitmap.width;
+  canvas.height = cached.bitmap.height;
+  canvas.getContext('2d')?.drawImage(cached.bitmap, 0, 0);
+  return canvas.toDataURL('image/png');
+}
+
+/** Returns the figure of the open project as an SVG string (today's date in the title block). */
+export async function currentFigureSvg(): Promise<string> {
+  const doc = useDocStore.getState().doc;
+  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await scanDataUrl(doc), date: new Date().toISOString().slice(0, 10) });
+}
+
+function loadImage(url: string): Promise<HTMLImageElement> {
+  return new Promise((resolve, reject) => {
+    const img = new Image();
+    img.onload = () => resolve(img);
+    img.onerror = () => reject(new Error('The figure could not be drawn as an image.'));
+    img.src = url;
+  });
+}
+
+/** Returns a PNG of the SVG at width × height pixels, or a message (e.g. when the browser marks the canvas unreadable). */
+export async function svgToPng(svg: string, width: number, height: number): Promise<{ ok: true; blob: Blob } | { ok: false; message: string }> {
+  const url = URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }));
+  try {
+    const img = await loadImage(url);
+    const canvas = document.createElement('canvas');
+    canvas.width = width;
+    canvas.height = height;
+    const ctx = canvas.getContext('2d');
+    if (!ctx) return { ok: false, message: 'This browser cannot draw a canvas of that size; choose a smaller PNG size.' };
+    ctx.fillStyle = '#ffffff';
+    ctx.fillRect(0, 0, width, height);
+    ctx.drawImage(img, 0, 0, width, height);
+    const blob = await new Promise<Blob | null>((resolve, reject) => {
+      try {
+        canvas.toBlob(resolve, 'image/png');
+      } catch (e) {
+        reject(e);
+      }
+    });
+    if (!blob) return { ok: false, message: 'The browser could not encode a PNG of that size; choose a smaller size.' };
+    return { ok: true, blob };
+  } catch (e) {
+    if ((e as { name?: string }).name === 'SecurityError') {
+      return { ok: false, message: 'The browser refused to read back the drawn figure (a cross-origin image made the canvas unreadable). Export as SVG instead.' };
+    }
+    return { ok: false, message: e instanceof Error ? e.message : String(e) };
+  } finally {
+    URL.revokeObjectURL(url);
+  }
+}
+
+export { FIGURE_WIDTH, FIGURE_HEIGHT };

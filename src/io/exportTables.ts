@@ -1,0 +1,58 @@
+// Tables and data files written from the document: results CSV, horizons in section units, the
+// section file for the command line. Every results table carries the caution (RULES.md).
+import { SECTION_CAUTION } from '../core/analysis/caution';
+import { fitCalibration } from '../core/calibration/fitCalibration';
+import { imageToSection } from '../core/calibration/mapPoints';
+import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import { activeScenario } from '../core/model/docToSection';
+import type { ProjectDoc } from '../core/model/projectDoc';
+import type { DocAnalysis } from '../state/selectors';
+import { toCsv } from './csvText';
+
+/** Returns every horizon of the document in section units (empty when the document has no usable calibration). */
+export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
+  const cal = doc.calibration ? fitCalibration(doc.calibration) : null;
+  if (!cal || !cal.ok) return [];
+  const fit = cal.fit;
+  return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => ({ name: h.name, line: h.pointsPx.map((p) => imageToSection(fit, p)) }));
+}
+
+/** Returns the section file (the command line's input, JSON) of the active scenario, or a message saying what is missing. */
+export function sectionFileText(analysis: DocAnalysis): { ok: true; text: string } | { ok: false; message: string } {
+  const ds = analysis.docSection;
+  if (!ds.ok) return { ok: false, message: `No section file yet: ${ds.message}` };
+  if (ds.section.horizons.length === 0) return { ok: false, message: 'No section file yet: no horizon has a regional.' };
+  return { ok: true, text: JSON.stringify(ds.section, null, 1) };
+}
+
+const r = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(10)));
+
+/** Returns the results table of the analysis as CSV (one row per horizon, then the area–depth line and the caution), or null when there are no results. */
+export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis): string | null {
+  const out = analysis.outcome;
+  if (!out || !out.ok) return null;
+  const a = out.analysis;
+  const u = a.units;
+  const rows: (string | number | boolean | null)[][] = [
+    ['# project', doc.title], ['# scenario', activeScenario(doc).name], ['# units', u],
+    ['horizon', 'included', `excess_area_${u}2`, `bed_length_${u}`, `regional_length_${u}`, `regional_elevation_${u}`, `depth_${u}`, `chamberlin_depth_${u}`, 'layer_parallel_strain', 'projected_area_share', `residual_${u}2`],
+  ];
+  for (const h of a.horizons) {
+    rows.push([h.name, h.included, r(h.excessArea), r(h.bedLength), r(h.regionalLength), r(h.regionalElevation), r(h.depth), r(h.chamberlinDepth), r(h.lpsStrain), r(h.projectedAreaShare), r(h.residual)]);
+  }
+  const ad = a.areaDepth;
+  rows.push([]);
+  rows.push(['quantity', 'value', 'low_95', 'high_95']);
+  rows.push([`pin_width_${u}`, r(a.pinWidth), null, null]);
+  rows.push([`reference_elevation_${u}`, r(a.referenceElevation), null, null]);
+  if (ad) {
+    rows.push([`displacement_${u}`, r(ad.displacement), r(ad.displacementCI95?.[0]), r(ad.displacementCI95?.[1])]);
+    rows.push([`detachment_depth_${u}`, r(ad.detachmentDepth), r(ad.detachmentDepthCI95?.[0]), r(ad.detachmentDepthCI95?.[1])]);
+    rows.push([`detachment_elevation_${u}`, r(ad.detachmentElevation), null, null]);
+    rows.push(['r2', r(ad.r2), null, null]);
+    rows.push(['horizons_in_fit', ad.n, null, null]);
+  }
+  for (const n of a.notes) rows.push(['# note', n]);
+  rows.push(['# caution', SECTION_CAUTION]);
+  return toCsv(rows);
+}

@@ -1,0 +1,73 @@
+// Horizons as GeoJSON: LineString / MultiLineString features whose coordinates are section
+// [x, z] (not longitude/latitude), with the unit in a "units" property (feature or collection).
+import { featureCollection, lineString } from '@turf/helpers';
+import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { LengthUnit, XZ } from '../core/model/section';
+import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
+
+function isObject(v: unknown): v is Record<string, unknown> {
+  return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+
+function readLine(v: unknown): XZ[] | string {
+  if (!Array.isArray(v)) return 'coordinates are not an array of positions';
+  if (v.length > 1_000_000) return 'more than a million positions';
+  const out: XZ[] = [];
+  for (let i = 0; i < v.length; i++) {
+    const p = v[i];
+    if (!Array.isArray(p) || p.length < 2 || typeof p[0] !== 'number' || typeof p[1] !== 'number' || !Number.isFinite(p[0]) || !Number.isFinite(p[1])) {
+      return `position ${i} is not a pair of finite numbers [x, z]`;
+    }
+    out.push([p[0], p[1]]);
+  }
+  if (out.length < 2) return 'fewer than two positions';
+  return out;
+}
+
+/** Returns the horizons in a GeoJSON text (section units), each bad feature listed; never throws. */
+export function parseHorizonsGeoJson(text: string): HorizonImport {
+  const problems: RowProblem[] = [];
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The GeoJSON file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    return { ok: false, message: 'The GeoJSON file is not valid JSON — it may be truncated or damaged.', problems };
+  }
+  if (!isObject(raw)) return { ok: false, message: 'The GeoJSON file must hold an object (a FeatureCollection, Feature or geometry).', problems };
+  const features: unknown[] = raw.type === 'FeatureCollection' && Array.isArray(raw.features) ? raw.features
+    : raw.type === 'Feature' ? [raw]
+    : typeof raw.type === 'string' && 'coordinates' in raw ? [{ type: 'Feature', properties: {}, geometry: raw }]
+    : [];
+  if (features.length === 0) return { ok: false, message: 'The GeoJSON file holds no features.', problems };
+  let units = readUnit(raw.units) ?? (isObject(raw.properties) ? readUnit(raw.properties.units) : null);
+  const horizons: ImportedHorizon[] = [];
+  const counter = { n: 0 };
+  features.forEach((f, i) => {
+    const where = `feature ${i + 1}`;
+    if (!isObject(f) || !isObject(f.geometry)) { pushProblem(problems, { where, message: 'has no geometry' }, counter); return; }
+    const props = isObject(f.properties) ? f.properties : {};
+    const rawName = props.name ?? props.horizon ?? f.id;
+    const name = (typeof rawName === 'string' || typeof rawName === 'number' ? String(rawName) : `Horizon ${i + 1}`).trim().slice(0, 500) || `Horizon ${i + 1}`;
+    const fu = readUnit(props.units);
+    if (fu && units && fu !== units) { pushProblem(problems, { where, message: `is in ${fu} while others are in ${units}; convert it` }, counter); return; }
+    units = units ?? fu;
+    const g = f.geometry;
+    const parts = g.type === 'LineString' ? [g.coordinates] : g.type === 'MultiLineString' && Array.isArray(g.coordinates) ? g.coordinates : null;
+    if (!parts) { pushProblem(problems, { where: `${where} ("${name}")`, message: `is a ${String(g.type).slice(0, 40)}; only LineString and MultiLineString are horizons` }, counter); return; }
+    parts.forEach((part: unknown, k: number) => {
+      const line = readLine(part);
+      const partName = parts.length > 1 ? `${name} ${k + 1}` : name;
+      if (typeof line === 'string') pushProblem(problems, { where: `${where} ("${partName}")`, message: line }, counter);
+      else horizons.push({ name: partName, line });
+    });
+  });
+  if (horizons.length === 0) return { ok: false, message: 'The GeoJSON file holds no usable LineString horizon.', problems };
+  return { ok: true, horizons, units, problems };
+}
+
+/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties. */
+export function writeHorizonsGeoJson(horizons: ImportedHorizon[], units: LengthUnit): string {
+  const fc = featureCollection(horizons.map((h) => lineString(h.line.map(([x, z]) => [x, z]), { name: h.name, units })));
+  return JSON.stringify({ ...fc, units }, null, 1);
+}

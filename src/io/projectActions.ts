@@ -1,0 +1,87 @@
+// The file menu's project actions: open (project or section file), save, new. A file that cannot
+// be opened leaves the open project exactly as it was.
+import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
+import { fitCamera } from '../state/camera';
+import { useDocStore } from '../state/docStore';
+import { getScan, putScan } from '../state/scanCache';
+import { useSessionStore } from '../state/sessionStore';
+import { decodeScan } from './decodeScan';
+import { downloadFile, safeFileName } from './downloadFile';
+import { MAX_PROJECT_FILE_BYTES, parseProjectText, serializeProject, type ScanBytes } from './projectFile';
+
+/** Fits the view to the scan, or to the drawn lines when there is no scan. */
+export function fitViewToDoc(doc: ProjectDoc): void {
+  const { viewport, setCamera } = useSessionStore.getState();
+  if (doc.scan) {
+    setCamera(fitCamera(doc.scan.widthPx, doc.scan.heightPx, viewport.width, viewport.height));
+    return;
+  }
+  const all = doc.horizons.flatMap((h) => h.pointsPx);
+  if (all.length === 0) return;
+  const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
+  const [u0, v0] = [Math.min(...us), Math.min(...vs)];
+  const cam = fitCamera(Math.max(...us) - u0 + 1, Math.max(...vs) - v0 + 1, viewport.width, viewport.height, 48);
+  setCamera({ scale: cam.scale, x: cam.x - u0 * cam.scale, y: cam.y - v0 * cam.scale });
+}
+
+/** Reads, checks and opens a project or section file; returns false (with a message) and changes nothing when it cannot. */
+export async function openProjectFile(file: File): Promise<boolean> {
+  const session = useSessionStore.getState();
+  if (file.size > MAX_PROJECT_FILE_BYTES) {
+    session.showMessage('error', `${file.name} is ${(file.size / 1048576).toFixed(0)} MB; the largest project file opened is ${MAX_PROJECT_FILE_BYTES / 1048576} MB.`);
+    return false;
+  }
+  session.setBusy(`Opening ${file.name} …`);
+  try {
+    let text: string;
+    try {
+      text = await file.text();
+    } catch {
+      session.showMessage('error', `${file.name} could not be read from the disk.`);
+      return false;
+    }
+    const opened = parseProjectText(text, file.name);
+    if (!opened.ok) {
+      session.showMessage('error', opened.message);
+      return false;
+    }
+    const { doc, scan } = opened;
+    if (scan && doc.scan) {
+      const blob = new Blob([scan.bytes as Uint8Array<ArrayBuffer>], { type: scan.type });
+      const decoded = await decodeScan(Object.assign(blob, { name: scan.name }));
+      if (!decoded.ok) {
+        session.showMessage('error', `${file.name}: the scan stored in it cannot be shown (${decoded.message}). Nothing was changed.`);
+        return false;
+      }
+      putScan(doc.scan.id, { bitmap: decoded.bitmap, bytes: blob });
+    }
+    useDocStore.getState().replace(doc);
+    fitViewToDoc(doc);
+    session.showMessage('info', [`Opened ${file.name}.`, ...opened.notes].join(' '));
+    return true;
+  } finally {
+    session.setBusy(null);
+  }
+}
+
+/** Returns the scan's original bytes for the document, or null. */
+export async function scanBytesOf(doc: ProjectDoc): Promise<ScanBytes | null> {
+  const cached = getScan(doc.scan?.id);
+  if (!doc.scan || !cached) return null;
+  return { type: doc.scan.type, name: doc.scan.name, bytes: new Uint8Array(await cached.bytes.arrayBuffer()) };
+}
+
+/** Downloads the project file (document and scan) and marks the document saved. */
+export async function saveProjectFile(): Promise<void> {
+  const { doc, revision } = useDocStore.getState();
+  const text = serializeProject(doc, await scanBytesOf(doc));
+  downloadFile(new Blob([text], { type: 'application/json' }), safeFileName(doc.title, '.foldroot.json'));
+  if (useDocStore.getState().revision === revision) useDocStore.getState().markSaved();
+}
+
+/** Opens an empty project, asking first when there are unsaved changes. */
+export function newProject(): void {
+  const { revision, savedRevision } = useDocStore.getState();
+  if (revision !== savedRevision && !window.confirm('Discard the changes not saved to a file and start a new project?')) return;
+  useDocStore.getState().replace(emptyProjectDoc());
+}

@@ -1,0 +1,109 @@
+// Horizons drawn in a drafting program and saved as SVG: every <path>, <polyline> and <line>,
+// with the transforms of its groups, becomes a line in the drawing's root user units. Two
+// points whose section coordinates the user knows then scale each axis (svgToSectionAxes).
+// The SVG is read as text by a small tag scanner, never inserted into the page.
+import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { XZ } from '../core/model/section';
+import { MAX_IMPORT_BYTES, pushProblem, type RowProblem } from './importTypes';
+import { pathDataToPolylines, type Pt } from './svgPathData';
+import { applyMatrix, IDENTITY, multiply, parseTransform, type Matrix } from './svgTransform';
+
+export interface SvgLine { name: string; points: Pt[] }
+export type SvgRead = { ok: true; lines: SvgLine[]; problems: RowProblem[] } | { ok: false; message: string; problems: RowProblem[] };
+
+/** Two reference points: their position in the drawing (root user units) and in the section. */
+export interface SvgReference { svg: Pt; section: XZ }
+
+function decodeEntities(s: string): string {
+  return s.replace(/&(#x[0-9a-f]+|#\d+|amp|lt|gt|quot|apos);/gi, (all, e: string) => {
+    const k = e.toLowerCase();
+    if (k === 'amp') return '&';
+    if (k === 'lt') return '<';
+    if (k === 'gt') return '>';
+    if (k === 'quot') return '"';
+    if (k === 'apos') return "'";
+    const code = k.startsWith('#x') ? parseInt(k.slice(2), 16) : parseInt(k.slice(1), 10);
+    return code > 0 && code <= 0x10ffff ? String.fromCodePoint(code) : all;
+  });
+}
+
+function attributes(s: string): Record<string, string> {
+  const out: Record<string, string> = Object.create(null);
+  const re = /([A-Za-z_:][\w:.-]*)\s*=\s*(?:"([^"]*)"|'([^']*)')/g;
+  let m: RegExpExecArray | null;
+  while ((m = re.exec(s)) !== null) out[m[1]] = decodeEntities(m[2] ?? m[3] ?? '');
+  return out;
+}
+
+function numberList(s: string | undefined): number[] {
+  return (s ?? '').trim().split(/[\s,]+/).filter(Boolean).map(Number);
+}
+
+function shapeLines(tag: string, a: Record<string, string>): Pt[][] | null {
+  if (tag === 'path') return pathDataToPolylines(a.d ?? '');
+  if (tag === 'polyline' || tag === 'polygon') {
+    const v = numberList(a.points);
+    if (v.length < 4 || v.some((x) => !Number.isFinite(x))) return null;
+    const pts: Pt[] = [];
+    for (let i = 0; i + 1 < v.length; i += 2) pts.push([v[i], v[i + 1]]);
+    if (tag === 'polygon') pts.push(pts[0]);
+    return [pts];
+  }
+  const v = [a.x1, a.y1, a.x2, a.y2].map((x) => Number(x ?? 0));
+  return v.every(Number.isFinite) ? [[[v[0], v[1]], [v[2], v[3]]]] : null;
+}
+
+/** Returns every path, polyline and line of an SVG text in root user units (group transforms applied), bad ones listed; never throws. */
+export function readSvgLines(text: string): SvgRead {
+  const problems: RowProblem[] = [];
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The SVG file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  const body = text.replace(/<!--[\s\S]*?-->/g, '').replace(/<!\[CDATA\[[\s\S]*?\]\]>/g, '');
+  if (!/<svg[\s>]/i.test(body)) return { ok: false, message: 'The file is not an SVG drawing (no <svg> element).', problems };
+  const stack: Matrix[] = [IDENTITY];
+  const lines: SvgLine[] = [];
+  const counter = { n: 0 };
+  let count = 0;
+  const re = /<(\/?)([A-Za-z][\w:.-]*)((?:[^>"']|"[^"]*"|'[^']*')*?)(\/?)>/g;
+  let m: RegExpExecArray | null;
+  while ((m = re.exec(body)) !== null) {
+    const [, closing, rawTag, attrText, selfClosing] = m;
+    const tag = rawTag.replace(/^.*:/, '').toLowerCase();
+    if (closing) {
+      if ((tag === 'g' || tag === 'svg' || tag === 'a') && stack.length > 1) stack.pop();
+      continue;
+    }
+    const a = attributes(attrText);
+    const own = parseTransform(a.transform);
+    const where = `<${tag}>${a.id ? ` "${a.id.slice(0, 60)}"` : ''}`;
+    if (!own) pushProblem(problems, { where, message: 'has a transform that cannot be read; treated as none' }, counter);
+    const ctm = multiply(stack[stack.length - 1], own ?? IDENTITY);
+    if ((tag === 'g' || tag === 'svg' || tag === 'a') && !selfClosing) { stack.push(ctm); continue; }
+    if (!['path', 'polyline', 'polygon', 'line'].includes(tag)) continue;
+    count += 1;
+    const parts = shapeLines(tag, a);
+    const label = (a['inkscape:label'] ?? a['data-name'] ?? a.id ?? `${tag} ${count}`).trim().slice(0, 500) || `${tag} ${count}`;
+    if (!parts) { pushProblem(problems, { where, message: 'its geometry cannot be read' }, counter); continue; }
+    parts.forEach((pts, k) => {
+      const points = pts.map((p) => applyMatrix(ctm, p));
+      if (points.length < 2 || points.some((p) => !Number.isFinite(p[0]) || !Number.isFinite(p[1]))) {
+        pushProblem(problems, { where, message: 'has fewer than two usable points' }, counter);
+      } else lines.push({ name: parts.length > 1 ? `${label} ${k + 1}` : label, points });
+    });
+  }
+  if (lines.length === 0) return { ok: false, message: 'The SVG file holds no path, polyline or line to import.', problems };
+  return { ok: true, lines, problems };
+}
+
+/** Returns the lines in section units, scaling each axis through the two reference points, or a message when they share an x or a y. */
+export function svgToSectionAxes(lines: SvgLine[], refs: [SvgReference, SvgReference]): { ok: true; horizons: ImportedHorizon[] } | { ok: false; message: string } {
+  const [p, q] = refs;
+  const dsx = q.svg[0] - p.svg[0];
+  const dsy = q.svg[1] - p.svg[1];
+  if (![...p.svg, ...q.svg, ...p.section, ...q.section].every(Number.isFinite)) return { ok: false, message: 'Enter all eight numbers of the two reference points.' };
+  if (dsx === 0 || dsy === 0) return { ok: false, message: 'The two reference points must differ both across and up the drawing.' };
+  const kx = (q.section[0] - p.section[0]) / dsx;
+  const kz = (q.section[1] - p.section[1]) / dsy;
+  if (kx === 0 || kz === 0) return { ok: false, message: 'The two reference points must have different section x and different z.' };
+  const map = ([sx, sy]: Pt): XZ => [p.section[0] + (sx - p.svg[0]) * kx, p.section[1] + (sy - p.svg[1]) * kz];
+  return { ok: true, horizons: lines.map((l) => ({ name: l.name, line: l.points.map(map) })) };
+}

@@ -1,0 +1,131 @@
+// The printable report (print to PDF from the browser): method in brief, results table, graph,
+// the section figure, scenarios compared, assumptions, cautions and references.
+import { useEffect, useMemo, useState } from 'react';
+import { createPortal } from 'react-dom';
+import { SECTION_CAUTION } from '../../core/analysis/caution';
+import { currentFigureSvg } from '../../io/exportFigure';
+import { formatNumber } from '../../io/formatNumber';
+import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
+import { useDocStore } from '../../state/docStore';
+import { selectAnalysis } from '../../state/selectors';
+import { activeScenario } from '../../core/model/docToSection';
+
+function useSvgUrl(svg: string | null): string | null {
+  const url = useMemo(() => (svg ? URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' })) : null), [svg]);
+  useEffect(() => () => { if (url) URL.revokeObjectURL(url); }, [url]);
+  return url;
+}
+
+const REFERENCES = [
+  'Chamberlin, R. T. (1910). The Appalachian folds of central Pennsylvania. Journal of Geology 18, 228–251.',
+  'Epard, J.-L. & Groshong, R. H. (1993). Excess area and depth to detachment. AAPG Bulletin 77(8), 1291–1302.',
+  'Groshong, R. H. (2006). 3-D Structural Geology, 2nd edition. Springer, chapter 11.',
+  'Groshong, R. H., Withjack, M. O., Schlische, R. W. & Hidayah, T. N. (2012). Bed length does not remain constant during deformation. Journal of Structural Geology 41, 86–97.',
+  'Fieller, E. C. (1954). Some problems in interval estimation. Journal of the Royal Statistical Society B 16, 175–185.',
+];
+
+export function ReportPage({ onClose }: { onClose: () => void }) {
+  const doc = useDocStore((s) => s.doc);
+  const analysis = selectAnalysis(doc);
+  const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
+  const [figure, setFigure] = useState<string | null>(null);
+  useEffect(() => {
+    let live = true;
+    void currentFigureSvg().then((svg) => live && setFigure(svg));
+    return () => { live = false; };
+  }, [doc]);
+  const figureUrl = useSvgUrl(figure);
+  const graphUrl = useSvgUrl(useMemo(() => renderAreaDepthSvg(result), [result]));
+  const u = doc.units;
+  const ad = result?.areaDepth ?? null;
+  const scenario = activeScenario(doc);
+  return createPortal(
+    <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
+      <div className="report-tools no-print">
+        <button type="button" className="primary" onClick={() => window.print()} data-testid="report-print">Print or save as PDF</button>
+        <button type="button" onClick={onClose} data-testid="report-close">Close report</button>
+      </div>
+      <article className="report-sheet">
+        <header>
+          <h1>{doc.title}</h1>
+          <p>Author: {doc.author || '—'} · Date: {new Date().toISOString().slice(0, 10)} · Scenario shown: {scenario.name}</p>
+        </header>
+        <p className="report-caution" data-testid="report-caution"><b>Caution.</b> {SECTION_CAUTION}</p>
+        <h2>What was done</h2>
+        <p>
+          The horizons were traced on the section and converted to true-scale section coordinates through the calibration. Two pins bound the part of the
+          section where the beds are back at their regional (their position before folding). For every horizon, the excess area is the signed area between
+          the horizon and its regional between the pins: positive above the regional, negative below. Plotting each excess area against the depth of its
+          regional gives the area–depth graph; above a single detachment the points fall on a straight line whose slope is the displacement and whose
+          crossing of zero area is the depth of the detachment (Epard &amp; Groshong 1993). The 95% interval on that depth follows Fieller’s theorem. The
+          Chamberlin depth of each horizon divides its excess area by its bed-length shortening (Chamberlin 1910), and the layer-parallel strain compares
+          the bed length with the original length implied by the displacement (Groshong 2006).
+        </p>
+        <h2>Results ({u}, {u}²)</h2>
+        {result ? (
+          <table className="files-table" data-testid="report-table">
+            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain</th></tr></thead>
+            <tbody>
+              {result.horizons.map((h, i) => (
+                <tr key={i}>
+                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{formatNumber(h.excessArea)}</td><td>{formatNumber(h.depth)}</td>
+                  <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatNumber(h.chamberlinDepth)}</td>
+                  <td>{h.lpsStrain === null ? '—' : `${formatNumber(100 * h.lpsStrain, 3)}%`}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p data-testid="report-no-results">No results yet: {analysis.docSection.ok ? 'the section has input problems or fewer than two horizons with regionals.' : analysis.docSection.message}</p>
+        )}
+        {ad && (
+          <p data-testid="report-summary">
+            {ad.noDetachment
+              ? 'Excess area does not decrease with depth: there is no detachment below these horizons.'
+              : `Detachment ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(ad.detachmentElevation)} ${u}); 95% interval ${ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
+          </p>
+        )}
+        {result && result.notes.length > 0 && <ul className="report-notes">{result.notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}
+        <div className="report-figures">
+          {graphUrl && <img src={graphUrl} alt="Area–depth graph" className="report-graph" />}
+        </div>
+        <h2>The section</h2>
+        {figureUrl ? <img src={figureUrl} alt="Annotated section" className="report-figure" data-testid="report-figure" /> : <p>Drawing the section…</p>}
+        <h2>Scenarios compared</h2>
+        <table className="files-table" data-testid="report-scenarios">
+          <thead><tr><th>Scenario</th><th>Horizons in fit</th><th>Displacement ({u})</th><th>Detachment depth ({u})</th><th>95% interval ({u})</th><th>Detachment elevation ({u})</th></tr></thead>
+          <tbody>
+            {doc.scenarios.map((s) => {
+              const a = selectAnalysis(doc, s.id);
+              const r = a.outcome && a.outcome.ok ? a.outcome.analysis.areaDepth : null;
+              return (
+                <tr key={s.id}>
+                  <td>{s.name}{s.id === doc.activeScenarioId ? ' (shown)' : ''}</td>
+                  <td>{r ? r.n : '—'}</td>
+                  <td>{formatNumber(r?.displacement)}</td>
+                  <td>{r?.noDetachment ? 'none' : formatNumber(r?.detachmentDepth)}</td>
+                  <td>{r?.detachmentDepthCI95 ? `${formatNumber(r.detachmentDepthCI95[0])} – ${formatNumber(r.detachmentDepthCI95[1])}` : '—'}</td>
+                  <td>{formatNumber(r?.detachmentElevation)}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+        <h2>Assumptions</h2>
+        <ul>
+          <li>The section is parallel to the transport direction and deformation is plane strain: no material enters or leaves the plane.</li>
+          <li>Area is conserved during folding; compaction and volume loss are ignored.</li>
+          <li>The regionals are where the horizons were before folding; they are interpretations and the largest source of uncertainty (an error δ in the regionals moves the detachment by about δ·(1 + W₀/D)).</li>
+          <li>The pins lie where the beds are back at their regional; each horizon crosses each pin once.</li>
+          <li>The Chamberlin depth assumes bed length is conserved; layer-parallel strain makes it too deep.</li>
+          <li>Projected (eroded or interpreted) segments count in areas and lengths and are flagged.</li>
+        </ul>
+        <h2>Cautions</h2>
+        <p>{SECTION_CAUTION}</p>
+        <h2>References</h2>
+        <ol className="report-references">{REFERENCES.map((r) => <li key={r}>{r}</li>)}</ol>
+      </article>
+    </div>,
+    document.body,
+  );
+}

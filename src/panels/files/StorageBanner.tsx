@@ -1,0 +1,34 @@
+// Banners about work kept in this browser: a restored session (keep it or start fresh) and a full storage quota.
+import { saveProjectFile } from '../../io/projectActions';
+import { startFresh } from '../../state/autosave';
+import { useAutosaveStatus } from '../../state/autosaveStatus';
+
+export function StorageBanner() {
+  const { restoredFrom, quotaFull, failure } = useAutosaveStatus();
+  if (!restoredFrom && !quotaFull && !failure) return null;
+  return (
+    <div className="storage-banners">
+      {restoredFrom && (
+        <div className="storage-banner" role="status" data-testid="restore-banner">
+          <span>Your last session was brought back (kept in this browser {new Date(restoredFrom).toLocaleString()}).</span>
+          <button type="button" onClick={() => useAutosaveStatus.setState({ restoredFrom: null })} data-testid="restore-keep">Keep working</button>
+          <button type="button" onClick={() => void startFresh()} data-testid="start-fresh">Start fresh</button>
+        </div>
+      )}
+      {quotaFull && (
+        <div className="storage-banner error" role="alert" data-testid="quota-banner">
+          <span>This browser has no room left to keep the project (storage quota full). Download the project file to keep your work safe.</span>
+          <button type="button" className="primary" onClick={() => void saveProjectFile()}>Download project</button>
+          <button type="button" onClick={() => useAutosaveStatus.setState({ quotaFull: false })}>Dismiss</button>
+        </div>
+      )}
+      {failure && (
+        <div className="storage-banner error" role="alert">
+          <span>{failure} Download the project file to keep your work safe.</span>
+          <button type="button" className="primary" onClick={() => void saveProjectFile()}>Download project</button>
+          <button type="button" onClick={() => useAutosaveStatus.setState({ failure: null })}>Dismiss</button>
+        </div>
+      )}
+    </div>
+  );
+}

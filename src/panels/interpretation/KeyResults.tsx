@@ -1,0 +1,38 @@
+// The headline numbers of the fit (number first, then the unit), with their 95% intervals.
+import type { SectionAnalysis } from '../../core/analysis/analyseSection';
+import { summaryRows } from './summaryRows';
+
+const KEYS: [string, string][] = [
+  ['detachment-elevation', 'Detachment elevation'],
+  ['detachment-depth', 'Detachment depth'],
+  ['displacement', 'Displacement'],
+  ['r2', 'r²'],
+];
+
+export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
+  const rows = summaryRows(analysis);
+  const get = (k: string) => rows.find((r) => r.key === k)!;
+  const n = get('n');
+  return (
+    <div className="key-results">
+      {KEYS.map(([key, label]) => {
+        const r = get(key);
+        return (
+          <div className="key-result" key={key}>
+            <div className="key-label">{label}</div>
+            <div className="key-value" data-testid={`result-${key}`}>{r.text}</div>
+            {r.interval && <div className="key-interval">95%: {r.interval}</div>}
+          </div>
+        );
+      })}
+      <div className="key-result small">
+        <div className="key-label">Horizons in fit</div>
+        <div className="key-value" data-testid="result-n">{n.text}</div>
+      </div>
+      <div className="key-result small">
+        <div className="key-label">Shortening</div>
+        <div className="key-value" data-testid="result-shortening">{get('shortening').text}</div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,57 @@
+// Detachment depth against a common regional offset and tilt (exact fast path of the engine), with
+// the amplification 1 + W0/D of METHOD.md written on the plot.
+import { useMemo, useState } from 'react';
+import type { Section } from '../../core/model/section';
+import { prepareSection } from '../../core/analysis/prepareSection';
+import { regionalSensitivity } from '../../core/analysis/sensitivity';
+import { linspace } from './meanBand';
+import { SweepPlot } from './SweepPlot';
+import { formatNumber } from './formatValue';
+
+export function SensitivityPanel({ section }: { section: Section }) {
+  const [offsetRange, setOffsetRange] = useState(100);
+  const [tiltRange, setTiltRange] = useState(5);
+  const [pivot, setPivot] = useState<'left' | 'right'>('left');
+  const u = section.units;
+  const sweep = useMemo(() => {
+    const prep = prepareSection(section);
+    if (!prep.ok) return null;
+    const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);
+    // Tilt entered in units per 1000 units (m per km), swept as dz/dx.
+    const tilts = linspace(-Math.abs(tiltRange), Math.abs(tiltRange), 41);
+    return { offsets, tilts, result: regionalSensitivity(prep.prepared, { offsets, tilts: tilts.map((t) => t / 1000), tiltPivot: pivot }), width: prep.prepared.pinWidth };
+  }, [section, offsetRange, tiltRange, pivot]);
+  if (!sweep) return <p className="hint">Sensitivity needs a section the engine can analyse.</p>;
+  const amp = sweep.result.amplification;
+  const ampText = amp === null
+    ? 'No detachment at the base case: no amplification factor.'
+    : `Amplification 1 + W/D = ${formatNumber(amp, 1)}: raising every regional by 10 ${u} moves the detachment ${formatNumber(10 * amp)} ${u} up.`;
+  return (
+    <div className="sensitivity">
+      <p className="amplification" data-testid="sensitivity-amplification">{ampText}</p>
+      <div className="field-row">
+        <label>Offset range ± <input type="number" min={1} value={offsetRange} onChange={(e) => setOffsetRange(Number(e.target.value) || 1)} /> {u}</label>
+      </div>
+      <SweepPlot
+        xs={sweep.offsets}
+        depths={sweep.result.offsets.map((p) => p.depth)}
+        xLabel={`Common regional offset (${u}, up positive)`}
+        yLabel={`Detachment depth (${u})`}
+        note={amp === null ? 'no detachment at 0' : `amplification 1 + W/D = ${formatNumber(amp, 1)}`}
+        testId="sensitivity-offset-plot"
+      />
+      <div className="field-row">
+        <label>Tilt range ± <input type="number" min={0.1} step={0.5} value={tiltRange} onChange={(e) => setTiltRange(Number(e.target.value) || 0.1)} /> {u} per 1000 {u}</label>
+        <label>about the <select value={pivot} onChange={(e) => setPivot(e.target.value as 'left' | 'right')}><option value="left">left pin</option><option value="right">right pin</option></select></label>
+      </div>
+      <SweepPlot
+        xs={sweep.tilts}
+        depths={sweep.result.tilts.map((p) => p.depth)}
+        xLabel={`Common regional tilt (${u} per 1000 ${u}, rising to the right positive)`}
+        yLabel={`Detachment depth (${u})`}
+        note={`tilt about the ${pivot} pin (x = ${formatNumber(sweep.result.tiltPivotX)} ${u})`}
+        testId="sensitivity-tilt-plot"
+      />
+    </div>
+  );
+}

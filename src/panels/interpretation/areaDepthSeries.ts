@@ -1,0 +1,33 @@
+import type { SectionAnalysis } from '../../core/analysis/analyseSection';
+import { fitAreaDepth, type AreaDepthFit } from '../../core/analysis/fitAreaDepth';
+
+// What the area–depth graph draws for one scenario: a point per horizon and the engine's line
+// through the included ones (refitted here only to get the sums the band needs).
+
+export interface GraphPoint {
+  id: string;
+  name: string;
+  /** Depth below the reference (units) and excess area (units²). */
+  depth: number;
+  area: number;
+  included: boolean;
+  residual: number | null;
+  projectedAreaShare: number;
+}
+
+export interface AreaDepthSeries {
+  points: GraphPoint[];
+  fit: AreaDepthFit;
+  referenceElevation: number;
+}
+
+/** Graph points (horizon ids from docToSection, same order) and the fit of the included ones. */
+export function areaDepthSeries(analysis: SectionAnalysis, horizonIds: readonly string[]): AreaDepthSeries {
+  const points = analysis.horizons.map((h, i): GraphPoint => ({
+    id: horizonIds[i] ?? `#${i}`, name: h.name, depth: h.depth, area: h.excessArea, included: h.included,
+    residual: h.residual, projectedAreaShare: h.projectedAreaShare,
+  }));
+  const inc = points.filter((p) => p.included);
+  const fit = fitAreaDepth(inc.map((p) => p.depth), inc.map((p) => p.area), analysis.referenceElevation);
+  return { points, fit, referenceElevation: analysis.referenceElevation };
+}

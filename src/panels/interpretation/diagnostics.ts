@@ -1,0 +1,33 @@
+import type { AnalysisOutcome } from '../../core/analysis/analyseSection';
+import type { DocSection } from '../../core/model/docToSection';
+
+// What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
+// called a poor fit: our threshold, a common rule of thumb for area–depth lines.
+
+export interface Diagnostic { level: 'error' | 'warning' | 'info'; text: string }
+
+export const POOR_FIT_R2 = 0.9;
+
+/** Plain-word diagnostics for the scenario's analysis: not ready, input problems, fit quality, intervals, skipped horizons. */
+export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | null): Diagnostic[] {
+  if (!docSection.ok) return [{ level: 'info', text: docSection.message }];
+  const out: Diagnostic[] = docSection.skipped.map((s) => ({ level: 'info' as const, text: `Horizon "${s.name}" is left out: ${s.reason}.` }));
+  if (!outcome) return [...out, { level: 'info', text: 'Draw a regional for at least two horizons to see the area–depth line.' }];
+  if (!outcome.ok) return [...out, ...outcome.problems.map((p) => ({ level: 'error' as const, text: p.message }))];
+  const a = outcome.analysis;
+  const ad = a.areaDepth;
+  const n = a.horizons.filter((h) => h.included).length;
+  if (!ad) {
+    out.push({ level: 'error', text: `Too few horizons: ${n} in the fit. Include at least two horizons at different depths (three or more for intervals).` });
+  } else if (ad.noDetachment) {
+    out.push({ level: 'error', text: 'The slope is not negative: excess area does not decrease with depth, so there is no detachment below these horizons. Check the regionals and the included horizons.' });
+  } else {
+    if (ad.n === 2) out.push({ level: 'warning', text: 'Too few horizons for intervals: with two, the line passes through both exactly. Include a third horizon.' });
+    if (ad.n >= 3 && ad.r2 < POOR_FIT_R2) out.push({ level: 'warning', text: `Poor fit: r² = ${ad.r2.toFixed(3)}. The points scatter about one straight line; look at the flagged horizons, or fit a subset or a second segment.` });
+    if (ad.detachmentDepthInterval.kind === 'unbounded') out.push({ level: 'warning', text: 'The 95% interval on the detachment depth is unbounded: the slope is not clearly different from zero, so the data do not pin the depth down.' });
+  }
+  for (const note of a.notes) {
+    if (/projected|Chamberlin|above the deepest/.test(note)) out.push({ level: 'info', text: note });
+  }
+  return out;
+}

@@ -1,0 +1,25 @@
+// The active scenario's analysis from the memoised selector, and its graph series.
+import { useMemo } from 'react';
+import { useDocStore } from '../../state/docStore';
+import { selectAnalysis, type DocAnalysis } from '../../state/selectors';
+import type { SectionAnalysis } from '../../core/analysis/analyseSection';
+import { areaDepthSeries, type AreaDepthSeries } from './areaDepthSeries';
+
+export interface ScenarioAnalysis extends DocAnalysis {
+  analysis: SectionAnalysis | null;
+  series: AreaDepthSeries | null;
+  horizonIds: string[];
+}
+
+/** The analysis of the active (or given) scenario of the current document, recomputed only when the document changes. */
+export function useScenarioAnalysis(scenarioId?: string): ScenarioAnalysis {
+  const doc = useDocStore((s) => s.doc);
+  return useMemo(() => scenarioAnalysisOf(selectAnalysis(doc, scenarioId)), [doc, scenarioId]);
+}
+
+/** The same, for a selector result already at hand. */
+export function scenarioAnalysisOf(d: DocAnalysis): ScenarioAnalysis {
+  const analysis = d.outcome?.ok ? d.outcome.analysis : null;
+  const horizonIds = d.docSection.ok ? d.docSection.horizonIds : [];
+  return { ...d, analysis, horizonIds, series: analysis ? areaDepthSeries(analysis, horizonIds) : null };
+}

@@ -1,0 +1,51 @@
+// The keyboard shortcuts, shown on "?" (and from the tool bar's "?" button).
+import { useToolSession } from '../../canvas/toolDispatch';
+import { TOOLS } from '../../tools/toolRegistry';
+
+const GENERAL: [string, string][] = [
+  ['Ctrl/Cmd + Z', 'Undo'],
+  ['Shift + Ctrl/Cmd + Z', 'Redo'],
+  ['Wheel', 'Zoom about the cursor'],
+  ['+ / −', 'Zoom in / out'],
+  ['F', 'Zoom to fit'],
+  ['Space + drag, middle drag', 'Pan'],
+  ['Arrow keys', 'Pan'],
+  ['Enter / double-click', 'Finish the line being drawn'],
+  ['Backspace', 'Remove the last point drawn; in Edit, delete the chosen vertex'],
+  ['Esc', 'Cancel what the tool is doing'],
+  ['Shift + drag', 'Edit: move a whole line · Regional: move every regional'],
+  ['Alt + click', 'Edit: delete a vertex'],
+  ['?', 'Show or hide this list'],
+];
+
+export function HelpOverlay() {
+  const open = useToolSession((s) => s.helpOpen);
+  const setOpen = useToolSession((s) => s.setHelpOpen);
+  if (!open) return null;
+  return (
+    <div className="help-backdrop" onClick={() => setOpen(false)}>
+      <div className="help-overlay" role="dialog" aria-label="Keyboard shortcuts" data-testid="help-overlay" onClick={(e) => e.stopPropagation()}>
+        <div className="help-head">
+          <h2>Keyboard shortcuts</h2>
+          <button type="button" aria-label="Close" onClick={() => setOpen(false)}>×</button>
+        </div>
+        <div className="help-columns">
+          <table>
+            <tbody>
+              {TOOLS.map((t) => (
+                <tr key={t.tool.id}><td><kbd>{t.key.toUpperCase()}</kbd></td><td><strong>{t.label}</strong> — {t.hint}</td></tr>
+              ))}
+            </tbody>
+          </table>
+          <table>
+            <tbody>
+              {GENERAL.map(([k, what]) => (
+                <tr key={k}><td><kbd>{k}</kbd></td><td>{what}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </div>
+    </div>
+  );
+}

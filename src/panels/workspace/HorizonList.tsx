@@ -1,0 +1,146 @@
+// The horizons in stratigraphic order (youngest first): name, colour, order, show/hide, lock; the
+// selected horizon's regional helpers; and typing or pasting a horizon as a table of x, z.
+import { useState } from 'react';
+import { sectionToImage } from '../../core/calibration/mapPoints';
+import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
+import { deleteHorizon } from '../../core/model/commands/deleteHorizon';
+import { parallelRegionals } from '../../core/model/commands/parallelRegionals';
+import { proposeRegional } from '../../core/model/commands/proposeRegional';
+import { renameHorizon } from '../../core/model/commands/renameHorizon';
+import { reorderHorizons } from '../../core/model/commands/reorderHorizons';
+import { documentFit } from '../../core/model/commands/sectionFrame';
+import { setHorizonPoints } from '../../core/model/commands/setHorizonPoints';
+import { setHorizonStyle } from '../../core/model/commands/setHorizonStyle';
+import { setRegional } from '../../core/model/commands/setRegional';
+import { activeScenario } from '../../core/model/docToSection';
+import type { DocHorizon } from '../../core/model/projectDoc';
+import { useDocStore } from '../../state/docStore';
+import { useSessionStore } from '../../state/sessionStore';
+import { HORIZON_PALETTE, paletteColour } from '../../tools/horizonPalette';
+import { parseXZTable } from './parseXZTable';
+
+function NameField({ h }: { h: DocHorizon }) {
+  const [text, setText] = useState(h.name);
+  const [shown, setShown] = useState(h.name);
+  if (shown !== h.name) {
+    setShown(h.name);
+    setText(h.name);
+  }
+  const commit = () => {
+    if (text.trim() && text !== h.name) useDocStore.getState().apply((d) => renameHorizon(d, h.id, text));
+    else setText(h.name);
+  };
+  return (
+    <input className="name-field" aria-label="Horizon name" value={text} data-testid={`horizon-name-${h.id}`}
+      onChange={(e) => setText(e.currentTarget.value)} onBlur={commit}
+      onKeyDown={(e) => e.key === 'Enter' && e.currentTarget.blur()} />
+  );
+}
+
+function HorizonRow({ h, index, count, selected }: { h: DocHorizon; index: number; count: number; selected: boolean }) {
+  const apply = useDocStore((s) => s.apply);
+  const select = useSessionStore((s) => s.selectHorizon);
+  return (
+    <li className={`horizon-row${selected ? ' selected' : ''}`} data-testid={`horizon-row-${h.id}`} onClick={() => select(h.id)}>
+      <span className="swatch" style={{ background: h.colour }} aria-hidden />
+      <NameField h={h} />
+      <button type="button" className="icon" aria-label={`Move ${h.name} up (younger)`} disabled={index === 0} onClick={() => apply((d) => reorderHorizons(d, index, index - 1))}>↑</button>
+      <button type="button" className="icon" aria-label={`Move ${h.name} down (older)`} disabled={index === count - 1} onClick={() => apply((d) => reorderHorizons(d, index, index + 1))}>↓</button>
+      <label className="check" title="Show">
+        <input type="checkbox" checked={h.visible} aria-label={`Show ${h.name}`} onChange={(e) => apply((d) => setHorizonStyle(d, h.id, { visible: e.currentTarget.checked }))} />
+        show
+      </label>
+      <label className="check" title="Lock against editing">
+        <input type="checkbox" checked={h.locked} aria-label={`Lock ${h.name}`} onChange={(e) => apply((d) => setHorizonStyle(d, h.id, { locked: e.currentTarget.checked }))} />
+        lock
+      </label>
+    </li>
+  );
+}
+
+function SelectedHorizon({ h }: { h: DocHorizon }) {
+  const apply = useDocStore((s) => s.apply);
+  const hasRegional = useDocStore((s) => Boolean(activeScenario(s.doc).regionals[h.id]));
+  const hasPins = useDocStore((s) => Boolean(activeScenario(s.doc).pinsPx));
+  const show = useSessionStore((s) => s.showMessage);
+  return (
+    <div className="selected-horizon" data-testid="selected-horizon">
+      <div className="palette" role="radiogroup" aria-label={`Colour of ${h.name}`}>
+        {HORIZON_PALETTE.map((c) => (
+          <button key={c} type="button" role="radio" aria-checked={c === h.colour} aria-label={`Colour ${c}`} className={`swatch-button${c === h.colour ? ' on' : ''}`} style={{ background: c }}
+            onClick={() => apply((d) => setHorizonStyle(d, h.id, { colour: c }))} />
+        ))}
+        <input type="color" aria-label="Other colour" value={h.colour} onChange={(e) => apply((d) => setHorizonStyle(d, h.id, { colour: e.currentTarget.value }))} />
+      </div>
+      <div className="button-row">
+        <button type="button" data-testid="propose-regional" disabled={!hasPins}
+          title="A straight regional through the horizon's lowest points near each pin; adjust it with the Regional tool"
+          onClick={() => {
+            const before = useDocStore.getState().doc;
+            apply((d) => proposeRegional(d, h.id));
+            if (useDocStore.getState().doc === before) show('info', 'No vertices of this horizon near both pins: draw its regional with the Regional tool.');
+          }}>Propose regional</button>
+        <button type="button" data-testid="parallel-set" disabled={!hasRegional || !hasPins}
+          title="Every other horizon gets a copy of this regional, moved to that horizon's own level at the pins"
+          onClick={() => apply((d) => parallelRegionals(d, h.id))}>Parallel set</button>
+        <button type="button" disabled={!hasRegional} onClick={() => apply((d) => setRegional(d, h.id, null))}>Clear regional</button>
+      </div>
+      <div className="button-row">
+        <button type="button" className="danger" onClick={() => {
+          apply((d) => deleteHorizon(d, h.id));
+          useSessionStore.getState().selectHorizon(null);
+        }}>Delete horizon</button>
+      </div>
+    </div>
+  );
+}
+
+function TypedHorizon({ selected }: { selected: DocHorizon | undefined }) {
+  const [text, setText] = useState('');
+  const apply = useDocStore((s) => s.apply);
+  const show = useSessionStore((s) => s.showMessage);
+  const units = useDocStore((s) => s.doc.units);
+  const run = (replace: boolean) => {
+    const doc = useDocStore.getState().doc;
+    const fit = documentFit(doc);
+    if (!fit) return show('error', 'Calibrate the scan before typing a horizon in section units.');
+    const parsed = parseXZTable(text);
+    if (!parsed.ok) return show('error', parsed.message);
+    const pointsPx = parsed.points.map((q) => sectionToImage(fit, q));
+    if (replace && selected) apply((d) => setHorizonPoints(d, selected.id, pointsPx));
+    else {
+      const id = nextHorizonId(doc);
+      apply((d) => addHorizon(d, { id, name: `Horizon ${id.slice(1)}`, colour: paletteColour(doc.horizons.length), pointsPx }));
+      useSessionStore.getState().selectHorizon(id);
+    }
+    show('info', `${parsed.points.length} points read${parsed.skipped ? `, ${parsed.skipped} lines skipped` : ''}.`);
+    setText('');
+  };
+  return (
+    <details className="typed-horizon">
+      <summary>Type or paste x, z</summary>
+      <textarea value={text} rows={5} aria-label={`Horizon as x, z in ${units}`} data-testid="xz-table" placeholder={`x, z (${units}), one point per line`} onChange={(e) => setText(e.currentTarget.value)} />
+      <div className="button-row">
+        <button type="button" onClick={() => run(false)} data-testid="xz-add">Add as new horizon</button>
+        <button type="button" disabled={!selected} onClick={() => run(true)}>Replace selected</button>
+      </div>
+    </details>
+  );
+}
+
+export function HorizonList() {
+  const horizons = useDocStore((s) => s.doc.horizons);
+  const selectedId = useSessionStore((s) => s.selectedHorizonId);
+  const selected = horizons.find((h) => h.id === selectedId);
+  return (
+    <section className="panel-section" aria-label="Horizons">
+      <h2>Horizons <span className="hint">youngest first</span></h2>
+      {horizons.length === 0 && <p className="hint">None yet: choose Draw horizon and click along a bed.</p>}
+      <ol className="horizon-list" data-testid="horizon-list">
+        {horizons.map((h, i) => <HorizonRow key={h.id} h={h} index={i} count={horizons.length} selected={h.id === selectedId} />)}
+      </ol>
+      {selected && <SelectedHorizon h={selected} />}
+      <TypedHorizon selected={selected} />
+    </section>
+  );
+}

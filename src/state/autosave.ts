@@ -1,0 +1,123 @@
+// Keeps the open project in this browser: after every change (debounced) the document and the
+// scan's bytes go to IndexedDB; on the next visit the last state comes back (with "Start fresh").
+// Closing the tab with changes not saved to a file asks first (beforeunload).
+import { emptyProjectDoc } from '../core/model/projectDoc';
+import { decodeScan } from '../io/decodeScan';
+import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot, type StoredScan } from './autosaveDb';
+import { useAutosaveStatus } from './autosaveStatus';
+import { useDocStore } from './docStore';
+import { getScan, putScan } from './scanCache';
+
+/** Wait after the last change before writing, in milliseconds. */
+export const AUTOSAVE_DELAY_MS = 500;
+
+/** The scan id of the start-up demo (src/io/openDemo.ts): an untouched demo is not work to bring back. */
+const DEMO_SCAN_ID = 'scan-demo';
+
+let dbPromise: Promise<IDBDatabase> | null = null;
+function db(): Promise<IDBDatabase> {
+  dbPromise ??= openAutosaveDb();
+  return dbPromise;
+}
+
+let writtenScanId: string | null = null;
+
+/** Writes the current document now; reports quota problems through the status store. */
+export async function autosaveNow(): Promise<void> {
+  const { doc, revision, savedRevision } = useDocStore.getState();
+  try {
+    const cached = getScan(doc.scan?.id);
+    let scan: StoredScan | null = null;
+    const fresh = Boolean(doc.scan && cached && writtenScanId !== doc.scan.id);
+    if (doc.scan && cached) {
+      scan = { id: doc.scan.id, type: doc.scan.type, name: doc.scan.name, bytes: fresh ? await cached.bytes.arrayBuffer() : new ArrayBuffer(0) };
+    }
+    await writeSnapshot(await db(), { savedAt: new Date().toISOString(), doc, dirty: revision !== savedRevision }, scan, fresh);
+    if (fresh) writtenScanId = doc.scan?.id ?? null;
+    if (!doc.scan) writtenScanId = null;
+    useAutosaveStatus.setState({ lastSavedAt: new Date().toISOString(), keptRevision: revision, quotaFull: false });
+  } catch (e) {
+    if (isQuotaError(e)) useAutosaveStatus.setState({ quotaFull: true });
+    else useAutosaveStatus.setState({ failure: `Could not keep the project in this browser: ${e instanceof Error ? e.message : String(e)}` });
+  }
+}
+
+/** Brings back the last autosaved state if there is one worth restoring; returns true when it did. */
+export async function restoreAutosave(): Promise<boolean> {
+  let snap;
+  try {
+    snap = await readSnapshot(await db());
+  } catch {
+    return false;
+  }
+  if (!snap) return false;
+  const empty = emptyProjectDoc();
+  const { doc } = snap;
+  if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
+  // The untouched start-up demo is not work to bring back.
+  if (!snap.dirty && doc.scan?.id === DEMO_SCAN_ID) return false;
+  if (doc.scan && snap.scan && snap.scan.id === doc.scan.id && snap.scan.bytes.byteLength > 0) {
+    const blob = new Blob([snap.scan.bytes], { type: snap.scan.type });
+    const decoded = await decodeScan(Object.assign(blob, { name: snap.scan.name }));
+    if (decoded.ok) {
+      putScan(doc.scan.id, { bitmap: decoded.bitmap, bytes: blob });
+      writtenScanId = doc.scan.id;
+    }
+  }
+  useDocStore.getState().replace(doc);
+  // A restored session that had not been saved to a file is still unsaved.
+  if (snap.dirty) useDocStore.setState({ savedRevision: useDocStore.getState().revision - 1 });
+  useAutosaveStatus.setState({ restoredFrom: snap.savedAt || new Date().toISOString() });
+  return true;
+}
+
+/** Forgets the kept state and opens an empty project. */
+export async function startFresh(): Promise<void> {
+  useDocStore.getState().replace(emptyProjectDoc());
+  useAutosaveStatus.setState({ restoredFrom: null });
+  writtenScanId = null;
+  try {
+    await clearSnapshot(await db());
+  } catch {
+    // Nothing kept to clear.
+  }
+}
+
+function onBeforeUnload(e: BeforeUnloadEvent): void {
+  const { revision, savedRevision } = useDocStore.getState();
+  if (revision !== savedRevision) {
+    e.preventDefault();
+    e.returnValue = '';
+  }
+}
+
+/** Starts autosaving after every document change and the close warning; returns the stop function. */
+export function startAutosave(): () => void {
+  let timer: number | undefined;
+  const run = () => {
+    timer = undefined;
+    void autosaveNow();
+  };
+  const unsubscribe = useDocStore.subscribe((s, prev) => {
+    if (s.revision === prev.revision && s.savedRevision === prev.savedRevision) return;
+    window.clearTimeout(timer);
+    timer = window.setTimeout(run, AUTOSAVE_DELAY_MS);
+  });
+  // Leaving the page with a write still waiting: start it now (the browser usually lets it finish).
+  const flush = () => {
+    if (timer === undefined) return;
+    window.clearTimeout(timer);
+    run();
+  };
+  const onHidden = () => document.visibilityState === 'hidden' && flush();
+  window.addEventListener('beforeunload', onBeforeUnload);
+  window.addEventListener('pagehide', flush);
+  document.addEventListener('visibilitychange', onHidden);
+  return () => {
+    unsubscribe();
+    window.clearTimeout(timer);
+    window.removeEventListener('beforeunload', onBeforeUnload);
+    window.removeEventListener('pagehide', flush);
+    document.removeEventListener('visibilitychange', onHidden);
+  };
+}

@@ -1,0 +1,209 @@
+// The digitising journey with real mouse and keyboard events: open a generated scan, calibrate it with
+// control points, draw horizons by clicks, place pins, draw a regional and derive the others, drag
+// every regional up and see the detachment get shallower (METHOD.md, "Sensitivity to the regional":
+// raising every regional by δ moves the detachment up by δ(1 + W0/D)), undo and redo, zoom and pan.
+import type { Page } from '@playwright/test';
+import { test, expect } from './guard';
+import { gotoStarted } from './startup';
+import { gradientPng } from './pngFixture';
+import { viewPixel } from './canvasPixels';
+
+const W = 1000;
+const H = 500;
+
+/** The camera the app fits a W × H scan with (state/camera.ts fitCamera, margin 24). */
+async function fitted(page: Page) {
+  const box = (await page.getByTestId('section-view').boundingBox())!;
+  const scale = Math.min((box.width - 48) / W, (box.height - 48) / H);
+  return { box, scale, x: (box.width - W * scale) / 2, y: (box.height - H * scale) / 2 };
+}
+
+type Cam = Awaited<ReturnType<typeof fitted>>;
+const screen = (cam: Cam, u: number, v: number) => ({ x: cam.box.x + cam.x + u * cam.scale, y: cam.box.y + cam.y + v * cam.scale });
+
+async function clickAt(page: Page, cam: Cam, u: number, v: number) {
+  const p = screen(cam, u, v);
+  await page.mouse.click(p.x, p.y);
+}
+
+/** The known section coordinates of the generated scan: 10 m per pixel, z = 1000 m at the top. */
+const known = (u: number, v: number) => ({ x: 10 * u, z: 1000 - 10 * v });
+
+/** A detachment-fold profile: a sin² bump of the given height (px) between u = 150 and 850. */
+function profile(level: number, bump: number): [number, number][] {
+  const pts: [number, number][] = [];
+  for (let u = 60; u <= 940; u += 40) {
+    const t = u > 150 && u < 850 ? Math.sin((Math.PI * (u - 150)) / 700) ** 2 : 0;
+    pts.push([u, level - bump * t]);
+  }
+  return pts;
+}
+
+async function depthOf(page: Page): Promise<number> {
+  const text = (await page.getByTestId('strip-detachment-depth').textContent()) ?? '';
+  return Number(text.replace('−', '-').split(' ')[0]);
+}
+
+/** Starts from an empty project: the page may open the demo section first, so wait for it, then choose New. */
+async function freshProject(page: Page) {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  await page.getByTestId('menu-project').click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(0);
+}
+
+async function openAndCalibrate(page: Page): Promise<Cam> {
+  await freshProject(page);
+  await page.getByTestId('open-image').setInputFiles({ name: 'section.png', mimeType: 'image/png', buffer: gradientPng(W, H) });
+  await expect(page.getByTestId('scan-name')).toContainText('section.png');
+  const cam = await fitted(page);
+  await page.getByTestId('tool-calibrate').click();
+  await page.getByTestId('cal-mode-affine').click();
+  const marks: [number, number][] = [[50, 50], [950, 60], [940, 450], [60, 440]];
+  for (const [k, [u, v]] of marks.entries()) {
+    await clickAt(page, cam, u, v);
+    // The click focuses the new point's value field; type its known coordinates.
+    await expect(page.getByTestId(`cal-x-${k}`)).toBeFocused();
+    const q = known(u, v);
+    await page.getByTestId(`cal-x-${k}`).fill(String(q.x));
+    await page.getByTestId(`cal-z-${k}`).fill(String(q.z));
+    await page.getByTestId(`cal-z-${k}`).press('Enter');
+  }
+  return cam;
+}
+
+test('calibrate with control points: residuals, warning on a mistyped value, vertical exaggeration', async ({ page }) => {
+  await openAndCalibrate(page);
+  // 10 m per pixel across and down: no exaggeration.
+  await expect(page.getByTestId('cal-ve')).toHaveText('1×');
+  for (let k = 0; k < 4; k++) {
+    const m = /^(< )?([\d.]+) px$/.exec((await page.getByTestId(`cal-residual-${k}`).textContent()) ?? '');
+    expect(m, `residual of point ${k}`).not.toBeNull();
+    expect(Number(m![2])).toBeLessThan(0.5);
+  }
+  await expect(page.getByTestId('cal-warning')).toHaveCount(0);
+  // A value mistyped by 200 m (20 px) must be flagged.
+  await page.getByTestId('cal-x-2').fill('9600');
+  await page.getByTestId('cal-x-2').press('Enter');
+  await expect(page.getByTestId('cal-warning')).toBeVisible();
+  await expect(page.getByTestId('cal-row-2')).toHaveClass(/warn/);
+  await page.screenshot({ path: test.info().outputPath('calibration-warning.png') });
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('cal-warning')).toHaveCount(0);
+});
+
+test('digitise horizons, pins and regionals; raising every regional makes the detachment shallower; undo, redo, zoom and pan', async ({ page }) => {
+  const cam = await openAndCalibrate(page);
+
+  // Three horizons by clicks: finished with a double-click, Enter, and Enter after a Backspace.
+  await page.getByTestId('tool-draw').click();
+  const horizons = [profile(150, 110), profile(250, 80), profile(350, 50)];
+  for (const [k, pts] of horizons.entries()) {
+    for (const [i, [u, v]] of pts.entries()) {
+      if (k === 0 && i === pts.length - 1) {
+        const p = screen(cam, u, v);
+        await page.mouse.dblclick(p.x, p.y);
+      } else await clickAt(page, cam, u, v);
+    }
+    if (k === 2) {
+      await clickAt(page, cam, 990, 300);
+      await page.keyboard.press('Backspace');
+    }
+    if (k > 0) await page.keyboard.press('Enter');
+  }
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(3);
+
+  // Pins at u = 120 and 880 (x = 1200 m and 8800 m), then typed to check the fields.
+  await page.getByTestId('tool-pins').click();
+  await clickAt(page, cam, 120, 470);
+  await clickAt(page, cam, 880, 470);
+  await expect(page.getByTestId('pin-left-x')).toHaveValue(/^120\d/);
+  await page.getByTestId('pin-left-x').fill('1200');
+  await page.getByTestId('pin-left-x').press('Enter');
+  await page.getByTestId('pin-right-x').fill('8800');
+  await page.getByTestId('pin-right-x').press('Enter');
+  await expect(page.getByTestId('pin-width')).toContainText('7600 m');
+
+  // The top horizon's regional by two clicks (the second a double-click), the rest as a parallel set.
+  await page.getByTestId('horizon-row-h1').click({ position: { x: 8, y: 10 } });
+  await expect(page.getByTestId('horizon-row-h1')).toHaveClass(/selected/);
+  await page.getByTestId('tool-regional').click();
+  await clickAt(page, cam, 40, 150);
+  const end = screen(cam, 960, 150);
+  await page.mouse.dblclick(end.x, end.y);
+  await page.getByTestId('parallel-set').click();
+  await expect(page.getByTestId('strip-detachment-depth')).toHaveText(/^\d+(\.\d+)? m$/);
+  const before = await depthOf(page);
+  await expect(page.getByTestId('strip-displacement')).toHaveText(/^\d+(\.\d+)? m$/);
+  await page.screenshot({ path: test.info().outputPath('digitised.png') });
+
+  // Shift-drag the top regional up by 12 px (120 m): every regional rises; the numbers follow the drag.
+  const grab = screen(cam, 500, 150);
+  await page.mouse.move(grab.x, grab.y);
+  await page.keyboard.down('Shift');
+  await page.mouse.down();
+  await page.mouse.move(grab.x, grab.y - 6 * cam.scale, { steps: 3 });
+  const midDrag = await depthOf(page);
+  await page.mouse.move(grab.x, grab.y - 12 * cam.scale, { steps: 3 });
+  await page.mouse.up();
+  await page.keyboard.up('Shift');
+  const after = await depthOf(page);
+  expect(midDrag).toBeLessThan(before);
+  expect(after).toBeLessThan(midDrag);
+  await page.screenshot({ path: test.info().outputPath('regionals-raised.png') });
+
+  // One undo entry for the whole drag.
+  await page.keyboard.press('Control+z');
+  await expect.poll(() => depthOf(page)).toBe(before);
+  await page.keyboard.press('Control+Shift+z');
+  await expect.poll(() => depthOf(page)).toBe(after);
+
+  // Zoom about the cursor and pan with the space bar still work with a tool active, and edit nothing.
+  const zoomBefore = await page.getByTestId('zoom-readout').textContent();
+  const c = screen(cam, 500, 250);
+  await page.mouse.move(c.x, c.y);
+  for (let i = 0; i < 3; i++) await page.mouse.wheel(0, -200);
+  await expect(page.getByTestId('zoom-readout')).not.toHaveText(zoomBefore ?? '');
+  const at = await viewPixel(page, c.x - cam.box.x, c.y - cam.box.y);
+  await page.keyboard.down('Space');
+  await page.mouse.down();
+  await page.mouse.move(c.x - 120, c.y, { steps: 5 });
+  await page.mouse.up();
+  await page.keyboard.up('Space');
+  const moved = await viewPixel(page, c.x - cam.box.x - 120, c.y - cam.box.y);
+  expect(Math.abs(moved[0] - at[0]) + Math.abs(moved[1] - at[1])).toBeLessThanOrEqual(6);
+  expect(await depthOf(page)).toBe(after);
+  await page.screenshot({ path: test.info().outputPath('zoomed-panned.png') });
+});
+
+test('edit a horizon: drag a vertex, mark a projected run, undo each as one step; help lists the shortcuts', async ({ page }) => {
+  const cam = await openAndCalibrate(page);
+  await page.getByTestId('tool-draw').click();
+  for (const [u, v] of [[100, 300], [300, 200], [500, 150], [700, 200], [900, 300]] as const) await clickAt(page, cam, u, v);
+  await page.keyboard.press('Enter');
+  await page.getByTestId('tool-edit').click();
+  const pixelAt = (u: number, v: number) => viewPixel(page, screen(cam, u, v).x - cam.box.x, screen(cam, u, v).y - cam.box.y);
+  const lineColour = await pixelAt(500, 150);
+  const from = screen(cam, 500, 150);
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(from.x, from.y + 60 * cam.scale, { steps: 4 });
+  await page.mouse.up();
+  // The line now passes 60 px lower at the crest; the old crest shows the scan again.
+  await expect.poll(() => pixelAt(500, 210)).toEqual(lineColour);
+  expect(await pixelAt(500, 150)).not.toEqual(lineColour);
+  await page.keyboard.press('Control+z');
+  await expect.poll(() => pixelAt(500, 150)).toEqual(lineColour);
+
+  await page.getByTestId('tool-projected').click();
+  await clickAt(page, cam, 300, 200);
+  await clickAt(page, cam, 700, 200);
+  await page.screenshot({ path: test.info().outputPath('projected-run.png') });
+  await page.keyboard.press('?');
+  await expect(page.getByTestId('help-overlay')).toContainText('Draw horizon');
+  await page.screenshot({ path: test.info().outputPath('help.png') });
+  await page.keyboard.press('Escape');
+  await expect(page.getByTestId('help-overlay')).toHaveCount(0);
+});

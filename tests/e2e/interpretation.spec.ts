@@ -1,0 +1,187 @@
+// The interpretation pane on the demo the app opens at start: the numbers shown equal the engine's
+// for public/demo/section.json (to display rounding), which match public/demo/truth.json (the forward
+// model it was built from); toggling a horizon, switching scenarios, and a repeatable Monte Carlo run
+// that leaves the page responsive.
+import { readFileSync } from 'node:fs';
+import type { Locator, Page } from '@playwright/test';
+import { test, expect } from './guard';
+import { gotoStarted } from './startup';
+import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
+import { monteCarlo } from '../../src/core/analysis/monteCarlo';
+import type { Section } from '../../src/core/model/section';
+
+const demo = JSON.parse(readFileSync('public/demo/section.json', 'utf8')) as Section;
+const truth = JSON.parse(readFileSync('public/demo/truth.json', 'utf8')) as { displacement: number; detachmentElevation: number };
+
+function engine(section: Section): SectionAnalysis {
+  const out = analyseSection(section);
+  if (!out.ok) throw new Error(out.problems.map((p) => p.message).join('\n'));
+  return out.analysis;
+}
+
+/** The number at the start of a displayed value such as "-2600 m" or "0.9998". */
+async function shown(loc: Locator): Promise<number> {
+  const text = (await loc.textContent()) ?? '';
+  const m = /^\s*(-?\d+(?:\.\d+)?)/.exec(text);
+  if (!m) throw new Error(`no number in "${text}"`);
+  return Number(m[1]);
+}
+
+/** Displayed to whole units (or to `decimals`): within half the last digit, plus float noise of the pixel round trip. */
+function expectRounded(displayed: number, value: number, decimals = 0): void {
+  expect(Math.abs(displayed - value)).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-6);
+}
+
+async function expectPaneMatches(page: Page, a: SectionAnalysis): Promise<void> {
+  const ad = a.areaDepth!;
+  expectRounded(await shown(page.getByTestId('result-detachment-elevation')), ad.detachmentElevation!);
+  expectRounded(await shown(page.getByTestId('result-detachment-depth')), ad.detachmentDepth!);
+  expectRounded(await shown(page.getByTestId('result-displacement')), ad.displacement);
+  expectRounded(await shown(page.getByTestId('result-r2')), ad.r2, 4);
+  await expect(page.getByTestId('result-n')).toHaveText(String(ad.n));
+}
+
+async function openDemo(page: Page): Promise<void> {
+  await gotoStarted(page);
+  await expect(page.getByTestId('result-detachment-elevation')).toContainText(' m', { timeout: 20_000 });
+}
+
+test('the pane shows the engine’s detachment for the demo, which matches the truth it was built from', async ({ page }) => {
+  await openDemo(page);
+  const a = engine(demo);
+  await expectPaneMatches(page, a);
+  // The number comes first, then the unit.
+  await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^-?\d+ m$/);
+  await expect(page.getByTestId('result-displacement')).toHaveText(/^\d+ m$/);
+  // The demo is a forward model (METHOD.md "Forward models"): the analysis returns its D and detachment to rounding.
+  expect(Math.abs(a.areaDepth!.displacement - truth.displacement)).toBeLessThan(0.5);
+  expect(Math.abs(a.areaDepth!.detachmentElevation! - truth.detachmentElevation)).toBeLessThan(0.5);
+  expectRounded(await shown(page.getByTestId('result-detachment-elevation')), truth.detachmentElevation);
+  // One point per horizon, the caution visible, the detachment marked on the graph.
+  await expect(page.locator('[data-testid^="graph-point-"]')).toHaveCount(demo.horizons.length);
+  await expect(page.getByTestId('graph-detachment')).toBeVisible();
+  await expect(page.getByTestId('pane-caution')).toContainText('licensed professional');
+  await page.screenshot({ path: test.info().outputPath('pane-demo.png') });
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-only.png') });
+});
+
+test('clicking a graph point leaves its horizon out, and the values follow the engine', async ({ page }) => {
+  await openDemo(page);
+  const point = page.getByTestId('graph-point-0');
+  await expect(point).toHaveAttribute('data-included', 'yes');
+  await point.click();
+  await expect(point).toHaveAttribute('data-included', 'no');
+  const without = engine({ ...demo, horizons: demo.horizons.map((h, i) => (i === 0 ? { ...h, include: false } : h)) });
+  await expect(page.getByTestId('result-n')).toHaveText(String(demo.horizons.length - 1));
+  await expectPaneMatches(page, without);
+  // The table row's box shows the same state, and ticking it brings the horizon back.
+  await expect(page.getByTestId('include-0')).not.toBeChecked();
+  await page.getByTestId('include-0').check();
+  await expect(point).toHaveAttribute('data-included', 'yes');
+  await expectPaneMatches(page, engine(demo));
+});
+
+test('leaving out all but two horizons says so in plain words', async ({ page }) => {
+  await openDemo(page);
+  for (let i = 0; i < demo.horizons.length - 2; i++) await page.getByTestId(`graph-point-${i}`).click();
+  await expect(page.getByTestId('result-n')).toHaveText('2');
+  await expect(page.getByTestId('diagnostics')).toContainText('Too few horizons for intervals');
+  const two = engine({ ...demo, horizons: demo.horizons.map((h, i) => ({ ...h, include: i >= demo.horizons.length - 2 })) });
+  await expectPaneMatches(page, two);
+});
+
+test('scenarios: duplicate, change the copy, switch back, compare', async ({ page }) => {
+  await openDemo(page);
+  const base = engine(demo);
+  await page.getByTestId('scenario-duplicate').click();
+  await expect(page.getByTestId('scenario-select').locator('option')).toHaveCount(2);
+  await expect(page.getByTestId('scenario-select')).toHaveValue('scenario-2');
+  // The copy starts equal, then leaves out the deepest horizon.
+  await expectPaneMatches(page, base);
+  const last = demo.horizons.length - 1;
+  await page.getByTestId(`graph-point-${last}`).click();
+  const changed = engine({ ...demo, horizons: demo.horizons.map((h, i) => (i === last ? { ...h, include: false } : h)) });
+  await expectPaneMatches(page, changed);
+  // Rename the copy.
+  await page.getByTestId('scenario-rename').click();
+  await page.getByTestId('scenario-name-input').fill('Without the deepest');
+  await page.getByTestId('scenario-name-input').press('Enter');
+  await expect(page.getByTestId('scenario-select').locator('option:checked')).toHaveText('Without the deepest');
+  // Back to the first scenario: its own inclusion, its own numbers.
+  await page.getByTestId('scenario-select').selectOption('scenario-1');
+  await expectPaneMatches(page, base);
+  await expect(page.getByTestId(`graph-point-${last}`)).toHaveAttribute('data-included', 'yes');
+  const rows = page.getByTestId('scenario-compare').locator('tbody tr');
+  await expect(rows).toHaveCount(2);
+  await expect(rows.nth(1)).toContainText('Without the deepest');
+  await expect(page.getByTestId('scenario-overlay').locator('.fit-line')).toHaveCount(2);
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-scenarios.png') });
+});
+
+test('the sensitivity plot states the amplification 1 + W/D of the engine’s fit', async ({ page }) => {
+  await openDemo(page);
+  await page.getByTestId('sensitivity-section').locator('summary').click();
+  const a = engine(demo);
+  const amp = 1 + a.pinWidth / a.areaDepth!.displacement;
+  const text = (await page.getByTestId('sensitivity-amplification').textContent()) ?? '';
+  const m = /1 \+ W\/D = (\d+\.\d)/.exec(text);
+  expect(m).not.toBeNull();
+  expect(Math.abs(Number(m![1]) - amp)).toBeLessThanOrEqual(0.05 + 1e-9);
+  await expect(page.getByTestId('sensitivity-offset-plot')).toBeVisible();
+  await page.getByTestId('sensitivity-offset-plot').scrollIntoViewIfNeeded();
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-sensitivity.png') });
+});
+
+test('Monte Carlo with a fixed seed repeats exactly, matches the engine, and the page answers clicks while it runs', async ({ page }) => {
+  await openDemo(page);
+  const mc = page.getByTestId('monte-carlo-section');
+  await mc.locator('summary').click();
+  const runs = 8000;
+  await page.getByTestId('mc-runs').fill(String(runs));
+  await page.getByTestId('mc-seed').fill('4242');
+  await page.getByTestId('mc-sigma-vertex').fill('10');
+  await page.getByTestId('mc-sigma-offset').fill('20');
+  // Every vertex perturbed and re-measured: the slow path, so the run lasts long enough to click during it.
+  await page.getByTestId('mc-vertices').check();
+  const percentiles = async (): Promise<string[]> => {
+    await page.getByTestId('mc-run').click();
+    await expect(page.getByTestId('mc-progress')).toBeVisible();
+    // A click handled during the run: the sensitivity section opens while the progress bar is still shown.
+    const sensitivity = page.getByTestId('sensitivity-section');
+    await sensitivity.locator('summary').click();
+    await expect(sensitivity).toHaveAttribute('open', '');
+    await expect(page.getByTestId('mc-progress')).toBeVisible();
+    await sensitivity.locator('summary').click();
+    await expect(page.getByTestId('mc-result')).toBeVisible({ timeout: 120_000 });
+    return Promise.all(['mc-p10', 'mc-p50', 'mc-p90', 'mc-failed'].map(async (id) => (await page.getByTestId(id).textContent()) ?? ''));
+  };
+  const first = await percentiles();
+  await page.getByTestId('mc-result').scrollIntoViewIfNeeded();
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-monte-carlo.png') });
+  const second = await percentiles();
+  expect(second).toEqual(first);
+  // The same run in the test process, on the demo's section file (the app's section went through the
+  // scan's pixels and back, so agreement is to display rounding).
+  const out = monteCarlo(demo, { runs, seed: 4242, sigmaVertex: 10, sigmaOffset: 20, sigmaHorizonOffset: 0, sigmaTilt: 0, sigmaScale: 0, method: 'vertices' });
+  if (!out.ok) throw new Error('engine Monte Carlo failed');
+  const d = out.result.depth!;
+  const num = (s: string) => Number(/^-?\d+/.exec(s)![0]);
+  expectRounded(num(first[0]), d.p10);
+  expectRounded(num(first[1]), d.p50);
+  expectRounded(num(first[2]), d.p90);
+  expect(d.p90 - d.p10).toBeGreaterThan(100);
+  await expect(page.getByTestId('mc-histogram')).toBeVisible();
+});
+
+test('Monte Carlo can be cancelled', async ({ page }) => {
+  await openDemo(page);
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-runs').fill('100000');
+  await page.getByTestId('mc-vertices').check();
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-progress')).toBeVisible();
+  await page.getByTestId('mc-cancel').click();
+  await expect(page.getByTestId('mc-progress')).toHaveCount(0);
+  await expect(page.getByTestId('mc-result')).toHaveCount(0);
+  await expect(page.getByTestId('mc-run')).toBeEnabled();
+});

@@ -1,0 +1,47 @@
+import { IDBFactory } from 'fake-indexeddb';
+import { describe, expect, it } from 'vitest';
+import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot } from '../../../src/state/autosaveDb';
+import { sampleDoc } from './sampleDoc';
+
+describe('autosave database (fake-indexeddb)', () => {
+  it('returns null before anything is kept', async () => {
+    const db = await openAutosaveDb(new IDBFactory());
+    expect(await readSnapshot(db)).toBeNull();
+  });
+
+  it('keeps the document and the scan bytes, rewriting the bytes only when asked', async () => {
+    const db = await openAutosaveDb(new IDBFactory());
+    const doc = { ...sampleDoc(), scan: { id: 's1', name: 'a.png', widthPx: 2, heightPx: 2, type: 'image/png' } };
+    const bytes = Uint8Array.from([1, 2, 3, 4, 5]).buffer;
+    await writeSnapshot(db, { savedAt: 't1', doc, dirty: true }, { id: 's1', type: 'image/png', name: 'a.png', bytes }, true);
+    const edited = { ...doc, title: 'edited' };
+    await writeSnapshot(db, { savedAt: 't2', doc: edited, dirty: false }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new ArrayBuffer(0) }, false);
+    const snap = await readSnapshot(db);
+    expect(snap?.doc).toEqual(edited);
+    expect(snap?.dirty).toBe(false);
+    expect(snap?.savedAt).toBe('t2');
+    expect(new Uint8Array(snap!.scan!.bytes)).toEqual(Uint8Array.from([1, 2, 3, 4, 5]));
+  });
+
+  it('drops the scan when the document no longer has one, and clears on "Start fresh"', async () => {
+    const db = await openAutosaveDb(new IDBFactory());
+    const doc = { ...sampleDoc(), scan: { id: 's1', name: 'a.png', widthPx: 2, heightPx: 2, type: 'image/png' } };
+    await writeSnapshot(db, { savedAt: 't', doc, dirty: true }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new ArrayBuffer(3) }, true);
+    await writeSnapshot(db, { savedAt: 't', doc: sampleDoc(), dirty: true }, null, false);
+    expect((await readSnapshot(db))?.scan).toBeNull();
+    await clearSnapshot(db);
+    expect(await readSnapshot(db)).toBeNull();
+  });
+
+  it('ignores a kept document that no longer passes the schema', async () => {
+    const db = await openAutosaveDb(new IDBFactory());
+    const broken = { ...sampleDoc(), horizons: 'nope' } as unknown as ReturnType<typeof sampleDoc>;
+    await writeSnapshot(db, { savedAt: 't', doc: broken, dirty: true }, null, false);
+    expect(await readSnapshot(db)).toBeNull();
+  });
+
+  it('recognises the quota error by its DOMException name', () => {
+    expect(isQuotaError(new DOMException('full', 'QuotaExceededError'))).toBe(true);
+    expect(isQuotaError(new Error('other'))).toBe(false);
+  });
+});
