@@ -1,8 +1,7 @@
-import { areaBetweenPolylines } from '../geometry/areaBetweenPolylines';
-import { clipPolylineToPins, type ClippedPolyline, type PinClip } from '../geometry/clipPolylineToPins';
-import { meanElevation } from '../geometry/meanElevation';
-import { polylineLength } from '../geometry/polylineLength';
-import { selfIntersections } from '../geometry/selfIntersections';
+import { clipAndMeasure } from '../geometry/clipAndMeasure';
+import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
+import { chainCrossings } from '../geometry/chainCrossings';
+import type { XMonotoneChains } from '../geometry/xMonotoneChains';
 import type { SectionProblem } from '../model/validateSection';
 import { projectedContribution } from './projectedContribution';
 
@@ -42,8 +41,9 @@ function pinProblems(clip: PinClip, who: string, what: string, name: string, pin
   return out;
 }
 
-function crossingProblem(c: ClippedPolyline, who: string, what: string, name: string): SectionProblem | null {
-  const pairs = selfIntersections(c.xs, c.zs, 1);
+function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: string, what: string, name: string): SectionProblem | null {
+  // The monotone-chain test of selfIntersections, on the chains the clipping pass already found.
+  const pairs = chainCrossings(c.xs, c.zs, chains, 1);
   if (pairs.length === 0) return null;
   // Report input vertex numbers, not clipped ones, so the user can find the spot.
   const a = Math.floor(c.source[pairs[0][0]]);
@@ -62,27 +62,32 @@ export function prepareHorizon(
   segmentProjected?: ArrayLike<number>,
 ): HorizonPreparation {
   const who = `Horizon "${name}"`;
-  const lineClip = clipPolylineToPins(lineX, lineZ, pins[0], pins[1], segmentProjected);
-  const regClip = clipPolylineToPins(regionalX, regionalZ, pins[0], pins[1]);
-  const problems = [...pinProblems(lineClip, who, 'line', name, pins), ...pinProblems(regClip, who, 'regional', name, pins)];
-  for (const [c, what] of [[lineClip.clipped, 'line'], [regClip.clipped, 'regional']] as const) {
-    const p = c ? crossingProblem(c, who, what, name) : null;
+  // The regional first: its first clipped z is the loop's z origin (as areaBetweenPolylines takes it).
+  const reg = clipAndMeasure(regionalX, regionalZ, pins[0], pins[1]);
+  const lin = clipAndMeasure(lineX, lineZ, pins[0], pins[1], segmentProjected, reg.zOrigin);
+  const problems = [...pinProblems(lin.clip, who, 'line', name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
+  for (const [m, what] of [[lin, 'line'], [reg, 'regional']] as const) {
+    // A line along which x only increases is one monotone chain and cannot cross itself (selfIntersections).
+    const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, m.chains, who, what, name) : null;
     if (p) problems.push(p);
   }
-  if (problems.length > 0 || !lineClip.clipped || !regClip.clipped) return { ok: false, problems };
-  const line = lineClip.clipped;
-  const regional = regClip.clipped;
-  const excessArea = areaBetweenPolylines(line.xs, line.zs, regional.xs, regional.zs);
-  const proj = projectedContribution(line, regional);
+  if (problems.length > 0 || !lin.clip.clipped || !reg.clip.clipped) return { ok: false, problems };
+  const line = lin.clip.clipped;
+  const regional = reg.clip.clipped;
+  // Loop area as areaBetweenPolylines, and r = z0 + ∫ (z − z0) dx / W0 as meanElevation, from the same integrals.
+  const excessArea = lin.integral - reg.integral;
+  const width = regional.xs[regional.xs.length - 1] - regional.xs[0];
+  const regionalElevation = width === 0 ? Number.NaN : reg.zOrigin + reg.integral / width;
+  const proj = segmentProjected ? projectedContribution(line, regional) : { area: 0, length: 0 };
   const rest = Math.abs(excessArea - proj.area);
   const share = proj.area === 0 ? 0 : Math.abs(proj.area) / (Math.abs(proj.area) + rest);
   return {
     ok: true,
     horizon: {
       name, included, line, regional, excessArea,
-      bedLength: polylineLength(line.xs, line.zs),
-      regionalLength: polylineLength(regional.xs, regional.zs),
-      regionalElevation: meanElevation(regional.xs, regional.zs),
+      bedLength: lin.length,
+      regionalLength: reg.length,
+      regionalElevation,
       projectedArea: proj.area,
       projectedLength: proj.length,
       projectedAreaShare: share,

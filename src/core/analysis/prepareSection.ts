@@ -1,6 +1,5 @@
-import { toCoordinateArrays } from '../geometry/toCoordinateArrays';
 import type { LengthUnit, Section } from '../model/section';
-import { validateSection, type SectionProblem } from '../model/validateSection';
+import { validateSectionArrays, type Allocate, type SectionProblem } from '../model/validateSection';
 import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
 
@@ -24,11 +23,30 @@ export interface PreparedSection {
   included: Uint8Array;
 }
 
+// The validated input points only live until each horizon is clipped (the clipped lines are
+// new arrays), so they are written into one reused buffer instead of fresh arrays per call:
+// live dragging and the benchmark re-prepare sections many times, and fresh large arrays cost
+// page faults. Nothing computed is kept between calls, only the memory. Not re-entrant, which
+// prepareSection never needs (it is synchronous; each Worker has its own module instance).
+let pool = new Float64Array(1 << 12);
+let poolUsed = 0;
+const fromPool: Allocate = (n) => {
+  if (poolUsed + n > pool.length) {
+    // Views handed out earlier keep the old buffer alive until this call ends.
+    pool = new Float64Array(Math.max(2 * pool.length, 2 * n));
+    poolUsed = 0;
+  }
+  poolUsed += n;
+  return pool.subarray(poolUsed - n, poolUsed);
+};
+
 export type SectionPreparation = { ok: true; prepared: PreparedSection } | { ok: false; problems: SectionProblem[] };
 
 /** The section validated, clipped and measured once; every problem found (structure, pins, self-crossing) instead of throwing. */
 export function prepareSection(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
-  const v = validateSection(section);
+  // Validation copies the points straight into typed arrays, so every vertex is read from the input once.
+  poolUsed = 0;
+  const v = validateSectionArrays(section, fromPool);
   if (!v.ok) return { ok: false, problems: v.problems };
   const s = v.section;
   const option = options.referenceElevation;
@@ -41,10 +59,9 @@ export function prepareSection(section: Section, options: { referenceElevation?:
   const problems: SectionProblem[] = [];
   const horizons: PreparedHorizon[] = [];
   for (const h of s.horizons) {
-    const line = toCoordinateArrays(h.line);
-    const reg = toCoordinateArrays(h.regional);
-    const flags = projectedSegmentFlags(h.projected, h.line.length);
-    const p = prepareHorizon(h.name, line.xs, line.zs, reg.xs, reg.zs, s.pins, h.include !== false, flags);
+    // No flags at all when nothing is projected: the same result, without a pass over empty flags.
+    const flags = h.projected && h.projected.length > 0 ? projectedSegmentFlags(h.projected, h.lineX.length) : undefined;
+    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags);
     if (p.ok) horizons.push(p.horizon);
     else problems.push(...p.problems);
   }

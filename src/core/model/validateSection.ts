@@ -23,30 +23,50 @@ function label(name: string | undefined, index: number): string {
   return name !== undefined ? `Horizon "${name}"` : `Horizon #${index + 1}`;
 }
 
-/** Points as XZ[] or null (problems pushed); `what` is e.g. 'line' or 'regional'. */
-function readPoints(v: unknown, who: string, what: string, horizon: string | undefined, out: Problems): XZ[] | null {
+/** A line's points as typed arrays (section units), in input order. */
+interface PointArrays { xs: Float64Array; zs: Float64Array }
+
+/** Gives a Float64Array of length n for the points (its contents are overwritten). */
+export type Allocate = (n: number) => Float64Array;
+
+const newArray: Allocate = (n) => new Float64Array(n);
+
+/** Points as typed arrays or null (problems pushed); `what` is e.g. 'line' or 'regional'. */
+function readPoints(v: unknown, who: string, what: string, horizon: string | undefined, out: Problems, allocate: Allocate): PointArrays | null {
   if (!Array.isArray(v)) {
     out.push({ code: 'bad-shape', horizon, message: `${who}: "${what}" must be an array of [x, z] points; add it.` });
     return null;
   }
-  const points: XZ[] = [];
-  for (let i = 0; i < v.length; i++) {
-    const p = v[i];
-    if (!Array.isArray(p) || p.length !== 2 || typeof p[0] !== 'number' || typeof p[1] !== 'number') {
-      out.push({ code: 'bad-shape', horizon, message: `${who}: ${what} point ${i} is not an [x, z] pair of numbers; write it as [x, z].` });
-      return null;
-    }
-    if (!Number.isFinite(p[0]) || !Number.isFinite(p[1])) {
+  const n = v.length;
+  const xs = allocate(n);
+  const zs = allocate(n);
+  // One pass over every point: this loop reads each vertex of the section, so it is kept lean.
+  for (let i = 0; i < n; i++) {
+    // Step 1: the point must be an [x, z] pair of numbers.
+    const p: unknown = v[i];
+    if (!Array.isArray(p) || p.length !== 2) return badPoint(who, what, horizon, i, out);
+    const x: unknown = p[0];
+    const z: unknown = p[1];
+    if (typeof x !== 'number' || typeof z !== 'number') return badPoint(who, what, horizon, i, out);
+    // Step 2: finite: x − x is 0 for every finite x, NaN for NaN and ±Infinity (as Number.isFinite).
+    if (x - x !== 0 || z - z !== 0) {
       out.push({ code: 'not-finite', horizon, message: `${who}: ${what} point ${i} is not a finite number (NaN or Infinity); fix or delete that point.` });
       return null;
     }
-    points.push([p[0], p[1]]);
+    // Step 3: copy into the typed arrays the analysis runs on.
+    xs[i] = x;
+    zs[i] = z;
   }
-  if (points.length < 2) {
-    out.push({ code: 'too-few-points', horizon, message: `${who}: ${what} has ${points.length} point${points.length === 1 ? '' : 's'}; digitise at least 2 points.` });
+  if (n < 2) {
+    out.push({ code: 'too-few-points', horizon, message: `${who}: ${what} has ${n} point${n === 1 ? '' : 's'}; digitise at least 2 points.` });
     return null;
   }
-  return points;
+  return { xs, zs };
+}
+
+function badPoint(who: string, what: string, horizon: string | undefined, i: number, out: Problems): null {
+  out.push({ code: 'bad-shape', horizon, message: `${who}: ${what} point ${i} is not an [x, z] pair of numbers; write it as [x, z].` });
+  return null;
 }
 
 function readRuns(v: unknown, nPoints: number, who: string, horizon: string | undefined, out: Problems): [number, number][] | null {
@@ -70,7 +90,7 @@ function readRuns(v: unknown, nPoints: number, who: string, horizon: string | un
   return runs;
 }
 
-function readHorizon(v: unknown, index: number, out: Problems): SectionHorizon | null {
+function readHorizon(v: unknown, index: number, out: Problems, allocate: Allocate): HorizonArrays | null {
   if (!isObject(v)) {
     out.push({ code: 'bad-shape', message: `Horizon #${index + 1} is not an object; write it as { "name", "line", "regional" }.` });
     return null;
@@ -79,14 +99,14 @@ function readHorizon(v: unknown, index: number, out: Problems): SectionHorizon |
   const who = label(name, index);
   const before = out.length;
   if (name === undefined) out.push({ code: 'bad-shape', message: `${who} has no name; give it a non-empty "name".` });
-  const line = readPoints(v.line, who, 'line', name, out);
-  const regional = readPoints(v.regional, who, 'regional', name, out);
+  const line = readPoints(v.line, who, 'line', name, out, allocate);
+  const regional = readPoints(v.regional, who, 'regional', name, out, allocate);
   if (v.include !== undefined && typeof v.include !== 'boolean') {
     out.push({ code: 'bad-shape', horizon: name, message: `${who}: "include" must be true or false.` });
   }
-  const runs = v.projected !== undefined && line ? readRuns(v.projected, line.length, who, name, out) : undefined;
+  const runs = v.projected !== undefined && line ? readRuns(v.projected, line.xs.length, who, name, out) : undefined;
   if (out.length > before || !line || !regional || name === undefined) return null;
-  const h: SectionHorizon = { name, line, regional };
+  const h: HorizonArrays = { name, lineX: line.xs, lineZ: line.zs, regionalX: regional.xs, regionalZ: regional.zs };
   if (typeof v.include === 'boolean') h.include = v.include;
   if (runs) h.projected = runs;
   return h;
@@ -107,8 +127,51 @@ function readPins(v: unknown, out: Problems): [number, number] | null {
   return l < r ? [l, r] : null;
 }
 
+/** A validated horizon with its points as typed arrays (section units), the form the analysis reads. */
+export interface HorizonArrays {
+  name: string;
+  include?: boolean;
+  projected?: [number, number][];
+  lineX: Float64Array;
+  lineZ: Float64Array;
+  regionalX: Float64Array;
+  regionalZ: Float64Array;
+}
+
+/** A validated section whose points are typed arrays (same checks and problems as validateSection). */
+export interface SectionArrays {
+  units: LengthUnit;
+  pins: [number, number];
+  referenceElevation?: number;
+  horizons: HorizonArrays[];
+}
+
+export type SectionArraysValidation = { ok: true; section: SectionArrays } | { ok: false; problems: SectionProblem[] };
+
 /** The input as a Section (copied, normalised), or every structural problem found; never throws. */
 export function validateSection(input: unknown): SectionValidation {
+  const v = validateSectionArrays(input);
+  if (!v.ok) return v;
+  const s = v.section;
+  const horizons = s.horizons.map((a): SectionHorizon => {
+    const h: SectionHorizon = { name: a.name, line: toPoints(a.lineX, a.lineZ), regional: toPoints(a.regionalX, a.regionalZ) };
+    if (a.include !== undefined) h.include = a.include;
+    if (a.projected) h.projected = a.projected;
+    return h;
+  });
+  const section: Section = { units: s.units, pins: s.pins, horizons };
+  if (s.referenceElevation !== undefined) section.referenceElevation = s.referenceElevation;
+  return { ok: true, section };
+}
+
+function toPoints(xs: Float64Array, zs: Float64Array): XZ[] {
+  const out: XZ[] = new Array<XZ>(xs.length);
+  for (let i = 0; i < xs.length; i++) out[i] = [xs[i], zs[i]];
+  return out;
+}
+
+/** The input as a SectionArrays (points copied into typed arrays from `allocate`, default new ones), or every structural problem found; never throws. */
+export function validateSectionArrays(input: unknown, allocate: Allocate = newArray): SectionArraysValidation {
   const out: Problems = [];
   if (!isObject(input)) {
     return { ok: false, problems: [{ code: 'bad-shape', message: 'The section must be a JSON object with "units", "pins" and "horizons".' }] };
@@ -126,10 +189,10 @@ export function validateSection(input: unknown): SectionValidation {
     out.push({ code: 'bad-shape', message: 'Section: "horizons" must be an array of horizons; add it (it may be empty).' });
     return { ok: false, problems: out };
   }
-  const horizons: SectionHorizon[] = [];
+  const horizons: HorizonArrays[] = [];
   const seen = new Set<string>();
   input.horizons.forEach((v, i) => {
-    const h = readHorizon(v, i, out);
+    const h = readHorizon(v, i, out, allocate);
     const name = isObject(v) && typeof v.name === 'string' ? v.name : undefined;
     if (name !== undefined && name.trim() !== '') {
       if (seen.has(name)) out.push({ code: 'duplicate-name', horizon: name, message: `Horizon "${name}" appears more than once; rename one of them.` });
@@ -138,7 +201,7 @@ export function validateSection(input: unknown): SectionValidation {
     if (h) horizons.push(h);
   });
   if (out.length > 0 || !pins) return { ok: false, problems: out };
-  const section: Section = { units: units as LengthUnit, pins, horizons };
+  const section: SectionArrays = { units: units as LengthUnit, pins, horizons };
   if (typeof ref === 'number') section.referenceElevation = ref;
   return { ok: true, section };
 }

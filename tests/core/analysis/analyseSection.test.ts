@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
+import { prepareSection } from '../../../src/core/analysis/prepareSection';
 import type { Section } from '../../../src/core/model/section';
 import { expectClose } from '../geometry/close';
 import { methodExample, pts, triangleHorizon } from './sections';
@@ -187,3 +188,18 @@ describe('analyseSection(section) projected runs', () => {
     expectClose(h.projectedAreaShare, 0.6, 1e-14);
   });
 });
+
+describe('analyseSection(section) called again and again', () => {
+  it('leaves an earlier analysis and its prepared lines untouched by a later one', () => {
+    // The validated points are written into a reused buffer (prepareSection); the results must not share it.
+    const first = analysed(methodExample());
+    const prepared = prepareSection(methodExample());
+    const before = JSON.stringify([first, prepared], (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
+    const other = methodExample();
+    other.horizons.forEach((h) => h.line.forEach((p) => { p[1] -= 777; }));
+    analysed(other);
+    prepareSection(other);
+    expect(JSON.stringify([first, prepared], (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v))).toBe(before);
+  });
+});
+

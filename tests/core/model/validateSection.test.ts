@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { validateSection } from '../../../src/core/model/validateSection';
+import { validateSection, validateSectionArrays } from '../../../src/core/model/validateSection';
 
 const good = () => ({
   units: 'm',
@@ -96,4 +96,33 @@ describe('validateSection(json)', () => {
   it('lists every problem, not just the first', () => {
     expect(problemsOf({ units: 'cm', pins: [3, 1], horizons: [] }).map((p) => p.code)).toEqual(['bad-units', 'pins-invalid']);
   });
+
+  it('validateSectionArrays gives the same points as typed arrays, and the same problems', () => {
+    const v = validateSectionArrays(good());
+    expect(v.ok).toBe(true);
+    if (v.ok) {
+      const h = v.section.horizons[0];
+      expect([Array.from(h.lineX), Array.from(h.lineZ)]).toEqual([[0, 50, 100], [0, 10, 0]]);
+      expect([Array.from(h.regionalX), Array.from(h.regionalZ)]).toEqual([[0, 100], [0, 0]]);
+      expect([h.name, h.include, h.projected]).toEqual(['Top', true, [[0, 1]]]);
+    }
+    const bad = good();
+    bad.horizons[0].line[1] = [50, Number.NaN];
+    const a = validateSectionArrays({ ...bad, units: 'km' });
+    const b = validateSection({ ...bad, units: 'km' });
+    expect(a.ok || b.ok).toBe(false);
+    if (!a.ok && !b.ok) expect(a.problems).toEqual(b.problems);
+  });
+
+  it('validateSectionArrays writes the points into the arrays its allocator gives', () => {
+    const given: Float64Array[] = [];
+    const v = validateSectionArrays(good(), (n) => {
+      const a = new Float64Array(n);
+      given.push(a);
+      return a;
+    });
+    expect(v.ok && v.section.horizons[0].lineX).toBe(given[0]);
+    expect(given.map((a) => a.length)).toEqual([3, 3, 2, 2]);
+  });
 });
+

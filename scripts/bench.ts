@@ -1,0 +1,172 @@
+// Benchmark of the area-balance engine (npm run bench; add -- --json for the medians only).
+// In one run, on a forward-model section of 12 horizons × ~10,000 vertices:
+//   analysis  – analyseSection, the full analysis (validation, pin clipping, lengths, areas,
+//               self-crossing checks, the area–depth fit);
+//   floor     – a bare shoelace pass over the same vertices, already in typed arrays;
+//   clipping  – the same excess areas the general-purpose way: each horizon + regional loop
+//               as a polygon, clipped to the pin rectangle with polygon-clipping (npm), planar area;
+// and 10,000 Monte Carlo realisations of 6 horizons × ~2,000 vertices (monteCarlo).
+// Times are medians over repeated runs after a warm-up; the analysis and the floor are timed in
+// alternating blocks so that load on the machine falls on both alike. No result is cached between
+// runs: every analysis validates, clips and measures the whole section again.
+import polygonClipping from 'polygon-clipping';
+import { analyseSection } from '../src/core/analysis/analyseSection';
+import { monteCarlo, type MonteCarloOptions } from '../src/core/analysis/monteCarlo';
+import { forwardSection } from '../src/core/forward/forwardSection';
+import type { FoldSpec } from '../src/core/forward/forwardSpec';
+import { shoelaceArea } from '../src/core/geometry/shoelaceArea';
+import type { Section } from '../src/core/model/section';
+
+const json = process.argv.includes('--json');
+
+/**
+ * An invented fold belt: 20 anticlines (rounded, asymmetric, overturned) on flat regionals,
+ * `samplesPerFold` segments per fold. The folds only rise above the regional (weights > 0), so each
+ * horizon + regional loop has winding 0 or 1 everywhere and a polygon library's unsigned area equals
+ * the signed excess area; the overturned folds make most horizons fold back in x, so the
+ * self-crossing check has real work to do.
+ */
+function benchSection(horizons: number, samplesPerFold: number): Section {
+  const shapes: FoldSpec['shape'][] = ['rounded', 'asymmetric', 'overturned', 'rounded'];
+  const folds: FoldSpec[] = Array.from({ length: 20 }, (_, k) => ({
+    shape: shapes[k % 4], from: 6000 + k * 10000, to: 10000 + k * 10000, crest: 0.7, overturn: 1.3, weight: 1 + (k % 3) * 0.5,
+  }));
+  return forwardSection({
+    units: 'm', displacement: 5000, detachmentElevation: -8000, pins: [0, 205000],
+    horizons: Array.from({ length: horizons }, (_, i) => ({ name: `Unit ${i + 1}`, regionalElevation: -200 * i })),
+    folds, samplesPerFold,
+  }).section;
+}
+
+/** Median of the times (ms) of `runs` calls after `warm` untimed ones. */
+function timeIt(fn: () => unknown, runs: number, warm: number): number {
+  for (let i = 0; i < warm; i++) fn();
+  const t: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    fn();
+    t.push(performance.now() - start);
+  }
+  return median(t);
+}
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+/** Each horizon's loop (line, then regional reversed) as typed arrays, built outside the timing. */
+function loops(section: Section): { xs: Float64Array; zs: Float64Array }[] {
+  return section.horizons.map((h) => {
+    const ring = [...h.line, ...[...h.regional].reverse()];
+    return { xs: Float64Array.from(ring, (p) => p[0]), zs: Float64Array.from(ring, (p) => p[1]) };
+  });
+}
+
+/** Excess areas the general-purpose way: loop polygon ∩ pin rectangle (polygon-clipping), planar area of the result. */
+function clippedAreas(section: Section): number[] {
+  const [pL, pR] = section.pins;
+  return section.horizons.map((h) => {
+    // A local origin (METHOD.md, Numerics), as the engine uses; the library then works on small numbers.
+    const z0 = h.regional[0][1];
+    const ring: [number, number][] = [...h.line, ...[...h.regional].reverse()].map((p) => [p[0] - pL, p[1] - z0]);
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const p of ring) {
+      lo = Math.min(lo, p[1]);
+      hi = Math.max(hi, p[1]);
+    }
+    const w = pR - pL;
+    const rect: [number, number][] = [[0, lo - 1], [w, lo - 1], [w, hi + 1], [0, hi + 1]];
+    const result = polygonClipping.intersection([ring], [rect]);
+    let area = 0;
+    for (const polygon of result) {
+      polygon.forEach((r, k) => {
+        const a = Math.abs(shoelaceArea(r.map((p) => p[0]), r.map((p) => p[1])));
+        area += k === 0 ? a : -a;
+      });
+    }
+    return area;
+  });
+}
+
+function main(): void {
+  const section = benchSection(12, 500);
+  const vertices = section.horizons.map((h) => h.line.length);
+  const loopArrays = loops(section);
+  const floor = (): number => {
+    let s = 0;
+    for (const l of loopArrays) s += shoelaceArea(l.xs, l.zs);
+    return s;
+  };
+  const analysis = (): number => {
+    const r = analyseSection(section);
+    if (!r.ok) throw new Error(`bench section rejected: ${r.problems[0].message}`);
+    return r.analysis.horizons.length;
+  };
+
+  // Analysis and floor in alternating blocks of 20 runs after a warm-up of each: load on the machine
+  // falls on both alike, and within a block each runs in its own steady state (the floor's arrays
+  // stay in cache, as a bare pass would have them; a strict one-by-one alternation would let the
+  // analysis evict them and flatter the ratio).
+  for (let i = 0; i < 20; i++) {
+    analysis();
+    floor();
+  }
+  const tA: number[] = [];
+  const tF: number[] = [];
+  for (let block = 0; block < 6; block++) {
+    for (const [fn, times] of [[analysis, tA], [floor, tF]] as const) {
+      for (let i = 0; i < 20; i++) {
+        const t = performance.now();
+        fn();
+        times.push(performance.now() - t);
+      }
+    }
+  }
+  const analysisMs = median(tA);
+  const floorMs = median(tF);
+
+  const clippingMs = timeIt(() => clippedAreas(section), 7, 2);
+  const ours = analyseSection(section);
+  if (!ours.ok) throw new Error('bench section rejected');
+  const theirs = clippedAreas(section);
+  const worst = Math.max(...ours.analysis.horizons.map((h, i) => Math.abs(h.excessArea - theirs[i]) / Math.abs(theirs[i])));
+
+  const mcSection = benchSection(6, 100);
+  const mcOptions: MonteCarloOptions = {
+    runs: 10_000, seed: 20260, sigmaVertex: 5, sigmaOffset: 20, sigmaHorizonOffset: 10, sigmaTilt: 1e-4, sigmaScale: 0.005,
+  };
+  const mc = (): number => {
+    const r = monteCarlo(mcSection, mcOptions);
+    if (!r.ok) throw new Error('Monte Carlo section rejected');
+    return r.result.valid;
+  };
+  const monteCarloMs = timeIt(mc, 7, 2);
+
+  if (json) {
+    process.stdout.write(`${JSON.stringify({ analysisMs, floorMs, clippingMs, monteCarloMs })}\n`);
+    return;
+  }
+  const mcVertices = mcSection.horizons.map((h) => h.line.length);
+  const rows: [string, string, string][] = [
+    ['full analysis (analyseSection)', analysisMs.toFixed(3), `${(analysisMs / floorMs).toFixed(2)}× floor`],
+    ['floor: bare shoelace, typed arrays', floorMs.toFixed(3), '1.00× floor'],
+    ['polygon-clipping loop ∩ pin rectangle', clippingMs.toFixed(1), `${(clippingMs / analysisMs).toFixed(0)}× analysis`],
+    ['Monte Carlo, 10,000 runs', monteCarloMs.toFixed(1), `${(monteCarloMs / 10_000 * 1000).toFixed(1)} µs/run`],
+  ];
+  const line = (a: string, b: string, c: string) => `${a.padEnd(40)} ${b.padStart(10)}  ${c}`;
+  const yes = (ok: boolean) => (ok ? 'met' : 'NOT met');
+  console.log(`Section: ${vertices.length} horizons × ${Math.min(...vertices)}–${Math.max(...vertices)} vertices (forward model); Monte Carlo: ${mcVertices.length} × ${Math.min(...mcVertices)}–${Math.max(...mcVertices)}.`);
+  console.log(`Node ${process.version}; medians in ms.\n`);
+  console.log(line('measure', 'median ms', 'relative'));
+  for (const r of rows) console.log(line(...r));
+  console.log(`\nExcess areas, ours vs polygon-clipping: worst relative difference ${worst.toExponential(2)} (${worst <= 1e-9 ? 'agree to 1e-9' : 'DISAGREE beyond 1e-9'}).`);
+  console.log('\nTargets:');
+  console.log(`  analysis ≤ 3× the floor          ${(analysisMs / floorMs).toFixed(2)}×   ${yes(analysisMs <= 3 * floorMs)}`);
+  console.log(`  analysis ≥ 20× faster than clipping  ${(clippingMs / analysisMs).toFixed(0)}×   ${yes(clippingMs >= 20 * analysisMs)}`);
+  console.log(`  Monte Carlo ≤ 1 s                ${monteCarloMs.toFixed(0)} ms   ${yes(monteCarloMs <= 1000)}`);
+}
+
+main();
