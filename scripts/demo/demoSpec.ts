@@ -5,9 +5,9 @@ import type { ForwardSpec } from '../../src/core/forward/forwardSpec';
 export const demoUnits = [
   { name: 'Harrel Beds', colour: '#efe2a6' },
   { name: 'Vennick Sandstone', colour: '#e9c27d' },
-  { name: 'Orlen Marl', colour: '#b9cf9a' },
+  { name: 'Quennet Marl', colour: '#b9cf9a' },
   { name: 'Saltherne Limestone', colour: '#9fc3d6' },
-  { name: 'Corvey Dolomite', colour: '#c7aed3' },
+  { name: 'Thrasden Dolomite', colour: '#c7aed3' },
   { name: 'Ambrith Shale', colour: '#a9b0a0' },
   { name: 'Kestrow Quartzite', colour: '#e0a98f' },
 ];
