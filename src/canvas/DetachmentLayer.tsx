@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import { Layer, Line, Text } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { selectAnalysis } from '../state/selectors';
+import { selectLiveAnalysis } from '../state/selectors';
 import { sectionToImage } from '../core/calibration/mapPoints';
 import { detachmentTrace } from './detachmentTrace';
 
@@ -17,10 +17,11 @@ function fmt(v: number): string {
 
 export function DetachmentLayer() {
   const doc = useDocStore((s) => s.doc);
+  const gestureStart = useDocStore((s) => s.gestureStart);
   const scale = useSessionStore((s) => s.camera.scale);
   const shapes = useMemo(() => {
     if (!doc.settings.showDetachment) return null;
-    const { docSection, outcome } = selectAnalysis(doc);
+    const { docSection, outcome } = selectLiveAnalysis(doc, gestureStart);
     if (!docSection.ok || !outcome?.ok) return null;
     const trace = detachmentTrace(docSection.section, outcome.analysis);
     if (!trace) return null;
@@ -35,7 +36,7 @@ export function DetachmentLayer() {
       label: `Proposed detachment ${fmt(trace.elevation)} ${u}\ndepth ${fmt(trace.depth)} ${u} below ${fmt(outcome.analysis.referenceElevation)} ${u}; ${interval}`,
       anchor: sectionToImage(docSection.fit, trace.line[0]),
     };
-  }, [doc]);
+  }, [doc, gestureStart]);
   if (!shapes) return <Layer listening={false} />;
   const k = 1 / scale;
   return (

@@ -9,7 +9,7 @@ import { activeScenario } from '../core/model/docToSection';
 import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { excessFillGeometry } from './excessFillGeometry';
+import { clippedHorizonPx, excessFillGeometry } from './excessFillGeometry';
 import { pinLinePx } from './pinLinePx';
 
 export const FILL_ABOVE = 'rgba(232, 121, 30, 0.30)';
@@ -70,11 +70,10 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
   const frame = useDocStore((s) => sectionFrame(s.doc));
   const pinsPx = useDocStore((s) => activeScenario(s.doc).pinsPx);
-  const geometry = useMemo(() => {
-    if (!h || !regional || !pinsPx) return null;
-    const pins = pinXs(pinsPx, frame);
-    return pins ? excessFillGeometry(h.pointsPx, regional, pins, frame) : null;
-  }, [h, regional, pinsPx, frame]);
+  // The horizon's clipped line is kept while only its regional moves (a regional drag).
+  const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
+  const head = useMemo(() => (h && pins ? clippedHorizonPx(h.pointsPx, pins, frame) : null), [h, pins, frame]);
+  const geometry = useMemo(() => (h && regional && pins ? excessFillGeometry(h.pointsPx, regional, pins, frame, head) : null), [h, regional, pins, frame, head]);
   if (!geometry || !h?.visible) return null;
   return (
     <Group listening={false}>

@@ -22,22 +22,45 @@ function flatPx(frame: FittedCalibration, xs: ArrayLike<number>, zs: ArrayLike<n
   }
 }
 
-/** Returns the fill polygons for one horizon, or null when the horizon or regional does not cross both pins once. */
-export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration): ExcessFillGeometry | null {
-  const line = linePx.map((p) => imageToSection(frame, p));
-  const reg = regionalPx.map((p) => imageToSection(frame, p));
-  const lc = clipPolylineToPins(line.map((q) => q[0]), line.map((q) => q[1]), pins[0], pins[1]).clipped;
-  const rc = clipPolylineToPins(reg.map((q) => q[0]), reg.map((q) => q[1]), pins[0], pins[1]).clipped;
-  if (!lc || !rc) return null;
+/** The horizon's part of the fill: its line clipped to the pins (image pixels, left to right) and its z range (section units). */
+export interface ClippedHorizonPx { loopHead: number[]; zMin: number; zMax: number }
+
+/** Returns the horizon clipped to the pins for the fill (reused while only its regional moves), or null when it does not cross both pins once. */
+export function clippedHorizonPx(linePx: ImagePx[], pins: [number, number], frame: FittedCalibration): ClippedHorizonPx | null {
+  const xs = new Float64Array(linePx.length);
+  const zs = new Float64Array(linePx.length);
+  linePx.forEach((p, i) => {
+    const q = imageToSection(frame, p);
+    xs[i] = q[0];
+    zs[i] = q[1];
+  });
+  const lc = clipPolylineToPins(xs, zs, pins[0], pins[1]).clipped;
+  if (!lc) return null;
   let zMin = Infinity;
   let zMax = -Infinity;
-  for (const z of [...lc.zs, ...rc.zs]) {
+  for (const z of lc.zs) {
+    zMin = Math.min(zMin, z);
+    zMax = Math.max(zMax, z);
+  }
+  const loopHead: number[] = [];
+  flatPx(frame, lc.xs, lc.zs, false, loopHead);
+  return { loopHead, zMin, zMax };
+}
+
+/** Returns the fill polygons for one horizon, or null when the horizon or regional does not cross both pins once. */
+export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration,
+  horizon: ClippedHorizonPx | null = clippedHorizonPx(linePx, pins, frame)): ExcessFillGeometry | null {
+  const reg = regionalPx.map((p) => imageToSection(frame, p));
+  const rc = clipPolylineToPins(reg.map((q) => q[0]), reg.map((q) => q[1]), pins[0], pins[1]).clipped;
+  if (!horizon || !rc) return null;
+  let zMin = horizon.zMin;
+  let zMax = horizon.zMax;
+  for (const z of rc.zs) {
     zMin = Math.min(zMin, z);
     zMax = Math.max(zMax, z);
   }
   const margin = (zMax - zMin) + (pins[1] - pins[0]);
-  const loop: number[] = [];
-  flatPx(frame, lc.xs, lc.zs, false, loop);
+  const loop = horizon.loopHead.slice();
   flatPx(frame, rc.xs, rc.zs, true, loop);
   const above: number[] = [];
   flatPx(frame, rc.xs, rc.zs, false, above);

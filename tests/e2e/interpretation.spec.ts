@@ -1,17 +1,26 @@
 // The interpretation pane on the demo the app opens at start: the numbers shown equal the engine's
 // for public/demo/section.json (to display rounding), which match public/demo/truth.json (the forward
 // model it was built from); toggling a horizon, switching scenarios, and a repeatable Monte Carlo run
-// that leaves the page responsive.
+// that leaves the page responsive; and a Shift-drag of the regionals with the mouse, during and after
+// which the strip, the pane, the graph and the detachment drawn on the section agree with the engine
+// run here on the document the app then saves.
 import { readFileSync } from 'node:fs';
 import type { Locator, Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import { monteCarlo } from '../../src/core/analysis/monteCarlo';
+import { fitCalibration } from '../../src/core/calibration/fitCalibration';
+import { sectionToImage } from '../../src/core/calibration/mapPoints';
+import { interpolateZAt } from '../../src/core/geometry/interpolateZAt';
+import { docToSection } from '../../src/core/model/docToSection';
+import type { ControlPoint, ProjectDoc } from '../../src/core/model/projectDoc';
 import type { Section } from '../../src/core/model/section';
+import { fitCamera } from '../../src/state/camera';
 
 const demo = JSON.parse(readFileSync('public/demo/section.json', 'utf8')) as Section;
 const truth = JSON.parse(readFileSync('public/demo/truth.json', 'utf8')) as { displacement: number; detachmentElevation: number };
+const demoCalibration = JSON.parse(readFileSync('public/demo/calibration.json', 'utf8')) as { imageWidthPx: number; imageHeightPx: number; controlPoints: ControlPoint[] };
 
 function engine(section: Section): SectionAnalysis {
   const out = analyseSection(section);
@@ -184,4 +193,147 @@ test('Monte Carlo can be cancelled', async ({ page }) => {
   await expect(page.getByTestId('mc-progress')).toHaveCount(0);
   await expect(page.getByTestId('mc-result')).toHaveCount(0);
   await expect(page.getByTestId('mc-run')).toBeEnabled();
+});
+
+/** The strip's number: about four significant figures with a typographic minus (formatQuantity). */
+async function stripNumber(loc: Locator): Promise<number> {
+  const text = ((await loc.textContent()) ?? '').replace('−', '-');
+  const m = /^\s*(-?\d+(?:\.\d+)?) m$/.exec(text);
+  if (!m) throw new Error(`no length in "${text}"`);
+  return Number(m[1]);
+}
+
+/** Within half a unit of the fourth significant figure, as the strip rounds. */
+function expectFourFigures(displayed: number, value: number): void {
+  const mag = Math.floor(Math.log10(Math.abs(value)));
+  expect(Math.abs(displayed - value)).toBeLessThanOrEqual(0.5 * 10 ** Math.max(mag - 3, -6) + 1e-6);
+}
+
+interface Shown { strip: number; elevation: number; depth: number; displacement: number; graph: number; label: string; lineRow: number }
+
+/** The detachment drawn on the section: its label (canvas text) and the median screen row of its line right of the view's middle. */
+async function sectionDetachment(page: Page): Promise<{ label: string; lineRow: number }> {
+  return page.evaluate(`(() => {
+    const stage = window.Konva.stages[0];
+    const text = stage.find('Text').find((t) => t.text().startsWith('Proposed detachment'));
+    if (!text) return { label: '', lineRow: NaN };
+    const canvas = text.getLayer().getCanvas()._canvas;
+    const ctx = canvas.getContext('2d');
+    const ratio = canvas.width / stage.width();
+    const rows = [];
+    // Columns right of the middle of the view, clear of the label over the line's left end; the line is dashed.
+    for (let f = 0.6; f <= 0.8; f += 0.005) {
+      const x = Math.round(stage.width() * f * ratio);
+      const col = ctx.getImageData(x, 0, 1, canvas.height).data;
+      const hits = [];
+      // The line is the opaque red; the 95% band is the same red at low opacity.
+      for (let y = 0; y < canvas.height; y++) if (col[4 * y + 3] > 200 && col[4 * y] > 140 && col[4 * y + 1] < 90) hits.push(y);
+      if (hits.length) rows.push(hits.reduce((a, b) => a + b, 0) / hits.length / ratio);
+    }
+    rows.sort((a, b) => a - b);
+    return { label: text.text(), lineRow: rows.length ? rows[Math.floor(rows.length / 2)] : NaN };
+  })()`);
+}
+
+async function shownValues(page: Page): Promise<Shown> {
+  const graphText = (await page.getByTestId('graph-detachment').textContent()) ?? '';
+  const g = /detachment (-?\d+) m/.exec(graphText);
+  if (!g) throw new Error(`no depth in the graph's label "${graphText}"`);
+  return {
+    strip: await stripNumber(page.getByTestId('strip-detachment-depth')),
+    elevation: await shown(page.getByTestId('result-detachment-elevation')),
+    depth: await shown(page.getByTestId('result-detachment-depth')),
+    displacement: await shown(page.getByTestId('result-displacement')),
+    graph: Number(g[1]),
+    ...(await sectionDetachment(page)),
+  };
+}
+
+/** Everything shown agrees with the engine's analysis, to each place's display rounding. */
+function expectShownMatches(v: Shown, a: SectionAnalysis): void {
+  const ad = a.areaDepth!;
+  expectFourFigures(v.strip, ad.detachmentDepth!);
+  expectRounded(v.elevation, ad.detachmentElevation!);
+  expectRounded(v.depth, ad.detachmentDepth!);
+  expectRounded(v.displacement, ad.displacement);
+  expectRounded(v.graph, ad.detachmentDepth!);
+  // The label on the section (DetachmentLayer): elevation, then depth below the reference, whole units.
+  const m = /^Proposed detachment (-?\d+) m\ndepth (-?\d+) m below (-?\d+) m/.exec(v.label);
+  expect(m, `label "${v.label}"`).not.toBeNull();
+  expectRounded(Number(m![1]), ad.detachmentElevation!);
+  expectRounded(Number(m![2]), ad.detachmentDepth!);
+  expectRounded(Number(m![3]), a.referenceElevation);
+}
+
+test('Shift-dragging the regionals up: the strip, pane, graph and the line on the section follow the engine, shallower; undo restores them', async ({ page }) => {
+  await openDemo(page);
+  const before = engine(demo);
+  const start = await shownValues(page);
+  expectShownMatches(start, before);
+  expect(start.lineRow).toBeGreaterThan(0);
+
+  // Where the app drew the top horizon's regional (openDemo: the demo calibration, the scan fitted to the view),
+  // midway between two of its vertices so the press takes the line, not a handle.
+  await page.getByTestId('tool-regional').click();
+  const cal = fitCalibration({ kind: 'affine', points: demoCalibration.controlPoints });
+  if (!cal.ok) throw new Error(cal.message);
+  const view = page.getByTestId('section-view');
+  const size = await view.evaluate((el) => ({ w: el.clientWidth, h: el.clientHeight }));
+  const box = (await view.boundingBox())!;
+  const cam = fitCamera(demoCalibration.imageWidthPx, demoCalibration.imageHeightPx, size.w, size.h);
+  const top = demo.horizons[0].regional;
+  const x = 10500;
+  const [u, v] = sectionToImage(cal.fit, [x, interpolateZAt(top.map((q) => q[0]), top.map((q) => q[1]), x)]);
+  const grab = { x: Math.round(box.x + cam.x + u * cam.scale), y: Math.round(box.y + cam.y + v * cam.scale) };
+
+  // Shift-drag every regional up one screen pixel and hold: the numbers follow while the button is down.
+  await page.mouse.move(grab.x, grab.y);
+  await page.keyboard.down('Shift');
+  await page.mouse.down();
+  await page.mouse.move(grab.x, grab.y - 1);
+  await expect.poll(() => stripNumber(page.getByTestId('strip-detachment-depth'))).toBeLessThan(start.strip);
+  await expect.poll(async () => (await sectionDetachment(page)).label).not.toBe(start.label);
+  const during = await shownValues(page);
+  await page.screenshot({ path: test.info().outputPath('regionals-dragging.png') });
+  // Released where it was held: the document is the one shown during the drag.
+  await page.mouse.up();
+  await page.keyboard.up('Shift');
+  const after = await shownValues(page);
+  expect(after).toEqual(during);
+
+  // The engine, here, on the document the app now holds (Project ▾ → Save).
+  const [dl] = await Promise.all([page.waitForEvent('download'), (async () => {
+    await page.getByTestId('menu-project').click();
+    await page.getByTestId('save-project').click();
+  })()]);
+  const saved = JSON.parse(readFileSync((await dl.path())!, 'utf8')) as { doc: ProjectDoc };
+  const ds = docToSection(saved.doc);
+  if (!ds.ok) throw new Error(ds.message);
+  const moved = engine(ds.section);
+  expectShownMatches(during, moved);
+  await expectPaneMatches(page, moved);
+
+  // The direction and size the method predicts (METHOD.md, "Sensitivity to the regional"): raising every
+  // regional by δ leaves D as it was and raises the detachment by δ(1 + W0/D), so it is shallower.
+  const delta = moved.horizons[0].regionalElevation - before.horizons[0].regionalElevation;
+  expect(delta).toBeGreaterThan(0);
+  moved.horizons.forEach((h, i) => expect(Math.abs(h.regionalElevation - before.horizons[i].regionalElevation - delta)).toBeLessThan(1e-6));
+  const ad0 = before.areaDepth!;
+  const ad1 = moved.areaDepth!;
+  expect(Math.abs(ad1.displacement - ad0.displacement)).toBeLessThan(1e-6 * ad0.displacement);
+  const rise = ad1.detachmentElevation! - ad0.detachmentElevation!;
+  expect(Math.abs(rise - delta * (1 + before.pinWidth / ad0.displacement))).toBeLessThan(1e-6 * Math.abs(rise));
+  expect(ad1.detachmentDepth!).toBeLessThan(ad0.detachmentDepth!);
+  expect(during.depth).toBeLessThan(start.depth);
+  expect(during.elevation).toBeGreaterThan(start.elevation);
+  // The line on the section moved up with it: the regionals rose one screen pixel for δ, the line rises rise/δ pixels
+  // (the trend line is parallel to the regionals; the scan is rotated by well under a degree).
+  expect(start.lineRow - during.lineRow).toBeGreaterThan(0);
+  expect(Math.abs(start.lineRow - during.lineRow - rise / delta)).toBeLessThanOrEqual(2);
+
+  // One undo step brings every number and the line back.
+  await page.keyboard.press('Control+z');
+  await expect.poll(() => stripNumber(page.getByTestId('strip-detachment-depth'))).toBe(start.strip);
+  expect(await shownValues(page)).toEqual(start);
+  await expectPaneMatches(page, before);
 });

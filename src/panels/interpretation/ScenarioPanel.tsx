@@ -2,7 +2,7 @@
 // rename, delete; a comparison table and every scenario's fit on one graph.
 import { useMemo, useState } from 'react';
 import { useDocStore } from '../../state/docStore';
-import { selectAnalysis } from '../../state/selectors';
+import { selectLiveAnalysis } from '../../state/selectors';
 import { scenarioCreate } from '../../core/model/commands/scenarioCreate';
 import { scenarioDelete } from '../../core/model/commands/scenarioDelete';
 import { scenarioDuplicate } from '../../core/model/commands/scenarioDuplicate';
@@ -15,11 +15,12 @@ import { scenarioColour } from './scenarioColour';
 
 export function ScenarioPanel() {
   const doc = useDocStore((s) => s.doc);
+  const gestureStart = useDocStore((s) => s.gestureStart);
   const apply = useDocStore((s) => s.apply);
   const [renaming, setRenaming] = useState<{ id: string; name: string } | null>(null);
   const rows = useMemo(
-    () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectAnalysis(doc, s.id)) })),
-    [doc],
+    () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, s.id)) })),
+    [doc, gestureStart],
   );
   const overlay: GraphSeriesSpec[] = rows.filter((r) => r.series).map((r) => ({ key: r.scenario.id, label: r.scenario.name, colour: r.colour, series: r.series! }));
   const active = doc.activeScenarioId;

@@ -7,8 +7,15 @@ import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
 import { SweepPlot } from './SweepPlot';
 import { formatNumber } from './formatValue';
+import { useDocStore } from '../../state/docStore';
 
-export function SensitivityPanel({ section }: { section: Section }) {
+export function SensitivityPanel({ section: current }: { section: Section }) {
+  // The sweeps re-prepare the whole section: while a regional or pin is dragged they keep the section
+  // of the gesture's start, and follow once it ends.
+  const gesture = useDocStore((s) => s.gestureStart !== null);
+  const [held, setHeld] = useState(current);
+  if (!gesture && held !== current) setHeld(current);
+  const section = gesture ? held : current;
   const [offsetRange, setOffsetRange] = useState(100);
   const [tiltRange, setTiltRange] = useState(5);
   const [pivot, setPivot] = useState<'left' | 'right'>('left');

@@ -1,7 +1,7 @@
 // The active scenario's analysis from the memoised selector, and its graph series.
 import { useMemo } from 'react';
 import { useDocStore } from '../../state/docStore';
-import { selectAnalysis, type DocAnalysis } from '../../state/selectors';
+import { selectLiveAnalysis, type DocAnalysis } from '../../state/selectors';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { areaDepthSeries, type AreaDepthSeries } from './areaDepthSeries';
 
@@ -11,10 +11,11 @@ export interface ScenarioAnalysis extends DocAnalysis {
   horizonIds: string[];
 }
 
-/** The analysis of the active (or given) scenario of the current document, recomputed only when the document changes. */
+/** The analysis of the active (or given) scenario of the current document, recomputed only when the document changes (the fast path while a regional is dragged, the full analysis once the gesture ends). */
 export function useScenarioAnalysis(scenarioId?: string): ScenarioAnalysis {
   const doc = useDocStore((s) => s.doc);
-  return useMemo(() => scenarioAnalysisOf(selectAnalysis(doc, scenarioId)), [doc, scenarioId]);
+  const gestureStart = useDocStore((s) => s.gestureStart);
+  return useMemo(() => scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, scenarioId)), [doc, gestureStart, scenarioId]);
 }
 
 /** The same, for a selector result already at hand. */
