@@ -1,31 +1,39 @@
-// `npm run --silent analyse -- FILE [--json]`: analyse a section file (or a project file that
-// embeds one under "section") and print a table, or the JSON shape of issue 3. Bad input:
-// exit code 2 and one line on stderr. A thin shell over src/core.
+// `npm run --silent analyse -- FILE [--json] [--scenario NAME]`: analyse a section file, a
+// section under "section", or the app's project file (its active scenario, or the one named),
+// and print a table, or the JSON shape of issue 3. Bad input: exit code 2 and one line on
+// stderr. A thin shell over src/core.
 import { readFileSync } from 'node:fs';
 import { analyseSection } from '../core/analysis/analyseSection';
 import { validateSection } from '../core/model/validateSection';
 import { formatTable } from './formatTable';
+import { sectionOfFile } from './sectionOfFile';
 import { toJsonReport } from './toJsonReport';
+
+const USAGE = 'usage: analyse FILE [--json] [--scenario NAME]';
 
 function fail(message: string): never {
   process.stderr.write(`analyse: ${message.replace(/\s+/g, ' ')}\n`);
   process.exit(2);
 }
 
-function sectionOf(doc: unknown): unknown {
-  // The app's project file embeds the section under "section".
-  if (typeof doc === 'object' && doc !== null && !Array.isArray(doc) && !('horizons' in doc) && 'section' in doc) {
-    return (doc as { section: unknown }).section;
-  }
-  return doc;
-}
-
 function main(argv: string[]): void {
-  const json = argv.includes('--json');
-  const files = argv.filter((a) => a !== '--json' && a !== '--');
-  const unknownFlag = files.find((a) => a.startsWith('--'));
-  if (unknownFlag) fail(`unknown option ${unknownFlag}; usage: analyse FILE [--json]`);
-  if (files.length !== 1) fail('give exactly one section file; usage: analyse FILE [--json]');
+  const args = argv.filter((a) => a !== '--');
+  const json = args.includes('--json');
+  let scenario: string | undefined;
+  const files: string[] = [];
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (a === '--json') continue;
+    if (a === '--scenario' || a.startsWith('--scenario=')) {
+      if (scenario !== undefined) fail(`give --scenario once; ${USAGE}`);
+      scenario = a === '--scenario' ? args[++i] : a.slice('--scenario='.length);
+      if (scenario === undefined || scenario === '') fail(`--scenario needs a scenario name; ${USAGE}`);
+      continue;
+    }
+    if (a.startsWith('--')) fail(`unknown option ${a}; ${USAGE}`);
+    files.push(a);
+  }
+  if (files.length !== 1) fail(`give exactly one section or project file; ${USAGE}`);
   const file = files[0];
   let text: string;
   try {
@@ -35,17 +43,22 @@ function main(argv: string[]): void {
   }
   let doc: unknown;
   try {
-    doc = JSON.parse(text);
+    // A byte-order mark is not JSON but some editors write one; the app's reader skips it too.
+    doc = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     fail(`${file} is not valid JSON (${(e as Error).message}); fix the file.`);
   }
-  const v = validateSection(sectionOf(doc));
+  const found = sectionOfFile(doc, scenario);
+  if (!found.ok) fail(`${file}: ${found.message}`);
+  const v = validateSection(found.section);
   const outcome = v.ok ? analyseSection(v.section) : v;
   if (!outcome.ok) {
     const [first, ...rest] = outcome.problems;
     fail(`${file}: ${first.message}${rest.length > 0 ? ` (and ${rest.length} more problem${rest.length === 1 ? '' : 's'})` : ''}`);
   }
-  process.stdout.write(json ? `${JSON.stringify(toJsonReport(outcome.analysis), null, 2)}\n` : formatTable(outcome.analysis));
+  // Horizons a project leaves out (not ready) lead the notes, as in the app.
+  const analysis = { ...outcome.analysis, notes: [...found.notes, ...outcome.analysis.notes] };
+  process.stdout.write(json ? `${JSON.stringify(toJsonReport(analysis), null, 2)}\n` : formatTable(analysis, found.source));
 }
 
 try {

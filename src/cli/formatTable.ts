@@ -1,4 +1,4 @@
-import type { SectionAnalysis } from '../core/analysis/analyseSection';
+import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 
 function num(v: number | null, digits = 4): string {
@@ -6,12 +6,17 @@ function num(v: number | null, digits = 4): string {
   return Math.abs(v) >= 1e7 || (Math.abs(v) < 1e-3 && v !== 0) ? v.toExponential(digits - 1) : Number(v.toPrecision(Math.max(digits, 6))).toString();
 }
 
-function range(r: [number, number] | null): string {
-  return r ? `${num(r[0])} to ${num(r[1])}` : 'none';
+function range(r: [number, number] | null, n: number): string {
+  return r ? `${num(r[0])} to ${num(r[1])}` : n === 2 ? 'none (n = 2)' : 'none';
 }
 
-/** The analysis as a plain-text table for a terminal (section units, areas in units²). */
-export function formatTable(a: SectionAnalysis): string {
+/** METHOD.md: an unbounded Fieller interval is reported as "unbounded", never as a number. */
+function fiellerRange(d: AreaDepthResult): string {
+  return d.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded' : range(d.detachmentDepthCI95, d.n);
+}
+
+/** The analysis as a plain-text table for a terminal (section units, areas in units²); `source`, when given, is its first line (project and scenario). */
+export function formatTable(a: SectionAnalysis, source: string | null = null): string {
   const u = a.units;
   const head = ['Horizon', 'Fit', `Excess area (${u}²)`, `Bed length (${u})`, `Regional length (${u})`, `Regional elev. (${u})`, `Depth (${u})`, `Chamberlin (${u})`, 'LPS strain'];
   const rows = a.horizons.map((h) => [
@@ -21,6 +26,7 @@ export function formatTable(a: SectionAnalysis): string {
   const widths = head.map((t, c) => Math.max(t.length, ...rows.map((r) => r[c].length)));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   const out = [
+    ...(source ? [source] : []),
     `Pin width ${num(a.pinWidth)} ${u}; reference elevation ${num(a.referenceElevation)} ${u} (depths below it).`,
     '',
     line(head),
@@ -31,10 +37,13 @@ export function formatTable(a: SectionAnalysis): string {
   const d = a.areaDepth;
   if (d) {
     out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${d.r2.toFixed(4)}`);
-    out.push(`  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95)})`);
+    // D = −slope is only a displacement when the slope is negative (METHOD.md); the JSON keeps the number.
+    out.push(d.noDetachment
+      ? '  slope ≥ 0: no displacement estimate'
+      : `  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95, d.n)})`);
     out.push(d.detachmentDepth === null
       ? '  Detachment: none below these horizons'
-      : `  Detachment depth ${num(d.detachmentDepth)} ${u} below the reference, elevation ${num(d.detachmentElevation)} ${u} (95% Fieller: ${range(d.detachmentDepthCI95)})`);
+      : `  Detachment depth ${num(d.detachmentDepth)} ${u} below the reference, elevation ${num(d.detachmentElevation)} ${u} (95% Fieller: ${fiellerRange(d)})`);
   } else {
     out.push('Area–depth line: none (see notes).');
   }

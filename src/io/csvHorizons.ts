@@ -1,5 +1,6 @@
 // Horizons as CSV: a header, then one row per vertex (horizon name, x, z), vertices in file order.
 // Units come from the header ("x_m", "x (ft)", "x [m]") or a "# units: m" line; else the caller chooses.
+import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { parseCsvRows, toCsv } from './csvText';
@@ -28,7 +29,8 @@ export function parseHorizonsCsv(text: string): HorizonImport {
   let units: LengthUnit | null = null;
   let line = 0;
   while (line < rows.length && (rows[line].join('').trim() === '' || rows[line][0].trim().startsWith('#'))) {
-    const m = /units?\s*[:=]\s*([a-z-]+)/i.exec(rows[line].join(','));
+    // The caution line (written by writeHorizonsCsv) is prose: never read a unit out of it.
+    const m = /^\s*#\s*caution\b/i.test(rows[line][0]) ? null : /units?\s*[:=]\s*([a-z-]+)/i.exec(rows[line].join(','));
     if (m) units = readUnit(m[1]) ?? units;
     line++;
   }
@@ -73,9 +75,10 @@ export function parseHorizonsCsv(text: string): HorizonImport {
   return { ok: true, horizons, units, problems };
 }
 
-/** Returns horizons (section units) as CSV text with a "horizon,x_<unit>,z_<unit>" header. */
+/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (RULES.md: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header. */
 export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit): string {
   const rows: (string | number)[][] = [['horizon', `x_${units}`, `z_${units}`]];
   for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, x, z]);
-  return toCsv(rows);
+  // Written unquoted so the line starts with '#', the comment mark our parser (and most CSV readers) skip.
+  return `# caution: ${SECTION_CAUTION.replace(/[\r\n]+/g, ' ')}\r\n${toCsv(rows)}`;
 }

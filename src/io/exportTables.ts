@@ -17,12 +17,13 @@ export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
   return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => ({ name: h.name, line: h.pointsPx.map((p) => imageToSection(fit, p)) }));
 }
 
-/** Returns the section file (the command line's input, JSON) of the active scenario, or a message saying what is missing. */
+/** Returns the section file (the command line's input, JSON, with a "caution" key) of the active scenario, or a message saying what is missing. */
 export function sectionFileText(analysis: DocAnalysis): { ok: true; text: string } | { ok: false; message: string } {
   const ds = analysis.docSection;
   if (!ds.ok) return { ok: false, message: `No section file yet: ${ds.message}` };
   if (ds.section.horizons.length === 0) return { ok: false, message: 'No section file yet: no horizon has a regional.' };
-  return { ok: true, text: JSON.stringify(ds.section, null, 1) };
+  // validateSection (the command line's reader) ignores keys it does not know, so the caution rides along.
+  return { ok: true, text: JSON.stringify({ ...ds.section, caution: SECTION_CAUTION }, null, 1) };
 }
 
 const r = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(10)));

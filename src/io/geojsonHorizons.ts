@@ -1,6 +1,7 @@
 // Horizons as GeoJSON: LineString / MultiLineString features whose coordinates are section
 // [x, z] (not longitude/latitude), with the unit in a "units" property (feature or collection).
 import { featureCollection, lineString } from '@turf/helpers';
+import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
@@ -66,8 +67,9 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
   return { ok: true, horizons, units, problems };
 }
 
-/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties. */
+/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties, and the caution as a top-level "caution" member. */
 export function writeHorizonsGeoJson(horizons: ImportedHorizon[], units: LengthUnit): string {
   const fc = featureCollection(horizons.map((h) => lineString(h.line.map(([x, z]) => [x, z]), { name: h.name, units })));
-  return JSON.stringify({ ...fc, units }, null, 1);
+  // "caution" and "units" are foreign members, which GeoJSON readers keep or ignore (RFC 7946 §6.1).
+  return JSON.stringify({ ...fc, units, caution: SECTION_CAUTION }, null, 1);
 }

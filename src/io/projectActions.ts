@@ -3,7 +3,7 @@
 import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
 import { fitCamera } from '../state/camera';
 import { useDocStore } from '../state/docStore';
-import { getScan, putScan } from '../state/scanCache';
+import { getScan, putScan, type CachedScan } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
 import { decodeScan } from './decodeScan';
 import { downloadFile, safeFileName } from './downloadFile';
@@ -24,7 +24,17 @@ export function fitViewToDoc(doc: ProjectDoc): void {
   setCamera({ scale: cam.scale, x: cam.x - u0 * cam.scale, y: cam.y - v0 * cam.scale });
 }
 
-/** Reads, checks and opens a project or section file; returns false (with a message) and changes nothing when it cannot. */
+/** Returns true when there are no unsaved changes or the user agrees to discard them (asked with the question). */
+export function unsavedChangesMayGo(question: string): boolean {
+  const { revision, savedRevision } = useDocStore.getState();
+  return revision === savedRevision || window.confirm(question);
+}
+
+/**
+ * Reads, checks and opens a project or section file; returns false (with a message) and changes nothing when it cannot.
+ * With unsaved changes it asks before anything is replaced: once the file is known to open (a bad file only gets its
+ * message), and before the scan cache is touched, so "Cancel" leaves the project, history and scan as they were.
+ */
 export async function openProjectFile(file: File): Promise<boolean> {
   const session = useSessionStore.getState();
   if (file.size > MAX_PROJECT_FILE_BYTES) {
@@ -46,6 +56,7 @@ export async function openProjectFile(file: File): Promise<boolean> {
       return false;
     }
     const { doc, scan } = opened;
+    let decodedScan: CachedScan | null = null;
     if (scan && doc.scan) {
       const blob = new Blob([scan.bytes as Uint8Array<ArrayBuffer>], { type: scan.type });
       const decoded = await decodeScan(Object.assign(blob, { name: scan.name }));
@@ -53,8 +64,14 @@ export async function openProjectFile(file: File): Promise<boolean> {
         session.showMessage('error', `${file.name}: the scan stored in it cannot be shown (${decoded.message}). Nothing was changed.`);
         return false;
       }
-      putScan(doc.scan.id, { bitmap: decoded.bitmap, bytes: blob });
+      decodedScan = { bitmap: decoded.bitmap, bytes: blob };
     }
+    // Asked now, not before reading: the changes still stand at this moment (the read and decode take time).
+    if (!unsavedChangesMayGo(`Discard the changes not saved to a file and open ${file.name}?`)) {
+      decodedScan?.bitmap.close();
+      return false;
+    }
+    if (decodedScan && doc.scan) putScan(doc.scan.id, decodedScan);
     useDocStore.getState().replace(doc);
     fitViewToDoc(doc);
     session.showMessage('info', [`Opened ${file.name}.`, ...opened.notes].join(' '));
@@ -81,7 +98,6 @@ export async function saveProjectFile(): Promise<void> {
 
 /** Opens an empty project, asking first when there are unsaved changes. */
 export function newProject(): void {
-  const { revision, savedRevision } = useDocStore.getState();
-  if (revision !== savedRevision && !window.confirm('Discard the changes not saved to a file and start a new project?')) return;
+  if (!unsavedChangesMayGo('Discard the changes not saved to a file and start a new project?')) return;
   useDocStore.getState().replace(emptyProjectDoc());
 }

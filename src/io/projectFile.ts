@@ -1,5 +1,6 @@
 // Saving and opening the project file (format in README-formats.md). Parsing is pure and never
 // throws: a bad file yields a message and the caller leaves the open project as it was.
+import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { validateSection } from '../core/model/validateSection';
 import { migrateProjectFile } from '../core/model/migrations/migrateProjectFile';
@@ -17,13 +18,15 @@ export type OpenedProject =
   | { ok: true; doc: ProjectDoc; scan: ScanBytes | null; kind: 'project' | 'section'; migratedFrom: number | null; notes: string[] }
   | { ok: false; message: string };
 
-/** Returns the project file text (JSON) for the document and the scan's original bytes. */
+/** Returns the project file text (JSON, with the caution in a "caution" field) for the document and the scan's original bytes. */
 export function serializeProject(doc: ProjectDoc, scan: ScanBytes | null, savedAt = new Date().toISOString()): string {
   const embedded = scan ? { type: scan.type, name: scan.name, dataBase64: bytesToBase64(scan.bytes) } : null;
   const file: ProjectFileV1 = {
     format: PROJECT_FORMAT,
     version: PROJECT_FILE_VERSION,
     savedAt,
+    // Outside the check and the document: the caution is for whoever reads the file, not project data.
+    caution: SECTION_CAUTION,
     check: contentCheck(checkedText(doc, embedded?.dataBase64 ?? null)),
     doc,
     scan: embedded,

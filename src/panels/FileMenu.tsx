@@ -11,6 +11,7 @@ import { writeHorizonsCsv } from '../io/csvHorizons';
 import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
 import { newProject, openProjectFile, saveProjectFile } from '../io/projectActions';
 import { ImportDialog } from './files/ImportDialog';
+import { ProjectInfoDialog } from './files/ProjectInfoDialog';
 import { readImport, type ImportKind, type PendingImport } from './files/readImport';
 import { ReportPage } from './files/ReportPage';
 import { StorageBanner } from './files/StorageBanner';
@@ -52,6 +53,7 @@ export function FileMenu() {
   const [menu, setMenu] = useState<MenuId>(null);
   const [pending, setPending] = useState<PendingImport | null>(null);
   const [report, setReport] = useState(false);
+  const [info, setInfo] = useState(false);
   const [pngSize, setPngSize] = useState<string>('a4-150');
   const lastSaved = useAutosaveStatus((s) => s.lastSavedAt);
   const dirty = useDocStore((s) => s.revision !== s.savedRevision);
@@ -100,6 +102,8 @@ export function FileMenu() {
             <button type="button" role="menuitem" onClick={choose(newProject)}>New</button>
             <button type="button" role="menuitem" onClick={choose(() => openRef.current?.click())}>Open… <span className="hint">project or section file</span></button>
             <button type="button" role="menuitem" onClick={choose(() => void saveProjectFile())} data-testid="save-project">Save…</button>
+            <hr />
+            <button type="button" role="menuitem" onClick={choose(() => setInfo(true))} data-testid="menu-project-info">Title and author…</button>
           </div>
         )}
       </div>
@@ -117,6 +121,8 @@ export function FileMenu() {
         <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={toggle('export')} data-testid="menu-export">Export ▾</button>
         {menu === 'export' && (
           <div className="menu-list" role="menu">
+            <button type="button" role="menuitem" data-testid="export-project-info" onClick={choose(() => setInfo(true))}>Title and author… <span className="hint">for the figure and report</span></button>
+            <hr />
             <button type="button" role="menuitem" data-testid="export-svg" onClick={choose(() => void currentFigureSvg().then((svg) => exportText(svg, 'image/svg+xml', '.svg', '')))}>Section figure as SVG</button>
             <label className="menu-field">
               PNG size
@@ -144,7 +150,8 @@ export function FileMenu() {
       </span>
       <StorageBanner />
       {pending && <ImportDialog pending={pending} onClose={() => setPending(null)} />}
-      {report && <ReportPage onClose={() => setReport(false)} />}
+      {report && <ReportPage onClose={() => setReport(false)} onEditInfo={() => setInfo(true)} />}
+      {info && <ProjectInfoDialog onClose={() => setInfo(false)} />}
     </div>
   );
 }

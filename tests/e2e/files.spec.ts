@@ -9,6 +9,8 @@ import { gradientPng } from './pngFixture';
 import { fitCalibration } from '../../src/core/calibration/fitCalibration';
 import { imageToSection } from '../../src/core/calibration/mapPoints';
 import type { ProjectDoc } from '../../src/core/model/projectDoc';
+import { parseHorizonsCsv } from '../../src/io/csvHorizons';
+import { parseProjectText } from '../../src/io/projectFile';
 
 const SECTION = {
   units: 'm',
@@ -178,22 +180,197 @@ test('the report page shows the method, results, figure and caution, and prints'
   await expect(page.getByTestId('report-page')).toHaveCount(0);
 });
 
-test('corrupt and hostile files give a message and leave the open project unchanged', async ({ page }) => {
+/** Sets the project's title and author through the Project menu's dialog. */
+async function setTitleAndAuthor(page: Page, title: string, author: string): Promise<void> {
+  await page.getByTestId('menu-project').click();
+  await page.getByTestId('menu-project-info').click();
+  await page.getByTestId('project-title').fill(title);
+  await page.getByTestId('project-author').fill(author);
+  await page.getByTestId('project-info-save').click();
+  await expect(page.getByTestId('project-info-dialog')).toHaveCount(0);
+}
+
+/** The share of pixels that differ between two same-size PNGs, over the rows [y0, y1). */
+function differingShare(a: PNG, b: PNG, y0: number, y1: number): number {
+  let diff = 0;
+  for (let y = y0; y < y1; y++) {
+    for (let x = 0; x < a.width; x++) {
+      const i = 4 * (y * a.width + x);
+      if (Math.abs(a.data[i] - b.data[i]) + Math.abs(a.data[i + 1] - b.data[i + 1]) + Math.abs(a.data[i + 2] - b.data[i + 2]) > 30) diff++;
+    }
+  }
+  return diff / ((y1 - y0) * a.width);
+}
+
+test('the title and author are set from the menus and the report, and appear in the report and the exported figure', async ({ page }) => {
   await ready(page);
   await openSection(page);
+  await expect(page.getByTestId('message-info')).toContainText('Opened fold-section.json');
+  await page.getByTestId('menu-export').click();
+  const plain = PNG.sync.read(await download(page, () => page.getByTestId('export-png').click()));
+  // The fields start from the document (a section file is titled after its file name); Esc keeps it.
+  await page.getByTestId('menu-project').click();
+  await page.getByTestId('menu-project-info').click();
+  await expect(page.getByTestId('project-title')).toHaveValue('fold-section');
+  await expect(page.getByTestId('project-author')).toHaveValue('');
+  await page.getByTestId('project-title').fill('Thrown away');
+  await page.keyboard.press('Escape');
+  await expect(page.getByTestId('project-info-dialog')).toHaveCount(0);
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Saved/);
+  // Set both (with spaces around, trimmed by the command) from the Project menu.
+  await page.getByTestId('menu-project').click();
+  await page.getByTestId('menu-project-info').click();
+  await expect(page.getByTestId('project-title')).toHaveValue('fold-section');
+  await page.getByTestId('project-title').fill('  Invented ridge fold, line 7  ');
+  await page.getByTestId('project-author').fill('R. Tester');
+  await page.screenshot({ path: test.info().outputPath('project-info-dialog.png') });
+  await page.getByTestId('project-info-save').click();
+  await expect(page.getByTestId('project-info-dialog')).toHaveCount(0);
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Unsaved changes/);
+  // The report shows them, and can change them too (the dialog opens above it).
+  await page.getByTestId('open-report').click();
+  await expect(page.getByTestId('report-title')).toHaveText('Invented ridge fold, line 7');
+  await expect(page.getByTestId('report-byline')).toContainText('Author: R. Tester');
+  await page.getByTestId('report-edit-info').click();
+  await expect(page.getByTestId('project-author')).toHaveValue('R. Tester');
+  await page.getByTestId('project-author').fill('R. Tester and K. Second');
+  await page.screenshot({ path: test.info().outputPath('project-info-over-report.png') });
+  await page.getByTestId('project-author').press('Enter');
+  await expect(page.getByTestId('report-byline')).toContainText('Author: R. Tester and K. Second');
+  await page.screenshot({ path: test.info().outputPath('report-with-title.png') });
+  await page.getByTestId('report-close').click();
+  // The Export menu offers the same fields next to the figure exports.
+  await page.getByTestId('menu-export').click();
+  await page.getByTestId('export-project-info').click();
+  await expect(page.getByTestId('project-title')).toHaveValue('Invented ridge fold, line 7');
+  await page.getByTestId('project-info-cancel').click();
+  // The figure's title block carries them; the file is named after the title.
+  await page.getByTestId('menu-export').click();
+  const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');
+  const texts = await page.evaluate((text) => Array.from(new DOMParser().parseFromString(text, 'image/svg+xml').querySelectorAll('.title-block text')).map((t) => t.textContent ?? ''), svg);
+  expect(texts[0]).toBe('Invented ridge fold, line 7');
+  expect(texts[1]).toContain('Author: R. Tester and K. Second');
+  await page.getByTestId('menu-export').click();
+  const [dl] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-png').click()]);
+  expect(dl.suggestedFilename()).toBe('Invented-ridge-fold-line-7.png');
+  const pngBytes = readFileSync((await dl.path())!);
+  writeFileSync(test.info().outputPath('export-with-title.png'), pngBytes);
+  const titled = PNG.sync.read(pngBytes);
+  expect([titled.width, titled.height]).toEqual([plain.width, plain.height]);
+  // Only the title block (figure units 16–82 of 990 in height) changed: the new title and author are drawn there.
+  const blockEnd = Math.ceil((84 / 990) * titled.height);
+  expect(differingShare(plain, titled, Math.floor((16 / 990) * titled.height), blockEnd)).toBeGreaterThan(0.002);
+  expect(differingShare(plain, titled, blockEnd, titled.height)).toBe(0);
+  // Saved in the project file and back after opening it.
+  const saved = await saveProject(page);
+  expect([saved.doc.title, saved.doc.author]).toEqual(['Invented ridge fold, line 7', 'R. Tester and K. Second']);
+});
+
+test('opening a file over unsaved changes asks first; Cancel keeps the project, OK opens the file', async ({ page }) => {
+  await ready(page, true);
+  const asked: string[] = [];
+  let answer = false;
+  page.on('dialog', (d) => {
+    asked.push(d.message());
+    void (answer ? d.accept() : d.dismiss());
+  });
+  // Nothing unsaved: no question.
+  await openSection(page, SECTION, 'first.json');
+  await expect(page.getByTestId('message-info')).toContainText('Opened first.json');
+  expect(asked).toEqual([]);
+  await setTitleAndAuthor(page, 'Work in progress', 'R. Tester');
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Unsaved changes/);
+  // Cancel: the question names the file; nothing is opened and the changes are still there, unsaved.
+  await openSection(page, { ...SECTION, horizons: SECTION.horizons.slice(0, 2) }, 'second.json');
+  await expect.poll(() => asked.length).toBe(1);
+  expect(asked[0]).toMatch(/Discard the changes not saved to a file and open second\.json\?/);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Unsaved changes/);
+  await expect(page.getByText(/Opened second\.json/)).toHaveCount(0);
+  const kept = await saveProject(page);
+  expect([kept.doc.title, kept.doc.author, kept.doc.horizons.length]).toEqual(['Work in progress', 'R. Tester', 3]);
+  // A file that cannot be opened only gets its message, even with changes unsaved.
+  await setTitleAndAuthor(page, 'Work in progress, more', 'R. Tester');
+  await page.getByTestId('open-project').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"format":') });
+  await expect(page.getByTestId('message-error')).toContainText('broken.json is not valid JSON');
+  expect(asked).toHaveLength(1);
+  // OK: the file opens in place of the project.
+  answer = true;
+  await openSection(page, { ...SECTION, horizons: SECTION.horizons.slice(0, 2) }, 'second.json');
+  await expect(page.getByTestId('message-info')).toContainText('Opened second.json');
+  expect(asked).toHaveLength(2);
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Saved/);
+  const opened = await saveProject(page);
+  expect([opened.doc.title, opened.doc.horizons.length]).toEqual(['second', 2]);
+});
+
+// Seeded corrupt files through the real inputs: 100 project files (open-project) and 100 horizon
+// CSV files (import-csv), 200 in all as the issue asks; about 20 s on 2 cores. The timeout set in the
+// test is room for a loaded CI machine, not a check on speed. Vitest runs the same kinds of
+// corruption 200 times per parser without a browser (tests/io/files/corruptFiles.test.ts).
+const FUZZ_SEED = 20240501;
+const FUZZ_PROJECT_CASES = 100;
+const FUZZ_CSV_CASES = 100;
+
+function flips(text: string) {
+  return fc.array(fc.tuple(fc.nat(), fc.integer({ min: 1, max: 255 })), { minLength: 1, maxLength: 6 }).map((fl) => {
+    const chars = text.split('');
+    for (const [at, x] of fl) chars[at % chars.length] = String.fromCharCode(chars[at % chars.length].charCodeAt(0) ^ x);
+    return chars.join('');
+  });
+}
+
+test('corrupt and hostile files give a message and leave the open project unchanged', async ({ page }) => {
+  test.setTimeout(120_000);
+  await ready(page);
+  await openSection(page);
+  await setTitleAndAuthor(page, 'Fuzz target', 'R. Tester');
   const before = await saveProject(page);
   const good = JSON.stringify(before);
-  // 24 seeded corruptions of the saved file, through the real file input.
-  const cases = fc.sample(fc.oneof(
+  // Project files: truncated, bytes flipped, wrong types, a newer version, deep nesting.
+  const projectCases = fc.sample(fc.oneof(
     fc.nat().map((n) => good.slice(0, n % good.length)),
-    fc.tuple(fc.nat(), fc.integer({ min: 1, max: 255 })).map(([at, x]) => good.slice(0, at % good.length) + String.fromCharCode(good.charCodeAt(at % good.length) ^ x) + good.slice((at % good.length) + 1)),
-    fc.constantFrom('[]', '{"format":"foldroot-project","version":99}', '['.repeat(100000) + ']'.repeat(100000), good.replace('"units":"m"', '"units":7')),
-  ), { seed: 20240501, numRuns: 24 });
-  for (const [i, text] of cases.entries()) {
-    await page.getByTestId('open-project').setInputFiles({ name: `bad-${i}.json`, mimeType: 'application/json', buffer: Buffer.from(text) });
-    await expect(page.getByTestId('busy')).toHaveCount(0);
+    flips(good),
+    fc.constantFrom('[]', '', '{"format":"foldroot-project","version":99}', '['.repeat(100000) + ']'.repeat(100000), good.replace('"units":"m"', '"units":7'), good.replace('"version":1', '"version":"1"')),
+  ), { seed: FUZZ_SEED, numRuns: FUZZ_PROJECT_CASES });
+  for (const [i, text] of projectCases.entries()) {
+    const name = `bad-${i}.json`;
+    await page.getByTestId('open-project').setInputFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text) });
+    // The same parser in Node says what the page must say. Every message names the file, so it is this case's.
+    const expected = parseProjectText(text, name);
+    if (expected.ok) await expect(page.getByTestId('message-info')).toContainText(`Opened ${name}`);
+    else await expect(page.getByTestId('message-error')).toContainText(expected.message.split(' (')[0]);
   }
-  await expect(page.getByTestId('message-error')).toBeVisible();
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  // Horizon CSV: the app's own export, then corrupted; cases that still read cleanly are not corrupt and are left out.
+  await page.getByTestId('menu-export').click();
+  const csv = (await download(page, () => page.getByTestId('export-horizons-csv').click())).toString('utf8');
+  expect(csv.startsWith('# caution: ')).toBe(true);
+  const csvCases = fc.sample(fc.oneof(
+    fc.nat().map((n) => csv.slice(0, n % csv.length)),
+    flips(csv),
+    fc.array(fc.tuple(fc.constantFrom(HOSTILE, 'Top', ''), fc.oneof(fc.double().map(String), fc.constantFrom('1e999', 'NaN', '')), fc.string()), { minLength: 1, maxLength: 12 })
+      .map((rows) => ['horizon,x,z', ...rows.map((r) => r.join(','))].join('\n')),
+    fc.integer({ min: 1, max: 20_000 }).map((n) => 'horizon,x,z\n' + '"'.repeat(n)),
+    fc.constantFrom('', 'x,y\n1,2', '\ufeff# only a comment', 'horizon,x_m,z_ft\nA,0,0\nA,1,1'),
+  ).filter((text) => { const r = parseHorizonsCsv(text); return !r.ok || r.problems.length > 0; }), { seed: FUZZ_SEED, numRuns: FUZZ_CSV_CASES });
+  expect(csvCases).toHaveLength(FUZZ_CSV_CASES);
+  for (const [i, text] of csvCases.entries()) {
+    const name = `bad-${i}.csv`;
+    await page.getByTestId('import-csv').setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(text) });
+    const dialog = page.getByTestId('import-dialog');
+    await expect(dialog.getByRole('heading', { level: 2 })).toHaveText(`Import horizons from ${name}`);
+    const expected = parseHorizonsCsv(text);
+    if (!expected.ok) {
+      await expect(dialog.getByTestId('import-error')).toHaveText(expected.message);
+      await expect(dialog.getByTestId('import-confirm')).toBeDisabled();
+    } else {
+      await expect(dialog.getByTestId('import-problems')).toContainText(`Problems (${expected.problems.length}`);
+    }
+    await dialog.getByTestId('import-cancel').click();
+    await expect(dialog).toHaveCount(0);
+  }
+  await expect(page.getByTestId('autosave-status')).toHaveText(/^Saved/);
   const after = await saveProject(page);
   expect(after.doc).toEqual(before.doc);
   // Hostile names open as plain text: no element is created from them.

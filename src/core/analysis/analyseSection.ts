@@ -33,7 +33,7 @@ export function analyseSection(section: Section, options: { referenceElevation?:
 export function analysePrepared(p: PreparedSection): SectionAnalysis {
   const depths = p.horizons.map((h) => p.referenceElevation - h.regionalElevation);
   const fitIdx = p.horizons.map((h, i) => (h.included ? i : -1)).filter((i) => i >= 0);
-  const area = fitAreaDepth(fitIdx.map((i) => depths[i]), fitIdx.map((i) => p.areas[i]), p.referenceElevation);
+  const area = fitAreaDepth(fitIdx.map((i) => depths[i]), fitIdx.map((i) => p.areas[i]), p.referenceElevation, 'the fit', p.units);
   const ad = area.result;
   const useD = ad !== null && !ad.noDetachment;
   const residuals = new Map(fitIdx.map((i, k) => [i, area.fit ? area.fit.residuals[k] : null]));

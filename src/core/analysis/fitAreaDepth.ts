@@ -1,6 +1,8 @@
 import { fiellerInterval, type FiellerResult } from '../stats/fiellerInterval';
 import { leastSquares, type LineFit } from '../stats/leastSquares';
 import { slopeInterval } from '../stats/slopeInterval';
+import { studentTQuantile } from '../stats/studentTQuantile';
+import type { LengthUnit } from '../model/section';
 
 // The area–depth line of Epard & Groshong (1993): least squares A = a + b·h over the included
 // horizons; D = −b, zd = −a/b, detachment elevation zref − zd; 95% interval on D from the
@@ -26,15 +28,16 @@ export interface AreaDepthFit {
 /** The note (and Fieller reason) given when the area–depth slope is ≥ 0. */
 export const NO_DETACHMENT_NOTE = 'no detachment below these horizons: excess area does not decrease with depth (slope ≥ 0).';
 
-/** Area–depth line through (depth h, area A) pairs (units, units²) with intervals and notes; result null with the reason when no line is possible. */
-export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>, referenceElevation: number, label = 'the fit'): AreaDepthFit {
+/** Area–depth line through (depth h, area A) pairs (units, units²) with intervals and notes (depths labelled with `units` when given); result null with the reason when no line is possible. */
+export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>, referenceElevation: number, label = 'the fit', units?: LengthUnit): AreaDepthFit {
   const notes: string[] = [];
   const fit = leastSquares(depths, areas);
   if (!fit) {
     if (depths.length < 2) {
       notes.push(`Fewer than two usable horizons in ${label} (n = ${depths.length}): no area–depth line; include at least two horizons at different depths.`);
     } else {
-      notes.push(`All regionals in ${label} lie at one depth (${depths[0]}): no area–depth line; it needs horizons at two or more depths.`);
+      const depth = `${Number(depths[0].toPrecision(6))}${units ? ` ${units}` : ''}`;
+      notes.push(`All regionals in ${label} lie at one depth (${depth}): no area–depth line; it needs horizons at two or more depths.`);
     }
     return { result: null, fit: null, notes };
   }
@@ -52,7 +55,7 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
   if (fit.n === 2) {
     notes.push('Only two horizons in the fit: the line passes through both exactly, so there are no intervals (0 degrees of freedom).');
   } else if (!noDetachment && interval.kind === 'unbounded') {
-    notes.push(`The 95% Fieller interval on the detachment depth is unbounded (g ≥ 1): the slope is not clearly different from zero. ${interval.reason}`);
+    notes.push(`The 95% Fieller interval on the detachment depth is unbounded (g = ${fiellerG(fit).toPrecision(3)} ≥ 1): the slope is not clearly different from zero, so the data do not bound the depth.`);
   } else if (!noDetachment && interval.kind === 'none') {
     notes.push(`No interval on the detachment depth: ${interval.reason}`);
   }
@@ -71,6 +74,12 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
       detachmentDepthInterval: interval,
     },
   };
+}
+
+/** Fieller's g = t² s² / (b² Sxx) at 95% (METHOD.md), as fiellerInterval computes it. */
+function fiellerG(fit: LineFit): number {
+  const t = studentTQuantile(0.975, fit.df);
+  return (t * t * fit.s * fit.s) / (fit.slope * fit.slope * fit.sxx);
 }
 
 function maxOf(a: ArrayLike<number>): number {

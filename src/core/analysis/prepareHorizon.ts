@@ -2,6 +2,7 @@ import { clipAndMeasure } from '../geometry/clipAndMeasure';
 import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
 import { chainCrossings } from '../geometry/chainCrossings';
 import type { XMonotoneChains } from '../geometry/xMonotoneChains';
+import type { LengthUnit } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
 import { projectedContribution } from './projectedContribution';
 
@@ -41,18 +42,42 @@ function pinProblems(clip: PinClip, who: string, what: string, name: string, pin
   return out;
 }
 
-function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: string, what: string, name: string): SectionProblem | null {
+function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: string, what: string, name: string, units?: LengthUnit): SectionProblem | null {
   // The monotone-chain test of selfIntersections, on the chains the clipping pass already found.
   const pairs = chainCrossings(c.xs, c.zs, chains, 1);
   if (pairs.length === 0) return null;
-  // Report input vertex numbers, not clipped ones, so the user can find the spot.
-  const a = Math.floor(c.source[pairs[0][0]]);
-  const b = Math.floor(c.source[pairs[0][1]]);
-  const [i, j] = a <= b ? [a, b] : [b, a];
-  return { code: 'self-intersecting', horizon: name, message: `${who}: the ${what} crosses itself between the pins (near vertices ${i} and ${j}, x ≈ ${c.xs[pairs[0][1]].toPrecision(6)}); redraw it so it does not cross itself.` };
+  const [s, t] = pairs[0];
+  // Name the input segments (vertex i to i + 1), not clipped ones, so the user can find the spot;
+  // the smaller end of a clipped segment's source lies on its input segment, in either direction.
+  const inputSegment = (k: number) => Math.floor(Math.min(c.source[k], c.source[k + 1]));
+  const [i, j] = [inputSegment(s), inputSegment(t)].sort((a, b) => a - b);
+  const x = Number(crossingX(c.xs, c.zs, s, t).toPrecision(6));
+  const where = `segments ${i}–${i + 1} and ${j}–${j + 1} cross at x ≈ ${x}${units ? ` ${units}` : ''}`;
+  return { code: 'self-intersecting', horizon: name, message: `${who}: the ${what} crosses itself between the pins (${where}); redraw it so it does not cross itself.` };
 }
 
-/** Clip one horizon and its regional to the pins and measure them; problems (pins, self-crossing) instead of throwing. */
+/** x where segments s and t (vertex k to k + 1) of xs/zs meet: the line intersection, or for collinear overlap an end inside both. */
+function crossingX(xs: ArrayLike<number>, zs: ArrayLike<number>, s: number, t: number): number {
+  // Relative to segment s's start (METHOD.md, Numerics), as chainCrossings tests them.
+  const x0 = xs[s], z0 = zs[s];
+  const rx = xs[s + 1] - x0, rz = zs[s + 1] - z0;
+  const cx = xs[t] - x0, cz = zs[t] - z0;
+  const qx = xs[t + 1] - xs[t], qz = zs[t + 1] - zs[t];
+  const den = rx * qz - rz * qx;
+  if (den !== 0) {
+    // a + u·r = c + v·q solved for u (Cramer's rule), clamped for a touch at an end.
+    const u = Math.min(1, Math.max(0, (cx * qz - cz * qx) / den));
+    return x0 + u * rx;
+  }
+  // Parallel segments that meet are collinear: an end of one lies within the other's extent.
+  const inside = (x: number, z: number, ax: number, az: number, bx: number, bz: number) =>
+    Math.min(ax, bx) <= x && x <= Math.max(ax, bx) && Math.min(az, bz) <= z && z <= Math.max(az, bz);
+  if (inside(cx, cz, 0, 0, rx, rz)) return x0 + cx;
+  if (inside(cx + qx, cz + qz, 0, 0, rx, rz)) return x0 + cx + qx;
+  return x0;
+}
+
+/** Clip one horizon and its regional to the pins and measure them; problems (pins, self-crossing) instead of throwing; `units`, when given, labels the x in messages. */
 export function prepareHorizon(
   name: string,
   lineX: ArrayLike<number>, lineZ: ArrayLike<number>,
@@ -60,6 +85,7 @@ export function prepareHorizon(
   pins: [number, number],
   included = true,
   segmentProjected?: ArrayLike<number>,
+  units?: LengthUnit,
 ): HorizonPreparation {
   const who = `Horizon "${name}"`;
   // The regional first: its first clipped z is the loop's z origin (as areaBetweenPolylines takes it).
@@ -68,7 +94,7 @@ export function prepareHorizon(
   const problems = [...pinProblems(lin.clip, who, 'line', name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
   for (const [m, what] of [[lin, 'line'], [reg, 'regional']] as const) {
     // A line along which x only increases is one monotone chain and cannot cross itself (selfIntersections).
-    const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, m.chains, who, what, name) : null;
+    const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, m.chains, who, what, name, units) : null;
     if (p) problems.push(p);
   }
   if (problems.length > 0 || !lin.clip.clipped || !reg.clip.clipped) return { ok: false, problems };

@@ -61,7 +61,7 @@ export function prepareSection(section: Section, options: { referenceElevation?:
   for (const h of s.horizons) {
     // No flags at all when nothing is projected: the same result, without a pass over empty flags.
     const flags = h.projected && h.projected.length > 0 ? projectedSegmentFlags(h.projected, h.lineX.length) : undefined;
-    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags);
+    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units);
     if (p.ok) horizons.push(p.horizon);
     else problems.push(...p.problems);
   }

@@ -24,7 +24,7 @@ const REFERENCES = [
   'Fieller, E. C. (1954). Some problems in interval estimation. Journal of the Royal Statistical Society B 16, 175–185.',
 ];
 
-export function ReportPage({ onClose }: { onClose: () => void }) {
+export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEditInfo: () => void }) {
   const doc = useDocStore((s) => s.doc);
   const analysis = selectAnalysis(doc);
   const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
@@ -43,12 +43,13 @@ export function ReportPage({ onClose }: { onClose: () => void }) {
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">
         <button type="button" className="primary" onClick={() => window.print()} data-testid="report-print">Print or save as PDF</button>
+        <button type="button" onClick={onEditInfo} data-testid="report-edit-info">Title and author…</button>
         <button type="button" onClick={onClose} data-testid="report-close">Close report</button>
       </div>
       <article className="report-sheet">
         <header>
-          <h1>{doc.title}</h1>
-          <p>Author: {doc.author || '—'} · Date: {new Date().toISOString().slice(0, 10)} · Scenario shown: {scenario.name}</p>
+          <h1 data-testid="report-title">{doc.title}</h1>
+          <p data-testid="report-byline">Author: {doc.author || '—'} · Date: {new Date().toISOString().slice(0, 10)} · Scenario shown: {scenario.name}</p>
         </header>
         <p className="report-caution" data-testid="report-caution"><b>Caution.</b> {SECTION_CAUTION}</p>
         <h2>What was done</h2>

@@ -53,6 +53,20 @@ describe('analyseSection(section) input problems, as typed results', () => {
     const p = firstProblem(s);
     expect(p).toMatchObject({ code: 'self-intersecting', horizon: 'H1' });
     expect(p.message).toContain('crosses itself');
+    // Analytic: segment 0–1 is z = −500; segment 2–3 runs (6000, 0) → (4000, −600) and reaches
+    // z = −500 at 5/6 of its length, x = 6000 − 2000·5/6 = 4333.33.
+    expect(p.message).toContain('segments 0–1 and 2–3 cross at x ≈ 4333.33');
+  });
+
+  it('names the input segments and the crossing point whichever way the line runs and wherever the pin cuts it', () => {
+    const line = pts(-100, -500, 6000, -500, 6000, 0, 4000, -600, 10_000, -500);
+    const s = methodExample();
+    s.horizons[0].line = line;
+    // The left pin cuts input segment 0–1; the crossing is the same as above (analytic).
+    expect(firstProblem(s).message).toContain('segments 0–1 and 2–3 cross at x ≈ 4333.33');
+    s.horizons[0].line = [...line].reverse();
+    // Reversed, the same segments are input vertices 2–3 and 0–1 counted from the other end.
+    expect(firstProblem(s).message).toContain('segments 1–2 and 3–4 cross at x ≈ 4333.33');
   });
 
   it('reports NaN and Infinity', () => {

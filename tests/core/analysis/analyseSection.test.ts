@@ -112,7 +112,15 @@ describe('analyseSection(section) notes and degenerate fits', () => {
     expect(out.ok).toBe(true);
     if (!out.ok) return;
     expect(out.analysis.areaDepth).toBeNull();
-    expect(out.analysis.notes.some((n) => n.includes('lie at one depth'))).toBe(true);
+    expect(out.analysis.notes.some((n) => n.includes('lie at one depth (0 m)'))).toBe(true);
+  });
+
+  it('gives the one depth in the section unit', () => {
+    // Regionals at z = −1000 ft below a reference at 0: one depth, 1000 ft.
+    const s: Section = { units: 'ft', pins: [0, 1000], referenceElevation: 0, horizons: [triangleHorizon('A', 1e4, -1000, 1000), triangleHorizon('B', 2e4, -1000, 1000)] };
+    const a = analysed(s);
+    expect(a.areaDepth).toBeNull();
+    expect(a.notes).toContain('All regionals in the fit lie at one depth (1000 ft): no area–depth line; it needs horizons at two or more depths.');
   });
 
   it('reports a positive slope as no detachment below these horizons, never as a depth', () => {
@@ -136,7 +144,13 @@ describe('analyseSection(section) notes and degenerate fits', () => {
     const a = analysed(s);
     expect(a.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');
     expect(a.areaDepth!.detachmentDepthCI95).toBeNull();
-    expect(a.notes.some((n) => n.includes('unbounded'))).toBe(true);
+    // By hand (least squares on h = 500…2000, common practice): x̄ = 1250, Sxx = 1.25e6, b = −440,
+    // SSE = 0.978e12, s² = SSE/2; t(0.975, 2) = 4.303 (NIST/SEMATECH e-Handbook §1.3.6.7.2);
+    // g = t² s² / (b² Sxx) (METHOD.md) = 37.4.
+    const g = (4.303 ** 2 * (0.978e12 / 2)) / (440 ** 2 * 1.25e6);
+    expect(g.toPrecision(3)).toBe('37.4');
+    const note = a.notes.filter((n) => n.includes('unbounded'));
+    expect(note).toEqual([`The 95% Fieller interval on the detachment depth is unbounded (g = ${g.toPrecision(3)} ≥ 1): the slope is not clearly different from zero, so the data do not bound the depth.`]);
   });
 
   it('gives no Chamberlin depth when the bed is no longer than its regional', () => {

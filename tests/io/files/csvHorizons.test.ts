@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseHorizonsCsv, writeHorizonsCsv } from '../../../src/io/csvHorizons';
 import { parseCsvRows } from '../../../src/io/csvText';
+import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
 
 describe('parseHorizonsCsv', () => {
   it('reads one row per vertex, grouped by horizon name in file order, with units from the header', () => {
@@ -42,6 +43,21 @@ describe('parseHorizonsCsv', () => {
 
   it('defuses names that a spreadsheet would run as a formula', () => {
     const text = writeHorizonsCsv([{ name: '=HYPERLINK("x")', line: [[0, 0], [1, 1]] }], 'm');
-    expect(parseCsvRows(text)[1][0]).toBe('\'=HYPERLINK("x")');
+    // Row 0 is the caution line, row 1 the header.
+    expect(parseCsvRows(text)[2][0]).toBe('\'=HYPERLINK("x")');
+  });
+
+  it('writeHorizonsCsv starts with a "# caution:" comment line holding the whole caution, which the parser skips', () => {
+    const horizons = [{ name: 'Top', line: [[0, 1], [2, 3]] as [number, number][] }];
+    const text = writeHorizonsCsv(horizons, 'm');
+    const first = text.split('\r\n')[0];
+    expect(first).toBe(`# caution: ${SECTION_CAUTION}`);
+    expect(text.split('\r\n')[1]).toBe('horizon,x_m,z_m');
+    const r = parseHorizonsCsv(text);
+    expect(r.ok && r.horizons).toEqual(horizons);
+    expect(r.ok && r.units).toBe('m');
+    expect(r.problems).toEqual([]);
+    // The caution line is prose: with no unit in the header, the parser must not find one in it.
+    expect(parseHorizonsCsv(`${first}\r\nname,x,z\r\nA,0,0\r\nA,1,1\r\n`)).toMatchObject({ ok: true, units: null });
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseHorizonsGeoJson, writeHorizonsGeoJson } from '../../../src/io/geojsonHorizons';
+import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
 
 describe('parseHorizonsGeoJson', () => {
   it('round-trips horizons through a FeatureCollection of LineStrings (written with @turf/helpers)', () => {
@@ -32,5 +33,16 @@ describe('parseHorizonsGeoJson', () => {
   it('refuses non-JSON and files without line features', () => {
     expect(parseHorizonsGeoJson('{"type": "Feature').ok).toBe(false);
     expect(parseHorizonsGeoJson('{"type":"FeatureCollection","features":[]}').ok).toBe(false);
+  });
+
+  it('writeHorizonsGeoJson carries the caution as a top-level "caution" member; reading ignores it', () => {
+    const horizons = [{ name: 'Top', line: [[0, 5], [10, 7]] as [number, number][] }];
+    const text = writeHorizonsGeoJson(horizons, 'm');
+    const parsed = JSON.parse(text);
+    expect(parsed.caution).toBe(SECTION_CAUTION);
+    expect(parsed.features[0].properties).toEqual({ name: 'Top', units: 'm' });
+    const r = parseHorizonsGeoJson(text);
+    expect(r.ok && r.horizons).toEqual(horizons);
+    expect(r.problems).toEqual([]);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseProjectText, serializeProject } from '../../../src/io/projectFile';
 import { emptyProjectDoc } from '../../../src/core/model/projectDoc';
+import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
 import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
 
 describe('serializeProject / parseProjectText', () => {
@@ -69,5 +70,19 @@ describe('serializeProject / parseProjectText', () => {
     const unchecked = JSON.parse(altered);
     delete unchecked.check;
     expect(parseProjectText(JSON.stringify(unchecked)).ok).toBe(true);
+  });
+
+  it('writes the caution in a "caution" field, outside the document and the check', () => {
+    const text = serializeProject(sampleDoc(), null, '2024-01-01T00:00:00.000Z');
+    const file = JSON.parse(text);
+    expect(file.caution).toBe(SECTION_CAUTION);
+    expect(file.doc.caution).toBeUndefined();
+    const back = parseProjectText(text, 'p.json');
+    expect(back.ok && back.doc).toEqual(sampleDoc());
+    // A file saved before the caution was written (no "caution", same check) still opens.
+    delete file.caution;
+    const old = parseProjectText(JSON.stringify(file), 'old.json');
+    expect(old.ok && old.doc).toEqual(sampleDoc());
+    expect(old.ok && old.migratedFrom).toBe(null);
   });
 });

@@ -12,6 +12,8 @@ export interface ProjectFileV1 {
   format: typeof PROJECT_FORMAT;
   version: 1;
   savedAt?: string;
+  /** The caution of METHOD.md (written on every save, not checked on open; files without it open). */
+  caution?: string;
   /** contentCheck(checkedText(doc, scan base64)); optional, verified when present. */
   check?: string;
   doc: ProjectDoc;

@@ -8,6 +8,8 @@ import { sectionToProjectDoc } from '../../../../src/core/model/migrations/secti
 import { docToSection } from '../../../../src/core/model/docToSection';
 import { emptyProjectDoc } from '../../../../src/core/model/projectDoc';
 import { checkProjectDoc } from '../../../../src/core/model/projectSchema';
+import { checkedText, contentCheck } from '../../../../src/core/model/migrations/contentCheck';
+import { SECTION_CAUTION } from '../../../../src/core/analysis/caution';
 import type { Section } from '../../../../src/core/model/section';
 
 const v0 = JSON.parse(readFileSync(new URL('../../../fixtures/projects/v0-two-horizons.json', import.meta.url), 'utf8'));
@@ -75,5 +77,17 @@ describe('migrateProjectFile', () => {
     const doc = { ...emptyProjectDoc(), horizons: [{ id: 'a', name: 'A', colour: '#000', visible: true, locked: false, pointsPx: [[0, 'x']], projected: [] }] };
     const r = migrateProjectFile({ format: 'foldroot-project', version: 1, doc, scan: null });
     expect(!r.ok && r.message).toMatch(/horizons\.0\.pointsPx\.0\.1/);
+  });
+
+  it('opens a version-1 file with or without the "caution" field; the check covers the document, not the caution', () => {
+    const doc = sectionToProjectDoc(v0.section as Section, 'x');
+    const check = contentCheck(checkedText(doc, null));
+    const withCaution = migrateProjectFile({ format: 'foldroot-project', version: 1, caution: SECTION_CAUTION, check, doc, scan: null });
+    const without = migrateProjectFile({ format: 'foldroot-project', version: 1, check, doc, scan: null });
+    expect(withCaution.ok && withCaution.file.doc).toEqual(doc);
+    expect(without.ok && without.file.doc).toEqual(doc);
+    // The check still catches a changed document when a caution is present.
+    const changed = migrateProjectFile({ format: 'foldroot-project', version: 1, caution: SECTION_CAUTION, check, doc: { ...doc, title: 'y' }, scan: null });
+    expect(!changed.ok && changed.message).toMatch(/damaged.*check value/);
   });
 });

@@ -1,0 +1,48 @@
+import type { SectionProblem } from './sectionProblem';
+
+// Reads one list of [x, z] points from unknown JSON straight into typed arrays (the form the
+// analysis runs on), pushing a problem that names the horizon and the point instead of throwing.
+
+/** A line's points as typed arrays (section units), in input order. */
+export interface PointArrays { xs: Float64Array; zs: Float64Array }
+
+/** Gives a Float64Array of length n for the points (its contents are overwritten). */
+export type Allocate = (n: number) => Float64Array;
+
+/** Points as typed arrays from `allocate`, or null with the problem pushed to `out` (not an array, a bad or non-finite point, fewer than 2); `what` is e.g. 'line' or 'regional'. */
+export function readPoints(v: unknown, who: string, what: string, horizon: string | undefined, out: SectionProblem[], allocate: Allocate): PointArrays | null {
+  if (!Array.isArray(v)) {
+    out.push({ code: 'bad-shape', horizon, message: `${who}: "${what}" must be an array of [x, z] points; add it.` });
+    return null;
+  }
+  const n = v.length;
+  const xs = allocate(n);
+  const zs = allocate(n);
+  // One pass over every point: this loop reads each vertex of the section, so it is kept lean.
+  for (let i = 0; i < n; i++) {
+    // Step 1: the point must be an [x, z] pair of numbers.
+    const p: unknown = v[i];
+    if (!Array.isArray(p) || p.length !== 2) return badPoint(who, what, horizon, i, out);
+    const x: unknown = p[0];
+    const z: unknown = p[1];
+    if (typeof x !== 'number' || typeof z !== 'number') return badPoint(who, what, horizon, i, out);
+    // Step 2: finite: x − x is 0 for every finite x, NaN for NaN and ±Infinity (as Number.isFinite).
+    if (x - x !== 0 || z - z !== 0) {
+      out.push({ code: 'not-finite', horizon, message: `${who}: ${what} point ${i} is not a finite number (NaN or Infinity); fix or delete that point.` });
+      return null;
+    }
+    // Step 3: copy into the typed arrays the analysis runs on.
+    xs[i] = x;
+    zs[i] = z;
+  }
+  if (n < 2) {
+    out.push({ code: 'too-few-points', horizon, message: `${who}: ${what} has ${n} point${n === 1 ? '' : 's'}; digitise at least 2 points.` });
+    return null;
+  }
+  return { xs, zs };
+}
+
+function badPoint(who: string, what: string, horizon: string | undefined, i: number, out: SectionProblem[]): null {
+  out.push({ code: 'bad-shape', horizon, message: `${who}: ${what} point ${i} is not an [x, z] pair of numbers; write it as [x, z].` });
+  return null;
+}

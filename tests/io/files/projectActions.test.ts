@@ -1,0 +1,58 @@
+// Opening a file over unsaved changes asks first, as New does; "Cancel" changes nothing.
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { setProjectInfo } from '../../../src/core/model/commands/setProjectInfo';
+import { serializeProject } from '../../../src/io/projectFile';
+import { useDocStore } from '../../../src/state/docStore';
+import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
+
+vi.mock('../../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
+const { newProject, openProjectFile } = await import('../../../src/io/projectActions');
+
+const other = new File([JSON.stringify(SAMPLE_SECTION)], 'other-section.json');
+const confirm = vi.fn<(q: string) => boolean>();
+
+describe('openProjectFile over unsaved changes', () => {
+  beforeEach(() => {
+    vi.stubGlobal('window', { confirm });
+    confirm.mockReset();
+    useDocStore.getState().replace(sampleDoc());
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited, not saved' }));
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('asks, and on Cancel leaves the document, the history and the dirty state as they were', async () => {
+    confirm.mockReturnValue(false);
+    const before = useDocStore.getState();
+    expect(await openProjectFile(other)).toBe(false);
+    expect(confirm).toHaveBeenCalledTimes(1);
+    expect(confirm.mock.calls[0][0]).toMatch(/Discard the changes not saved.*other-section\.json/);
+    const after = useDocStore.getState();
+    expect(after.doc).toBe(before.doc);
+    expect(after.past).toBe(before.past);
+    expect([after.revision, after.savedRevision]).toEqual([before.revision, before.savedRevision]);
+    expect(after.doc.title).toBe('Edited, not saved');
+  });
+
+  it('asks, and on OK opens the file', async () => {
+    confirm.mockReturnValue(true);
+    expect(await openProjectFile(other)).toBe(true);
+    expect(confirm).toHaveBeenCalledTimes(1);
+    expect(useDocStore.getState().doc.title).toBe('other-section');
+  });
+
+  it('does not ask for a file that cannot be opened (its message is enough), nor when all is saved', async () => {
+    expect(await openProjectFile(new File(['{"format":"foldroot-project","version":1'], 'bad.json'))).toBe(false);
+    expect(confirm).not.toHaveBeenCalled();
+    useDocStore.getState().markSaved();
+    expect(await openProjectFile(new File([serializeProject(sampleDoc(), null)], 'saved.json'))).toBe(true);
+    expect(confirm).not.toHaveBeenCalled();
+  });
+
+  it('New asks the same question and keeps the document on Cancel', () => {
+    confirm.mockReturnValue(false);
+    const before = useDocStore.getState().doc;
+    newProject();
+    expect(confirm.mock.calls[0][0]).toMatch(/Discard the changes not saved/);
+    expect(useDocStore.getState().doc).toBe(before);
+  });
+});
