@@ -1,14 +1,22 @@
 // The cursor's position in the view's corner: section x and z (with the unit) once the scan is
 // calibrated, image pixels before. Updated straight on the element on every pointer move (and on every
-// camera change under a still cursor), never through React state.
+// camera change under a still cursor), never through React state. The drag readout beside the pointer
+// (DragReadout) is mounted here too, so the overlay layer stays as it is.
 import { useEffect, useMemo, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection } from '../core/calibration/mapPoints';
+import { DragReadout } from './DragReadout';
 import { stepDecimals } from './gridTicks';
 import './cursorReadout.css';
+
+/** Returns v.toFixed(decimals) without a sign on a value that rounds to zero ("0.0", never "-0.0"). */
+function fixedNoNegativeZero(v: number, decimals: number): string {
+  const text = v.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
 
 export function CursorReadout() {
   const ref = useRef<HTMLDivElement>(null);
@@ -34,14 +42,14 @@ export function CursorReadout() {
       const { camera } = useSessionStore.getState();
       const p = screenToImage(camera, last.x, last.y);
       if (!fit) {
-        el.textContent = `u ${p[0].toFixed(camera.scale > 2 ? 1 : 0)}  v ${p[1].toFixed(camera.scale > 2 ? 1 : 0)} px`;
+        el.textContent = `u ${fixedNoNegativeZero(p[0], camera.scale > 2 ? 1 : 0)}  v ${fixedNoNegativeZero(p[1], camera.scale > 2 ? 1 : 0)} px`;
         return;
       }
       const [x, z] = imageToSection(fit, p);
       // As many decimals as one screen pixel resolves.
       const dx = stepDecimals(fit.unitsPerPxX / camera.scale);
       const dz = stepDecimals(fit.unitsPerPxZ / camera.scale);
-      el.textContent = `x ${x.toFixed(dx)}  z ${z.toFixed(dz)} ${unit}`;
+      el.textContent = `x ${fixedNoNegativeZero(x, dx)}  z ${fixedNoNegativeZero(z, dz)} ${unit}`;
     };
     const onMove = (e: PointerEvent) => {
       const r = box.getBoundingClientRect();
@@ -65,5 +73,10 @@ export function CursorReadout() {
     };
   }, [fit, unit]);
 
-  return <div ref={ref} className="cursor-readout" data-testid="cursor-readout" hidden={!hasScan} aria-live="off" />;
+  return (
+    <>
+      <div ref={ref} className="cursor-readout" data-testid="cursor-readout" hidden={!hasScan} aria-live="off" />
+      <DragReadout />
+    </>
+  );
 }

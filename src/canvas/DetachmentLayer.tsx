@@ -1,19 +1,20 @@
 // The proposed detachment drawn back onto the section, with its 95% band (interpretation pane).
 // Derived from the document through the selectors, so it follows a regional or pin while it is dragged.
 import { useMemo } from 'react';
-import { Layer, Line, Text } from 'react-konva';
+import { Label, Layer, Line, Tag, Text } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { selectLiveAnalysis } from '../state/selectors';
 import { sectionToImage } from '../core/calibration/mapPoints';
+import { formatLength } from '../panels/workspace/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
 
 const COLOUR = '#b3261e';
-
-function fmt(v: number): string {
-  const t = v.toFixed(0);
-  return Number(t) === 0 ? '0' : t;
-}
+// Screen pixels: small type on a translucent white backing, so it stays legible over scan art and
+// hides little of it (journey P3 #9).
+const FONT = 11;
+const LINE_HEIGHT = 1.2;
+const PAD = 3;
 
 export function DetachmentLayer() {
   const doc = useDocStore((s) => s.doc);
@@ -27,14 +28,19 @@ export function DetachmentLayer() {
     if (!trace) return null;
     const px = (pts: [number, number][]) => pts.flatMap((q) => sectionToImage(docSection.fit, q));
     const u = outcome.analysis.units;
-    const interval = trace.elevationInterval === 'unbounded' ? '95% interval unbounded'
-      : trace.elevationInterval === 'none' ? 'no interval (two horizons)'
-        : `95%: ${fmt(trace.elevationInterval[0])} to ${fmt(trace.elevationInterval[1])} ${u}`;
+    // The strip's rounding (formatQuantity), so the section, the strip and the pane show one number.
+    const len = (v: number) => formatLength(v, u);
+    const e = trace.elevationInterval;
+    const interval = e === 'unbounded' ? '95% interval unbounded' : e === 'none' ? 'no interval (two horizons)' : e === 'exact' ? 'exact fit (no scatter), no interval'
+      : `95%: ${len(e[0])} to ${len(e[1])}`;
     return {
       line: px(trace.line),
       band: trace.band ? px([trace.band.upper[0], trace.band.upper[1], trace.band.lower[1], trace.band.lower[0]]) : null,
-      label: `Proposed detachment ${fmt(trace.elevation)} ${u}\ndepth ${fmt(trace.depth)} ${u} below ${fmt(outcome.analysis.referenceElevation)} ${u}; ${interval}`,
-      anchor: sectionToImage(docSection.fit, trace.line[0]),
+      label: `Proposed detachment ${len(trace.elevation)}\ndepth ${len(trace.depth)} below ${len(outcome.analysis.referenceElevation)}; ${interval}`,
+      // Just under the line where it crosses the left pin: nothing is drawn below a basal detachment
+      // (every horizon lies above it, and the beds at a pin are back at their regional), so the label
+      // covers the least of the section there; only the faint 95% band runs under it.
+      anchor: sectionToImage(docSection.fit, trace.atLeftPin),
     };
   }, [doc, gestureStart]);
   if (!shapes) return <Layer listening={false} />;
@@ -43,8 +49,10 @@ export function DetachmentLayer() {
     <Layer listening={false}>
       {shapes.band && <Line points={shapes.band} closed fill={COLOUR} opacity={0.14} perfectDrawEnabled={false} />}
       <Line points={shapes.line} stroke={COLOUR} strokeWidth={2.2 * k} dash={[12 * k, 6 * k]} perfectDrawEnabled={false} />
-      <Text x={shapes.anchor[0] + 6 * k} y={shapes.anchor[1] - 34 * k} text={shapes.label} fontSize={12 * k} lineHeight={1.25} fill={COLOUR}
-        fontStyle="bold" stroke="#ffffff" strokeWidth={3 * k} fillAfterStrokeEnabled perfectDrawEnabled={false} />
+      <Label x={shapes.anchor[0] + 4 * k} y={shapes.anchor[1] + 5 * k} listening={false}>
+        <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2 * k} perfectDrawEnabled={false} />
+        <Text text={shapes.label} fontSize={FONT * k} lineHeight={LINE_HEIGHT} padding={PAD * k} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
+      </Label>
     </Layer>
   );
 }

@@ -1,6 +1,7 @@
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { interpolateZAt } from '../core/geometry/interpolateZAt';
 import type { Section, XZ } from '../core/model/section';
+import { isExactFit } from '../state/selectors';
 
 // Where to draw the proposed detachment on the section: at the estimated elevation at the middle
 // of the pins, parallel to the mean regional trend (the mean of each regional's dip between the
@@ -13,8 +14,10 @@ export interface DetachmentTrace {
   band: { upper: [XZ, XZ]; lower: [XZ, XZ] } | null;
   depth: number;
   elevation: number;
-  /** 95% interval of the elevation (units), or the reason there is none. */
-  elevationInterval: [number, number] | 'unbounded' | 'none';
+  /** 95% interval of the elevation (units), or the reason there is none ('exact': the line fits its points exactly, n ≥ 3). */
+  elevationInterval: [number, number] | 'unbounded' | 'none' | 'exact';
+  /** Where the line crosses the left pin (section units): the label's anchor, over the beds' undeformed part. */
+  atLeftPin: XZ;
   /** dz/dx of the mean regional trend. */
   trend: number;
 }
@@ -45,7 +48,8 @@ export function detachmentTrace(section: Section, analysis: SectionAnalysis, mar
     band: f.kind === 'bounded' ? { upper: at(zref - f.lo), lower: at(zref - f.hi) } : null,
     depth: ad.detachmentDepth,
     elevation: ad.detachmentElevation,
-    elevationInterval: f.kind === 'bounded' ? [zref - f.hi, zref - f.lo] : f.kind === 'unbounded' ? 'unbounded' : 'none',
+    elevationInterval: isExactFit(ad) ? 'exact' : f.kind === 'bounded' ? [zref - f.hi, zref - f.lo] : f.kind === 'unbounded' ? 'unbounded' : 'none',
+    atLeftPin: [pL, ad.detachmentElevation + trend * (pL - xm)],
     trend,
   };
 }

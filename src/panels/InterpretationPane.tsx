@@ -3,6 +3,7 @@
 import { useCallback, useMemo, useRef, useState } from 'react';
 import { useDocStore } from '../state/docStore';
 import { activeScenario } from '../core/model/docToSection';
+import type { ProjectDoc } from '../core/model/projectDoc';
 import { scenarioSetIncluded } from '../core/model/commands/scenarioSetIncluded';
 import { scenarioSwitch } from '../core/model/commands/scenarioSwitch';
 import { setSettings } from '../core/model/commands/setSettings';
@@ -16,17 +17,24 @@ import { MonteCarloPanel } from './interpretation/MonteCarloPanel';
 import { ScenarioPanel } from './interpretation/ScenarioPanel';
 import { SensitivityPanel } from './interpretation/SensitivityPanel';
 import { diagnostics } from './interpretation/diagnostics';
-import { areaUnit, formatLength, formatNumber } from './interpretation/formatValue';
+import { areaUnit } from './interpretation/formatValue';
+import { screenLength } from './interpretation/screenQuantity';
 import { outlierFlags } from './interpretation/outlierFlags';
 import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
 import { scenarioColour } from './interpretation/scenarioColour';
 import './interpretation/interpretation.css';
 
+/** Whether the open project is the built-in invented demo (src/io/openDemo.ts). */
+function isDemo(doc: ProjectDoc): boolean {
+  return doc.scan?.id === 'scan-demo' && /demo/i.test(doc.title);
+}
+
 const MIN_WIDTH = 320;
 const MAX_WIDTH = 760;
 
 export function InterpretationPane() {
-  const [width, setWidth] = useState(420);
+  // A quarter of the window on wide screens, so the tables have room at 1920 px; never below 420 px.
+  const [width, setWidth] = useState(() => Math.round(Math.min(560, Math.max(420, (typeof window === 'undefined' ? 0 : window.innerWidth) * 0.25))));
   const [collapsed, setCollapsed] = useState(false);
   const drag = useRef<{ x: number; w: number } | null>(null);
   const onResizeDown = useCallback((e: React.PointerEvent) => {
@@ -68,7 +76,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
   const [twoSegments, setTwoSegments] = useState(false);
   const [split, setSplit] = useState<number | null>(null);
   const { analysis, series, docSection, outcome } = sa;
-  const diag = useMemo(() => diagnostics(docSection, outcome), [docSection, outcome]);
+  const diag = useMemo(() => diagnostics(docSection, outcome, sa.leftOut), [docSection, outcome, sa.leftOut]);
   const flags = useMemo(() => (series ? outlierFlags(series.points, series.fit.fit) : []), [series]);
   const unit = analysis ? areaUnit(analysis.units, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea)))) : null;
   const toggle = useCallback((id: string, included: boolean) => apply((d) => scenarioSetIncluded(d, id, included)), [apply]);
@@ -99,6 +107,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
         </label>
         <button type="button" className="icon" onClick={onCollapse} title="Hide the interpretation pane" data-testid="pane-collapse">▸</button>
       </div>
+      {isDemo(doc) && <p className="interp-demo" data-testid="demo-note">Invented demo — Project ▸ New to start your own.</p>}
       <div className="interp-scroll">
         <DiagnosticList items={diag} flags={flags} unit={unit} />
         {analysis && <KeyResults analysis={analysis} />}
@@ -132,10 +141,10 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
                 )}
                 {two && (
                   <ul>
-                    <li>Above the split: {two.upper.result ? `D = ${formatLength(two.upper.result.displacement, u)}, n = ${two.upper.result.n}` : 'no line (fewer than two horizons)'}</li>
-                    <li>Below the split: {two.lower.result ? `D = ${formatLength(two.lower.result.displacement, u)}, detachment ${formatLength(two.lower.result.detachmentDepth, u)} deep, n = ${two.lower.result.n}` : 'no line (fewer than two horizons)'}</li>
-                    <li>Upper detachment: {two.upperDisplacement !== null ? `displacement ${formatLength(two.upperDisplacement, u)}` : '—'}
-                      {two.upperDetachmentDepth !== null ? `, depth ${formatLength(two.upperDetachmentDepth, u)} (elevation ${formatLength(two.upperDetachmentElevation, u)})` : ''}</li>
+                    <li>Above the split: {two.upper.result ? `D = ${screenLength(two.upper.result.displacement, u)}, n = ${two.upper.result.n}` : 'no line (fewer than two horizons)'}</li>
+                    <li>Below the split: {two.lower.result ? `D = ${screenLength(two.lower.result.displacement, u)}, detachment ${screenLength(two.lower.result.detachmentDepth, u)} deep, n = ${two.lower.result.n}` : 'no line (fewer than two horizons)'}</li>
+                    <li>Upper detachment: {two.upperDisplacement !== null ? `displacement ${screenLength(two.upperDisplacement, u)}` : '—'}
+                      {two.upperDetachmentDepth !== null ? `, depth ${screenLength(two.upperDetachmentDepth, u)} (elevation ${screenLength(two.upperDetachmentElevation, u)})` : ''}</li>
                     {two.notes.map((n) => <li key={n} className="hint">{n}</li>)}
                   </ul>
                 )}
@@ -156,16 +165,16 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
         {docSection.ok && analysis && (
           <details className="interp-section" data-testid="sensitivity-section">
             <summary>Sensitivity to the regional</summary>
-            <SensitivityPanel section={docSection.section} />
+            <SensitivityPanel scenarioId={scenario.id} section={docSection.section} />
           </details>
         )}
         {docSection.ok && analysis && (
           <details className="interp-section" data-testid="monte-carlo-section">
             <summary>Uncertainty (Monte Carlo)</summary>
-            <MonteCarloPanel section={docSection.section} />
+            <MonteCarloPanel scenarioId={scenario.id} section={docSection.section} referenceElevation={analysis.referenceElevation} />
           </details>
         )}
-        {analysis && <p className="hint">Reference elevation for depths: {formatNumber(analysis.referenceElevation)} {u} (the highest regional unless set).</p>}
+        {analysis && <p className="hint">Reference elevation for depths: {screenLength(analysis.referenceElevation, u)} ({scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).</p>}
         <Cautions />
       </div>
     </>

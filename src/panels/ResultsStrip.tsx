@@ -1,13 +1,12 @@
 // The compact live results beside the section (section workspace): each horizon's excess area and the
-// detachment depth and displacement of the area–depth line, following every drag (liveResults).
+// detachment depth and displacement of the area–depth line, following every drag (liveResults). The full
+// caution of METHOD.md stands beside them in small type: the strip may be the only result on screen.
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { formatArea, formatLength } from './workspace/formatQuantity';
 import { liveResults } from './workspace/liveResults';
 import './workspace/workspace.css';
-
-export const SHORT_CAUTION = 'Interpretation, not measurement: depends on the regional, the pins, plane strain and area conservation; check against wells, seismic and restorations.';
 
 export function ResultsStrip() {
   const doc = useDocStore((s) => s.doc);
@@ -48,7 +47,7 @@ export function ResultsStrip() {
           ))}
         </div>
       )}
-      <p className="strip-caution" data-testid="strip-caution" title={SECTION_CAUTION}>{SHORT_CAUTION}</p>
+      <p className="strip-caution" data-testid="strip-caution">{SECTION_CAUTION}</p>
     </div>
   );
 }

@@ -1,5 +1,5 @@
 // Opening a scan and fitting the view: the first things a user does.
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { fitCamera, zoomAbout } from '../state/camera';
@@ -39,6 +39,7 @@ export function ScanControls() {
   const showGrid = useDocStore((s) => s.doc.settings.showGrid);
   const calibrated = useDocStore((s) => s.doc.calibration !== null);
   const scale = useSessionStore((s) => s.camera.scale);
+  const fileInput = useRef<HTMLInputElement>(null);
   useEffect(() => {
     // "1" shows the scan at actual size (one image pixel per screen pixel).
     const onKey = (e: KeyboardEvent) => {
@@ -52,20 +53,24 @@ export function ScanControls() {
   return (
     <section className="panel-section" aria-label="Scan">
       <h2>Scan</h2>
-      <label className="button primary">
-        Open scan…
-        <input
-          type="file"
-          data-testid="open-image"
-          accept={ACCEPT}
-          hidden
-          onChange={(e) => {
-            const file = e.currentTarget.files?.[0];
-            e.currentTarget.value = '';
-            if (file) void openScanFile(file);
-          }}
-        />
-      </label>
+      {/* A real button (reachable by Tab, Enter and Space) that opens the hidden file input's chooser. */}
+      <button type="button" className="primary" data-testid="open-scan-button" onClick={() => fileInput.current?.click()}
+        // The tools' window key handler takes Enter (finish a line) and cancels its default; here Enter must press the button.
+        onKeyDown={(e) => e.key === 'Enter' && e.stopPropagation()}>Open scan…</button>
+      <input
+        ref={fileInput}
+        type="file"
+        data-testid="open-image"
+        aria-label="Scan file"
+        accept={ACCEPT}
+        hidden
+        tabIndex={-1}
+        onChange={(e) => {
+          const file = e.currentTarget.files?.[0];
+          e.currentTarget.value = '';
+          if (file) void openScanFile(file);
+        }}
+      />
       <p className="hint">PNG, JPEG, WebP, TIFF or a PDF page — or drop an image on the section view, or paste one (Ctrl+V)</p>
       {scan && (
         <p className="scan-name" data-testid="scan-name" title={scan.name}>
@@ -73,9 +78,9 @@ export function ScanControls() {
         </p>
       )}
       <div className="button-row">
-        <button type="button" onClick={() => zoomByStep(1 / 1.25)} title="Zoom out (−)">−</button>
+        <button type="button" onClick={() => zoomByStep(1 / 1.25)} title="Zoom out (−)" aria-label="Zoom out">−</button>
         <span className="zoom-readout" data-testid="zoom-readout">{(scale * 100).toFixed(scale < 0.1 ? 1 : 0)}%</span>
-        <button type="button" onClick={() => zoomByStep(1.25)} title="Zoom in (+)">+</button>
+        <button type="button" onClick={() => zoomByStep(1.25)} title="Zoom in (+)" aria-label="Zoom in">+</button>
         <button type="button" onClick={zoomToFit} title="Zoom to fit (F)" data-testid="zoom-fit">Fit</button>
         <button type="button" onClick={zoomToActualSize} title="Actual size: one scan pixel per screen pixel (1)" data-testid="zoom-actual">1:1</button>
       </div>

@@ -1,5 +1,6 @@
 // Calibration, horizons, pins and regionals (section workspace): the tool bar and the panels that go
 // with it, and the keyboard-shortcut overlay.
+import { useEffect } from 'react';
 import { setSettings } from '../core/model/commands/setSettings';
 import { useToolSession } from '../canvas/toolDispatch';
 import { useDocStore } from '../state/docStore';
@@ -8,6 +9,7 @@ import { toolEntry, TOOLS } from '../tools/toolRegistry';
 import { CalibrationPanel } from './workspace/CalibrationPanel';
 import { HelpOverlay } from './workspace/HelpOverlay';
 import { HorizonList } from './workspace/HorizonList';
+import { isDocReplaced } from './workspace/isDocReplaced';
 import { PinsPanel } from './workspace/PinsPanel';
 import './workspace/workspace.css';
 
@@ -37,6 +39,10 @@ function ToolBar() {
 }
 
 export function WorkspacePanel() {
+  // A new or opened project starts with the Select tool: the previous tool's hint means nothing there.
+  useEffect(() => useDocStore.subscribe((s, prev) => {
+    if (isDocReplaced(s, prev)) useSessionStore.getState().setTool('select');
+  }), []);
   return (
     <>
       <ToolBar />

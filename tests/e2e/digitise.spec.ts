@@ -125,6 +125,17 @@ test('digitise horizons, pins and regionals; raising every regional makes the de
   await page.getByTestId('pin-right-x').fill('8800');
   await page.getByTestId('pin-right-x').press('Enter');
   await expect(page.getByTestId('pin-width')).toContainText('7600 m');
+  // Typed values that would cross the other pin, lie far beyond the scan or are not numbers are refused
+  // with a message, and both pins stay where they were (no silent swap).
+  const error = page.getByTestId('message-error');
+  for (const [typed, said] of [['9000', 'left pin must lie left of the right pin'], ['1e99', 'far outside the scan'], ['abc', '“abc” is not a number — kept 1200']]) {
+    await page.getByTestId('pin-left-x').fill(typed);
+    await page.getByTestId('pin-left-x').press('Enter');
+    await expect(error).toContainText(said);
+    await expect(page.getByTestId('pin-left-x')).toHaveValue('1200');
+    await expect(page.getByTestId('pin-right-x')).toHaveValue('8800');
+  }
+  await expect(page.getByTestId('pin-width')).toContainText('7600 m');
 
   // The top horizon's regional by two clicks (the second a double-click), the rest as a parallel set.
   await page.getByTestId('horizon-row-h1').click({ position: { x: 8, y: 10 } });
@@ -139,16 +150,28 @@ test('digitise horizons, pins and regionals; raising every regional makes the de
   await expect(page.getByTestId('strip-displacement')).toHaveText(/^\d+(\.\d+)? m$/);
   await page.screenshot({ path: test.info().outputPath('digitised.png') });
 
-  // Shift-drag the top regional up by 12 px (120 m): every regional rises; the numbers follow the drag.
+  // Renaming a horizon to a name another one has is refused: the analysis keys results by name.
+  await page.getByTestId('horizon-name-h2').fill('Horizon 1');
+  await page.getByTestId('horizon-name-h2').press('Enter');
+  await expect(error).toContainText('“Horizon 1” is already the name of another horizon — kept “Horizon 2”');
+  await expect(page.getByTestId('horizon-name-h2')).toHaveValue('Horizon 2');
+  expect(await depthOf(page)).toBe(before);
+  await error.getByRole('button', { name: 'Dismiss' }).click();
+
+  // Shift-drag the top regional up by 12 px (120 m): every regional rises; the numbers follow the drag,
+  // and a label beside the pointer gives the shift.
   const grab = screen(cam, 500, 150);
   await page.mouse.move(grab.x, grab.y);
   await page.keyboard.down('Shift');
   await page.mouse.down();
   await page.mouse.move(grab.x, grab.y - 6 * cam.scale, { steps: 3 });
+  await expect(page.getByTestId('drag-readout')).toHaveText(/^all regionals Δz \+\d+ m$/);
+  await page.screenshot({ path: test.info().outputPath('drag-readout.png') });
   const midDrag = await depthOf(page);
   await page.mouse.move(grab.x, grab.y - 12 * cam.scale, { steps: 3 });
   await page.mouse.up();
   await page.keyboard.up('Shift');
+  await expect(page.getByTestId('drag-readout')).toBeHidden();
   const after = await depthOf(page);
   expect(midDrag).toBeLessThan(before);
   expect(after).toBeLessThan(midDrag);
@@ -206,4 +229,33 @@ test('edit a horizon: drag a vertex, mark a projected run, undo each as one step
   await page.screenshot({ path: test.info().outputPath('help.png') });
   await page.keyboard.press('Escape');
   await expect(page.getByTestId('help-overlay')).toHaveCount(0);
+});
+
+test('workspace basics: full caution in the strip, New returns to Select, Open scan… by keyboard, named selects', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  // The demo's strip carries the whole caution of METHOD.md, not a shortened one.
+  await expect(page.getByTestId('strip-caution')).toContainText('the decision belongs to a licensed professional under local codes');
+  for (const [width, height] of [[1400, 900], [1920, 1080]]) {
+    await page.setViewportSize({ width, height });
+    await page.screenshot({ path: test.info().outputPath(`demo-workspace-${width}.png`) });
+  }
+
+  await page.getByTestId('tool-regional').click();
+  await page.getByTestId('menu-project').click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(0);
+  await expect(page.getByTestId('tool-select')).toHaveAttribute('aria-pressed', 'true');
+
+  // "Open scan…" is a real button: focused and pressed with Enter it opens the file chooser.
+  const open = page.getByRole('button', { name: 'Open scan…' });
+  await open.focus();
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.keyboard.press('Enter')]);
+  await chooser.setFiles({ name: 'keyboard.png', mimeType: 'image/png', buffer: gradientPng(W, H) });
+  await expect(page.getByTestId('scan-name')).toContainText('keyboard.png');
+
+  // The units select has a name, and says that switching only relabels.
+  await expect(page.getByRole('combobox', { name: 'Units' })).toBeVisible();
+  await expect(page.getByTestId('units-note')).toContainText('labels only — coordinates are not converted');
 });

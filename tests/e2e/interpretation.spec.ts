@@ -28,9 +28,9 @@ function engine(section: Section): SectionAnalysis {
   return out.analysis;
 }
 
-/** The number at the start of a displayed value such as "-2600 m" or "0.9998". */
+/** The number at the start of a displayed value such as "−2600 m" (the strip's typographic minus) or "0.9998". */
 async function shown(loc: Locator): Promise<number> {
-  const text = (await loc.textContent()) ?? '';
+  const text = ((await loc.textContent()) ?? '').replace(/\u2212/g, '-');
   const m = /^\s*(-?\d+(?:\.\d+)?)/.exec(text);
   if (!m) throw new Error(`no number in "${text}"`);
   return Number(m[1]);
@@ -59,9 +59,14 @@ test('the pane shows the engine’s detachment for the demo, which matches the t
   await openDemo(page);
   const a = engine(demo);
   await expectPaneMatches(page, a);
-  // The number comes first, then the unit.
-  await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^-?\d+ m$/);
+  // The number comes first, then the unit, rounded as the strip rounds the same quantity (formatQuantity).
+  await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^−?\d+ m$/);
   await expect(page.getByTestId('result-displacement')).toHaveText(/^\d+ m$/);
+  await expect(page.getByTestId('result-detachment-depth')).toHaveText((await page.getByTestId('strip-detachment-depth').textContent()) ?? '');
+  // The demo is a forward model with no scatter: the pane says so rather than showing a zero-width interval.
+  await expect(page.getByTestId('interval-r2')).toHaveText('exact fit (no scatter): no interval');
+  await expect(page.getByTestId('interval-detachment-depth')).toHaveCount(0);
+  await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');
   // The demo is a forward model (METHOD.md "Forward models"): the analysis returns its D and detachment to rounding.
   expect(Math.abs(a.areaDepth!.displacement - truth.displacement)).toBeLessThan(0.5);
   expect(Math.abs(a.areaDepth!.detachmentElevation! - truth.detachmentElevation)).toBeLessThan(0.5);
@@ -174,7 +179,7 @@ test('Monte Carlo with a fixed seed repeats exactly, matches the engine, and the
   const out = monteCarlo(demo, { runs, seed: 4242, sigmaVertex: 10, sigmaOffset: 20, sigmaHorizonOffset: 0, sigmaTilt: 0, sigmaScale: 0, method: 'vertices' });
   if (!out.ok) throw new Error('engine Monte Carlo failed');
   const d = out.result.depth!;
-  const num = (s: string) => Number(/^-?\d+/.exec(s)![0]);
+  const num = (s: string) => Number(/^-?\d+/.exec(s.replace(/\u2212/g, '-'))![0]);
   expectRounded(num(first[0]), d.p10);
   expectRounded(num(first[1]), d.p50);
   expectRounded(num(first[2]), d.p90);
@@ -197,7 +202,7 @@ test('Monte Carlo can be cancelled', async ({ page }) => {
 
 /** The strip's number: about four significant figures with a typographic minus (formatQuantity). */
 async function stripNumber(loc: Locator): Promise<number> {
-  const text = ((await loc.textContent()) ?? '').replace('−', '-');
+  const text = ((await loc.textContent()) ?? '').replace(/\u2212/g, '-');
   const m = /^\s*(-?\d+(?:\.\d+)?) m$/.exec(text);
   if (!m) throw new Error(`no length in "${text}"`);
   return Number(m[1]);
@@ -236,8 +241,8 @@ async function sectionDetachment(page: Page): Promise<{ label: string; lineRow: 
 }
 
 async function shownValues(page: Page): Promise<Shown> {
-  const graphText = (await page.getByTestId('graph-detachment').textContent()) ?? '';
-  const g = /detachment (-?\d+) m/.exec(graphText);
+  const graphText = ((await page.getByTestId('graph-detachment').textContent()) ?? '').replace(/\u2212/g, '-');
+  const g = /detachment (-?\d+(?:\.\d+)?) m/.exec(graphText);
   if (!g) throw new Error(`no depth in the graph's label "${graphText}"`);
   return {
     strip: await stripNumber(page.getByTestId('strip-detachment-depth')),
@@ -257,8 +262,8 @@ function expectShownMatches(v: Shown, a: SectionAnalysis): void {
   expectRounded(v.depth, ad.detachmentDepth!);
   expectRounded(v.displacement, ad.displacement);
   expectRounded(v.graph, ad.detachmentDepth!);
-  // The label on the section (DetachmentLayer): elevation, then depth below the reference, whole units.
-  const m = /^Proposed detachment (-?\d+) m\ndepth (-?\d+) m below (-?\d+) m/.exec(v.label);
+  // The label on the section (DetachmentLayer): elevation, then depth below the reference, rounded as the strip.
+  const m = /^Proposed detachment (-?\d+(?:\.\d+)?) m\ndepth (-?\d+(?:\.\d+)?) m below (-?\d+(?:\.\d+)?) m/.exec(v.label.replace(/\u2212/g, '-'));
   expect(m, `label "${v.label}"`).not.toBeNull();
   expectRounded(Number(m![1]), ad.detachmentElevation!);
   expectRounded(Number(m![2]), ad.detachmentDepth!);
@@ -337,3 +342,112 @@ test('Shift-dragging the regionals up: the strip, pane, graph and the line on th
   expect(await shownValues(page)).toEqual(start);
   await expectPaneMatches(page, before);
 });
+
+test('a Monte Carlo result is marked as for an earlier state once the section changes, and never shows a stale point estimate', async ({ page }) => {
+  await openDemo(page);
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-runs').fill('2000');
+  await page.getByTestId('mc-run').click();
+  const result = page.getByTestId('mc-result');
+  await expect(result).toBeVisible({ timeout: 60_000 });
+  await expect(result).toHaveAttribute('data-stale', 'no');
+  await expect(result).toContainText('Dashed line: the estimate without perturbation');
+  const p50 = await page.getByTestId('mc-p50').textContent();
+  // Leave the first horizon out: the section the run used is no longer the current one.
+  await page.getByTestId('graph-point-0').click();
+  await expect(result).toHaveAttribute('data-stale', 'yes');
+  await expect(page.getByTestId('mc-stale')).toHaveText('These results are for an earlier state of the section — run again.');
+  await expect(result).not.toContainText('estimate without perturbation');
+  // Still visible, marked, with the numbers of the run.
+  await expect(page.getByTestId('mc-p50')).toHaveText(p50 ?? '');
+  await result.scrollIntoViewIfNeeded();
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-monte-carlo-stale.png') });
+  // Back to the section it was run on (the key is of the content, not of the edit): current again.
+  await page.getByTestId('graph-point-0').click();
+  await expect(result).toHaveAttribute('data-stale', 'no');
+  await expect(result).toContainText('estimate without perturbation');
+});
+
+/** The screen point on the top horizon's regional at x (section units), where the app draws it after start-up. */
+async function topRegionalAt(page: Page, x: number): Promise<{ x: number; y: number }> {
+  const cal = fitCalibration({ kind: 'affine', points: demoCalibration.controlPoints });
+  if (!cal.ok) throw new Error(cal.message);
+  const view = page.getByTestId('section-view');
+  const size = await view.evaluate((el) => ({ w: el.clientWidth, h: el.clientHeight }));
+  const box = (await view.boundingBox())!;
+  const cam = fitCamera(demoCalibration.imageWidthPx, demoCalibration.imageHeightPx, size.w, size.h);
+  const top = demo.horizons[0].regional;
+  const [u, v] = sectionToImage(cal.fit, [x, interpolateZAt(top.map((q) => q[0]), top.map((q) => q[1]), x)]);
+  return { x: Math.round(box.x + cam.x + u * cam.scale), y: Math.round(box.y + cam.y + v * cam.scale) };
+}
+
+test('scenarios are compared on detachment elevation and depths below one common reference, the table and legend in view', async ({ page }) => {
+  await openDemo(page);
+  await page.getByTestId('scenario-duplicate').click();
+  // Raise every regional of the copy by Shift-dragging the top one up 2 screen pixels: its own reference (its highest regional) moves up.
+  await page.getByTestId('tool-regional').click();
+  const grab = await topRegionalAt(page, 10500);
+  await page.mouse.move(grab.x, grab.y);
+  await page.keyboard.down('Shift');
+  await page.mouse.down();
+  await page.mouse.move(grab.x, grab.y - 1);
+  await page.mouse.move(grab.x, grab.y - 2);
+  await page.mouse.up();
+  await page.keyboard.up('Shift');
+  const [dl] = await Promise.all([page.waitForEvent('download'), (async () => {
+    await page.getByTestId('menu-project').click();
+    await page.getByTestId('save-project').click();
+  })()]);
+  const saved = JSON.parse(readFileSync((await dl.path())!, 'utf8')) as { doc: ProjectDoc };
+  const analysisOf = (id: string) => {
+    const ds = docToSection(saved.doc, id);
+    if (!ds.ok) throw new Error(ds.message);
+    return engine(ds.section);
+  };
+  const base = analysisOf('scenario-1');
+  const copy = analysisOf('scenario-2');
+  expect(copy.referenceElevation).toBeGreaterThan(base.referenceElevation);
+  // The table: elevations as the engine's; depths below the base case's reference for both rows.
+  const elevation = async (id: string) => shown(page.getByTestId(`compare-elevation-${id}`));
+  expectFourFigures(await elevation('scenario-1'), base.areaDepth!.detachmentElevation!);
+  expectFourFigures(await elevation('scenario-2'), copy.areaDepth!.detachmentElevation!);
+  await expect(page.getByTestId('scenario-reference')).toContainText('the highest regional of Base case');
+  const rows = page.getByTestId('scenario-compare').locator('tbody tr');
+  const depthCell = async (i: number) => shown(rows.nth(i).locator('td').nth(2));
+  expectFourFigures(await depthCell(0), base.referenceElevation - base.areaDepth!.detachmentElevation!);
+  expectFourFigures(await depthCell(1), base.referenceElevation - copy.areaDepth!.detachmentElevation!);
+  // Every column of the comparison inside the pane (nothing cut at its right edge).
+  const pane = (await page.getByTestId('interpretation-pane').boundingBox())!;
+  const table = page.getByTestId('scenario-compare');
+  await table.scrollIntoViewIfNeeded();
+  const tableBox = (await table.boundingBox())!;
+  expect(tableBox.x + tableBox.width).toBeLessThanOrEqual(pane.x + pane.width);
+  // The overlay graph: the legend sits below the plot, not over its points.
+  const overlay = page.getByTestId('scenario-overlay');
+  const legend = page.getByTestId('scenario-overlay-legend');
+  await legend.scrollIntoViewIfNeeded();
+  const g = (await overlay.boundingBox())!;
+  const l = (await legend.boundingBox())!;
+  expect(l.y).toBeGreaterThanOrEqual(g.y + g.height - 1);
+  await expect(legend).toContainText('Base case');
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-compare.png') });
+});
+
+for (const [w, h] of [[1400, 900], [1920, 1080]] as const) {
+  test(`at ${w}×${h} the per-horizon table fits the pane and a scenario's message is not cut`, async ({ page }) => {
+    await page.setViewportSize({ width: w, height: h });
+    await openDemo(page);
+    const box = page.getByTestId('horizon-table-box');
+    const fits = await box.evaluate((el) => el.scrollWidth <= el.clientWidth + 1);
+    expect(fits).toBe(true);
+    await page.screenshot({ path: test.info().outputPath(`pane-${w}.png`) });
+    await page.getByTestId('scenario-new').click();
+    const message = page.getByTestId('scenario-message-scenario-2');
+    await expect(message).toHaveText('Place the two pins.');
+    expect(await message.evaluate((el) => el.scrollWidth <= el.clientWidth + 1)).toBe(true);
+    await page.getByTestId('scenario-select').selectOption('scenario-1');
+    await page.getByTestId('sensitivity-section').locator('summary').click();
+    await page.getByTestId('sensitivity-offset-plot').scrollIntoViewIfNeeded();
+    await page.screenshot({ path: test.info().outputPath(`pane-${w}-sensitivity.png`) });
+  });
+}

@@ -19,7 +19,11 @@ describe('detachmentTrace(section, analysis)', () => {
     for (const [, z] of t.line) expectClose(z, -3000, 1e-10);
     expect(t.line[0][0]).toBeLessThan(0);
     expect(t.line[1][0]).toBeGreaterThan(10_000);
-    expect(t.elevationInterval).not.toBe('unbounded');
+    // The example is an exact line through four points: no scatter, so no zero-width interval to show.
+    expect(t.elevationInterval).toBe('exact');
+    // The label's anchor: on the line where it crosses the left pin.
+    expect(t.atLeftPin[0]).toBe(0);
+    expectClose(t.atLeftPin[1], -3000, 1e-10);
   });
 
   it('follows the mean regional dip and keeps the estimate at the middle of the pins', () => {
@@ -31,6 +35,8 @@ describe('detachmentTrace(section, analysis)', () => {
     expectClose(t.trend, 0.01, 1e-12);
     const [[x0, z0], [x1, z1]] = t.line;
     expectClose(z0 + ((z1 - z0) * (5000 - x0)) / (x1 - x0), -3000, 1e-9);
+    // At the left pin (x = 0) the line is 0.01 · 5000 m below its middle.
+    expectClose(t.atLeftPin[1], -3050, 1e-9);
   });
 
   it('returns null when there is no detachment', () => {

@@ -37,8 +37,9 @@ describe('resultsTsv(analysis, scenarioName)', () => {
     expect(rows[rows.length - 1]).toEqual(['Caution', SECTION_CAUTION]);
   });
 
-  it('summaryRows reports an exact line as a zero-width interval, not as unbounded', () => {
+  it('summaryRows reports an exact line as an exact fit with no interval, not as a zero-width one (journey P3 #5)', () => {
     const d = summaryRows(analysis()).find((r) => r.key === 'detachment-depth')!;
-    expect(d.interval).toBe('3000 to 3000 m');
+    expect(d.interval).toBe('');
+    expect(rows.find((r) => r[0] === 'r²')![2]).toBe('exact fit (no scatter): no interval');
   });
 });

@@ -77,10 +77,11 @@ describe('selectLiveAnalysis', () => {
     expect(selectLiveAnalysis(moved, null)).toBe(selectAnalysis(moved));
     const pinsMoved = { ...moved, scenarios: [{ ...moved.scenarios[0], pinsPx: [[160, 0], [3800, 0]] as [[number, number], [number, number]] }] };
     expect(selectLiveAnalysis(pinsMoved, start)).toBe(selectAnalysis(pinsMoved));
-    // A regional that no longer reaches the right pin: the full analysis, which says why.
+    // A regional that no longer reaches the right pin: the full analysis, which leaves that horizon out and says why.
     const short = setRegional(start, 'h2', [[50, 500], [3000, 500]]);
     const r = selectLiveAnalysis(short, start);
     expect(r).toBe(selectAnalysis(short));
-    expect(r.outcome?.ok).toBe(false);
+    expect(r.leftOut.map((h) => h.id)).toEqual(['h2']);
+    expect(r.leftOut[0].reason).toMatch(/does not reach the right pin/);
   });
 });

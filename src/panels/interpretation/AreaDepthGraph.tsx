@@ -4,11 +4,13 @@
 import { useMemo, useRef, useState } from 'react';
 import type { TwoSegmentFit } from '../../core/analysis/twoSegmentFit';
 import type { AreaDepthSeries, GraphPoint } from './areaDepthSeries';
-import { areaUnit, formatArea, formatLength, formatNumber } from './formatValue';
+import { areaUnit, formatArea, formatNumber } from './formatValue';
 import { graphDomain } from './graphDomain';
 import { linearScale } from './linearScale';
 import { linspace, meanBand } from './meanBand';
 import { niceTicks } from './niceTicks';
+import { screenLength, screenNumber, withMinus } from './screenQuantity';
+import { isExactFit } from '../../state/selectors';
 
 export interface GraphSeriesSpec {
   key: string;
@@ -27,17 +29,19 @@ interface Props {
   twoSegment?: TwoSegmentFit | null;
   testId?: string;
   height?: number;
+  /** The depth axis title; default "Depth below reference (units)". */
+  depthLabel?: string;
 }
 
 const W = 400;
 const M = { left: 58, right: 14, top: 14, bottom: 40 };
 
-export function AreaDepthGraph({ series, units, dataOnly, interactive = false, onTogglePoint, twoSegment, testId, height = 300 }: Props) {
+export function AreaDepthGraph({ series, units, dataOnly, interactive = false, onTogglePoint, twoSegment, testId, height = 300, depthLabel }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
   const [hover, setHover] = useState<{ area: number; depth: number } | null>(null);
   const [hoverPoint, setHoverPoint] = useState<GraphPoint | null>(null);
   const H = height;
-  const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly), [series, dataOnly]);
+  const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly, units), [series, dataOnly, units]);
   const unit = useMemo(() => areaUnit(units, Math.max(0, ...series.flatMap((s) => s.series.points.map((p) => Math.abs(p.area))))), [series, units]);
   if (!domain) return <p className="hint">No horizons with a regional yet.</p>;
   const xs = linearScale(domain.area, [M.left, W - M.right]);
@@ -80,17 +84,17 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
         {areaTicks.map((t) => (
           <g key={`a${t}`}>
             <line x1={xs.map(t / unit.factor)} x2={xs.map(t / unit.factor)} y1={M.top} y2={H - M.bottom} className={t === 0 ? 'grid zero' : 'grid'} />
-            <text x={xs.map(t / unit.factor)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{formatNumber(t, decimalsOf(t))}</text>
+            <text x={xs.map(t / unit.factor)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{withMinus(formatNumber(t, decimalsOf(t)))}</text>
           </g>
         ))}
         {depthTicks.map((t) => (
           <g key={`d${t}`}>
             <line x1={M.left} x2={W - M.right} y1={ys.map(t)} y2={ys.map(t)} className="grid" />
-            <text x={M.left - 4} y={ys.map(t) + 3.5} className="tick" textAnchor="end">{formatNumber(t, decimalsOf(t))}</text>
+            <text x={M.left - 4} y={ys.map(t) + 3.5} className="tick" textAnchor="end">{withMinus(formatNumber(t, decimalsOf(t)))}</text>
           </g>
         ))}
         <text x={(M.left + W - M.right) / 2} y={H - 6} className="axis-label" textAnchor="middle">Excess area ({unit.label})</text>
-        <text transform={`translate(12 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} className="axis-label" textAnchor="middle">Depth below reference ({units})</text>
+        <text transform={`translate(12 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} className="axis-label" textAnchor="middle">{depthLabel ?? `Depth below reference (${units})`}</text>
         <g clipPath={`url(#plot-${testId ?? 'g'})`}>
           {interactive && main.series.fit.fit && <Band s={main.series} depths={depthsAcross} xs={xs} ys={ys} colour={main.colour} />}
           {series.map((s) => s.series.fit.result && (
@@ -118,27 +122,25 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
               data-testid={interactive && si === 0 ? `graph-point-${i}` : undefined} data-included={p.included ? 'yes' : 'no'} data-name={p.name} />
           </g>
         )))}
-        {series.length > 1 && (
-          <g className="legend">
-            {series.map((s, i) => (
-              <g key={`k${s.key}`} transform={`translate(${W - M.right - 130} ${M.top + 12 + i * 14})`}>
-                <line x1={0} x2={16} y1={-3} y2={-3} stroke={s.colour} strokeWidth={2} />
-                <text x={20} y={0} className="legend-text">{s.label.length > 20 ? `${s.label.slice(0, 19)}…` : s.label}</text>
-              </g>
-            ))}
-          </g>
-        )}
       </svg>
+      {series.length > 1 && (
+        // Below the plot, not on it, so that it never covers a point (journey P3 #8).
+        <ul className="graph-legend" data-testid={testId ? `${testId}-legend` : undefined}>
+          {series.map((s) => (
+            <li key={`k${s.key}`}><span className="legend-line" style={{ background: s.colour }} />{s.label}</li>
+          ))}
+        </ul>
+      )}
       <div className="graph-readout" data-testid={testId ? `${testId}-readout` : undefined}>
         {hoverPoint ? (
           <span>
-            <b>{hoverPoint.name}</b>: {formatArea(hoverPoint.area, unit)} at {formatLength(hoverPoint.depth, units)} depth
+            <b>{hoverPoint.name}</b>: {formatArea(hoverPoint.area, unit)} at {screenLength(hoverPoint.depth, units)} depth (regional at {screenLength(refElev - hoverPoint.depth, units)})
             {hoverPoint.residual !== null ? `, off the line by ${formatArea(hoverPoint.residual, unit)}` : ''}
             {interactive ? (hoverPoint.included ? ' — click to leave it out of the fit' : ' — left out; click to include') : ''}
           </span>
         ) : hover ? (
           <span>
-            Cursor: {formatArea(hover.area, unit)}, depth {formatLength(hover.depth, units)} (elevation {formatLength(refElev - hover.depth, units)})
+            Cursor: {formatArea(hover.area, unit)}, depth {screenLength(hover.depth, units)} (elevation {screenLength(refElev - hover.depth, units)})
             {lineAt(main.series, hover.depth) !== null ? `; line: ${formatArea(lineAt(main.series, hover.depth), unit)}` : ''}
           </span>
         ) : (
@@ -183,8 +185,8 @@ function Detachment({ s, xs, ys, units, labelled, testId }: { s: GraphSeriesSpec
       <path d={`M ${x0} ${y - 6} L ${x0 + 6} ${y} L ${x0} ${y + 6} L ${x0 - 6} ${y} Z`} fill={s.colour} stroke="#ffffff" strokeWidth={1} />
       {labelled && (
         <text x={x0 + 9} y={y + 4} className="detachment-label">
-          detachment {formatLength(r.detachmentDepth, units)}
-          {f.kind === 'bounded' ? ` (95%: ${formatNumber(f.lo)}–${formatNumber(f.hi)})` : f.kind === 'unbounded' ? ' (95% interval unbounded)' : ''}
+          detachment {screenLength(r.detachmentDepth, units)}
+          {isExactFit(r) ? ' (exact fit: no interval)' : f.kind === 'bounded' ? ` (95%: ${screenNumber(f.lo)}–${screenNumber(f.hi)})` : f.kind === 'unbounded' ? ' (95% interval unbounded)' : ''}
         </text>
       )}
     </g>

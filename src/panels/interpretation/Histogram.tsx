@@ -1,15 +1,25 @@
 // Histogram of Monte Carlo detachment depths with P10, P50 and P90 marked.
-import type { SpreadSummary } from '../../core/analysis/monteCarlo';
 import { histogramBins } from './histogramBins';
 import { linearScale } from './linearScale';
 import { niceTicks } from './niceTicks';
 import { formatNumber } from './formatValue';
+import { withMinus } from './screenQuantity';
 
 const W = 400;
 const H = 190;
 const M = { left: 44, right: 12, top: 26, bottom: 36 };
 
-export function Histogram({ values, spread, units, point }: { values: Float64Array; spread: SpreadSummary; units: string; point: number | null }) {
+interface Props {
+  values: Float64Array;
+  spread: { p10: number; p50: number; p90: number };
+  units: string;
+  /** The unperturbed estimate, dashed; null to leave it out (e.g. for a result of an earlier section). */
+  point: number | null;
+  /** The axis title; default "Detachment depth below reference (units)". */
+  label?: string;
+}
+
+export function Histogram({ values, spread, units, point, label }: Props) {
   const h = histogramBins(values, 28);
   if (h.counts.length === 0) return null;
   const sx = linearScale([h.edges[0], h.edges[h.edges.length - 1]], [M.left, W - M.right]);
@@ -23,7 +33,7 @@ export function Histogram({ values, spread, units, point }: { values: Float64Arr
       ))}
       <line x1={M.left} x2={W - M.right} y1={sy.map(0)} y2={sy.map(0)} className="axis" />
       {niceTicks(h.edges[0], h.edges[h.edges.length - 1], 5).values.map((t) => (
-        <text key={t} x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{formatNumber(t)}</text>
+        <text key={t} x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{withMinus(formatNumber(t))}</text>
       ))}
       {niceTicks(0, top, 3).values.map((t) => (
         <text key={`c${t}`} x={M.left - 4} y={sy.map(t) + 3.5} className="tick" textAnchor="end">{t}</text>
@@ -35,7 +45,7 @@ export function Histogram({ values, spread, units, point }: { values: Float64Arr
         </g>
       ))}
       {point !== null && <line x1={sx.map(point)} x2={sx.map(point)} y1={M.top} y2={sy.map(0)} className="point-mark" />}
-      <text x={(M.left + W - M.right) / 2} y={H - 6} className="axis-label" textAnchor="middle">Detachment depth below reference ({units}); runs per bin up</text>
+      <text x={(M.left + W - M.right) / 2} y={H - 6} className="axis-label" textAnchor="middle">{label ?? `Detachment depth below reference (${units})`}; runs per bin up</text>
     </svg>
   );
 }

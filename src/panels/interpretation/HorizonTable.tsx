@@ -1,8 +1,11 @@
 // Per-horizon results and the summary; each row's box includes or leaves out that horizon; copy as TSV.
+import { useState } from 'react';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { useSessionStore } from '../../state/sessionStore';
 import { areaUnit, formatNumber } from './formatValue';
 import { resultsTsv } from './resultsTsv';
+import { EXACT_FIT_TEXT } from '../../state/selectors';
+import { SCREEN_FORMAT, withMinus } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 
 interface Props {
@@ -14,6 +17,7 @@ interface Props {
 }
 
 export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle }: Props) {
+  const [all, setAll] = useState(false);
   const u = analysis.units;
   const unit = areaUnit(u, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea))));
   const copy = () => {
@@ -28,54 +32,66 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
       () => showMessage('error', 'Could not copy to the clipboard: the browser refused. Allow clipboard access and try again.'),
     );
   };
+  const rowTitle = (h: SectionAnalysis['horizons'][number]) => [
+    `${h.name}${h.included ? '' : ' (left out of the fit)'}`,
+    `bed length ${formatNumber(h.bedLength)} ${u}, regional length ${formatNumber(h.regionalLength)} ${u}`,
+    `projected share ${formatNumber(100 * h.projectedAreaShare, 1)} %, off the line ${formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals)} ${unit.label}`,
+  ].join('\n');
   return (
     <div>
-      <div className="table-scroll">
-        <table className="results-table" data-testid="horizon-table">
+      <div className="table-box" data-testid="horizon-table-box">
+        <table className={`results-table horizons${all ? ' all' : ''}`} data-testid="horizon-table">
           <thead>
             <tr>
-              <th title="Included in the area–depth fit">Fit</th>
-              <th className="name-col">Horizon</th>
+              <th className="name-col" title="Tick to include the horizon in the area–depth fit">Horizon (in fit)</th>
               <th>Excess area ({unit.label})</th>
               <th>Regional elev. ({u})</th>
-              <th>Depth ({u})</th>
-              <th>Bed length ({u})</th>
-              <th>Regional length ({u})</th>
+              <th title={`Depth of the regional below the reference, ${formatNumber(analysis.referenceElevation)} ${u}`}>Depth ({u})</th>
               <th>Chamberlin depth ({u})</th>
-              <th>Layer-parallel strain (%)</th>
-              <th>Projected share (%)</th>
-              <th>Off line ({unit.label})</th>
+              <th title="Layer-parallel strain e = L / (W + D) − 1; negative = shortened along the layer">Layer strain (%)</th>
+              {all && <>
+                <th>Bed length ({u})</th>
+                <th>Regional length ({u})</th>
+                <th>Projected share (%)</th>
+                <th>Off line ({unit.label})</th>
+              </>}
             </tr>
           </thead>
           <tbody>
             {analysis.horizons.map((h, i) => (
-              <tr key={horizonIds[i] ?? i} className={`${h.included ? '' : 'excluded'} ${flagged.has(horizonIds[i]) ? 'flagged' : ''}`}>
-                <td>
-                  <input type="checkbox" checked={h.included} aria-label={`Include ${h.name} in the fit`} data-testid={`include-${i}`}
-                    onChange={(e) => onToggle(horizonIds[i], e.target.checked)} />
+              <tr key={horizonIds[i] ?? i} className={`${h.included ? '' : 'excluded'} ${flagged.has(horizonIds[i]) ? 'flagged' : ''}`} title={rowTitle(h)}>
+                <td className="name-col">
+                  <label>
+                    <input type="checkbox" checked={h.included} aria-label={`Include ${h.name} in the fit`} data-testid={`include-${i}`}
+                      onChange={(e) => onToggle(horizonIds[i], e.target.checked)} />
+                    <span className="name-text">{h.name}</span>
+                  </label>
                 </td>
-                <td className="name-col" title={h.name}>{h.name}</td>
-                <td>{formatNumber(h.excessArea * unit.factor, unit.decimals)}</td>
-                <td>{formatNumber(h.regionalElevation)}</td>
-                <td>{formatNumber(h.depth)}</td>
-                <td>{formatNumber(h.bedLength)}</td>
-                <td>{formatNumber(h.regionalLength)}</td>
-                <td>{formatNumber(h.chamberlinDepth)}</td>
-                <td>{formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain, 1)}</td>
-                <td>{formatNumber(100 * h.projectedAreaShare, 1)}</td>
-                <td>{formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals)}</td>
+                <td>{withMinus(formatNumber(h.excessArea * unit.factor, unit.decimals))}</td>
+                <td>{withMinus(formatNumber(h.regionalElevation))}</td>
+                <td>{withMinus(formatNumber(h.depth))}</td>
+                <td>{withMinus(formatNumber(h.chamberlinDepth))}</td>
+                <td>{withMinus(formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain, 1))}</td>
+                {all && <>
+                  <td>{withMinus(formatNumber(h.bedLength))}</td>
+                  <td>{withMinus(formatNumber(h.regionalLength))}</td>
+                  <td>{withMinus(formatNumber(100 * h.projectedAreaShare, 1))}</td>
+                  <td>{withMinus(formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals))}</td>
+                </>}
               </tr>
             ))}
           </tbody>
         </table>
       </div>
+      <label className="check table-more"><input type="checkbox" checked={all} onChange={(e) => setAll(e.target.checked)} data-testid="horizon-table-all" />
+        All columns (bed and regional length, projected share, distance off the line); hover a row for them</label>
       <table className="summary-table" data-testid="summary-table">
         <tbody>
-          {summaryRows(analysis).map((r) => (
+          {summaryRows(analysis, SCREEN_FORMAT).map((r) => (
             <tr key={r.key}>
               <th>{r.label}</th>
               <td>{r.text}</td>
-              <td className="interval">{r.interval ? `95%: ${r.interval}` : ''}</td>
+              <td className="interval">{!r.interval ? '' : r.interval === EXACT_FIT_TEXT ? r.interval : `95%: ${r.interval}`}</td>
             </tr>
           ))}
         </tbody>

@@ -1,5 +1,7 @@
 // The headline numbers of the fit (number first, then the unit), with their 95% intervals.
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
+import { EXACT_FIT_TEXT } from '../../state/selectors';
+import { SCREEN_FORMAT } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 
 const KEYS: [string, string][] = [
@@ -10,7 +12,7 @@ const KEYS: [string, string][] = [
 ];
 
 export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
-  const rows = summaryRows(analysis);
+  const rows = summaryRows(analysis, SCREEN_FORMAT);
   const get = (k: string) => rows.find((r) => r.key === k)!;
   const n = get('n');
   return (
@@ -21,7 +23,7 @@ export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
           <div className="key-result" key={key}>
             <div className="key-label">{label}</div>
             <div className="key-value" data-testid={`result-${key}`}>{r.text}</div>
-            {r.interval && <div className="key-interval">95%: {r.interval}</div>}
+            {r.interval && <div className="key-interval" data-testid={`interval-${key}`}>{r.interval === EXACT_FIT_TEXT ? r.interval : `95%: ${r.interval}`}</div>}
           </div>
         );
       })}

@@ -3,9 +3,14 @@
 import { useEffect, useRef, useState } from 'react';
 import type { MonteCarloOptions } from '../../core/analysis/monteCarlo';
 import type { Section } from '../../core/model/section';
+import { isStale, sectionKey, useUncertaintyStore, type MonteCarloRecord } from '../../state/uncertaintyStore';
 import { Histogram } from './Histogram';
-import { formatLength, formatNumber, formatPercent } from './formatValue';
+import { formatPercent } from './formatValue';
 import type { MonteCarloDone, MonteCarloReply } from './monteCarloMessages';
+import { screenLength } from './screenQuantity';
+
+/** The text shown over a result computed for another state of the section. */
+export const STALE_TEXT = 'These results are for an earlier state of the section — run again.';
 
 interface Fields { runs: string; seed: string; vertex: string; offset: string; horizonOffset: string; tilt: string; scale: string; vertices: boolean }
 
@@ -27,10 +32,29 @@ function toOptions(f: Fields): MonteCarloOptions | string {
   };
 }
 
-export function MonteCarloPanel({ section }: { section: Section }) {
+function recordOf(m: MonteCarloDone, section: Section, options: MonteCarloOptions, f: Fields, referenceElevation: number): MonteCarloRecord {
+  const pct = (sp: MonteCarloDone['depth']) => (sp ? { p10: sp.p10, p50: sp.p50, p90: sp.p90 } : null);
+  return {
+    sectionKey: sectionKey(section), units: section.units, seed: options.seed, runs: m.runs, method: options.method ?? 'analytic',
+    sigmas: { vertex: Number(f.vertex), offset: Number(f.offset), perHorizonOffset: Number(f.horizonOffset), tiltPerThousand: Number(f.tilt), scalePercent: Number(f.scale) },
+    referenceElevation, depth: pct(m.depth), elevation: pct(m.elevation), displacement: pct(m.displacement), depthSd: m.depth?.sd ?? null,
+    failedShare: m.failedShare, finishedAt: Date.now(), depths: m.depths, pointDepth: m.pointDepth,
+  };
+}
+
+interface Props {
+  scenarioId: string;
+  section: Section;
+  /** The reference elevation of the analysis of `section` (depths are below it). */
+  referenceElevation: number;
+}
+
+export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Props) {
   const [fields, setFields] = useState<Fields>(DEFAULTS);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
-  const [result, setResult] = useState<MonteCarloDone | null>(null);
+  // The last result of this scenario lives in the session store (the report reads it too), with the key of its section.
+  const result = useUncertaintyStore((st) => st.byScenario[scenarioId] ?? null);
+  const setMonteCarlo = useUncertaintyStore((st) => st.setMonteCarlo);
   const [error, setError] = useState<string | null>(null);
   const worker = useRef<Worker | null>(null);
   const u = section.units;
@@ -50,7 +74,8 @@ export function MonteCarloPanel({ section }: { section: Section }) {
     }
     stop();
     setError(null);
-    setResult(null);
+    // What this run analyses, fixed now: the section may change while it runs.
+    const ran = { section, referenceElevation, fields, scenarioId };
     const w = new Worker(new URL('./monteCarlo.worker.ts', import.meta.url), { type: 'module' });
     worker.current = w;
     setProgress({ done: 0, total: options.runs });
@@ -58,7 +83,7 @@ export function MonteCarloPanel({ section }: { section: Section }) {
       const m = e.data;
       if (m.type === 'progress') setProgress({ done: m.done, total: m.total });
       else {
-        if (m.type === 'done') setResult(m);
+        if (m.type === 'done') setMonteCarlo(ran.scenarioId, recordOf(m, ran.section, options, ran.fields, ran.referenceElevation));
         else setError(m.message);
         w.terminate();
         if (worker.current === w) worker.current = null;
@@ -105,24 +130,39 @@ export function MonteCarloPanel({ section }: { section: Section }) {
         )}
       </div>
       {error && <p className="diagnostic error">{error}</p>}
-      {result && (
-        <div className="mc-result" data-testid="mc-result">
-          <table className="summary-table">
-            <tbody>
-              <tr><th>Detachment depth P10 / P50 / P90</th>
-                <td><span data-testid="mc-p10">{formatLength(result.depth?.p10, u)}</span> / <span data-testid="mc-p50">{formatLength(result.depth?.p50, u)}</span> / <span data-testid="mc-p90">{formatLength(result.depth?.p90, u)}</span></td></tr>
-              <tr><th>Detachment elevation P10 / P50 / P90</th>
-                <td>{formatLength(result.elevation?.p10, u)} / {formatLength(result.elevation?.p50, u)} / {formatLength(result.elevation?.p90, u)}</td></tr>
-              <tr><th>Displacement P10 / P50 / P90</th>
-                <td>{formatLength(result.displacement?.p10, u)} / {formatLength(result.displacement?.p50, u)} / {formatLength(result.displacement?.p90, u)}</td></tr>
-              <tr><th>Runs without a valid detachment</th><td data-testid="mc-failed">{formatPercent(result.failedShare)} of {result.runs}</td></tr>
-              <tr><th>Depth spread (standard deviation)</th><td>{formatLength(result.depth?.sd, u)}</td></tr>
-            </tbody>
-          </table>
-          {result.depth && <Histogram values={result.depths} spread={result.depth} units={u} point={result.pointDepth} />}
-          <p className="hint">Dashed line: the estimate without perturbation ({formatNumber(result.pointDepth)} {u}). Report the spread, not one number.</p>
-        </div>
+      {result && !running && <MonteCarloResult result={result} stale={isStale(result, section)} />}
+    </div>
+  );
+}
+
+function MonteCarloResult({ result, stale }: { result: MonteCarloRecord; stale: boolean }) {
+  const u = result.units;
+  const three = (sp: MonteCarloRecord['depth'], id?: string) => (
+    <>
+      <span data-testid={id && `${id}-p10`}>{screenLength(sp?.p10, u)}</span> / <span data-testid={id && `${id}-p50`}>{screenLength(sp?.p50, u)}</span> / <span data-testid={id && `${id}-p90`}>{screenLength(sp?.p90, u)}</span>
+    </>
+  );
+  const ref = screenLength(result.referenceElevation, u);
+  return (
+    <div className={`mc-result${stale ? ' stale' : ''}`} data-testid="mc-result" data-stale={stale ? 'yes' : 'no'}>
+      {stale && <p className="diagnostic warning mc-stale" data-testid="mc-stale">{STALE_TEXT}</p>}
+      <table className="summary-table">
+        <tbody>
+          <tr><th>Detachment elevation P10 / P50 / P90</th><td>{three(result.elevation, 'mc-elevation')}</td></tr>
+          <tr><th>Detachment depth below {ref} P10 / P50 / P90</th>
+            <td><span data-testid="mc-p10">{screenLength(result.depth?.p10, u)}</span> / <span data-testid="mc-p50">{screenLength(result.depth?.p50, u)}</span> / <span data-testid="mc-p90">{screenLength(result.depth?.p90, u)}</span></td></tr>
+          <tr><th>Displacement P10 / P50 / P90</th><td>{three(result.displacement)}</td></tr>
+          <tr><th>Runs without a valid detachment</th><td data-testid="mc-failed">{formatPercent(result.failedShare)} of {result.runs}</td></tr>
+          <tr><th>Depth spread (standard deviation)</th><td>{screenLength(result.depthSd, u)}</td></tr>
+          <tr><th>Run</th><td className="interval">seed {result.seed}, {result.method === 'vertices' ? 'every vertex perturbed' : 'areas drawn directly'}</td></tr>
+        </tbody>
+      </table>
+      {result.depth && (
+        <Histogram values={result.depths} spread={result.depth} units={u} point={stale ? null : result.pointDepth}
+          label={`Detachment depth below ${ref} (${u})`} />
       )}
+      {/* The unperturbed estimate of an earlier section is not the current one: say nothing of it then. */}
+      {!stale && <p className="hint">Dashed line: the estimate without perturbation ({screenLength(result.pointDepth, u)}). Report the spread, not one number.</p>}
     </div>
   );
 }

@@ -9,7 +9,10 @@ import { scenarioDuplicate } from '../../core/model/commands/scenarioDuplicate';
 import { scenarioRename } from '../../core/model/commands/scenarioRename';
 import { scenarioSwitch } from '../../core/model/commands/scenarioSwitch';
 import { AreaDepthGraph, type GraphSeriesSpec } from './AreaDepthGraph';
-import { formatLength, formatNumber } from './formatValue';
+import { EXACT_FIT_TEXT, isExactFit } from '../../state/selectors';
+import { areaDepthSeries } from './areaDepthSeries';
+import { formatNumber } from './formatValue';
+import { screenLength, screenNumber } from './screenQuantity';
 import { scenarioAnalysisOf } from './useScenarioAnalysis';
 import { scenarioColour } from './scenarioColour';
 
@@ -22,7 +25,17 @@ export function ScenarioPanel() {
     () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, s.id)) })),
     [doc, gestureStart],
   );
-  const overlay: GraphSeriesSpec[] = rows.filter((r) => r.series).map((r) => ({ key: r.scenario.id, label: r.scenario.name, colour: r.colour, series: r.series! }));
+  // One reference for every scenario (journey P2 #3): the base case's (the first scenario that can be
+  // analysed), normally its highest regional. Depths below each scenario's own reference differ by the
+  // difference of the references and invite a wrong comparison; elevations compare as they are.
+  const base = rows.find((r) => r.analysis);
+  const commonRef = base?.analysis?.referenceElevation ?? null;
+  const refText = base && commonRef !== null
+    ? `${screenLength(commonRef, doc.units)}, ${base.scenario.referenceElevation !== undefined ? 'the reference set in' : 'the highest regional of'} ${base.scenario.name}`
+    : '';
+  const overlay: GraphSeriesSpec[] = rows.filter((r) => r.analysis).map((r) => ({
+    key: r.scenario.id, label: r.scenario.name, colour: r.colour, series: areaDepthSeries(r.analysis!, r.horizonIds, commonRef ?? undefined),
+  }));
   const active = doc.activeScenarioId;
   const finishRename = () => {
     if (renaming) apply((d) => scenarioRename(d, renaming.id, renaming.name));
@@ -62,37 +75,41 @@ export function ScenarioPanel() {
         <button type="button" data-testid="scenario-rename" onClick={() => setRenaming({ id: active, name: doc.scenarios.find((s) => s.id === active)?.name ?? '' })}>Rename</button>
         <button type="button" data-testid="scenario-delete" disabled={doc.scenarios.length <= 1} onClick={() => apply((d) => scenarioDelete(d, d.activeScenarioId))} title="Delete the active scenario (undo brings it back)">Delete</button>
       </div>
-      <div className="table-scroll">
+      {commonRef !== null && <p className="hint" data-testid="scenario-reference">Compared on detachment elevation; depths below {refText}.</p>}
+      <div className="table-box">
         <table className="results-table compare" data-testid="scenario-compare">
           <thead>
             <tr>
               <th className="name-col">Scenario</th>
-              <th>n</th>
-              <th>Displacement ({doc.units})</th>
-              <th>Detachment depth ({doc.units})</th>
-              <th>Detachment elevation ({doc.units})</th>
-              <th>95% depth interval ({doc.units})</th>
-              <th>r²</th>
+              <th title="95% interval below each value">Detachment elevation ({doc.units})</th>
+              <th title={commonRef !== null ? `Below ${refText}` : undefined}>Depth below {commonRef !== null ? screenLength(commonRef, doc.units) : 'ref.'}</th>
+              <th>Displace&shy;ment ({doc.units})</th>
+              <th title="Horizons in the fit">n</th>
             </tr>
           </thead>
           <tbody>
             {rows.map(({ scenario: s, analysis, docSection }) => {
               const ad = analysis?.areaDepth;
-              const ok = ad && !ad.noDetachment;
+              const ok = ad && !ad.noDetachment && ad.detachmentElevation !== null;
               const f = ad?.detachmentDepthInterval;
+              const zref = analysis?.referenceElevation ?? 0;
+              const interval = !ok || !f ? '—' : isExactFit(ad) ? 'exact fit' : f.kind === 'bounded'
+                ? `${screenNumber(zref - f.hi)} to ${screenNumber(zref - f.lo)}` : f.kind === 'unbounded' ? 'unbounded' : 'none';
+              const title = ad ? `${s.name}: n = ${ad.n}, r² = ${formatNumber(ad.r2, 4)}${isExactFit(ad) ? ` (${EXACT_FIT_TEXT})` : ''}; own reference ${screenLength(zref, doc.units)}` : s.name;
               return (
-                <tr key={s.id} className={s.id === active ? 'active' : ''}>
+                <tr key={s.id} className={s.id === active ? 'active' : ''} title={title}>
                   <td className="name-col">{s.name}</td>
                   {!analysis ? (
-                    <td colSpan={6} className="hint">{docSection.ok ? 'not analysed: see the messages above' : docSection.message}</td>
+                    <td colSpan={4} className="hint message" data-testid={`scenario-message-${s.id}`}>{docSection.ok ? 'not analysed: see the messages above' : docSection.message}</td>
                   ) : (
                     <>
+                      <td>
+                        <div className="primary" data-testid={`compare-elevation-${s.id}`}>{ok ? screenNumber(ad.detachmentElevation) : ad ? 'none' : '—'}</div>
+                        {ok && <div className="interval">{interval === 'exact fit' || interval === 'unbounded' || interval === 'none' ? interval : `95%: ${interval}`}</div>}
+                      </td>
+                      <td>{ok && commonRef !== null ? screenNumber(commonRef - ad.detachmentElevation!) : '—'}</td>
+                      <td>{ok ? screenNumber(ad.displacement) : '—'}</td>
                       <td>{ad?.n ?? 0}</td>
-                      <td>{ok ? formatNumber(ad.displacement) : '—'}</td>
-                      <td>{ok ? formatNumber(ad.detachmentDepth) : ad ? 'none' : '—'}</td>
-                      <td>{ok ? formatNumber(ad.detachmentElevation) : '—'}</td>
-                      <td>{!ok || !f ? '—' : f.kind === 'bounded' ? `${formatNumber(f.lo)} to ${formatNumber(f.hi)}` : f.kind === 'unbounded' ? 'unbounded' : 'none'}</td>
-                      <td>{formatNumber(ad?.r2, 4)}</td>
                     </>
                   )}
                 </tr>
@@ -103,8 +120,9 @@ export function ScenarioPanel() {
       </div>
       {overlay.length > 0 && (
         <>
-          <p className="hint">All scenarios' fits on one graph (depths below each scenario's reference, {formatLength(rows[0].analysis?.referenceElevation ?? null, doc.units)} for the first).</p>
-          <AreaDepthGraph series={overlay} units={doc.units} dataOnly={false} testId="scenario-overlay" height={240} />
+          <p className="hint">All scenarios' fits on one graph, depths below {refText}.</p>
+          <AreaDepthGraph series={overlay} units={doc.units} dataOnly={false} testId="scenario-overlay" height={240}
+            depthLabel={`Depth below ${screenLength(commonRef, doc.units)} (${doc.units})`} />
         </>
       )}
     </div>

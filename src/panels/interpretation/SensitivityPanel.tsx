@@ -1,15 +1,19 @@
-// Detachment depth against a common regional offset and tilt (exact fast path of the engine), with
-// the amplification 1 + W0/D of METHOD.md written on the plot.
-import { useMemo, useState } from 'react';
+// Detachment elevation against a common regional offset and tilt (exact fast path of the engine), with
+// the amplification 1 + W0/D of METHOD.md written on the plot. Elevation, not depth: a depth needs a
+// reference, and the highest regional moves with the offset, so a depth curve would disagree with the
+// main pane's depth for the same shift (journey P3 #15); the elevation has no such ambiguity.
+import { useEffect, useMemo, useState } from 'react';
 import type { Section } from '../../core/model/section';
 import { prepareSection } from '../../core/analysis/prepareSection';
 import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
 import { SweepPlot } from './SweepPlot';
 import { formatNumber } from './formatValue';
+import { screenLength } from './screenQuantity';
 import { useDocStore } from '../../state/docStore';
+import { sectionKey, useUncertaintyStore } from '../../state/uncertaintyStore';
 
-export function SensitivityPanel({ section: current }: { section: Section }) {
+export function SensitivityPanel({ scenarioId, section: current }: { scenarioId: string; section: Section }) {
   // The sweeps re-prepare the whole section: while a regional or pin is dragged they keep the section
   // of the gesture's start, and follow once it ends.
   const gesture = useDocStore((s) => s.gestureStart !== null);
@@ -28,6 +32,13 @@ export function SensitivityPanel({ section: current }: { section: Section }) {
     const tilts = linspace(-Math.abs(tiltRange), Math.abs(tiltRange), 41);
     return { offsets, tilts, result: regionalSensitivity(prep.prepared, { offsets, tilts: tilts.map((t) => t / 1000), tiltPivot: pivot }), width: prep.prepared.pinWidth };
   }, [section, offsetRange, tiltRange, pivot]);
+  const setAmplification = useUncertaintyStore((st) => st.setAmplification);
+  // Kept for the report with the key of the section it belongs to (not while a gesture holds the section).
+  useEffect(() => {
+    if (!sweep || gesture) return;
+    const base = sweep.result.base;
+    setAmplification(scenarioId, { sectionKey: sectionKey(section), amplification: sweep.result.amplification, pinWidth: sweep.width, displacement: base && !base.noDetachment ? base.displacement : null });
+  }, [sweep, gesture, scenarioId, section, setAmplification]);
   if (!sweep) return <p className="hint">Sensitivity needs a section the engine can analyse.</p>;
   const amp = sweep.result.amplification;
   const ampText = amp === null
@@ -36,14 +47,16 @@ export function SensitivityPanel({ section: current }: { section: Section }) {
   return (
     <div className="sensitivity">
       <p className="amplification" data-testid="sensitivity-amplification">{ampText}</p>
+      <p className="hint">Curves in detachment elevation, which needs no reference: a depth below the highest regional would move with that regional as it is shifted.{sweep.result.base && !sweep.result.base.noDetachment && sweep.result.base.detachmentElevation !== null ? ` Unshifted: ${screenLength(sweep.result.base.detachmentElevation, u)}.` : ''}</p>
       <div className="field-row">
         <label>Offset range ± <input type="number" min={1} value={offsetRange} onChange={(e) => setOffsetRange(Number(e.target.value) || 1)} /> {u}</label>
       </div>
       <SweepPlot
         xs={sweep.offsets}
-        depths={sweep.result.offsets.map((p) => p.depth)}
+        values={sweep.result.offsets.map((p) => p.elevation)}
+        up
         xLabel={`Common regional offset (${u}, up positive)`}
-        yLabel={`Detachment depth (${u})`}
+        yLabel={`Detachment elevation (${u})`}
         note={amp === null ? 'no detachment at 0' : `amplification 1 + W/D = ${formatNumber(amp, 1)}`}
         testId="sensitivity-offset-plot"
       />
@@ -53,9 +66,10 @@ export function SensitivityPanel({ section: current }: { section: Section }) {
       </div>
       <SweepPlot
         xs={sweep.tilts}
-        depths={sweep.result.tilts.map((p) => p.depth)}
+        values={sweep.result.tilts.map((p) => p.elevation)}
+        up
         xLabel={`Common regional tilt (${u} per 1000 ${u}, rising to the right positive)`}
-        yLabel={`Detachment depth (${u})`}
+        yLabel={`Detachment elevation (${u})`}
         note={`tilt about the ${pivot} pin (x = ${formatNumber(sweep.result.tiltPivotX)} ${u})`}
         testId="sensitivity-tilt-plot"
       />

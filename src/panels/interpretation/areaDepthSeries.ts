@@ -21,13 +21,18 @@ export interface AreaDepthSeries {
   referenceElevation: number;
 }
 
-/** Graph points (horizon ids from docToSection, same order) and the fit of the included ones. */
-export function areaDepthSeries(analysis: SectionAnalysis, horizonIds: readonly string[]): AreaDepthSeries {
+/**
+ * Graph points (horizon ids from docToSection, same order) and the fit of the included ones; depths below
+ * `referenceElevation` when given (to compare scenarios against one reference: the line's slope and its
+ * detachment elevation do not depend on it, METHOD.md "Area–depth"), else below the analysis's own.
+ */
+export function areaDepthSeries(analysis: SectionAnalysis, horizonIds: readonly string[], referenceElevation = analysis.referenceElevation): AreaDepthSeries {
+  const zref = referenceElevation;
   const points = analysis.horizons.map((h, i): GraphPoint => ({
-    id: horizonIds[i] ?? `#${i}`, name: h.name, depth: h.depth, area: h.excessArea, included: h.included,
+    id: horizonIds[i] ?? `#${i}`, name: h.name, depth: zref === analysis.referenceElevation ? h.depth : zref - h.regionalElevation, area: h.excessArea, included: h.included,
     residual: h.residual, projectedAreaShare: h.projectedAreaShare,
   }));
   const inc = points.filter((p) => p.included);
-  const fit = fitAreaDepth(inc.map((p) => p.depth), inc.map((p) => p.area), analysis.referenceElevation);
-  return { points, fit, referenceElevation: analysis.referenceElevation };
+  const fit = fitAreaDepth(inc.map((p) => p.depth), inc.map((p) => p.area), zref);
+  return { points, fit, referenceElevation: zref };
 }

@@ -1,5 +1,6 @@
 import type { AnalysisOutcome } from '../../core/analysis/analyseSection';
 import type { DocSection } from '../../core/model/docToSection';
+import type { LeftOutHorizon } from '../../state/selectors';
 
 // What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
 // called a poor fit: our threshold, a common rule of thumb for area–depth lines.
@@ -8,10 +9,12 @@ export interface Diagnostic { level: 'error' | 'warning' | 'info'; text: string 
 
 export const POOR_FIT_R2 = 0.9;
 
-/** Plain-word diagnostics for the scenario's analysis: not ready, input problems, fit quality, intervals, skipped horizons. */
-export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | null): Diagnostic[] {
+/** Plain-word diagnostics for the scenario's analysis: not ready, input problems, horizons left out for a problem of their own, fit quality, intervals, skipped horizons. */
+export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | null, leftOut: readonly LeftOutHorizon[] = []): Diagnostic[] {
   if (!docSection.ok) return [{ level: 'info', text: docSection.message }];
   const out: Diagnostic[] = docSection.skipped.map((s) => ({ level: 'info' as const, text: `Horizon "${s.name}" is left out: ${s.reason}.` }));
+  // The others are analysed without them (selectors: analyseLenient); the reason is the engine's.
+  for (const h of leftOut) out.push({ level: 'warning', text: `left out: ${h.name} — ${h.reason}` });
   if (!outcome) return [...out, { level: 'info', text: 'Draw a regional for at least two horizons to see the area–depth line.' }];
   if (!outcome.ok) return [...out, ...outcome.problems.map((p) => ({ level: 'error' as const, text: p.message }))];
   const a = outcome.analysis;

@@ -7,8 +7,24 @@ import { niceDomain } from './niceTicks';
 
 export interface GraphDomain { area: [number, number]; depth: [number, number] }
 
-/** Area (units²) and depth (units) ranges for the series, widened to 1-2-5 steps; null when there are no points. */
-export function graphDomain(series: readonly AreaDepthSeries[], dataOnly: boolean): GraphDomain | null {
+// A single point (one horizon, or all at one depth or one area) has no span of its own: pad it to
+// 10% of its magnitude, and depth to at least a span a section can show (our choice: 200 m or 500 ft),
+// rather than to 0.06 m. Areas all zero get 0.1 km² (10⁶ ft²).
+const MIN_DEPTH_SPAN: Record<string, number> = { m: 200, ft: 500 };
+const ZERO_AREA_SPAN: Record<string, number> = { m: 1e5, ft: 1e6 };
+
+/** [lo, hi] widened about its middle to `minSpan`, or when it is (nearly) one value to 10% of its magnitude if larger (`zeroSpan` when that is 0). */
+function atLeast(lo: number, hi: number, minSpan: number, zeroSpan: number): [number, number] {
+  const mag = Math.max(Math.abs(lo), Math.abs(hi));
+  const single = hi - lo <= 1e-9 * Math.max(1, mag);
+  const want = single ? Math.max(minSpan, mag > 0 ? 0.1 * mag : zeroSpan) : minSpan;
+  if (hi - lo >= want) return [lo, hi];
+  const mid = (lo + hi) / 2;
+  return [mid - want / 2, mid + want / 2];
+}
+
+/** Area (units²) and depth (units) ranges for the series, widened to 1-2-5 steps and to a minimum span for `units` ("m", "ft"); null when there are no points. */
+export function graphDomain(series: readonly AreaDepthSeries[], dataOnly: boolean, units = 'm'): GraphDomain | null {
   const areas: number[] = [];
   const depths: number[] = [];
   for (const s of series) for (const p of s.points) {
@@ -30,14 +46,14 @@ export function graphDomain(series: readonly AreaDepthSeries[], dataOnly: boolea
       if (f.kind === 'bounded') depths.push(Math.min(f.hi, cap), Math.max(f.lo, dMin - span));
     }
   }
-  const aMin = Math.min(...areas);
-  const aMax = Math.max(...areas);
-  const aPad = (aMax - aMin || Math.abs(aMax) || 1) * 0.06;
-  const zMin = Math.min(...depths);
-  const zMax = Math.max(...depths);
-  const zPad = (zMax - zMin || 1) * 0.06;
-  const depth = niceDomain(zMin - zPad, zMax + zPad);
+  const [aMin, aMax] = atLeast(Math.min(...areas), Math.max(...areas), 0, ZERO_AREA_SPAN[units] ?? ZERO_AREA_SPAN.m);
+  const aPad = (aMax - aMin) * 0.06;
+  let [zMin, zMax] = atLeast(Math.min(...depths), Math.max(...depths), MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m, MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m);
   // Depths below the reference are ≥ 0; do not open the axis above the reference for padding alone.
-  if (zMin >= 0 && depth[0] < 0) depth[0] = 0;
+  const dataTop = Math.min(...depths);
+  if (dataTop >= 0 && zMin < 0) [zMin, zMax] = [0, zMax - zMin];
+  const zPad = (zMax - zMin) * 0.06;
+  const depth = niceDomain(zMin - zPad, zMax + zPad);
+  if (dataTop >= 0 && depth[0] < 0) depth[0] = 0;
   return { area: niceDomain(aMin - aPad, aMax + aPad), depth };
 }

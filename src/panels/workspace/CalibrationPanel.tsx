@@ -75,12 +75,15 @@ export function CalibrationPanel() {
           ? mode === 'affine' ? 'Click three or more marks of known (x, z) on the scan, then type their values.' : 'Click two or more marks of known x and two or more of known z, then type their values.'
           : 'Choose the Calibrate tool to click points on the scan.'}
       </p>
-      <label className="inline-field">Units
-        <select value={units} onChange={(e) => apply((d) => setUnits(d, e.currentTarget.value === 'ft' ? 'ft' : 'm'))} data-testid="units">
+      <div className="units-row">
+        <label className="inline-field" htmlFor="section-units">Units</label>
+        <select id="section-units" aria-label="Units" aria-describedby="section-units-note" value={units} onChange={(e) => apply((d) => setUnits(d, e.currentTarget.value === 'ft' ? 'ft' : 'm'))} data-testid="units">
           <option value="m">metres</option>
           <option value="ft">feet</option>
         </select>
-      </label>
+        {/* setUnits only relabels: the typed control-point values stay the numbers they were. */}
+        <span className="hint units-note" id="section-units-note" data-testid="units-note">labels only — coordinates are not converted; recalibrate to convert</span>
+      </div>
       {rows.length > 0 && (
         <table className="cal-table" data-testid="cal-table">
           <thead><tr><th>#</th><th>known {mode === 'affine' ? 'x, z' : 'value'} ({units})</th><th title="misfit of the point to the fitted calibration">misfit</th><th /></tr></thead>

@@ -1,9 +1,12 @@
 // The horizons in stratigraphic order (youngest first): name, colour, order, show/hide, lock; the
-// selected horizon's regional helpers; and typing or pasting a horizon as a table of x, z.
+// selected horizon's regional helpers; and typing or pasting a horizon as a table of x, z. The name takes
+// the row's width (order, show and lock are compact icons); a name another horizon has is refused, since
+// the analysis keys its results by name.
 import { useState } from 'react';
 import { sectionToImage } from '../../core/calibration/mapPoints';
 import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
 import { deleteHorizon } from '../../core/model/commands/deleteHorizon';
+import { horizonNameTaken } from '../../core/model/commands/horizonNameTaken';
 import { parallelRegionals } from '../../core/model/commands/parallelRegionals';
 import { proposeRegional } from '../../core/model/commands/proposeRegional';
 import { renameHorizon } from '../../core/model/commands/renameHorizon';
@@ -27,13 +30,47 @@ function NameField({ h }: { h: DocHorizon }) {
     setText(h.name);
   }
   const commit = () => {
-    if (text.trim() && text !== h.name) useDocStore.getState().apply((d) => renameHorizon(d, h.id, text));
-    else setText(h.name);
+    const name = text.trim();
+    setText(h.name);
+    if (name === h.name) return;
+    const show = useSessionStore.getState().showMessage;
+    if (name === '') return show('error', `A horizon needs a name — kept “${h.name}”.`);
+    if (horizonNameTaken(useDocStore.getState().doc, h.id, name)) {
+      return show('error', `“${name}” is already the name of another horizon — kept “${h.name}”.`);
+    }
+    useDocStore.getState().apply((d) => renameHorizon(d, h.id, name));
   };
   return (
-    <input className="name-field" aria-label="Horizon name" value={text} data-testid={`horizon-name-${h.id}`}
+    <input className="name-field" aria-label="Horizon name" title={h.name} value={text} data-testid={`horizon-name-${h.id}`}
       onChange={(e) => setText(e.currentTarget.value)} onBlur={commit}
-      onKeyDown={(e) => e.key === 'Enter' && e.currentTarget.blur()} />
+      onKeyDown={(e) => {
+        if (e.key === 'Enter') e.currentTarget.blur();
+        if (e.key === 'Escape') {
+          setText(h.name);
+          e.currentTarget.blur();
+        }
+      }} />
+  );
+}
+
+/** An eye, struck through when the horizon is hidden. */
+function EyeIcon({ on }: { on: boolean }) {
+  return (
+    <svg viewBox="0 0 16 16" width="14" height="14" aria-hidden focusable="false">
+      <path d="M1.2 8S3.8 3.6 8 3.6 14.8 8 14.8 8 12.2 12.4 8 12.4 1.2 8 1.2 8Z" fill="none" stroke="currentColor" strokeWidth="1.3" />
+      <circle cx="8" cy="8" r="2.1" fill="currentColor" />
+      {!on && <path d="M2.5 13.5 13.5 2.5" stroke="currentColor" strokeWidth="1.5" />}
+    </svg>
+  );
+}
+
+/** A padlock, closed when the horizon is locked against editing. */
+function LockIcon({ on }: { on: boolean }) {
+  return (
+    <svg viewBox="0 0 16 16" width="14" height="14" aria-hidden focusable="false">
+      <rect x="3.5" y="7.2" width="9" height="6.8" rx="1" fill={on ? 'currentColor' : 'none'} stroke="currentColor" strokeWidth="1.2" />
+      <path d={on ? 'M5.4 7.2V5.3a2.6 2.6 0 0 1 5.2 0v1.9' : 'M5.4 7.2V5.3a2.6 2.6 0 0 1 5.2 0'} fill="none" stroke="currentColor" strokeWidth="1.4" />
+    </svg>
   );
 }
 
@@ -41,19 +78,21 @@ function HorizonRow({ h, index, count, selected }: { h: DocHorizon; index: numbe
   const apply = useDocStore((s) => s.apply);
   const select = useSessionStore((s) => s.selectHorizon);
   return (
-    <li className={`horizon-row${selected ? ' selected' : ''}`} data-testid={`horizon-row-${h.id}`} onClick={() => select(h.id)}>
+    <li className={`horizon-row${selected ? ' selected' : ''}${h.visible ? '' : ' hidden-horizon'}`} data-testid={`horizon-row-${h.id}`} onClick={() => select(h.id)}>
       <span className="swatch" style={{ background: h.colour }} aria-hidden />
       <NameField h={h} />
-      <button type="button" className="icon" aria-label={`Move ${h.name} up (younger)`} disabled={index === 0} onClick={() => apply((d) => reorderHorizons(d, index, index - 1))}>↑</button>
-      <button type="button" className="icon" aria-label={`Move ${h.name} down (older)`} disabled={index === count - 1} onClick={() => apply((d) => reorderHorizons(d, index, index + 1))}>↓</button>
-      <label className="check" title="Show">
-        <input type="checkbox" checked={h.visible} aria-label={`Show ${h.name}`} onChange={(e) => apply((d) => setHorizonStyle(d, h.id, { visible: e.currentTarget.checked }))} />
-        show
-      </label>
-      <label className="check" title="Lock against editing">
-        <input type="checkbox" checked={h.locked} aria-label={`Lock ${h.name}`} onChange={(e) => apply((d) => setHorizonStyle(d, h.id, { locked: e.currentTarget.checked }))} />
-        lock
-      </label>
+      <span className="row-order">
+        <button type="button" className="row-icon" aria-label={`Move ${h.name} up (younger)`} title="Move up (younger)" disabled={index === 0} onClick={() => apply((d) => reorderHorizons(d, index, index - 1))}>▲</button>
+        <button type="button" className="row-icon" aria-label={`Move ${h.name} down (older)`} title="Move down (older)" disabled={index === count - 1} onClick={() => apply((d) => reorderHorizons(d, index, index + 1))}>▼</button>
+      </span>
+      <button type="button" className={`row-toggle${h.visible ? ' on' : ''}`} aria-pressed={h.visible} aria-label={`Show ${h.name}`} data-testid={`horizon-show-${h.id}`}
+        title={h.visible ? 'Shown on the section: click to hide' : 'Hidden: click to show'} onClick={() => apply((d) => setHorizonStyle(d, h.id, { visible: !h.visible }))}>
+        <EyeIcon on={h.visible} />
+      </button>
+      <button type="button" className={`row-toggle${h.locked ? ' on' : ''}`} aria-pressed={h.locked} aria-label={`Lock ${h.name}`} data-testid={`horizon-lock-${h.id}`}
+        title={h.locked ? 'Locked against editing: click to unlock' : 'Editable: click to lock against editing'} onClick={() => apply((d) => setHorizonStyle(d, h.id, { locked: !h.locked }))}>
+        <LockIcon on={h.locked} />
+      </button>
     </li>
   );
 }

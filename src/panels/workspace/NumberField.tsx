@@ -1,5 +1,10 @@
-// A number field that commits on Enter or when it loses focus (one undo entry per value typed).
+// A number field that commits on Enter or when it loses focus (one undo entry per value typed). Text that
+// is not a usable number keeps the value shown and says so (readNumberInput); Esc drops the typing quietly.
 import { useEffect, useRef, useState } from 'react';
+import { useSessionStore } from '../../state/sessionStore';
+import { readNumberInput } from './readNumberInput';
+
+export { parseNumber } from './readNumberInput';
 
 interface Props {
   value: number | null;
@@ -8,22 +13,22 @@ interface Props {
   testId?: string;
   focusKey?: number;
   width?: number;
+  /** Why a finite value is refused (shown as a message), or null to accept it. */
+  check?: (v: number) => string | null;
 }
 
-/** Parses "1 234,5" or "1234.5" or "−12" to a number; NaN when not a number. */
-export function parseNumber(text: string): number {
-  const t = text.trim().replace(/\u2212/g, '-').replace(/\s+/g, '');
-  const normal = /^-?\d+,\d+$/.test(t) ? t.replace(',', '.') : t;
-  return normal === '' ? Number.NaN : Number(normal);
-}
+const textOf = (v: number | null) => (v === null ? '' : String(v));
 
-export function NumberField({ value, onCommit, label, testId, focusKey, width = 84 }: Props) {
-  const [text, setText] = useState(value === null ? '' : String(value));
+export function NumberField({ value, onCommit, label, testId, focusKey, width = 84, check }: Props) {
+  const [text, setText] = useState(textOf(value));
   const [shown, setShown] = useState(value);
   const ref = useRef<HTMLInputElement>(null);
+  // Only typing commits: leaving the field untouched keeps the stored value, however it is rounded on screen.
+  const edited = useRef(false);
   if (shown !== value) {
     setShown(value);
-    setText(value === null ? '' : String(value));
+    setText(textOf(value));
+    edited.current = false;
   }
   useEffect(() => {
     if (focusKey === undefined || focusKey <= 0) return;
@@ -36,14 +41,24 @@ export function NumberField({ value, onCommit, label, testId, focusKey, width = 
   }, [focusKey]);
   const discard = useRef(false);
   const commit = () => {
-    const v = discard.current ? Number.NaN : parseNumber(text);
+    const dropped = discard.current || !edited.current;
     discard.current = false;
-    if (Number.isFinite(v) && v !== value) onCommit(v);
-    else setText(value === null ? '' : String(value));
+    edited.current = false;
+    const read = dropped ? { kind: 'keep' as const, message: null } : readNumberInput(text, value, check);
+    // The field then shows the value as stored (a new value arrives through `value` and replaces this).
+    setText(textOf(value));
+    if (read.kind === 'commit') {
+      onCommit(read.value);
+      return;
+    }
+    if (read.message) useSessionStore.getState().showMessage('error', `${label}: ${read.message}.`);
   };
   return (
     <input ref={ref} className="number-field" style={{ width }} aria-label={label} data-testid={testId} inputMode="decimal" value={text}
-      onChange={(e) => setText(e.currentTarget.value)} onBlur={commit}
+      onChange={(e) => {
+        edited.current = true;
+        setText(e.currentTarget.value);
+      }} onBlur={commit}
       onKeyDown={(e) => {
         // Leaving the field commits (once), so Enter only leaves it.
         if (e.key === 'Enter') e.currentTarget.blur();

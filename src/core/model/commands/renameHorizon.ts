@@ -1,8 +1,10 @@
 import type { ProjectDoc } from '../projectDoc';
+import { horizonNameTaken } from './horizonNameTaken';
 import { updateHorizon } from './updateHorizon';
 
-/** Returns the document with the horizon renamed (trimmed); unchanged for an empty or identical name. */
+/** Returns the document with the horizon renamed (trimmed); unchanged for an empty or identical name, or one another horizon has. */
 export function renameHorizon(doc: ProjectDoc, horizonId: string, name: string): ProjectDoc {
   const trimmed = name.trim();
+  if (horizonNameTaken(doc, horizonId, trimmed)) return doc;
   return updateHorizon(doc, horizonId, (h) => (trimmed === '' || trimmed === h.name ? h : { ...h, name: trimmed }));
 }

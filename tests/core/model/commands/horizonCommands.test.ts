@@ -6,6 +6,7 @@ import { deleteVertex } from '../../../../src/core/model/commands/deleteVertex';
 import { insertVertex } from '../../../../src/core/model/commands/insertVertex';
 import { moveHorizon } from '../../../../src/core/model/commands/moveHorizon';
 import { moveVertex } from '../../../../src/core/model/commands/moveVertex';
+import { horizonNameTaken } from '../../../../src/core/model/commands/horizonNameTaken';
 import { renameHorizon } from '../../../../src/core/model/commands/renameHorizon';
 import { reorderHorizons } from '../../../../src/core/model/commands/reorderHorizons';
 import { setHorizonPoints } from '../../../../src/core/model/commands/setHorizonPoints';
@@ -87,6 +88,19 @@ describe('horizon commands', () => {
     expect(setHorizonStyle(doc, 'h2', { visible: true })).toBe(doc);
     expect(reorderHorizons(doc, 0, 1).horizons.map((k) => k.id)).toEqual(['h2', 'h1']);
     expect(reorderHorizons(doc, 0, 5)).toBe(doc);
+  });
+
+  it('renameHorizon(doc, id, name) refuses a name another horizon has, so the section never holds one name twice', () => {
+    const doc = fixtureDoc(); // h1 "Upper", h2 "Lower"
+    expect(horizonNameTaken(doc, 'h1', ' Lower ')).toBe(true);
+    expect(horizonNameTaken(doc, 'h1', 'Upper')).toBe(false);
+    expect(horizonNameTaken(doc, 'h1', '   ')).toBe(false);
+    expect(renameHorizon(doc, 'h1', 'Lower')).toBe(doc);
+    expect(renameHorizon(doc, 'h1', '  Lower  ')).toBe(doc);
+    // Names differ by case only are distinct names for the analysis (it compares names exactly).
+    expect(h(renameHorizon(doc, 'h1', 'lower'), 'h1').name).toBe('lower');
+    const renamed = renameHorizon(doc, 'h1', 'Middle');
+    expect(new Set(renamed.horizons.map((k) => k.name)).size).toBe(renamed.horizons.length);
   });
 
   it('deleteHorizon(doc, id) removes the horizon with its regionals and exclusions in every scenario', () => {

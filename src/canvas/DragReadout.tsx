@@ -1,0 +1,52 @@
+// A small label beside the pointer while a regional handle or a pin is dragged, with the dragged point's
+// section z (regional) or x (pin). Updated straight on the element from the store and the pointer, never
+// through React state, so a drag does not re-render anything.
+import { useEffect, useRef } from 'react';
+import { useDocStore } from '../state/docStore';
+import { useSessionStore } from '../state/sessionStore';
+import { dragReadoutText } from '../tools/dragReadoutText';
+import './dragReadout.css';
+
+/** Offset of the label from the pointer, in screen pixels (right and above, clear of the handle). */
+const OFFSET_X = 14;
+const OFFSET_Y = -26;
+
+export function DragReadout() {
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    const el = ref.current;
+    const box = el?.parentElement;
+    if (!el || !box) return;
+    let pointer = { x: 0, y: 0 };
+    const show = () => {
+      const { doc, gestureStart } = useDocStore.getState();
+      const { activeTool, camera } = useSessionStore.getState();
+      const text = gestureStart ? dragReadoutText(doc, gestureStart, activeTool, camera.scale) : null;
+      if (!text) {
+        el.hidden = true;
+        return;
+      }
+      el.textContent = text;
+      el.hidden = false;
+      const r = box.getBoundingClientRect();
+      const x = Math.min(Math.max(pointer.x - r.left + OFFSET_X, 4), Math.max(4, r.width - el.offsetWidth - 4));
+      const y = Math.min(Math.max(pointer.y - r.top + OFFSET_Y, 4), Math.max(4, r.height - el.offsetHeight - 4));
+      el.style.transform = `translate(${Math.round(x)}px, ${Math.round(y)}px)`;
+    };
+    const onMove = (e: PointerEvent) => {
+      pointer = { x: e.clientX, y: e.clientY };
+    };
+    // Capture phase: the pointer is known before the tool's own move handler edits the document.
+    window.addEventListener('pointermove', onMove, true);
+    window.addEventListener('pointerdown', onMove, true);
+    const unsubscribe = useDocStore.subscribe((s, prev) => {
+      if (s.doc !== prev.doc || s.gestureStart !== prev.gestureStart) show();
+    });
+    return () => {
+      window.removeEventListener('pointermove', onMove, true);
+      window.removeEventListener('pointerdown', onMove, true);
+      unsubscribe();
+    };
+  }, []);
+  return <div ref={ref} className="drag-readout" data-testid="drag-readout" hidden aria-live="off" />;
+}
