@@ -157,8 +157,16 @@ export function toolPointerDown(evt: PointerEvent): void {
   dispatchToolEvent({ type: 'pointerDown', p: imagePoint(boxElement, evt.clientX, evt.clientY), button: evt.button, clicks: clickCount(evt), shift: evt.shiftKey, alt: evt.altKey });
 }
 
+/** True when a key belongs to a field or control that has focus (typing, or Enter/Space on a button or link). */
 function isTyping(target: EventTarget | null): boolean {
-  return target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement || target instanceof HTMLSelectElement || (target instanceof HTMLElement && target.isContentEditable);
+  return (
+    target instanceof HTMLInputElement ||
+    target instanceof HTMLTextAreaElement ||
+    target instanceof HTMLSelectElement ||
+    target instanceof HTMLButtonElement ||
+    target instanceof HTMLAnchorElement ||
+    (target instanceof HTMLElement && target.isContentEditable)
+  );
 }
 
 /** Keys for the tools; the tool shortcuts (v, c, d, e, j, p, r) switch tools. */

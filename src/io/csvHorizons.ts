@@ -3,6 +3,7 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
+import { cleanCoordinate } from './cleanCoordinate';
 import { parseCsvRows, toCsv } from './csvText';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
@@ -75,10 +76,10 @@ export function parseHorizonsCsv(text: string): HorizonImport {
   return { ok: true, horizons, units, problems };
 }
 
-/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (RULES.md: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header. */
+/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (RULES.md: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header; coordinates rounded to 1e-6 unit (cleanCoordinate). */
 export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit): string {
   const rows: (string | number)[][] = [['horizon', `x_${units}`, `z_${units}`]];
-  for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, x, z]);
+  for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, cleanCoordinate(x), cleanCoordinate(z)]);
   // Written unquoted so the line starts with '#', the comment mark our parser (and most CSV readers) skip.
   return `# caution: ${SECTION_CAUTION.replace(/[\r\n]+/g, ' ')}\r\n${toCsv(rows)}`;
 }

@@ -6,8 +6,11 @@ import { imageToSection } from '../core/calibration/mapPoints';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
+import type { Section } from '../core/model/section';
 import type { DocAnalysis } from '../state/selectors';
+import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
 import { toCsv } from './csvText';
+import type { UncertaintyReport } from './uncertaintyReport';
 
 /** Returns every horizon of the document in section units (empty when the document has no usable calibration). */
 export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
@@ -17,19 +20,30 @@ export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
   return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => ({ name: h.name, line: h.pointsPx.map((p) => imageToSection(fit, p)) }));
 }
 
+/** Returns the section with every coordinate, pin and reference rounded to 1e-6 unit (cleanCoordinate), for writing to a file. */
+export function cleanSection(section: Section): Section {
+  return {
+    ...section,
+    pins: [cleanCoordinate(section.pins[0]), cleanCoordinate(section.pins[1])],
+    ...(section.referenceElevation !== undefined ? { referenceElevation: cleanCoordinate(section.referenceElevation) } : {}),
+    horizons: section.horizons.map((h) => ({ ...h, line: h.line.map(cleanPoint), regional: h.regional.map(cleanPoint) })),
+  };
+}
+
 /** Returns the section file (the command line's input, JSON, with a "caution" key) of the active scenario, or a message saying what is missing. */
 export function sectionFileText(analysis: DocAnalysis): { ok: true; text: string } | { ok: false; message: string } {
   const ds = analysis.docSection;
   if (!ds.ok) return { ok: false, message: `No section file yet: ${ds.message}` };
   if (ds.section.horizons.length === 0) return { ok: false, message: 'No section file yet: no horizon has a regional.' };
   // validateSection (the command line's reader) ignores keys it does not know, so the caution rides along.
-  return { ok: true, text: JSON.stringify({ ...ds.section, caution: SECTION_CAUTION }, null, 1) };
+  return { ok: true, text: JSON.stringify({ ...cleanSection(ds.section), caution: SECTION_CAUTION }, null, 1) };
 }
 
-const r = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(10)));
+// Ten significant digits, and a magnitude below 1e-9 (rounding residue of an exact fit) written as 0, never "-0".
+const r = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Math.abs(v) < 1e-9 ? 0 : Number(v.toPrecision(10)));
 
-/** Returns the results table of the analysis as CSV (one row per horizon, then the area–depth line and the caution), or null when there are no results. */
-export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis): string | null {
+/** Returns the results table of the analysis as CSV (one row per horizon, then the area–depth line, the last Monte Carlo run and the caution), or null when there are no results. */
+export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: UncertaintyReport | null = null): string | null {
   const out = analysis.outcome;
   if (!out || !out.ok) return null;
   const a = out.analysis;
@@ -52,6 +66,11 @@ export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis): string | nul
     rows.push([`detachment_elevation_${u}`, r(ad.detachmentElevation), null, null]);
     rows.push(['r2', r(ad.r2), null, null]);
     rows.push(['horizons_in_fit', ad.n, null, null]);
+  }
+  if (uncertainty) {
+    rows.push(['sensitivity_amplification_1_plus_W0_over_D', r(uncertainty.amplification), null, null]);
+    if (uncertainty.status === 'none') rows.push(['# monte carlo', uncertainty.lines[0]]);
+    for (const [name, v] of uncertainty.rows) rows.push([name, typeof v === 'number' ? r(v) : v, null, null]);
   }
   for (const n of a.notes) rows.push(['# note', n]);
   rows.push(['# caution', SECTION_CAUTION]);

@@ -4,6 +4,7 @@ import { featureCollection, lineString } from '@turf/helpers';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
+import { cleanPoint } from './cleanCoordinate';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 function isObject(v: unknown): v is Record<string, unknown> {
@@ -67,9 +68,9 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
   return { ok: true, horizons, units, problems };
 }
 
-/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties, and the caution as a top-level "caution" member. */
+/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties, and the caution as a top-level "caution" member; coordinates rounded to 1e-6 unit (cleanCoordinate). */
 export function writeHorizonsGeoJson(horizons: ImportedHorizon[], units: LengthUnit): string {
-  const fc = featureCollection(horizons.map((h) => lineString(h.line.map(([x, z]) => [x, z]), { name: h.name, units })));
+  const fc = featureCollection(horizons.map((h) => lineString(h.line.map(cleanPoint), { name: h.name, units })));
   // "caution" and "units" are foreign members, which GeoJSON readers keep or ignore (RFC 7946 §6.1).
   return JSON.stringify({ ...fc, units, caution: SECTION_CAUTION }, null, 1);
 }

@@ -7,7 +7,7 @@ import { getScan, putScan, type CachedScan } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
 import { decodeScan } from './decodeScan';
 import { downloadFile, safeFileName } from './downloadFile';
-import { MAX_PROJECT_FILE_BYTES, parseProjectText, serializeProject, type ScanBytes } from './projectFile';
+import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from './projectFile';
 
 /** Fits the view to the scan, or to the drawn lines when there is no scan. */
 export function fitViewToDoc(doc: ProjectDoc): void {
@@ -22,6 +22,16 @@ export function fitViewToDoc(doc: ProjectDoc): void {
   const [u0, v0] = [Math.min(...us), Math.min(...vs)];
   const cam = fitCamera(Math.max(...us) - u0 + 1, Math.max(...vs) - v0 + 1, viewport.width, viewport.height, 48);
   setCamera({ scale: cam.scale, x: cam.x - u0 * cam.scale, y: cam.y - v0 * cam.scale });
+}
+
+/**
+ * Returns the notes to show after opening: a file without its scan whose scan is still open in this
+ * browser (same scan id in the cache) is shown with it, so say that instead of "open the image again".
+ */
+export function openNotes(notes: string[], doc: ProjectDoc, scanInFile: boolean): string[] {
+  if (!doc.scan || scanInFile || !getScan(doc.scan.id)) return notes;
+  const name = doc.scan.name;
+  return notes.map((n) => (n.includes(SCAN_NOT_STORED_MARK) ? `The file has no scan; showing "${name}", still open in this browser (save again to store it in the file).` : n));
 }
 
 /** Returns true when there are no unsaved changes or the user agrees to discard them (asked with the question). */
@@ -74,7 +84,7 @@ export async function openProjectFile(file: File): Promise<boolean> {
     if (decodedScan && doc.scan) putScan(doc.scan.id, decodedScan);
     useDocStore.getState().replace(doc);
     fitViewToDoc(doc);
-    session.showMessage('info', [`Opened ${file.name}.`, ...opened.notes].join(' '));
+    session.showMessage('info', [`Opened ${file.name}.`, ...openNotes(opened.notes, doc, Boolean(scan))].join(' '));
     return true;
   } finally {
     session.setBusy(null);

@@ -12,6 +12,9 @@ import { checkedText, contentCheck } from '../core/model/migrations/contentCheck
 /** Largest project file opened, in bytes (a 200-megapixel scan fits; base64 adds a third). */
 export const MAX_PROJECT_FILE_BYTES = 600 * 1024 * 1024;
 
+/** Words of the note given when a project file's scan is not stored in it (the open action rewords it when the scan is still cached). */
+export const SCAN_NOT_STORED_MARK = 'is not stored in this file';
+
 export interface ScanBytes { type: string; name: string; bytes: Uint8Array }
 
 export type OpenedProject =
@@ -77,7 +80,7 @@ function parse(text: string, fileName: string): OpenedProject {
     if (!bytes) return { ok: false, message: `${who}: the embedded scan is damaged (not valid base64).` };
     scanBytes = { type: scan.type, name: scan.name, bytes };
   } else if (doc.scan) {
-    notes.push(`The scan "${doc.scan.name}" is not stored in this file; open the image again to see it.`);
+    notes.push(`The scan "${doc.scan.name}" ${SCAN_NOT_STORED_MARK}; open the image again to see it.`);
   }
   return { ok: true, doc, scan: scanBytes, kind: 'project', migratedFrom: migrated.migratedFrom, notes };
 }

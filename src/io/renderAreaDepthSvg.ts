@@ -1,14 +1,29 @@
-// The area–depth graph (Epard & Groshong 1993) as SVG markup: excess area across, depth down,
-// the fitted line, and its crossing of zero area at the detachment depth.
+// The area–depth graph (Epard & Groshong 1993) as SVG markup: excess area across, depth down, one
+// named point per horizon (hollow when left out of the fit), the fitted line, and its crossing of zero
+// area at the detachment depth with the 95% Fieller interval as a bar (or the word "unbounded").
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
+import { isExactFit } from '../state/selectors';
+import { axisTicks } from './axisTicks';
 import { escapeXml } from './escapeXml';
-import { formatNumber, niceStep } from './formatNumber';
+import { figureAreaUnit } from './figureAreaUnit';
+import { formatNumber } from './formatNumber';
 
-function ticks(lo: number, hi: number): number[] {
-  const step = niceStep((hi - lo) / 4);
-  const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9 && out.length < 12; v += step) out.push(v);
-  return out;
+const RED = '#b3261e';
+const BLUE = '#1f6f8b';
+
+/** Returns a horizon name cut to `max` characters (with an ellipsis) for a point label. */
+export function shortName(name: string, max = 12): string {
+  const t = name.trim();
+  return t.length <= max ? t : `${t.slice(0, max - 1).trimEnd()}…`;
+}
+
+/** The detachment's interval as the graph writes it: bounded [lo, hi], or a word. */
+function intervalOf(analysis: SectionAnalysis): { lo: number; hi: number } | string {
+  const ad = analysis.areaDepth!;
+  if (isExactFit(ad)) return 'exact fit (no scatter)';
+  if (ad.detachmentDepthCI95) return { lo: ad.detachmentDepthCI95[0], hi: ad.detachmentDepthCI95[1] };
+  const k = ad.detachmentDepthInterval.kind;
+  return k === 'unbounded' ? '95% interval unbounded' : `no 95% interval (n = ${ad.n})`;
 }
 
 /** Returns an SVG <g> of the graph in the box (x, y, w, h), figure units; a note instead of a graph when there is no analysis. */
@@ -22,39 +37,70 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   }
   const u = escapeXml(analysis.units);
   const ad = analysis.areaDepth;
-  const zd = ad && !ad.noDetachment ? ad.detachmentDepth : null;
-  const areas = analysis.horizons.map((r) => r.excessArea);
+  const zd = ad && !ad.noDetachment && ad.detachmentDepth !== null && Number.isFinite(ad.detachmentDepth) ? ad.detachmentDepth : null;
+  const interval = ad && zd !== null ? intervalOf(analysis) : null;
+  const unit = figureAreaUnit(analysis.units, Math.max(0, ...analysis.horizons.map((r) => Math.abs(r.excessArea))));
+  const areas = analysis.horizons.map((r) => r.excessArea * unit.factor);
   const depths = analysis.horizons.map((r) => r.depth);
   const aLo = Math.min(0, ...areas);
-  const aHi = Math.max(...areas, aLo + 1) * 1.1;
+  const aMax = Math.max(...areas, 0);
+  const aHi = aMax > aLo ? aMax + 0.12 * (aMax - aLo) : aLo + 1;
   const dLo = Math.min(0, ...depths);
-  const dHi = Math.max(...depths, zd !== null && Number.isFinite(zd) ? zd : -Infinity, dLo + 1) * 1.1;
-  const L = x + 56, R = x + w - 12, T = y + 28, B = y + h - 36;
+  const deepest = Math.max(...depths, zd ?? -Infinity, dLo + 1);
+  // A long interval is drawn only to three times the deepest point (an arrow says it goes on).
+  const ciHi = interval && typeof interval !== 'string' ? interval.hi : -Infinity;
+  const bottom = Math.max(deepest, Math.min(ciHi, dLo + 3 * (deepest - dLo)));
+  const dHi = bottom + 0.08 * (bottom - dLo);
+  const L = x + 58, R = x + w - 14, T = y + 28, B = y + h - 38;
   const px = (a: number) => L + ((a - aLo) / (aHi - aLo)) * (R - L);
   const py = (d: number) => T + ((d - dLo) / (dHi - dLo)) * (B - T);
+  parts.unshift(`<defs><clipPath id="ad-clip"><rect x="${L}" y="${T}" width="${R - L}" height="${B - T}"/></clipPath></defs>`);
   parts.push(`<rect x="${L}" y="${T}" width="${R - L}" height="${B - T}" fill="#fbfbfa" stroke="#c4cbd1"/>`);
-  for (const a of ticks(aLo, aHi)) {
-    parts.push(`<line x1="${px(a)}" y1="${B}" x2="${px(a)}" y2="${B + 4}" stroke="#5b6975"/><text x="${px(a)}" y="${B + 15}" font-size="9" text-anchor="middle" fill="#1d2731">${formatNumber(a, 3)}</text>`);
+  const aLabel = (a: number) => formatNumber(a, 3);
+  for (const a of axisTicks(aLo, aHi, R - L, aLabel, 6)) {
+    parts.push(`<line x1="${px(a)}" y1="${B}" x2="${px(a)}" y2="${B + 4}" stroke="#5b6975"/><text x="${px(a)}" y="${B + 15}" font-size="9.5" text-anchor="middle" fill="#1d2731">${aLabel(a)}</text>`);
   }
-  for (const d of ticks(dLo, dHi)) {
-    parts.push(`<line x1="${L - 4}" y1="${py(d)}" x2="${L}" y2="${py(d)}" stroke="#5b6975"/><text x="${L - 6}" y="${py(d) + 3}" font-size="9" text-anchor="end" fill="#1d2731">${formatNumber(d, 3)}</text>`);
+  const dLabel = (d: number) => formatNumber(d, 4);
+  for (const d of axisTicks(dLo, dHi, B - T, () => 'xx', 6, 6)) {
+    parts.push(`<line x1="${L - 4}" y1="${py(d)}" x2="${L}" y2="${py(d)}" stroke="#5b6975"/><text x="${L - 6}" y="${py(d) + 3}" font-size="9.5" text-anchor="end" fill="#1d2731">${dLabel(d)}</text>`);
   }
   parts.push(`<line x1="${px(0)}" y1="${T}" x2="${px(0)}" y2="${B}" stroke="#8a949c" stroke-dasharray="3 3"/>`);
-  parts.push(`<text x="${(L + R) / 2}" y="${B + 29}" font-size="10" text-anchor="middle" fill="#1d2731">excess area (${u}²)</text>`);
-  parts.push(`<text transform="translate(${x + 12} ${(T + B) / 2}) rotate(-90)" font-size="10" text-anchor="middle" fill="#1d2731">depth below reference (${u})</text>`);
+  parts.push(`<text x="${(L + R) / 2}" y="${B + 30}" font-size="10" text-anchor="middle" fill="#1d2731">excess area (${escapeXml(unit.label)})</text>`);
+  parts.push(`<text transform="translate(${x + 13} ${(T + B) / 2}) rotate(-90)" font-size="10" text-anchor="middle" fill="#1d2731">depth below reference at elevation ${formatNumber(analysis.referenceElevation)} ${u} (${u})</text>`);
   if (ad) {
-    // The fitted line A = a + b·h drawn over the depth range of the axis.
-    const a0 = ad.intercept + ad.slope * dLo;
-    const a1 = ad.intercept + ad.slope * dHi;
-    parts.push(`<line x1="${px(a0)}" y1="${py(dLo)}" x2="${px(a1)}" y2="${py(dHi)}" stroke="#1f6f8b" stroke-width="1.5" clip-path="url(#ad-clip)"/>`);
-    parts.unshift(`<defs><clipPath id="ad-clip"><rect x="${L}" y="${T}" width="${R - L}" height="${B - T}"/></clipPath></defs>`);
+    // The fitted line A = a + b·h over the depth range of the axis (areas in the display unit).
+    const a0 = (ad.intercept + ad.slope * dLo) * unit.factor;
+    const a1 = (ad.intercept + ad.slope * dHi) * unit.factor;
+    parts.push(`<line class="fitted-line" x1="${px(a0)}" y1="${py(dLo)}" x2="${px(a1)}" y2="${py(dHi)}" stroke="${BLUE}" stroke-width="1.5" clip-path="url(#ad-clip)"/>`);
   }
-  analysis.horizons.forEach((r) => {
-    parts.push(`<circle cx="${px(r.excessArea)}" cy="${py(r.depth)}" r="4" fill="${r.included ? '#1f6f8b' : '#ffffff'}" stroke="#1f6f8b" stroke-width="1.5"><title>${escapeXml(r.name)}</title></circle>`);
-  });
-  if (zd !== null && Number.isFinite(zd)) {
-    parts.push(`<path d="M ${px(0) - 6} ${py(zd)} h 12 M ${px(0)} ${py(zd) - 6} v 12" stroke="#b3261e" stroke-width="2"/>`);
-    parts.push(`<text x="${px(0) + 8}" y="${py(zd) - 6}" font-size="10" fill="#b3261e">detachment ${formatNumber(zd)} ${u}</text>`);
+  // Points with short names; a label near the right edge goes to the left of its point, and one that
+  // would sit on the previous label's line (points close in depth) takes the other side.
+  const order = analysis.horizons.map((r, i) => ({ r, i, cx: px(areas[i]), cy: py(depths[i]) })).sort((p, q) => p.cy - q.cy);
+  let lastY = -Infinity;
+  let lastRight = false;
+  for (const { r, cx, cy } of order) {
+    parts.push(`<circle cx="${cx}" cy="${cy}" r="4" fill="${r.included ? BLUE : '#ffffff'}" stroke="${BLUE}" stroke-width="1.5"><title>${escapeXml(r.name)}</title></circle>`);
+    let right = cx < R - 70;
+    if (Math.abs(cy - lastY) < 11 && right === lastRight) right = !right && cx > L + 70;
+    const text = escapeXml(shortName(r.name) + (r.included ? '' : ' (out)'));
+    parts.push(`<text class="point-label" x="${right ? cx + 7 : cx - 7}" y="${cy + 3.5}" font-size="9" text-anchor="${right ? 'start' : 'end'}" fill="#1d2731">${text}</text>`);
+    lastY = cy;
+    lastRight = right;
+  }
+  if (zd !== null && interval !== null) {
+    const cx = px(0);
+    if (typeof interval !== 'string') {
+      const [ya, yb] = [py(interval.lo), py(Math.min(interval.hi, dHi))];
+      const cut = interval.hi > dHi;
+      parts.push(`<path class="fieller-bar" d="M ${cx} ${ya} V ${yb} M ${cx - 5} ${ya} h 10${cut ? '' : ` M ${cx - 5} ${yb} h 10`}" stroke="${RED}" stroke-width="1.6" fill="none"/>`);
+      if (cut) parts.push(`<path d="M ${cx - 4} ${yb - 6} L ${cx} ${yb} L ${cx + 4} ${yb - 6}" stroke="${RED}" stroke-width="1.6" fill="none"/>`);
+    }
+    parts.push(`<circle cx="${cx}" cy="${py(zd)}" r="4.5" fill="${RED}"/>`);
+    const words = typeof interval === 'string' ? interval : `95%: ${formatNumber(interval.lo)}–${formatNumber(interval.hi)} ${u}`;
+    parts.push(`<text x="${cx + 9}" y="${py(zd) - 4}" font-size="10" font-weight="bold" fill="${RED}">detachment ${formatNumber(zd)} ${u}</text>`);
+    parts.push(`<text x="${cx + 9}" y="${py(zd) + 9}" font-size="9.5" fill="${RED}">${escapeXml(words)}</text>`);
+  } else if (ad && ad.noDetachment) {
+    parts.push(`<text x="${L + 6}" y="${B - 8}" font-size="10" fill="${RED}">no detachment: area does not decrease with depth</text>`);
   }
   parts.push('</g>');
   return parts.join('');

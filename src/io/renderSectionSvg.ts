@@ -1,6 +1,7 @@
-// The annotated section as one SVG document: scan, horizons, regionals, pins, excess-area fills,
-// detachment and its 95% band, legend, scale bar, vertical exaggeration, title block, an inset
-// area–depth graph and the caution. Pure: the same input always gives the same string; every
+// The annotated section as one SVG document: scan, horizons, regionals, pins, excess-area fills
+// (orange above the regional, blue below, as on the canvas), detachment and its 95% band, the
+// reference level of the depths, elevation and distance scales, legend of what is drawn, scale bar,
+// vertical exaggeration, title block, an inset area–depth graph and the caution. Pure: the same input always gives the same string; every
 // user string is escaped (escapeXml), so a hostile name stays text.
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { sectionToImage } from '../core/calibration/mapPoints';
@@ -11,14 +12,20 @@ import { toCoordinateArrays } from '../core/geometry/toCoordinateArrays';
 import { activeScenario } from '../core/model/docToSection';
 import type { ImagePx, ProjectDoc } from '../core/model/projectDoc';
 import type { XZ } from '../core/model/section';
-import type { DocAnalysis } from '../state/selectors';
+import { isExactFit, type DocAnalysis } from '../state/selectors';
 import { areaDepthGroup } from './renderAreaDepthSvg';
 import { escapeXml } from './escapeXml';
 import { formatNumber, niceStep } from './formatNumber';
+import { halo, sectionAxes } from './sectionFigureAxes';
 
 export const FIGURE_WIDTH = 1400;
 export const FIGURE_HEIGHT = 990;
-const PANEL = { x: 30, y: 96, w: 970, h: 700 };
+// Room on the left for the elevation labels and below for the distance labels.
+const PANEL = { x: 92, y: 96, w: 908, h: 690 };
+/** The canvas's excess-area fills (src/canvas/ShapesLayer.tsx FILL_ABOVE / FILL_BELOW): orange above the regional, blue below. */
+export const FIGURE_FILL_ABOVE = { colour: 'rgb(232, 121, 30)', opacity: 0.3 };
+export const FIGURE_FILL_BELOW = { colour: 'rgb(38, 104, 199)', opacity: 0.3 };
+const RED = '#b3261e';
 
 export interface SectionFigureInput {
   doc: ProjectDoc;
@@ -57,7 +64,10 @@ function wrap(text: string, width: number): string[] {
   return lines;
 }
 
-function legend(doc: ProjectDoc, hasDetachment: boolean, x: number, y: number): string {
+/** What the drawing holds, so that the legend lists only that. */
+interface Drawn { regionals: boolean; pins: boolean; above: boolean; below: boolean; projected: boolean; detachment: boolean; band: boolean; reference: boolean }
+
+function legendRows(doc: ProjectDoc, drawn: Drawn, x: number, y: number): { svg: string; bottom: number } {
   const rows: string[] = [];
   const shown = doc.horizons.filter((h) => h.visible).slice(0, 12);
   let yy = y + 38;
@@ -69,19 +79,35 @@ function legend(doc: ProjectDoc, hasDetachment: boolean, x: number, y: number): 
   if (more > 0) { rows.push(`<text x="${x + 48}" y="${yy}" font-size="11">… and ${more} more</text>`); yy += 17; }
   yy += 4;
   const line = (stroke: string, w: number, dash = '') => (yy: number) => `<line x1="${x + 10}" y1="${yy - 4}" x2="${x + 40}" y2="${yy - 4}" stroke="${stroke}" stroke-width="${w}"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`;
-  const box = (fill: string, opacity: number) => (yy: number) => `<rect x="${x + 10}" y="${yy - 10}" width="30" height="10" fill="${fill}" fill-opacity="${opacity}"/>`;
-  const key: [string, (yy: number) => string][] = [
-    ['regional (dashed, per horizon)', line('#444', 1.5, '7 4')],
-    ['pin', (yy) => `<line x1="${x + 25}" y1="${yy - 11}" x2="${x + 25}" y2="${yy + 3}" stroke="#20323f" stroke-width="2"/>`],
-    ['excess area (between horizon and regional)', box('#1f77b4', 0.25)],
-    ['projected (interpreted) segment', line('#444', 2.5, '3 3')],
-  ];
-  if (hasDetachment) key.push(['estimated detachment', line('#b3261e', 3)], ['95% interval on its depth', box('#b3261e', 0.15)]);
+  const box = (fill: string, opacity: number) => (yy: number) => `<rect x="${x + 10}" y="${yy - 10}" width="30" height="10" fill="${fill}" fill-opacity="${opacity}" stroke="${fill}" stroke-opacity="0.6" stroke-width="0.6"/>`;
+  const key: [string, (yy: number) => string][] = [];
+  if (drawn.regionals) key.push(['regional (dashed, in the horizon’s colour)', line('#444', 1.5, '7 4')]);
+  if (drawn.pins) key.push(['pin', (yy) => `<line x1="${x + 25}" y1="${yy - 11}" x2="${x + 25}" y2="${yy + 3}" stroke="#20323f" stroke-width="2"/>`]);
+  if (drawn.above || drawn.below) {
+    key.push(['excess area above the regional (added)', box(FIGURE_FILL_ABOVE.colour, FIGURE_FILL_ABOVE.opacity + 0.1)]);
+    key.push(['excess area below the regional (subtracted)', box(FIGURE_FILL_BELOW.colour, FIGURE_FILL_BELOW.opacity + 0.1)]);
+  }
+  if (drawn.projected) key.push(['projected (interpreted) segment', (yy) => `${line('#444', 2.5)(yy)}${line('#ffffff', 1.6, '3 3')(yy)}`]);
+  if (drawn.reference) key.push(['reference level: depths are measured below it', line('#1d2731', 1.3, '10 3 2 3')]);
+  if (drawn.detachment) key.push(['estimated detachment', line(RED, 3)]);
+  if (drawn.band) key.push(['95% interval on its depth (Fieller)', box(RED, 0.15)]);
   for (const [label, mark] of key) {
     rows.push(`${mark(yy)}<text x="${x + 48}" y="${yy}" font-size="11">${label}</text>`);
     yy += 17;
   }
-  return `<g class="legend"><rect x="${x}" y="${y}" width="340" height="${yy - y + 4}" fill="#ffffff" stroke="#9aa5ad"/><text x="${x + 10}" y="${y + 18}" font-size="12" font-weight="bold">Legend</text>${rows.join('')}</g>`;
+  const bottom = yy + 4;
+  return { svg: `<g class="legend"><rect x="${x}" y="${y}" width="340" height="${bottom - y}" fill="#ffffff" stroke="#9aa5ad"/><text x="${x + 10}" y="${y + 18}" font-size="12" font-weight="bold">Legend</text>${rows.join('')}</g>`, bottom };
+}
+
+/** Returns the regional's z at x by linear interpolation along its clipped vertices (x increasing). */
+function zAt(xs: ArrayLike<number>, zs: ArrayLike<number>, x: number): number {
+  for (let i = 1; i < xs.length; i++) {
+    if (x <= xs[i] || i === xs.length - 1) {
+      const t = xs[i] === xs[i - 1] ? 0 : (x - xs[i - 1]) / (xs[i] - xs[i - 1]);
+      return zs[i - 1] + t * (zs[i] - zs[i - 1]);
+    }
+  }
+  return zs[0];
 }
 
 /** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. */
@@ -92,10 +118,11 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   const fit = ds.fit;
   const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
   const ad = result?.areaDepth ?? null;
+  const hasDetachment = Boolean(fit && ds.ok && ad && !ad.noDetachment && ad.detachmentElevation !== null && result);
   // Without a scan the drawing is framed to show the detachment and its band as well.
   const extra: ImagePx[] = [];
-  if (fit && ds.ok && ad && !ad.noDetachment && ad.detachmentElevation !== null && result) {
-    const els = [ad.detachmentElevation, ...(ad.detachmentDepthCI95 ?? []).map((d) => result.referenceElevation - d)];
+  if (fit && ds.ok && ad && hasDetachment && result) {
+    const els = [ad.detachmentElevation as number, ...(ad.detachmentDepthCI95 ?? []).map((d) => result.referenceElevation - d)];
     for (const e of els) extra.push(sectionToImage(fit, [ds.section.pins[0], e]), sectionToImage(fit, [ds.section.pins[1], e]));
   }
   const [u0, v0, u1, v1] = extentPx(doc, extra.filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])));
@@ -103,20 +130,24 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   const ox = PANEL.x + (PANEL.w - (u1 - u0) * k) / 2 - u0 * k;
   const oy = PANEL.y + (PANEL.h - (v1 - v0) * k) / 2 - v0 * k;
   const fig: Fig = (p) => [ox + p[0] * k, oy + p[1] * k];
+  const drawn: Drawn = { regionals: false, pins: false, above: false, below: false, projected: false, detachment: false, band: false, reference: false };
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" viewBox="0 0 ${FIGURE_WIDTH} ${FIGURE_HEIGHT}" font-family="DejaVu Sans, sans-serif" fill="#1d2731">`);
-  out.push(`<defs><clipPath id="panel-clip"><rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}"/></clipPath></defs>`);
+  const defs: string[] = [`<clipPath id="panel-clip"><rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}"/></clipPath>`];
   out.push(`<rect width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" fill="#ffffff"/>`);
-  // Title block.
-  out.push(`<g class="title-block"><rect x="${PANEL.x}" y="16" width="${FIGURE_WIDTH - 60}" height="66" fill="#f3f5f7" stroke="#9aa5ad"/>`);
-  out.push(`<text x="${PANEL.x + 12}" y="44" font-size="22" font-weight="bold">${escapeXml(doc.title.slice(0, 120))}</text>`);
-  out.push(`<text x="${PANEL.x + 12}" y="70" font-size="12">Author: ${escapeXml(doc.author.slice(0, 80) || '—')}   ·   Date: ${escapeXml(date)}   ·   Scenario: ${escapeXml(scenario.name.slice(0, 80))}</text>`);
+  // Title block: title, byline, then the headline result on a line of its own.
   const u = escapeXml(doc.units);
+  out.push(`<g class="title-block"><rect x="30" y="14" width="${FIGURE_WIDTH - 60}" height="72" fill="#f3f5f7" stroke="#9aa5ad"/>`);
+  out.push(`<text x="42" y="40" font-size="22" font-weight="bold">${escapeXml(doc.title.slice(0, 100))}</text>`);
+  out.push(`<text x="${FIGURE_WIDTH - 42}" y="40" font-size="12" text-anchor="end">Author: ${escapeXml(doc.author.slice(0, 60) || '—')}   ·   Date: ${escapeXml(date)}   ·   Scenario: ${escapeXml(scenario.name.slice(0, 60))}</text>`);
+  const ref = result ? `the reference at elevation ${formatNumber(result.referenceElevation)} ${u}` : 'the reference';
+  const ciText = ad && isExactFit(ad) ? ' (exact fit, no scatter: no interval)'
+    : ad?.detachmentDepthCI95 ? ` (95%: ${formatNumber(ad.detachmentDepthCI95[0])}–${formatNumber(ad.detachmentDepthCI95[1])} ${u})`
+    : ad && ad.detachmentDepthInterval.kind === 'unbounded' ? ' (95% interval unbounded)' : '';
   const headline = ad && !ad.noDetachment && ad.detachmentDepth !== null
-    ? `Detachment ${formatNumber(ad.detachmentDepth)} ${u} below reference${ad.detachmentDepthCI95 ? ` (95%: ${formatNumber(ad.detachmentDepthCI95[0])}–${formatNumber(ad.detachmentDepthCI95[1])})` : ''}; elevation ${formatNumber(ad.detachmentElevation)} ${u}; displacement ${formatNumber(ad.displacement)} ${u}`
+    ? `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}: ${formatNumber(ad.detachmentDepth)} ${u} below ${ref}${ciText}; displacement ${formatNumber(ad.displacement)} ${u}; r² = ${ad.r2.toFixed(4)} over ${ad.n} horizons`
     : ad && ad.noDetachment ? 'No detachment below these horizons (area does not decrease with depth).'
     : `No area–depth result: ${ds.ok ? (analysis.outcome && !analysis.outcome.ok ? analysis.outcome.problems[0]?.message ?? 'input problems' : 'fewer than two horizons with regionals') : ds.message}`;
-  out.push(`<text x="${FIGURE_WIDTH - 42}" y="44" font-size="13" text-anchor="end">${escapeXml(headline.slice(0, 170))}</text></g>`);
+  out.push(`<text x="42" y="70" font-size="13.5">${escapeXml(headline.slice(0, 200))}</text></g>`);
   // The section panel.
   out.push(`<rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}" fill="#fbfbfa" stroke="#9aa5ad"/>`);
   out.push('<g clip-path="url(#panel-clip)">');
@@ -124,10 +155,10 @@ export function renderSectionSvg(input: SectionFigureInput): string {
     const [a, b] = [fig([0, 0]), fig([doc.scan.widthPx, doc.scan.heightPx])];
     out.push(`<image x="${a[0]}" y="${a[1]}" width="${b[0] - a[0]}" height="${b[1] - a[1]}" preserveAspectRatio="none" opacity="0.85" href="${escapeXml(scanDataUrl)}" xlink:href="${escapeXml(scanDataUrl)}"/>`);
   }
-  const colourOf = new Map(doc.horizons.map((h) => [h.id, h.colour]));
   const corners = fit ? [[u0, v0], [u1, v0], [u0, v1], [u1, v1]].map((p) => imageToSection(fit, p as ImagePx)) : [];
   const xs = corners.map((c) => c[0]), zs = corners.map((c) => c[1]);
   const [xLo, xHi, zLo, zHi] = [Math.min(...xs), Math.max(...xs), Math.min(...zs), Math.max(...zs)];
+  const toFig = (q: XZ) => fig(sectionToImage(fit!, q));
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
     ds.section.horizons.forEach((h, i) => {
@@ -136,21 +167,30 @@ export function renderSectionSvg(input: SectionFigureInput): string {
       const cr = clipPolylineToPins(reg.xs, reg.zs, pL, pR).clipped;
       if (!cl || !cr) return;
       const loop: [number, number][] = [];
-      for (let j = 0; j < cl.xs.length; j++) loop.push(fig(sectionToImage(fit, [cl.xs[j], cl.zs[j]])));
-      for (let j = cr.xs.length - 1; j >= 0; j--) loop.push(fig(sectionToImage(fit, [cr.xs[j], cr.zs[j]])));
-      out.push(`<polygon points="${pts(loop)}" fill="${escapeXml(colourOf.get(ds.horizonIds[i]) ?? '#888')}" fill-opacity="0.25" stroke="none"/>`);
+      for (let j = 0; j < cl.xs.length; j++) loop.push(toFig([cl.xs[j], cl.zs[j]]));
+      for (let j = cr.xs.length - 1; j >= 0; j--) loop.push(toFig([cr.xs[j], cr.zs[j]]));
+      // As on the canvas (excessFillGeometry): the loop is drawn twice, clipped to the half-planes above
+      // and below the regional, so lobes above it (added) and below it (subtracted) differ in colour.
+      const zsAll = [...cl.zs, ...cr.zs];
+      const margin = Math.max(...zsAll) - Math.min(...zsAll) + (pR - pL);
+      const half = (zFar: number) => pts([...Array.from(cr.xs, (x, j) => toFig([x, cr.zs[j]])), toFig([pR, zFar]), toFig([pL, zFar])]);
+      defs.push(`<clipPath id="above-${i}"><polygon points="${half(Math.max(...zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(Math.min(...zsAll) - margin)}"/></clipPath>`);
+      const diffs = Array.from(cl.xs, (x, j) => cl.zs[j] - zAt(cr.xs, cr.zs, x));
+      const tol = 1e-9 * (Math.abs(zHi - zLo) + 1);
+      const isAbove = diffs.some((d) => d > tol), isBelow = diffs.some((d) => d < -tol);
+      drawn.above ||= isAbove;
+      drawn.below ||= isBelow;
+      const id = escapeXml(ds.horizonIds[i]);
+      if (isAbove) out.push(`<polygon class="fill-above" data-horizon="${id}" points="${pts(loop)}" fill="${FIGURE_FILL_ABOVE.colour}" fill-opacity="${FIGURE_FILL_ABOVE.opacity}" stroke="none" clip-path="url(#above-${i})"/>`);
+      if (isBelow) out.push(`<polygon class="fill-below" data-horizon="${id}" points="${pts(loop)}" fill="${FIGURE_FILL_BELOW.colour}" fill-opacity="${FIGURE_FILL_BELOW.opacity}" stroke="none" clip-path="url(#below-${i})"/>`);
     });
-    if (ad && !ad.noDetachment && ad.detachmentElevation !== null && result) {
+    if (ad && hasDetachment && result) {
       const ci = ad.detachmentDepthCI95;
-      if (ci) {
+      if (ci && !isExactFit(ad)) {
         const [eA, eB] = [result.referenceElevation - ci[0], result.referenceElevation - ci[1]];
-        const band = [[xLo, eA], [xHi, eA], [xHi, eB], [xLo, eB]].map((q) => fig(sectionToImage(fit, q as XZ)));
-        out.push(`<polygon points="${pts(band)}" fill="#b3261e" fill-opacity="0.15"/>`);
-      }
-      out.push(`<line ${sectionLine(fit, fig, [xLo, ad.detachmentElevation], [xHi, ad.detachmentElevation])} stroke="#b3261e" stroke-width="3"/>`);
-      const e = ad.detachmentElevation;
-      if (e < zLo || e > zHi) {
-        out.push(`<text x="${PANEL.x + PANEL.w / 2}" y="${e < zLo ? PANEL.y + PANEL.h - 12 : PANEL.y + 20}" font-size="13" font-weight="bold" text-anchor="middle" fill="#b3261e">${e < zLo ? '▼' : '▲'} estimated detachment at elevation ${formatNumber(e)} ${u}, ${e < zLo ? 'below' : 'above'} the drawn area</text>`);
+        const band = [[xLo, eA], [xHi, eA], [xHi, eB], [xLo, eB]].map((q) => toFig(q as XZ));
+        out.push(`<polygon points="${pts(band)}" fill="${RED}" fill-opacity="0.15"/>`);
+        drawn.band = true;
       }
     }
   }
@@ -158,23 +198,51 @@ export function renderSectionSvg(input: SectionFigureInput): string {
     if (!h.visible) continue;
     const reg = scenario.regionals[h.id];
     const c = escapeXml(h.colour);
-    if (reg && reg.length >= 2) out.push(`<polyline points="${pts(reg.map(fig))}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
+    if (reg && reg.length >= 2) {
+      out.push(`<polyline points="${pts(reg.map(fig))}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
+      drawn.regionals = true;
+    }
     if (h.pointsPx.length >= 2) out.push(`<polyline points="${pts(h.pointsPx.map(fig))}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
     for (const [a, b] of h.projected) {
       const run = h.pointsPx.slice(a, b + 1);
-      if (run.length >= 2) out.push(`<polyline points="${pts(run.map(fig))}" fill="none" stroke="#ffffff" stroke-width="1.6" stroke-dasharray="3 3"/>`);
+      if (run.length >= 2) {
+        out.push(`<polyline points="${pts(run.map(fig))}" fill="none" stroke="#ffffff" stroke-width="1.6" stroke-dasharray="3 3"/>`);
+        drawn.projected = true;
+      }
+    }
+  }
+  if (fit && ds.ok && result) {
+    // The reference level of the depths (METHOD.md: h = zref − r), labelled at the right end.
+    const zr = result.referenceElevation;
+    out.push(`<line class="reference-level" ${sectionLine(fit, fig, [xLo, zr], [xHi, zr])} stroke="#1d2731" stroke-width="1.3" stroke-dasharray="10 3 2 3"/>`);
+    const at = toFig([xHi, zr]);
+    const y = Math.min(PANEL.y + PANEL.h - 6, Math.max(PANEL.y + 14, at[1] - 5));
+    out.push(`<text x="${Math.min(at[0], PANEL.x + PANEL.w) - 6}" y="${y.toFixed(2)}" font-size="11.5" text-anchor="end" ${halo()}>reference level, elevation ${formatNumber(zr)} ${u}: depths below this line</text>`);
+    drawn.reference = true;
+  }
+  if (fit && ad && hasDetachment && result) {
+    const e = ad.detachmentElevation as number;
+    out.push(`<line ${sectionLine(fit, fig, [xLo, e], [xHi, e])} stroke="${RED}" stroke-width="3"/>`);
+    drawn.detachment = true;
+    const at = toFig([xLo, e]);
+    if (e >= zLo && e <= zHi) {
+      out.push(`<text x="${Math.max(at[0], PANEL.x) + 8}" y="${(at[1] - 7).toFixed(2)}" font-size="12" font-weight="bold" fill="${RED}" ${halo()}>estimated detachment: elevation ${formatNumber(e)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference</text>`);
+    } else {
+      out.push(`<text x="${PANEL.x + PANEL.w / 2}" y="${e < zLo ? PANEL.y + PANEL.h - 12 : PANEL.y + 20}" font-size="13" font-weight="bold" text-anchor="middle" fill="${RED}" ${halo()}>${e < zLo ? '▼' : '▲'} estimated detachment at elevation ${formatNumber(e)} ${u}, ${e < zLo ? 'below' : 'above'} the drawn area</text>`);
     }
   }
   if (fit && scenario.pinsPx) {
     for (const [i, p] of scenario.pinsPx.entries()) {
       const x = imageToSection(fit, p)[0];
       out.push(`<line ${sectionLine(fit, fig, [x, zLo], [x, zHi])} stroke="#20323f" stroke-width="2"/>`);
-      const top = fig(sectionToImage(fit, [x, zHi]));
-      out.push(`<text x="${top[0] + 4}" y="${Math.max(PANEL.y + 14, top[1] + 14)}" font-size="11" fill="#20323f">${i === 0 ? 'left pin' : 'right pin'}</text>`);
+      const top = toFig([x, zHi]);
+      out.push(`<text x="${top[0] + 4}" y="${Math.max(PANEL.y + 14, top[1] + 14)}" font-size="11" fill="#20323f" ${halo()}>${i === 0 ? 'left pin' : 'right pin'}</text>`);
+      drawn.pins = true;
     }
   }
   out.push('</g>');
-  // Scale bar and vertical exaggeration below the panel.
+  // Elevation and distance scales on the panel's edges, then the scale bar and vertical exaggeration.
+  if (fit) out.push(sectionAxes(fit, { k, ox, oy }, PANEL, doc.units, [xLo, xHi]));
   const by = PANEL.y + PANEL.h + 30;
   if (fit) {
     const unitsPerFig = fit.unitsPerPxX / k;
@@ -183,13 +251,17 @@ export function renderSectionSvg(input: SectionFigureInput): string {
     out.push(`<g class="scale-bar"><rect x="${PANEL.x}" y="${by}" width="${w / 2}" height="6" fill="#1d2731"/><rect x="${PANEL.x + w / 2}" y="${by}" width="${w / 2}" height="6" fill="#ffffff" stroke="#1d2731"/>`);
     out.push(`<text x="${PANEL.x}" y="${by + 20}" font-size="11">0</text><text x="${PANEL.x + w}" y="${by + 20}" font-size="11" text-anchor="middle">${formatNumber(len)} ${u}</text></g>`);
     out.push(`<text x="${PANEL.x + w + 60}" y="${by + 8}" font-size="12">Vertical exaggeration ${formatNumber(fit.verticalExaggeration, 3)}× (as drawn)${doc.scan ? '' : ' · drawn without a scan'}</text>`);
+    out.push(`<text x="${PANEL.x + PANEL.w}" y="${by + 8}" font-size="12" text-anchor="end">Distance along the section x (${u})</text>`);
   } else out.push(`<text x="${PANEL.x}" y="${by + 8}" font-size="12">Not calibrated: no scale, no vertical exaggeration.</text>`);
-  out.push(legend(doc, Boolean(ad && !ad.noDetachment), 1030, PANEL.y));
-  out.push(areaDepthGroup(result, 1030, 470, 340, 326));
+  const legend = legendRows(doc, drawn, 1030, PANEL.y);
+  out.push(legend.svg);
+  const insetTop = legend.bottom + 14;
+  out.push(areaDepthGroup(result, 1030, insetTop, 340, PANEL.y + PANEL.h - insetTop));
   // The caution (METHOD.md), in every export.
   const cy = FIGURE_HEIGHT - 96;
-  out.push(`<g class="caution"><rect x="${PANEL.x}" y="${cy}" width="${FIGURE_WIDTH - 60}" height="76" fill="#fff8e6" stroke="#9a5b00"/>`);
-  wrap(`Caution: ${SECTION_CAUTION}`, 190).forEach((line, i) => out.push(`<text x="${PANEL.x + 12}" y="${cy + 22 + i * 17}" font-size="12" fill="#6b3f00">${escapeXml(line)}</text>`));
-  out.push('</g></svg>');
-  return out.join('');
+  out.push(`<g class="caution"><rect x="30" y="${cy}" width="${FIGURE_WIDTH - 60}" height="76" fill="#fff8e6" stroke="#9a5b00"/>`);
+  wrap(`Caution: ${SECTION_CAUTION}`, 190).forEach((line, i) => out.push(`<text x="42" y="${cy + 22 + i * 17}" font-size="12" fill="#6b3f00">${escapeXml(line)}</text>`));
+  out.push('</g>');
+  const head = `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" viewBox="0 0 ${FIGURE_WIDTH} ${FIGURE_HEIGHT}" font-family="DejaVu Sans, sans-serif" fill="#1d2731">`;
+  return `${head}<defs>${defs.join('')}</defs>${out.join('')}</svg>`;
 }

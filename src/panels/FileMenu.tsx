@@ -6,6 +6,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
 import { currentFigureSvg, PNG_SIZES, svgToPng } from '../io/exportFigure';
+import { currentUncertainty } from '../io/currentUncertainty';
 import { docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
 import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
@@ -133,7 +134,7 @@ export function FileMenu() {
             <button type="button" role="menuitem" data-testid="export-png" onClick={choose(() => void exportPng(pngSize))}>Section figure as PNG</button>
             <hr />
             <button type="button" role="menuitem" data-testid="export-results-csv"
-              onClick={choose(() => exportText(resultsCsv(useDocStore.getState().doc, selectAnalysis(useDocStore.getState().doc)), 'text/csv', '-results.csv', 'No results to export yet: place the pins and draw regionals for at least one horizon.'))}>Results table (CSV)</button>
+              onClick={choose(() => exportText(resultsCsv(useDocStore.getState().doc, selectAnalysis(useDocStore.getState().doc), currentUncertainty(useDocStore.getState().doc)), 'text/csv', '-results.csv', 'No results to export yet: place the pins and draw regionals for at least one horizon.'))}>Results table (CSV)</button>
             <button type="button" role="menuitem" data-testid="export-horizons-csv" onClick={choose(() => exportText(horizonsOrNull('csv'), 'text/csv', '-horizons.csv', 'No calibrated horizons to export yet.'))}>Horizons (CSV)</button>
             <button type="button" role="menuitem" data-testid="export-horizons-geojson" onClick={choose(() => exportText(horizonsOrNull('geojson'), 'application/geo+json', '-horizons.geojson', 'No calibrated horizons to export yet.'))}>Horizons (GeoJSON)</button>
             <button type="button" role="menuitem" data-testid="export-section-file"

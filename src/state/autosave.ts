@@ -3,6 +3,7 @@
 // Closing the tab with changes not saved to a file asks first (beforeunload).
 import { emptyProjectDoc } from '../core/model/projectDoc';
 import { decodeScan } from '../io/decodeScan';
+import { fitViewToDoc } from '../io/projectActions';
 import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot, type StoredScan } from './autosaveDb';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
@@ -65,6 +66,8 @@ export async function restoreAutosave(): Promise<boolean> {
     }
   }
   useDocStore.getState().replace(doc);
+  // The camera is session state, not kept: frame the restored scan (or drawing) in the current viewport.
+  fitViewToDoc(doc);
   // A restored session that had not been saved to a file is still unsaved.
   if (snap.dirty) useDocStore.setState({ savedRevision: useDocStore.getState().revision - 1 });
   useAutosaveStatus.setState({ restoredFrom: snap.savedAt || new Date().toISOString() });

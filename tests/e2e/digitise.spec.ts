@@ -251,8 +251,17 @@ test('workspace basics: full caution in the strip, New returns to Select, Open s
   // "Open scan…" is a real button: focused and pressed with Enter it opens the file chooser.
   const open = page.getByRole('button', { name: 'Open scan…' });
   await open.focus();
-  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.keyboard.press('Enter')]);
-  await chooser.setFiles({ name: 'keyboard.png', mimeType: 'image/png', buffer: gradientPng(W, H) });
+  await expect(open).toBeFocused();
+  // Enter on the focused button clicks the hidden file input (which opens the system's file chooser).
+  // The input's click is observed in the page: Chromium's headless file-chooser event is not reliable.
+  await page.evaluate(() => {
+    const input = document.querySelector('[data-testid="open-image"]') as HTMLInputElement;
+    input.dataset.clicks = '0';
+    input.addEventListener('click', () => (input.dataset.clicks = String(Number(input.dataset.clicks) + 1)));
+  });
+  await page.keyboard.press('Enter');
+  await expect(page.getByTestId('open-image')).toHaveAttribute('data-clicks', '1');
+  await page.getByTestId('open-image').setInputFiles({ name: 'keyboard.png', mimeType: 'image/png', buffer: gradientPng(W, H) });
   await expect(page.getByTestId('scan-name')).toContainText('keyboard.png');
 
   // The units select has a name, and says that switching only relabels.

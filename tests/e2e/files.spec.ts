@@ -381,3 +381,74 @@ test('corrupt and hostile files give a message and leave the open project unchan
   expect(await page.locator('img[src="x"]').count()).toBe(0);
   expect(await page.locator('.report-sheet b', { hasText: 'bold' }).count()).toBe(0);
 });
+
+test('the demo figure carries elevation and distance scales, the reference, orange/blue fills and a readable inset; the report carries the Monte Carlo spread', async ({ page }) => {
+  await ready(page);
+  // The report before any Monte Carlo run says so.
+  await page.getByTestId('open-report').click();
+  await expect(page.getByTestId('report-monte-carlo')).toContainText('No Monte Carlo run yet — run one in the Uncertainty panel.');
+  await expect(page.getByTestId('report-amplification')).toContainText('1 + W₀/D');
+  await expect(page.getByTestId('report-reference')).toContainText('reference level at elevation');
+  await page.getByTestId('report-close').click();
+  // One run with seed 1 (the panel's defaults otherwise).
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-result')).toBeVisible({ timeout: 60_000 });
+  const p50 = (await page.getByTestId('mc-p50').textContent()) ?? '';
+  await page.getByTestId('open-report').click();
+  const mc = page.getByTestId('report-monte-carlo');
+  await expect(mc).toContainText('Monte Carlo run of the state shown.');
+  await expect(mc).toContainText('P10');
+  await expect(mc).toContainText('seed');
+  // The pane's P50 (e.g. "2600 m") and the report's agree to the figures shown.
+  expect(Number.isFinite(parseFloat(p50))).toBe(true);
+  await expect(page.getByTestId('report-scenarios-note')).toContainText('one common reference');
+  await expect.poll(() => page.getByTestId('report-figure').evaluate((img: HTMLImageElement) => img.naturalWidth)).toBeGreaterThan(0);
+  await page.screenshot({ path: test.info().outputPath('demo-report.png') });
+  await page.getByTestId('report-uncertainty').screenshot({ path: test.info().outputPath('demo-report-uncertainty.png') });
+  await page.getByTestId('report-scenarios').screenshot({ path: test.info().outputPath('demo-report-scenarios.png') });
+  await page.locator('.report-graph').screenshot({ path: test.info().outputPath('demo-report-graph.png') });
+  await page.getByTestId('report-close').click();
+  // The figure: SVG structure, then the PNG at the default size and at A3 300 dpi.
+  await page.getByTestId('menu-export').click();
+  const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');
+  writeFileSync(test.info().outputPath('demo-figure.svg'), svg);
+  const found = await page.evaluate((text) => {
+    const d = new DOMParser().parseFromString(text, 'image/svg+xml');
+    const all = (sel: string) => Array.from(d.querySelectorAll(sel)).map((t) => t.textContent ?? '');
+    return { axes: all('.section-axes text'), legend: all('.legend text'), inset: all('.area-depth text'), above: d.querySelectorAll('.fill-above').length, ref: d.querySelectorAll('.reference-level').length, bar: d.querySelectorAll('.fieller-bar').length };
+  }, svg);
+  expect(found.axes).toContain('Elevation z (m)');
+  expect(found.axes.filter((t) => /^-?[\d,]+$/.test(t)).length).toBeGreaterThanOrEqual(6);
+  expect(found.above).toBeGreaterThan(0);
+  expect(found.ref).toBe(1);
+  expect(found.legend).toContain('excess area above the regional (added)');
+  expect(found.legend).toContain('excess area below the regional (subtracted)');
+  expect(found.inset.some((t) => t.includes('km²'))).toBe(true);
+  for (const size of ['screen', 'a3-300']) {
+    await page.getByTestId('menu-export').click();
+    await page.getByTestId('png-size').selectOption(size);
+    const bytes = await download(page, () => page.getByTestId('export-png').click());
+    writeFileSync(test.info().outputPath(`demo-figure-${size}.png`), bytes);
+    const png = PNG.sync.read(bytes);
+    // Orange of the above-regional fill (over the scan's light paper) somewhere in the section panel.
+    let orange = 0;
+    for (let i = 0; i < png.data.length; i += 4 * 13) {
+      const [r, g, b] = [png.data[i], png.data[i + 1], png.data[i + 2]];
+      if (r > 200 && g > 140 && g < 215 && b < 170 && r - b > 60) orange++;
+    }
+    expect(orange).toBeGreaterThan(50);
+  }
+});
+
+test('a reload restores the last state fitted to the view, not at 100 %', async ({ page }) => {
+  await ready(page, true);
+  await page.getByTestId('open-image').setInputFiles({ name: 'wide.png', mimeType: 'image/png', buffer: gradientPng(3000, 1200) });
+  await expect(page.getByTestId('scan-name')).toContainText('wide.png');
+  await expect(page.getByTestId('autosave-status')).toContainText('kept in browser');
+  const fitted = await page.getByTestId('zoom-readout').textContent();
+  await page.reload();
+  await expect(page.getByTestId('restore-banner')).toBeVisible();
+  await expect(page.getByTestId('zoom-readout')).toHaveText(fitted!);
+  expect(parseFloat(fitted!)).toBeLessThan(100);
+});

@@ -1,5 +1,6 @@
 // The printable report (print to PDF from the browser): method in brief, results table, graph,
-// the section figure, scenarios compared, assumptions, cautions and references.
+// uncertainty (last Monte Carlo run, amplification), the section figure, scenarios compared on one
+// reference, assumptions, cautions and references.
 import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
@@ -7,8 +8,12 @@ import { currentFigureSvg } from '../../io/exportFigure';
 import { formatNumber } from '../../io/formatNumber';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
-import { selectAnalysis } from '../../state/selectors';
+import { EXACT_FIT_TEXT, isExactFit, selectAnalysis } from '../../state/selectors';
+import { figureAreaUnit } from '../../io/figureAreaUnit';
 import { activeScenario } from '../../core/model/docToSection';
+import { useUncertaintyStore } from '../../state/uncertaintyStore';
+import { uncertaintyReport } from '../../io/uncertaintyReport';
+import { reportScenarioRows } from './reportScenarioRows';
 
 function useSvgUrl(svg: string | null): string | null {
   const url = useMemo(() => (svg ? URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' })) : null), [svg]);
@@ -39,6 +44,14 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
   const u = doc.units;
   const ad = result?.areaDepth ?? null;
   const scenario = activeScenario(doc);
+  const runs = useUncertaintyStore((st) => st.byScenario);
+  const uncertainty = uncertaintyReport(runs[scenario.id] ?? null, analysis.docSection.ok ? analysis.docSection.section : null, result);
+  const compared = reportScenarioRows(doc, runs);
+  const refText = result
+    ? `${formatNumber(result.referenceElevation)} ${u} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional, by default'})`
+    : '—';
+  const range = (p: [number, number] | null, exact: boolean) => (exact ? 'exact fit: none' : p ? `${formatNumber(p[0])} to ${formatNumber(p[1])}` : '—');
+  const area = figureAreaUnit(u, Math.max(0, ...(result?.horizons ?? []).map((h) => Math.abs(h.excessArea))));
   return createPortal(
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">
@@ -62,14 +75,14 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
           Chamberlin depth of each horizon divides its excess area by its bed-length shortening (Chamberlin 1910), and the layer-parallel strain compares
           the bed length with the original length implied by the displacement (Groshong 2006).
         </p>
-        <h2>Results ({u}, {u}²)</h2>
+        <h2>Results ({u}, {area.label})</h2>
         {result ? (
           <table className="files-table" data-testid="report-table">
-            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain</th></tr></thead>
+            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area ({area.label})</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain</th></tr></thead>
             <tbody>
               {result.horizons.map((h, i) => (
                 <tr key={i}>
-                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{formatNumber(h.excessArea)}</td><td>{formatNumber(h.depth)}</td>
+                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{area.factor === 1 ? formatNumber(h.excessArea) : (h.excessArea * area.factor).toFixed(3)}</td><td>{formatNumber(h.depth)}</td>
                   <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatNumber(h.chamberlinDepth)}</td>
                   <td>{h.lpsStrain === null ? '—' : `${formatNumber(100 * h.lpsStrain, 3)}%`}</td>
                 </tr>
@@ -79,37 +92,50 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
         ) : (
           <p data-testid="report-no-results">No results yet: {analysis.docSection.ok ? 'the section has input problems or fewer than two horizons with regionals.' : analysis.docSection.message}</p>
         )}
+        {result && <p data-testid="report-reference">Depths are measured below the reference level at elevation {refText}.</p>}
         {ad && (
           <p data-testid="report-summary">
             {ad.noDetachment
               ? 'Excess area does not decrease with depth: there is no detachment below these horizons.'
-              : `Detachment ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(ad.detachmentElevation)} ${u}); 95% interval ${ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
+              : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
           </p>
         )}
         {result && result.notes.length > 0 && <ul className="report-notes">{result.notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}
         <div className="report-figures">
           {graphUrl && <img src={graphUrl} alt="Area–depth graph" className="report-graph" />}
         </div>
+        <h2>Uncertainty</h2>
+        <div data-testid="report-uncertainty">
+          <p>A single best-fit depth hides how much it depends on the interpretation: report the spread, not one number.</p>
+          {uncertainty.amplificationText && <p data-testid="report-amplification">{uncertainty.amplificationText}</p>}
+          <ul data-testid="report-monte-carlo" className={uncertainty.status === 'stale' ? 'report-stale' : undefined}>
+            {uncertainty.lines.map((l, i) => <li key={i}>{l}</li>)}
+          </ul>
+        </div>
         <h2>The section</h2>
         {figureUrl ? <img src={figureUrl} alt="Annotated section" className="report-figure" data-testid="report-figure" /> : <p>Drawing the section…</p>}
         <h2>Scenarios compared</h2>
-        <table className="files-table" data-testid="report-scenarios">
-          <thead><tr><th>Scenario</th><th>Horizons in fit</th><th>Displacement ({u})</th><th>Detachment depth ({u})</th><th>95% interval ({u})</th><th>Detachment elevation ({u})</th></tr></thead>
+        <p data-testid="report-scenarios-note">
+          {compared.common === null
+            ? 'No scenario has results yet.'
+            : `Compared on the detachment elevation, and on depths all below one common reference at elevation ${formatNumber(compared.common)} ${u} (the shown scenario's), not each scenario's own.`}
+        </p>
+        <table className="files-table report-scenarios" data-testid="report-scenarios">
+          <thead><tr><th>Scenario</th><th>Horizons in fit</th><th>Displacement ({u})</th><th>Detachment elevation ({u})</th><th>95% interval, elevation</th><th>Depth below common reference ({u})</th><th>95% interval, depth</th><th>Its own reference ({u})</th><th>Monte Carlo elevation P10 to P90</th></tr></thead>
           <tbody>
-            {doc.scenarios.map((s) => {
-              const a = selectAnalysis(doc, s.id);
-              const r = a.outcome && a.outcome.ok ? a.outcome.analysis.areaDepth : null;
-              return (
-                <tr key={s.id}>
-                  <td>{s.name}{s.id === doc.activeScenarioId ? ' (shown)' : ''}</td>
-                  <td>{r ? r.n : '—'}</td>
-                  <td>{formatNumber(r?.displacement)}</td>
-                  <td>{r?.noDetachment ? 'none' : formatNumber(r?.detachmentDepth)}</td>
-                  <td>{r?.detachmentDepthCI95 ? `${formatNumber(r.detachmentDepthCI95[0])} – ${formatNumber(r.detachmentDepthCI95[1])}` : '—'}</td>
-                  <td>{formatNumber(r?.detachmentElevation)}</td>
-                </tr>
-              );
-            })}
+            {compared.rows.map((r) => (
+              <tr key={r.id}>
+                <td>{r.name}{r.shown ? ' (shown)' : ''}</td>
+                <td>{r.n ?? '—'}</td>
+                <td>{formatNumber(r.displacement)}</td>
+                <td>{r.noDetachment ? 'none' : formatNumber(r.elevation)}</td>
+                <td>{range(r.elevationCI, r.exactFit)}</td>
+                <td>{r.noDetachment ? 'none' : formatNumber(r.depthBelowCommon)}</td>
+                <td>{range(r.depthCI, r.exactFit)}</td>
+                <td>{formatNumber(r.ownReference)}</td>
+                <td>{r.monteCarlo ? `${formatNumber(r.monteCarlo.p10)} to ${formatNumber(r.monteCarlo.p90)}${r.monteCarlo.stale ? ' (out of date)' : ''}` : 'no run'}</td>
+              </tr>
+            ))}
           </tbody>
         </table>
         <h2>Assumptions</h2>

@@ -4,6 +4,7 @@ import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
 import { validateSection } from '../../../src/core/model/validateSection';
 import { sectionFileText } from '../../../src/io/exportTables';
 import { parseProjectText } from '../../../src/io/projectFile';
+import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { selectAnalysis } from '../../../src/state/selectors';
 import { sampleDoc } from './sampleDoc';
 
@@ -22,7 +23,36 @@ describe('sectionFileText', () => {
     expect(withCaution.ok && without.ok).toBe(true);
     if (!withCaution.ok || !without.ok) return;
     expect(withCaution.section).toEqual(without.section);
-    expect(section).toEqual(JSON.parse(JSON.stringify(analysis.docSection.section)));
+    // The written section is the analysed one to the file resolution (1e-6 unit, cleanCoordinate).
+    const src = analysis.docSection.section;
+    expect(section.pins[0]).toBeCloseTo(src.pins[0], 6);
+    expect(section.pins[1]).toBeCloseTo(src.pins[1], 6);
+    src.horizons.forEach((h, i) => h.line.forEach((p, j) => {
+      expect(section.horizons[i].line[j][0]).toBeCloseTo(p[0], 6);
+      expect(section.horizons[i].line[j][1]).toBeCloseTo(p[1], 6);
+    }));
+  });
+
+  it('writes no float noise: pins typed as 1000 stay 1000, tiny residues are 0, never -0', () => {
+    const doc = sampleDoc();
+    const analysis = selectAnalysis(doc);
+    if (!analysis.docSection.ok) throw new Error('sample has no section');
+    // A section as the calibration hands it over: tails from the affine arithmetic.
+    const noisy = { ...analysis.docSection.section, pins: [-9.79e-13, 1000.0000000000001] as [number, number] };
+    noisy.horizons = noisy.horizons.map((h) => ({ ...h, line: h.line.map(([x, z]) => [x + 2.27e-13, z === 0 ? -0 : z - 1e-12] as [number, number]) }));
+    const r = sectionFileText({ ...analysis, docSection: { ...analysis.docSection, section: noisy } });
+    if (!r.ok) throw new Error(r.message);
+    expect(r.text).not.toMatch(/\de-\d/);
+    expect(r.text).not.toMatch(/\d{7,}/);
+    expect(r.text).not.toMatch(/-0[,\s\]]/);
+    const back = JSON.parse(r.text);
+    expect(back.pins).toEqual([0, 1000]);
+    expect(Object.is(back.pins[0], -0)).toBe(false);
+    // The cleaned file analyses to the same detachment as the noisy section (to far below display precision).
+    const a = analyseSection(noisy), b = analyseSection(back);
+    expect(a.ok && b.ok).toBe(true);
+    if (!a.ok || !b.ok) return;
+    expect(b.analysis.areaDepth!.detachmentDepth!).toBeCloseTo(a.analysis.areaDepth!.detachmentDepth!, 4);
   });
 
   it('opens in the app again as a section file with the same horizons', () => {

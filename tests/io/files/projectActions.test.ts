@@ -6,7 +6,8 @@ import { useDocStore } from '../../../src/state/docStore';
 import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
 
 vi.mock('../../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
-const { newProject, openProjectFile } = await import('../../../src/io/projectActions');
+const { newProject, openNotes, openProjectFile } = await import('../../../src/io/projectActions');
+const { putScan } = await import('../../../src/state/scanCache');
 
 const other = new File([JSON.stringify(SAMPLE_SECTION)], 'other-section.json');
 const confirm = vi.fn<(q: string) => boolean>();
@@ -54,5 +55,23 @@ describe('openProjectFile over unsaved changes', () => {
     newProject();
     expect(confirm.mock.calls[0][0]).toMatch(/Discard the changes not saved/);
     expect(useDocStore.getState().doc).toBe(before);
+  });
+});
+
+describe('openNotes', () => {
+  const doc = { ...sampleDoc(), scan: { id: 'scan-kept', name: 'away.png', widthPx: 10, heightPx: 10, type: 'image/png' } };
+  const notes = ['The scan "away.png" is not stored in this file; open the image again to see it.'];
+
+  it('keeps "open the image again" when the scan is not in this browser', () => {
+    expect(openNotes(notes, doc, false)).toEqual(notes);
+  });
+
+  it('says the scan shown is the one still open in this browser when it is cached under the same id', () => {
+    putScan('scan-kept', { bitmap: {} as ImageBitmap, bytes: new Blob() });
+    const said = openNotes(notes, doc, false).join(' ');
+    expect(said).toMatch(/The file has no scan; showing "away\.png", still open in this browser/);
+    expect(said).not.toMatch(/open the image again/);
+    // A file that carries its scan needs no such note.
+    expect(openNotes([], doc, true)).toEqual([]);
   });
 });

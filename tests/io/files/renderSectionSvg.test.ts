@@ -4,7 +4,24 @@ import { renderSectionSvg } from '../../../src/io/renderSectionSvg';
 import { escapeXml } from '../../../src/io/escapeXml';
 import { selectAnalysis } from '../../../src/state/selectors';
 import { emptyProjectDoc } from '../../../src/core/model/projectDoc';
-import { sampleDoc } from './sampleDoc';
+import { sampleDoc, SAMPLE_SECTION } from './sampleDoc';
+import { sectionToProjectDoc } from '../../../src/core/model/migrations/sectionToProjectDoc';
+import { areaDepthGroup, shortName } from '../../../src/io/renderAreaDepthSvg';
+import { figureAreaUnit } from '../../../src/io/figureAreaUnit';
+import { areaUnit } from '../../../src/panels/interpretation/formatValue';
+import type { Section } from '../../../src/core/model/section';
+
+const textsOf = (svg: string, group: string): string[] => {
+  const m = new RegExp(`<g class="${group}"[\\s\\S]*?</g>`).exec(svg);
+  return m ? [...m[0].matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((t) => t[1]) : [];
+};
+
+/** The sample with the lower horizon's crest moved so the points scatter about the line (no exact fit). */
+function scatteredDoc(peak = 301) {
+  const section: Section = structuredClone(SAMPLE_SECTION);
+  section.horizons[2].line[2] = [500, peak];
+  return { ...sectionToProjectDoc(section, 'Scattered'), author: 'T' };
+}
 
 /** Tag balance check: every opened element is closed in order (enough for our generated markup). */
 function balanced(svg: string): boolean {
@@ -33,8 +50,9 @@ describe('renderSectionSvg', () => {
     expect(svg).toContain('class="area-depth"');
     expect(svg).toContain('estimated detachment');
     expect(svg).toContain('left pin');
-    // Three excess-area fills, three regionals (dashed polylines) and three horizons.
-    expect(svg.match(/<polygon [^>]*fill-opacity="0.25"/g)).toHaveLength(3);
+    // Three excess-area fills, all above their regionals (anticlines), in the canvas's orange; none below.
+    expect(svg.match(/<polygon class="fill-above"[^>]*fill="rgb\(232, 121, 30\)"/g)).toHaveLength(3);
+    expect(svg).not.toContain('class="fill-below"');
     expect(svg.match(/stroke-dasharray="7 4"\/>/g)!.length).toBeGreaterThanOrEqual(3);
     // The caution words appear (wrapped over lines).
     const text = [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]).join(' ');
@@ -59,5 +77,110 @@ describe('renderSectionSvg', () => {
     expect(balanced(svg)).toBe(true);
     expect(svg).toContain('No area–depth result: Calibrate the scan first');
     expect(svg).toContain('Not calibrated');
+  });
+
+  it('labels elevations along the left edge and distances along the bottom (1-2-5 steps), and marks the reference level', () => {
+    const doc = sampleDoc();
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' });
+    const axis = textsOf(svg, 'section-axes');
+    expect(axis).toContain('Elevation z (m)');
+    const values = axis.filter((t) => /^-?[\d,]+$/.test(t)).map((t) => Number(t.replace(/,/g, '')));
+    // The sample spans z = 0…900 and x = −100…1100: both scales must cover them.
+    expect(values).toContain(0);
+    expect(values.some((v) => v >= 800)).toBe(true);
+    expect(values.some((v) => v >= 1000)).toBe(true);
+    const steps = new Set(values.slice(1).map((v, i) => Math.abs(v - values[i])).filter((d) => d > 0));
+    for (const d of steps) expect([1, 2, 5]).toContain(d / 10 ** Math.floor(Math.log10(d)));
+    // The reference (the highest regional, z = 500) drawn and named.
+    expect(svg).toContain('class="reference-level"');
+    expect(svg).toContain('reference level, elevation 500 m: depths below this line');
+    expect(textsOf(svg, 'legend')).toContain('reference level: depths are measured below it');
+  });
+
+  it('puts each elevation label at the height where the calibration puts that elevation', () => {
+    const doc = sampleDoc();
+    const analysis = selectAnalysis(doc);
+    const svg = renderSectionSvg({ doc, analysis, scanDataUrl: null, date: 'd' });
+    // The dashed elevation line for z is drawn through sectionToImage; its label must sit on the same height.
+    const labels = [...svg.matchAll(/<line x1="([\d.]+)" y1="([\d.]+)" x2="[\d.]+" y2="([\d.]+)" stroke="#1d2731"\/><text x="[\d.]+" y="([\d.]+)" text-anchor="end">([^<]+)<\/text>/g)];
+    expect(labels.length).toBeGreaterThanOrEqual(3);
+    const fy = labels.map((m) => Number(m[2]));
+    const z = labels.map((m) => Number(m[5].replace(/,/g, '')));
+    // Linear in z, and z increases upward (smaller y).
+    const slope = (fy[1] - fy[0]) / (z[1] - z[0]);
+    expect(slope).toBeLessThan(0);
+    labels.forEach((_, i) => expect(fy[i]).toBeCloseTo(fy[0] + slope * (z[i] - z[0]), 1));
+  });
+
+  it('lists only what is drawn: no projected entry without projected segments, one with them', () => {
+    const doc = sampleDoc();
+    const plain = textsOf(renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' }), 'legend');
+    expect(plain.some((t) => t.includes('projected'))).toBe(false);
+    expect(plain).toContain('excess area above the regional (added)');
+    expect(plain).toContain('excess area below the regional (subtracted)');
+    doc.horizons[0].projected = [[1, 3]];
+    const withRun = textsOf(renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' }), 'legend');
+    expect(withRun).toContain('projected (interpreted) segment');
+    // An empty project draws no regionals, pins or fills: none of them in the legend.
+    const empty = emptyProjectDoc();
+    const none = textsOf(renderSectionSvg({ doc: empty, analysis: selectAnalysis(empty), scanDataUrl: null, date: 'd' }), 'legend');
+    expect(none.filter((t) => /regional|pin|excess|detachment|reference/.test(t))).toEqual([]);
+  });
+
+  it('fills a syncline below its regional in the blue of the canvas, clipped to the half-plane below the regional', () => {
+    const section: Section = structuredClone(SAMPLE_SECTION);
+    section.horizons[1].line[2] = [500, 100]; // the middle horizon sags 150 below its regional
+    const doc = sectionToProjectDoc(section, 'Syncline');
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' });
+    const below = /<polygon class="fill-below"[^>]*fill="rgb\(38, 104, 199\)"[^>]*clip-path="url\(#(below-\d+)\)"/.exec(svg);
+    expect(below).not.toBeNull();
+    expect(svg).toContain(`<clipPath id="${below![1]}">`);
+    expect(svg.match(/class="fill-above"/g)).toHaveLength(2);
+  });
+});
+
+describe('the inset area–depth graph', () => {
+  it('uses the pane\'s area unit (km² from 10⁵ m², 10⁶ ft² in feet)', () => {
+    for (const units of ['m', 'ft']) {
+      for (const v of [0, 1, 99_999, 100_000, 2_028_000, 5e9]) {
+        const a = areaUnit(units, v), b = figureAreaUnit(units, v);
+        expect([b.factor, b.label]).toEqual([a.factor, a.label]);
+      }
+    }
+  });
+
+  it('writes area ticks that do not run together, names the points and shows the Fieller bar', () => {
+    // Areas of 0.8–2.0 km² as in a test user's section (the labels ran together in m²).
+    const doc = scatteredDoc();
+    const a = selectAnalysis(doc);
+    const result = a.outcome!.ok ? a.outcome!.analysis : null;
+    const scaled = { ...result!, horizons: result!.horizons.map((h) => ({ ...h, excessArea: h.excessArea * 10 })) };
+    const svg = areaDepthGroup(scaled, 0, 0, 340, 326);
+    expect(svg).toContain('excess area (km²)');
+    const ticks = [...svg.matchAll(/<text x="([\d.]+)" y="[\d.]+" font-size="9.5" text-anchor="middle"[^>]*>([^<]+)<\/text>/g)].map((m) => ({ x: Number(m[1]), t: m[2] }));
+    expect(ticks.length).toBeGreaterThanOrEqual(2);
+    // DejaVu Sans digits are 0.64 em wide: 6.1 figure units at 9.5 (common practice for sizing labels).
+    for (let i = 1; i < ticks.length; i++) expect(ticks[i].x - ticks[i - 1].x).toBeGreaterThan(6.1 * (ticks[i].t.length + ticks[i - 1].t.length) / 2 + 2);
+    for (const name of ['Upper marker', 'Middle marker', 'Lower marker']) expect(svg).toContain(`>${shortName(name)}</text>`);
+    expect(svg).toContain('class="fitted-line"');
+    // The crest raised by 1 m leaves a bounded interval (about 1900–2160 below the reference).
+    expect(result!.areaDepth!.detachmentDepthCI95).not.toBeNull();
+    expect(svg).toContain('class="fieller-bar"');
+    expect(svg).toMatch(/95%: 1,\d{3}–2,\d{3} m/);
+  });
+
+  it('writes "unbounded" instead of a bar when the Fieller interval is unbounded', () => {
+    // Raised by 20 m the scatter makes g ≥ 1 with one degree of freedom (METHOD.md, Fieller).
+    const a = selectAnalysis(scatteredDoc(320));
+    const r = a.outcome!.ok ? a.outcome!.analysis : null;
+    expect(r!.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');
+    const svg = areaDepthGroup(r, 0, 0, 340, 326);
+    expect(svg).toContain('95% interval unbounded');
+    expect(svg).not.toContain('class="fieller-bar"');
+  });
+
+  it('cuts long names short for point labels', () => {
+    expect(shortName('Top Saltherne Limestone')).toBe('Top Salther…');
+    expect(shortName('Top A')).toBe('Top A');
   });
 });
