@@ -157,14 +157,12 @@ export function toolPointerDown(evt: PointerEvent): void {
   dispatchToolEvent({ type: 'pointerDown', p: imagePoint(boxElement, evt.clientX, evt.clientY), button: evt.button, clicks: clickCount(evt), shift: evt.shiftKey, alt: evt.altKey });
 }
 
-/** True when a key belongs to a field or control that has focus (typing, or Enter/Space on a button or link). */
+/** True when a key belongs to a text field or select that has focus. */
 function isTyping(target: EventTarget | null): boolean {
   return (
     target instanceof HTMLInputElement ||
     target instanceof HTMLTextAreaElement ||
     target instanceof HTMLSelectElement ||
-    target instanceof HTMLButtonElement ||
-    target instanceof HTMLAnchorElement ||
     (target instanceof HTMLElement && target.isContentEditable)
   );
 }
