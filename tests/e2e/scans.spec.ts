@@ -263,7 +263,19 @@ test('the grid draws lines in section units over the scan, and follows the view'
   const { cx, cy } = await viewCentre(page);
   // The scan is drawn (not the empty view's background) before the row is read.
   await expect.poll(async () => (await viewPixel(page, cx, cy))[3]).toBe(255);
-  const before = await viewRow(page, cy, 60, 660);
+  // The demo is drawn whole until its tiles are cut, then from tiles (resampled a little differently):
+  // wait until the row is steady before taking it as the picture without a grid.
+  let previous = await viewRow(page, cy, 60, 660);
+  await expect
+    .poll(async () => {
+      await page.waitForTimeout(400);
+      const now = await viewRow(page, cy, 60, 660);
+      const same = JSON.stringify(now) === JSON.stringify(previous);
+      previous = now;
+      return same;
+    }, { timeout: 20_000 })
+    .toBe(true);
+  const before = previous;
   await page.getByTestId('toggle-grid').check();
   await expect(page.getByTestId('toggle-grid')).toBeChecked();
   const after = await viewRow(page, cy, 60, 660);
@@ -288,7 +300,7 @@ test('the grid draws lines in section units over the scan, and follows the view'
   expect(changed(before, after)).toBeLessThan(before.length / 2);
   // Off again: the row is as it was.
   await page.getByTestId('toggle-grid').uncheck();
-  expect(changed(before, await viewRow(page, cy, 60, 660))).toBe(0);
+  await expect.poll(async () => changed(before, await viewRow(page, cy, 60, 660))).toBe(0);
 });
 
 test('pasting an image opens it, and a trackpad pinch zooms', async ({ page }) => {
