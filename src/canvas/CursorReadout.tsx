@@ -2,11 +2,11 @@
 // calibrated, image pixels before. Updated straight on the element on every pointer move (and on every
 // camera change under a still cursor), never through React state. The drag readout beside the pointer
 // (DragReadout) is mounted here too, so the overlay layer stays as it is.
-import { useEffect, useMemo, useRef } from 'react';
+import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
+import { useFittedCalibration } from '../state/useFittedCalibration';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
-import { fitCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection } from '../core/calibration/mapPoints';
 import { DragReadout } from './DragReadout';
 import { stepDecimals } from './gridTicks';
@@ -21,13 +21,8 @@ function fixedNoNegativeZero(v: number, decimals: number): string {
 export function CursorReadout() {
   const ref = useRef<HTMLDivElement>(null);
   const hasScan = useDocStore((s) => s.doc.scan !== null);
-  const calibration = useDocStore((s) => s.doc.calibration);
   const unit = useDocStore((s) => s.doc.units);
-  const fit = useMemo(() => {
-    if (!calibration) return null;
-    const r = fitCalibration(calibration);
-    return r.ok ? r.fit : null;
-  }, [calibration]);
+  const fit = useFittedCalibration();
 
   useEffect(() => {
     const el = ref.current;

@@ -1,12 +1,13 @@
 // An optional grid in section units above the scan, with labels along the view's top and left edges.
 // Drawn in screen pixels (lines stay one pixel wide at every zoom); it reads the camera when the layer
 // draws, so panning redraws it without re-rendering React.
-import { memo, useMemo } from 'react';
+import { memo } from 'react';
 import type Konva from 'konva';
 import { Layer, Shape } from 'react-konva';
 import { useDocStore } from '../state/docStore';
+import { useFittedCalibration } from '../state/useFittedCalibration';
 import { useSessionStore } from '../state/sessionStore';
-import { fitCalibration, type FittedCalibration } from '../core/calibration/fitCalibration';
+import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { gridLines, type GridLine } from './gridTicks';
 
 const LINE = 'rgba(31, 111, 139, 0.45)';
@@ -57,13 +58,8 @@ function drawGrid(ctx: Konva.Context, shape: Konva.Shape, fit: FittedCalibration
 
 export const GridLayer = memo(function GridLayer() {
   const show = useDocStore((s) => s.doc.settings.showGrid && s.doc.scan !== null);
-  const calibration = useDocStore((s) => s.doc.calibration);
   const unit = useDocStore((s) => s.doc.units);
-  const fit = useMemo(() => {
-    if (!calibration) return null;
-    const r = fitCalibration(calibration);
-    return r.ok ? r.fit : null;
-  }, [calibration]);
+  const fit = useFittedCalibration();
   // The layer stays mounted (its place in the stack is fixed); only its content comes and goes.
   return (
     <Layer listening={false}>
