@@ -3,7 +3,7 @@ import type { SectionProblem } from '../model/validateSection';
 import { chamberlinDepth } from './chamberlinDepth';
 import { fitAreaDepth, type AreaDepthResult } from './fitAreaDepth';
 import { layerParallelStrain } from './layerParallelStrain';
-import { prepareSection, type PreparedSection } from './prepareSection';
+import { prepareSectionScratch, type PreparedSection } from './prepareSection';
 
 export type { SectionProblem, SectionProblemCode } from '../model/validateSection';
 export type { AreaDepthResult } from './fitAreaDepth';
@@ -24,7 +24,8 @@ export type AnalysisOutcome = { ok: true; analysis: SectionAnalysis; warnings: S
 
 /** Full area-balance analysis (units and units² of the section); input problems as { ok: false, problems }, never thrown. */
 export function analyseSection(section: Section, options: { referenceElevation?: number } = {}): AnalysisOutcome {
-  const prep = prepareSection(section, options);
+  // Only numbers leave this function, so the prepared lines may live in the reused buffer.
+  const prep = prepareSectionScratch(section, options);
   if (!prep.ok) return { ok: false, problems: prep.problems };
   return { ok: true, analysis: analysePrepared(prep.prepared), warnings: [] };
 }

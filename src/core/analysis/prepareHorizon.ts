@@ -1,4 +1,4 @@
-import { clipAndMeasure } from '../geometry/clipAndMeasure';
+import { clipAndMeasure, type ClipAllocate } from '../geometry/clipAndMeasure';
 import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
 import { chainCrossings } from '../geometry/chainCrossings';
 import type { XMonotoneChains } from '../geometry/xMonotoneChains';
@@ -77,7 +77,7 @@ function crossingX(xs: ArrayLike<number>, zs: ArrayLike<number>, s: number, t: n
   return x0;
 }
 
-/** Clip one horizon and its regional to the pins and measure them; problems (pins, self-crossing) instead of throwing; `units`, when given, labels the x in messages. */
+/** Clip one horizon and its regional to the pins and measure them; problems (pins, self-crossing) instead of throwing; `units`, when given, labels the x in messages; the clipped arrays come from `allocate` (default new ones). */
 export function prepareHorizon(
   name: string,
   lineX: ArrayLike<number>, lineZ: ArrayLike<number>,
@@ -86,11 +86,12 @@ export function prepareHorizon(
   included = true,
   segmentProjected?: ArrayLike<number>,
   units?: LengthUnit,
+  allocate?: ClipAllocate,
 ): HorizonPreparation {
   const who = `Horizon "${name}"`;
   // The regional first: its first clipped z is the loop's z origin (as areaBetweenPolylines takes it).
-  const reg = clipAndMeasure(regionalX, regionalZ, pins[0], pins[1]);
-  const lin = clipAndMeasure(lineX, lineZ, pins[0], pins[1], segmentProjected, reg.zOrigin);
+  const reg = clipAndMeasure(regionalX, regionalZ, pins[0], pins[1], undefined, undefined, allocate);
+  const lin = clipAndMeasure(lineX, lineZ, pins[0], pins[1], segmentProjected, reg.zOrigin, allocate);
   const problems = [...pinProblems(lin.clip, who, 'line', name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
   for (const [m, what] of [[lin, 'line'], [reg, 'regional']] as const) {
     // A line along which x only increases is one monotone chain and cannot cross itself (selfIntersections).

@@ -28,6 +28,8 @@ export interface PreparedSection {
 // live dragging and the benchmark re-prepare sections many times, and fresh large arrays cost
 // page faults. Nothing computed is kept between calls, only the memory. Not re-entrant, which
 // prepareSection never needs (it is synchronous; each Worker has its own module instance).
+// A one-off analysis (analyseSection) keeps nothing of the prepared section, so its clipped lines
+// come from the same buffer too (prepareSectionScratch); they are valid only until the next call.
 let pool = new Float64Array(1 << 12);
 let poolUsed = 0;
 const fromPool: Allocate = (n) => {
@@ -44,6 +46,15 @@ export type SectionPreparation = { ok: true; prepared: PreparedSection } | { ok:
 
 /** The section validated, clipped and measured once; every problem found (structure, pins, self-crossing) instead of throwing. */
 export function prepareSection(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
+  return prepare(section, options, undefined);
+}
+
+/** As prepareSection, but the clipped lines live in a reused buffer: read the result before the next call, keep none of its arrays. */
+export function prepareSectionScratch(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
+  return prepare(section, options, undefined);
+}
+
+function prepare(section: Section, options: { referenceElevation?: number }, clipAllocate: Allocate | undefined): SectionPreparation {
   // Validation copies the points straight into typed arrays, so every vertex is read from the input once.
   poolUsed = 0;
   const v = validateSectionArrays(section, fromPool);
@@ -61,7 +72,7 @@ export function prepareSection(section: Section, options: { referenceElevation?:
   for (const h of s.horizons) {
     // No flags at all when nothing is projected: the same result, without a pass over empty flags.
     const flags = h.projected && h.projected.length > 0 ? projectedSegmentFlags(h.projected, h.lineX.length) : undefined;
-    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units);
+    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units, clipAllocate);
     if (p.ok) horizons.push(p.horizon);
     else problems.push(...p.problems);
   }

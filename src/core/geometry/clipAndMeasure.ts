@@ -1,15 +1,15 @@
 import type { ClippedPolyline, PinClip } from './clipPolylineToPins';
+import { pinContacts, type PinContacts } from './pinContacts';
 import { chainsFromStarts, type XMonotoneChains } from './xMonotoneChains';
 
 // Clip a horizon or regional at its exact crossings with the vertical pins x = pL and x = pR
-// (METHOD.md: "each line must cross each pin exactly once") and measure the clipped line in the
-// same pass: the trapezoid integral ∫ (z − zOrigin) dx (exact for a polyline; the excess area and
-// the regional elevation are built from it), the length, and its x-monotone chains (the
-// self-crossing test needs them; a line that is one chain cannot cross itself). The analysis thus
-// reads every vertex once for all of these (STYLE.md: typed-array loops in the analysis hot path).
-// Contacts are counted as separate touches, crossings or runs along a pin, so a line that misses
-// a pin, touches it, or folds back across it is reported, never guessed. Each sum is formed
-// exactly as trapezoidIntegral and polylineLength form it, so the values agree to the last bit.
+// (METHOD.md: "each line must cross each pin exactly once") and measure the clipped line: the
+// trapezoid integral ∫ (z − zOrigin) dx (exact for a polyline; the excess area and the regional
+// elevation are built from it), the length, and its x-monotone chains (the self-crossing test
+// needs them; a line that is one chain cannot cross itself). Two passes: pinContacts reads x
+// only, to count contacts and find the clip; then one loop cuts the part between the pins and
+// measures it as it copies (STYLE.md: typed-array loops in the analysis hot path). Each sum is
+// formed exactly as trapezoidIntegral and polylineLength form it, so the values agree to the last bit.
 
 /** A pin clip plus the measures of the clipped line (zero measures and no chains when it is null). */
 export interface MeasuredClip {
@@ -26,7 +26,12 @@ export interface MeasuredClip {
   xMonotone: boolean;
 }
 
-/** Clip xs/zs to [pL, pR] at the exact crossings (reversing a right-to-left line) and measure it; clip.clipped is null unless each pin is met exactly once. */
+/** Gives a Float64Array of length n (its contents are overwritten). */
+export type ClipAllocate = (n: number) => Float64Array;
+
+const fresh: ClipAllocate = (n) => new Float64Array(n);
+
+/** Clip xs/zs to [pL, pR] at the exact crossings (reversing a right-to-left line) and measure it; clip.clipped is null unless each pin is met exactly once. The clipped arrays come from `allocate` (default new ones). */
 export function clipAndMeasure(
   xs: ArrayLike<number>,
   zs: ArrayLike<number>,
@@ -34,17 +39,19 @@ export function clipAndMeasure(
   pR: number,
   segmentProjected?: ArrayLike<number>,
   zOrigin?: number,
+  allocate: ClipAllocate = fresh,
 ): MeasuredClip {
   const n = Math.min(xs.length, zs.length);
   if (n < 2) return unclipped(0, 0, zOrigin);
-  const s = sweep(xs, zs, n, pL, pR, zOrigin);
-  if (s.leftCount !== 1 || s.rightCount !== 1) return unclipped(s.leftCount, s.rightCount, zOrigin);
-  if (!s.reversed) return finish(s, segmentProjected, false, n);
-  // A right-to-left line: reverse the vertices and the per-segment flags together and sweep again.
+  let c = pinContacts(xs, n, pL, pR);
+  if (c.leftCount !== 1 || c.rightCount !== 1) return unclipped(c.leftCount, c.rightCount, zOrigin);
+  if (!c.reversed) return c.found ? cutAndMeasure(xs, zs, c, pL, pR, segmentProjected, zOrigin, false, allocate) : unclipped(1, 1, zOrigin);
+  // A right-to-left line: reverse the vertices and the per-segment flags together and find the clip again.
   const rx = reverseCopy(xs, n);
   const rz = reverseCopy(zs, n);
-  const again = sweep(rx, rz, n, pL, pR, zOrigin);
-  return finish(again, segmentProjected ? reverseCopy(segmentProjected, n - 1) : undefined, true, n);
+  c = pinContacts(rx, n, pL, pR);
+  const flags = segmentProjected ? reverseCopy(segmentProjected, n - 1) : undefined;
+  return c.found ? cutAndMeasure(rx, rz, c, pL, pR, flags, zOrigin, true, allocate) : unclipped(1, 1, zOrigin);
 }
 
 function unclipped(left: number, right: number, zOrigin: number | undefined): MeasuredClip {
@@ -60,167 +67,108 @@ function reverseCopy(a: ArrayLike<number>, n: number): Float64Array {
   return out;
 }
 
-/** What one sweep found: contact counts, the clipped vertices (meaningful when both counts are 1 and not reversed) and their measures. */
-interface Sweep {
-  leftCount: number;
-  rightCount: number;
-  /** The first right-pin contact comes before the first left-pin contact. */
-  reversed: boolean;
-  xs: Float64Array;
-  zs: Float64Array;
-  source: Float64Array;
-  /** Clipped vertices written, and the input segment where the clipped line starts. */
-  m: number;
-  startSeg: number;
-  integral: number;
-  zOrigin: number;
-  length: number;
-  chainStarts: number[];
-  chainDirs: number[];
-  lastDir: number;
+/** z at fraction t of segment seg; exact at the vertices (t = 0 or 1). */
+function zAt(Z: ArrayLike<number>, seg: number, t: number): number {
+  return t === 0 ? Z[seg] : t === 1 ? Z[seg + 1] : Z[seg] + t * (Z[seg + 1] - Z[seg]);
 }
 
 const UNSET = 2;
 
+/** Running measures of a cut line (reused by every call: the loop writes them, cutAndMeasure reads them at once). */
+const run = { integral: 0, length: 0, dir: UNSET };
+
 /**
- * One pass over the input: count the contacts with each pin (separate crossings, or runs of
- * vertices on it) and, between the first left contact and the first right contact, copy the line
- * out and measure it. Lines that cannot be clipped (counts ≠ 1, reversed) are still counted in full.
+ * The clip of a left-to-right line: the start point on the left pin, the input vertices strictly
+ * between the pins, the end point on the right pin; copied out and measured in one loop.
  */
-function sweep(X: ArrayLike<number>, Z: ArrayLike<number>, n: number, pL: number, pR: number, zOption: number | undefined): Sweep {
-  // Room for every input vertex after the first plus both pin points: a clip never needs more.
-  const xs = new Float64Array(n + 1);
-  const zs = new Float64Array(n + 1);
-  const source = new Float64Array(n + 1);
+function cutAndMeasure(
+  X: ArrayLike<number>, Z: ArrayLike<number>, c: PinContacts, pL: number, pR: number,
+  P: ArrayLike<number> | undefined, zOption: number | undefined, reversed: boolean, allocate: ClipAllocate,
+): MeasuredClip {
+  const s = c.startSeg;
+  const m = c.endSeg - s + 2;
+  const xs = allocate(m);
+  const zs = allocate(m);
+  const source = allocate(m);
+  const z0 = zAt(Z, s, c.startT);
+  const zO = zOption ?? z0;
+  xs[0] = pL;
+  zs[0] = z0;
+  source[0] = s + c.startT;
+  xs[m - 1] = pR;
+  zs[m - 1] = zAt(Z, c.endSeg, c.endT);
+  source[m - 1] = c.endSeg + c.endT;
   const chainStarts: number[] = [];
   const chainDirs: number[] = [];
-  // Side of each pin: −1 left of it, 0 on it, +1 right of it. A contact's position (for the
-  // direction test) is its crossing parameter, or the first vertex of its run on the pin.
-  let prevL = X[0] < pL ? -1 : X[0] > pL ? 1 : 0;
-  let prevR = X[0] < pR ? -1 : X[0] > pR ? 1 : 0;
-  let posL = prevL === 0 ? 0 : -1;
-  let posR = prevR === 0 ? 0 : -1;
-  let nL = 0;
-  let nR = 0;
-  let copying = false;
-  let m = 0;
-  let startSeg = 0;
-  // Running measures; (px, pz) the previous clipped vertex, (rx, rz) it relative to the first one (pL, z0).
+  measureCut(X, Z, s, m, xs, zs, source, zO, chainStarts, chainDirs);
+  const projected = new Uint8Array(m - 1);
+  if (P) for (let k = 0; k < m - 1; k++) projected[k] = P[s + k] ? 1 : 0;
+  const n = X.length;
+  if (reversed) for (let k = 0; k < m; k++) source[k] = n - 1 - source[k];
+  const chains = chainsFromStarts(xs, m, chainStarts, chainDirs, run.dir);
+  const clipped: ClippedPolyline = { xs, zs, projected, source, reversed };
+  return {
+    clip: { leftContacts: 1, rightContacts: 1, clipped },
+    integral: run.integral / 2, zOrigin: zO, length: run.length, chains, xMonotone: chains.count === 1,
+  };
+}
+
+/**
+ * The hot loop, on its own so that V8 compiles it alone: copy input vertices s + 1 … s + m − 2 to
+ * xs/zs (whose first and last vertices, the pin points, are already written) and measure all
+ * m − 1 segments into `run`; chain starts and directions are pushed as found.
+ */
+function measureCut(
+  X: ArrayLike<number>, Z: ArrayLike<number>, s: number, m: number,
+  xs: Float64Array, zs: Float64Array, source: Float64Array, zO: number, chainStarts: number[], chainDirs: number[],
+): void {
+  const pL = xs[0];
+  const z0 = zs[0];
+  const last = m - 1;
+  // Running measures; (px, pz) the previous vertex, (rx, rz) it relative to the first one (pL, z0).
   let integral = 0;
   let length = 0;
-  let zO = zOption ?? 0;
-  let z0 = 0;
-  let px = 0;
-  let pz = 0;
+  let px = pL;
+  let pz = z0;
   let rx = 0;
   let rz = 0;
   let dir = UNSET;
-  for (let i = 1; i < n; i++) {
-    const x = X[i];
-    let ez = 0;
-    let ex = x;
-    if (copying && x > pL && x < pR) {
-      // Step 1: the common case, an inner vertex of the clipped line (strictly between the pins): copied as it is.
-      ez = Z[i];
-      source[m] = i;
+  for (let k = 1; k < m; k++) {
+    // Step 1: vertex k is input vertex s + k, or (k = m − 1) the end point already written.
+    let x: number;
+    let z: number;
+    if (k < last) {
+      x = X[s + k];
+      z = Z[s + k];
+      xs[k] = x;
+      zs[k] = z;
+      source[k] = s + k;
     } else {
-      // Step 2: otherwise, the side of each pin vertex i lies on (−1, 0 on the pin, +1).
-      const sL = x < pL ? -1 : x > pL ? 1 : 0;
-      const sR = x < pR ? -1 : x > pR ? 1 : 0;
-      let emit = false;
-      if (sL !== prevL) {
-        // Step 3: a left contact begins (a run on the pin, or a crossing) and completes when the line is off the pin.
-        // (x ≠ X[i − 1] whenever the side changes, so t is finite.)
-        const t = (pL - X[i - 1]) / (x - X[i - 1]);
-        if (posL < 0) posL = sL === 0 ? i : i - 1 + t;
-        if (sL === 0) {
-          // On the pin: the contact completes when the line leaves it. Back on the left pin, no valid clip.
-          copying = false;
-        } else if (nL++ === 0 && posR < 0 && sL === 1) {
-          // The clipped line starts at the crossing inside segment i − 1, or at the last vertex of the run on the pin.
-          // (A first left contact followed by x < pL, or by the right pin first, cannot give a valid clip.)
-          const onPin = prevL === 0;
-          const zStart = onPin ? Z[i - 1] : Z[i - 1] + t * (Z[i] - Z[i - 1]);
-          source[0] = onPin ? i - 1 : i - 1 + t;
-          xs[0] = pL;
-          zs[0] = zStart;
-          m = 1;
-          startSeg = i - 1;
-          zO = zOption ?? zStart;
-          z0 = zStart;
-          px = pL;
-          pz = zStart;
-          copying = true;
-        } else copying = false;
-        prevL = sL;
-      }
-      if (sR !== prevR) {
-        // Step 4: the first right contact begins (a run starts on the pin, or a crossing): the clipped line ends there.
-        const t = (pR - X[i - 1]) / (x - X[i - 1]);
-        if (posR < 0) posR = sR === 0 ? i : i - 1 + t;
-        if (sR !== 0) nR++;
-        if (copying) {
-          ex = pR;
-          ez = sR === 0 ? Z[i] : Z[i - 1] + t * (Z[i] - Z[i - 1]);
-          source[m] = sR === 0 ? i : i - 1 + t;
-          emit = true;
-          copying = false;
-        }
-        prevR = sR;
-      } else if (copying) {
-        // The clipped line started in this vertex's segment (step 3), and the vertex is inside: copied as in step 1.
-        ez = Z[i];
-        source[m] = i;
-        emit = true;
-      }
-      if (!emit) continue;
+      x = xs[k];
+      z = zs[k];
     }
-    // Step 5: write the vertex; add segment m−1 → m to the integral and length (as trapezoidIntegral and polylineLength).
-    xs[m] = ex;
-    zs[m] = ez;
-    const dx = ex - px;
-    const dz = ez - pz;
-    integral += (pz - zO + (ez - zO)) * dx;
+    // Step 2: segment k − 1 → k added to the integral and the length (as trapezoidIntegral and polylineLength).
+    const dx = x - px;
+    const dz = z - pz;
+    integral += (pz - zO + (z - zO)) * dx;
     length += Math.sqrt(dx * dx + dz * dz);
-    // Step 6: the segment's x-direction relative to the first vertex; a change starts a new chain (as xMonotoneChains).
-    const qx = ex - pL;
-    const qz = ez - z0;
+    // Step 3: the segment's x-direction relative to the first vertex; a change starts a new chain (as xMonotoneChains).
+    const qx = x - pL;
+    const qz = z - z0;
     const d = qx > rx ? 1 : qx < rx ? -1 : qz !== rz ? 0 : UNSET;
     if (d !== UNSET && !(d === dir && d !== 0)) {
       if (dir !== UNSET) {
-        chainStarts.push(m - 1);
+        chainStarts.push(k - 1);
         chainDirs.push(dir);
       }
       dir = d;
     }
-    px = ex;
-    pz = ez;
+    px = x;
+    pz = z;
     rx = qx;
     rz = qz;
-    m++;
   }
-  // Runs on a pin that last to the end of the line are contacts too.
-  if (prevL === 0) nL++;
-  if (prevR === 0) nR++;
-  return {
-    leftCount: nL, rightCount: nR, reversed: posL > posR, xs, zs, source, m, startSeg,
-    integral: integral / 2, zOrigin: zO, length, chainStarts, chainDirs, lastDir: dir,
-  };
-}
-
-/** The clipped line of a forward sweep as views of exactly m vertices, with projected flags and input positions. */
-function finish(s: Sweep, P: ArrayLike<number> | undefined, reversed: boolean, n: number): MeasuredClip {
-  const m = s.m;
-  const xs = s.xs.subarray(0, m);
-  const zs = s.zs.subarray(0, m);
-  const source = s.source.subarray(0, m);
-  const projected = new Uint8Array(m - 1);
-  if (P) for (let k = 0; k < m - 1; k++) projected[k] = P[s.startSeg + k] ? 1 : 0;
-  if (reversed) for (let k = 0; k < m; k++) source[k] = n - 1 - source[k];
-  const chains = chainsFromStarts(xs, m, s.chainStarts, s.chainDirs, s.lastDir);
-  const clipped: ClippedPolyline = { xs, zs, projected, source, reversed };
-  return {
-    clip: { leftContacts: 1, rightContacts: 1, clipped },
-    integral: s.integral, zOrigin: s.zOrigin, length: s.length, chains, xMonotone: chains.count === 1,
-  };
+  run.integral = integral;
+  run.length = length;
+  run.dir = dir;
 }

@@ -16,8 +16,13 @@ export function readPoints(v: unknown, who: string, what: string, horizon: strin
     return null;
   }
   const n = v.length;
+  // The comparison and the result object are made before the loop and used after it (a bad point is
+  // named first): code first met after a long loop has no type feedback when the loop is optimised
+  // mid-run (on-stack replacement), and V8 would deoptimise it there on every call.
+  const tooFew = n < 2;
   const xs = allocate(n);
   const zs = allocate(n);
+  const result: PointArrays = { xs, zs };
   // One pass over every point: this loop reads each vertex of the section, so it is kept lean.
   for (let i = 0; i < n; i++) {
     // Step 1: the point must be an [x, z] pair of numbers.
@@ -35,11 +40,11 @@ export function readPoints(v: unknown, who: string, what: string, horizon: strin
     xs[i] = x;
     zs[i] = z;
   }
-  if (n < 2) {
+  if (tooFew) {
     out.push({ code: 'too-few-points', horizon, message: `${who}: ${what} has ${n} point${n === 1 ? '' : 's'}; digitise at least 2 points.` });
     return null;
   }
-  return { xs, zs };
+  return result;
 }
 
 function badPoint(who: string, what: string, horizon: string | undefined, i: number, out: SectionProblem[]): null {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
+import { analysePrepared, analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
 import { prepareSection } from '../../../src/core/analysis/prepareSection';
-import type { Section } from '../../../src/core/model/section';
+import type { Section, XZ } from '../../../src/core/model/section';
 import { expectClose } from '../geometry/close';
 import { methodExample, pts, triangleHorizon } from './sections';
 
@@ -217,3 +217,20 @@ describe('analyseSection(section) called again and again', () => {
   });
 });
 
+
+describe('analyseSection and prepareSection share a reused buffer safely', () => {
+  it('analyseSection(s2) leaves the arrays of an earlier prepareSection(s1) untouched, and gives the same numbers as analysePrepared', () => {
+    // Our own check of the buffer's lifetime: prepareSection's lines are kept by the live view, analyseSection's are scratch.
+    const s1 = methodExample();
+    const kept = prepareSection(s1);
+    if (!kept.ok) throw new Error('methodExample rejected');
+    const before = kept.prepared.horizons.map((h) => [Array.from(h.line.xs), Array.from(h.line.zs), Array.from(h.regional.zs)]);
+    const s2: Section = { ...s1, horizons: s1.horizons.map((h) => ({ ...h, line: h.line.map(([x, z]): XZ => [x, z + 123]) })) };
+    const scratch = analyseSection(s2);
+    analyseSection(s1);
+    expect(kept.prepared.horizons.map((h) => [Array.from(h.line.xs), Array.from(h.line.zs), Array.from(h.regional.zs)])).toEqual(before);
+    const fresh = prepareSection(s2);
+    if (!scratch.ok || !fresh.ok) throw new Error('s2 rejected');
+    expect(scratch.analysis).toEqual(analysePrepared(fresh.prepared));
+  });
+});
