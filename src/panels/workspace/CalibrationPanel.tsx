@@ -8,7 +8,7 @@ import { setCalibration } from '../../core/model/commands/setCalibration';
 import { setUnits } from '../../core/model/commands/setUnits';
 import { updateCalibrationPoint } from '../../core/model/commands/updateCalibrationPoint';
 import type { Calibration } from '../../core/model/projectDoc';
-import { useToolSession } from '../../canvas/toolDispatch';
+import { useToolSession } from '../../state/toolSessionStore';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
 import { residualTooLarge, RESIDUAL_WARN_PX, RESIDUAL_WARN_SHARE } from './calibrationTolerance';
