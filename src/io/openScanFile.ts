@@ -4,7 +4,7 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { putScan } from '../state/scanCache';
 import { fitCamera } from '../state/camera';
-import { ensureTilePyramid } from '../canvas/scanTilesPyramid';
+import { ensureTilePyramid } from '../state/scanTilesPyramid';
 import { decodeScan } from './decodeScan';
 
 let scanCounter = 0;
