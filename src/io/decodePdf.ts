@@ -1,6 +1,6 @@
 // Renders one page of a PDF (a figure in a report) to a bitmap. The PDF library and its worker are
 // bundled with the app and loaded only when a PDF is opened; nothing is fetched from elsewhere.
-import { requestScanChoice } from './decodeScanChoice';
+import type { AskScanChoice } from './decodeScanChoice';
 
 export type PdfDecodeResult =
   | { ok: true; bitmap: ImageBitmap; page: number; dpi: number; pageCount: number }
@@ -25,9 +25,9 @@ async function loadPdfjs() {
 
 /**
  * Returns the chosen page rendered on white, or a message. With `page` (0-based) and `widthPx` given
- * (reopening a saved project) no question is asked and the page is rendered at that width.
+ * (reopening a saved project) no question is asked and the page is rendered at that width; otherwise `choose` asks for the page and resolution.
  */
-export async function decodePdf(file: Blob, name: string, maxPixels: number, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
+export async function decodePdf(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
   const pdfjs = await loadPdfjs();
   let doc: Awaited<ReturnType<typeof pdfjs.getDocument>['promise']>;
   try {
@@ -44,7 +44,7 @@ export async function decodePdf(file: Blob, name: string, maxPixels: number, pag
     let pageNo = (page ?? 0) + 1;
     let dpi = PDF_DEFAULT_DPI;
     if (page === undefined || widthPx === undefined) {
-      const choice = await requestScanChoice({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
+      const choice = await choose({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
       if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
       pageNo = choice.page + 1;
       dpi = choice.dpi ?? PDF_DEFAULT_DPI;

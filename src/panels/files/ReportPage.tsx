@@ -4,7 +4,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
-import { currentFigureSvg } from '../../io/exportFigure';
+import { currentFigureSvg } from '../../state/currentFigureSvg';
 import { formatNumber } from '../../io/formatNumber';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
