@@ -401,6 +401,31 @@ test('Monte Carlo and sensitivity results of one project never show against the 
   await expect(page.getByTestId('mc-result')).toHaveCount(0);
 });
 
+test('negative numbers on the page take the minus sign U+2212, as in the strip: graph readout, panes and cursor readout', async ({ page }) => {
+  // Unicode's MINUS SIGN (U+2212) for text a person reads; the hyphen-minus stays in data files.
+  await openDemo(page);
+  // The demo's detachment lies below sea level: the strip and the pane say so with the minus sign.
+  await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^\u2212\d+ m$/);
+  // Left of the zero-area line the graph's cursor readout gives a negative area.
+  const graph = (await page.getByTestId('area-depth-graph').boundingBox())!;
+  await page.mouse.move(graph.x + graph.width * 0.16, graph.y + graph.height * 0.5);
+  await expect(page.getByTestId('area-depth-graph-readout')).toHaveText(/^Cursor: \u2212\d/);
+  await page.getByTestId('sensitivity-section').locator('summary').click();
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-runs').fill('2000');
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-result')).toBeVisible({ timeout: 60_000 });
+  await page.mouse.move(graph.x + graph.width * 0.16, graph.y + graph.height * 0.5);
+  // Over the section view the cursor readout (below sea level at the bottom of the scan) too.
+  const view = (await page.getByTestId('section-view').boundingBox())!;
+  await page.mouse.move(view.x + view.width / 2, view.y + view.height * 0.8);
+  await expect(page.getByTestId('cursor-readout')).toHaveText(/z \u2212\d/);
+  const text = await page.evaluate(() => document.body.innerText);
+  // No hyphen-minus used as a sign anywhere on the page ("1-2-5" or "Depth-to-detachment" follow a letter or digit).
+  expect(text.split('\n').filter((line) => /(^|[^\w])-\d/.test(line))).toEqual([]);
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-minus-signs.png') });
+});
+
 /** The screen point on the top horizon's regional at x (section units), where the app draws it after start-up. */
 async function topRegionalAt(page: Page, x: number): Promise<{ x: number; y: number }> {
   const cal = fitCalibration({ kind: 'affine', points: demoCalibration.controlPoints });
