@@ -54,9 +54,7 @@ export function ScanControls() {
     <section className="panel-section" aria-label="Scan">
       <h2>Scan</h2>
       {/* A real button (reachable by Tab, Enter and Space) that opens the hidden file input's chooser. */}
-      <button type="button" className="primary" data-testid="open-scan-button" onClick={() => fileInput.current?.click()}
-        // The tools' window key handler takes Enter (finish a line) and cancels its default; here Enter must press the button.
-        onKeyDown={(e) => e.key === 'Enter' && e.stopPropagation()}>Open scan…</button>
+      <button type="button" className="primary" data-testid="open-scan-button" onClick={() => fileInput.current?.click()}>Open scan…</button>
       <input
         ref={fileInput}
         type="file"

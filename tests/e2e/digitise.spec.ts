@@ -368,3 +368,71 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
   const saved = JSON.parse(readFileSync((await dl.path())!, 'utf8')) as { doc: { horizons: { pointsPx: unknown[] }[] } };
   expect(saved.doc.horizons[0].pointsPx).toHaveLength(N);
 });
+
+test('Enter and Space: a focused button, box or summary keeps its own; the tools take them from the section view or mid-gesture', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  const zoom = page.getByTestId('zoom-readout');
+  const rows = page.getByTestId('horizon-list').locator('li');
+  const view = page.getByTestId('section-view');
+  const box = (await view.boundingBox())!;
+
+  // Enter, then Space, on the focused "Zoom in" button press it (each press zooms in).
+  const zoomIn = page.getByRole('button', { name: 'Zoom in' });
+  await zoomIn.focus();
+  let before = await zoom.textContent();
+  await page.keyboard.press('Enter');
+  await expect(zoom).not.toHaveText(before ?? '');
+  before = await zoom.textContent();
+  await page.keyboard.press('Space');
+  await expect(zoom).not.toHaveText(before ?? '');
+  // Space on a focused tool button chooses that tool; Space on the focused checkbox ticks it; Enter on a
+  // focused summary opens its section.
+  await page.getByTestId('tool-pins').focus();
+  await page.keyboard.press('Space');
+  await expect(page.getByTestId('tool-pins')).toHaveAttribute('aria-pressed', 'true');
+  await page.getByTestId('toggle-grid').focus();
+  await page.keyboard.press('Space');
+  await expect(page.getByTestId('toggle-grid')).toBeChecked();
+  await page.getByTestId('sensitivity-section').locator('summary').focus();
+  await page.keyboard.press('Enter');
+  await expect(page.getByTestId('sensitivity-section')).toHaveAttribute('open', '');
+
+  // The tools: after "Draw horizon" is pressed, clicks on the view give it the keyboard, and Enter finishes the line.
+  const n = await rows.count();
+  await page.getByTestId('tool-draw').click();
+  for (const f of [0.3, 0.5, 0.7]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.15);
+  await expect(view).toBeFocused();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 1);
+  // Held in the view, Space is for panning (the cursor turns to a hand), not for the last button pressed.
+  await page.keyboard.down('Space');
+  await expect(view).toHaveCSS('cursor', 'grab');
+  await page.keyboard.up('Space');
+
+  // Mid-gesture with no control focused (a click on the pane's text), Enter still finishes the line.
+  for (const f of [0.3, 0.6]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.1);
+  await page.getByRole('heading', { name: 'Area–depth graph' }).click();
+  await expect(view).not.toBeFocused();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 2);
+
+  // Mid-gesture but with a button focused, the button keeps Enter: the line goes on (the tool still placing).
+  for (const f of [0.35, 0.65]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.2);
+  await zoomIn.focus();
+  before = await zoom.textContent();
+  await page.keyboard.press('Enter');
+  await expect(zoom).not.toHaveText(before ?? '');
+  await expect(page.getByTestId('tool-hint')).toHaveAttribute('data-state', 'placing');
+  await expect(rows).toHaveCount(n + 2);
+  // Nor does Space held on that button start a pan.
+  await page.keyboard.down('Space');
+  await expect(view).toHaveCSS('cursor', 'crosshair');
+  await page.keyboard.up('Space');
+  // With the view focused again (as Tab reaches it), Enter finishes the line.
+  await view.focus();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 3);
+  await page.screenshot({ path: test.info().outputPath('keys-lines-finished.png') });
+});
