@@ -2,7 +2,7 @@
 import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { fitCamera, zoomAbout } from '../state/camera';
+import { zoomAbout } from '../state/camera';
 import { openScanFile } from '../io/openScanFile';
 import { ScanPageDialog } from './ScanPageDialog';
 import './scanControls.css';
@@ -11,8 +11,7 @@ const ACCEPT = 'image/png,image/jpeg,image/webp,image/tiff,application/pdf,.png,
 
 export function zoomToFit(): void {
   const scan = useDocStore.getState().doc.scan;
-  const { viewport, setCamera } = useSessionStore.getState();
-  if (scan) setCamera(fitCamera(scan.widthPx, scan.heightPx, viewport.width, viewport.height));
+  if (scan) useSessionStore.getState().fitTo({ u0: 0, v0: 0, width: scan.widthPx, height: scan.heightPx, margin: 24 });
 }
 
 export function zoomByStep(factor: number): void {
