@@ -9,7 +9,6 @@ import type { Section, XZ } from '../core/model/section';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { putScan } from '../state/scanCache';
-import { fitCamera } from '../state/camera';
 
 const DEMO_COLOURS = ['#b5522b', '#2f6f4f', '#2b5f8a', '#7a3f8f', '#4d5d2a', '#8a3030', '#1f6f8b', '#8a6d1f'];
 
@@ -81,8 +80,7 @@ export async function openDemo(): Promise<void> {
     const id = 'scan-demo';
     putScan(id, { bitmap, bytes });
     useDocStore.getState().replace(demoDoc(id, bitmap.width, bitmap.height));
-    const { viewport } = useSessionStore.getState();
-    session.setCamera(fitCamera(bitmap.width, bitmap.height, viewport.width, viewport.height));
+    session.fitTo({ u0: 0, v0: 0, width: bitmap.width, height: bitmap.height, margin: 24 });
   } catch (e) {
     session.showMessage('error', `The demo section could not be opened: ${e instanceof Error ? e.message : String(e)}`);
   } finally {

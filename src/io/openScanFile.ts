@@ -3,7 +3,6 @@ import { setScan } from '../core/model/commands/setScan';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { putScan } from '../state/scanCache';
-import { fitCamera } from '../state/camera';
 import { ensureTilePyramid } from '../canvas/scanTilesPyramid';
 import { decodeScan } from './decodeScan';
 
@@ -46,8 +45,7 @@ export async function openScanFile(file: File): Promise<boolean> {
         ...(result.kind === 'pdf' ? { page: result.page ?? 0 } : {}),
       }),
     );
-    const { viewport } = useSessionStore.getState();
-    session.setCamera(fitCamera(result.widthPx, result.heightPx, viewport.width, viewport.height));
+    session.fitTo({ u0: 0, v0: 0, width: result.widthPx, height: result.heightPx, margin: 24 });
     const where = result.pageCount && result.pageCount > 1 ? `, page ${(result.page ?? 0) + 1} of ${result.pageCount}` : '';
     const dpi = result.dpi ? ` at ${result.dpi} dpi` : '';
     session.showMessage('info', `Opened ${file.name}${where}${dpi} (${result.widthPx} × ${result.heightPx} px).`);

@@ -1,7 +1,6 @@
 // The file menu's project actions: open (project or section file), save, new. A file that cannot
 // be opened leaves the open project exactly as it was.
 import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
-import { fitCamera } from '../state/camera';
 import { useDocStore } from '../state/docStore';
 import { getScan, putScan, type CachedScan } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
@@ -11,17 +10,16 @@ import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, seriali
 
 /** Fits the view to the scan, or to the drawn lines when there is no scan. */
 export function fitViewToDoc(doc: ProjectDoc): void {
-  const { viewport, setCamera } = useSessionStore.getState();
+  const { fitTo } = useSessionStore.getState();
   if (doc.scan) {
-    setCamera(fitCamera(doc.scan.widthPx, doc.scan.heightPx, viewport.width, viewport.height));
+    fitTo({ u0: 0, v0: 0, width: doc.scan.widthPx, height: doc.scan.heightPx, margin: 24 });
     return;
   }
   const all = doc.horizons.flatMap((h) => h.pointsPx);
   if (all.length === 0) return;
   const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
   const [u0, v0] = [Math.min(...us), Math.min(...vs)];
-  const cam = fitCamera(Math.max(...us) - u0 + 1, Math.max(...vs) - v0 + 1, viewport.width, viewport.height, 48);
-  setCamera({ scale: cam.scale, x: cam.x - u0 * cam.scale, y: cam.y - v0 * cam.scale });
+  fitTo({ u0, v0, width: Math.max(...us) - u0 + 1, height: Math.max(...vs) - v0 + 1, margin: 48 });
 }
 
 /**

@@ -5,6 +5,7 @@
 // current section's is stale: show it marked as such, never as the current state's spread.
 import { create } from 'zustand';
 import type { LengthUnit, Section } from '../core/model/section';
+import { useDocStore } from './docStore';
 
 /** P10 / P50 / P90 of one quantity over the valid runs (units). */
 export interface Percentiles { p10: number; p50: number; p90: number }
@@ -63,6 +64,12 @@ export const useUncertaintyStore = create<UncertaintyState>((set) => ({
   }),
   clear: () => set({ byScenario: {}, amplificationByScenario: {} }),
 }));
+
+// Results belong to the project they were run on: a new, opened or restored project starts with none,
+// even when its section happens to give the same key (the same section file opened again).
+useDocStore.subscribe((s, prev) => {
+  if (s.opened !== prev.opened) useUncertaintyStore.getState().clear();
+});
 
 // The key hashes every number and name the analysis reads (units, pins, reference, each horizon's
 // name, include flag, line, regional and projected runs), so two sections with the same key give the
