@@ -9,14 +9,8 @@ import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { imageToSection } from '../core/calibration/mapPoints';
 import { DragReadout } from './DragReadout';
-import { stepDecimals } from './gridTicks';
+import { fixedLabel, stepDecimals } from './gridTicks';
 import './cursorReadout.css';
-
-/** Returns v.toFixed(decimals) without a sign on a value that rounds to zero ("0.0", never "-0.0"). */
-function fixedNoNegativeZero(v: number, decimals: number): string {
-  const text = v.toFixed(decimals);
-  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
-}
 
 export function CursorReadout() {
   const ref = useRef<HTMLDivElement>(null);
@@ -37,14 +31,14 @@ export function CursorReadout() {
       const { camera } = useSessionStore.getState();
       const p = screenToImage(camera, last.x, last.y);
       if (!fit) {
-        el.textContent = `u ${fixedNoNegativeZero(p[0], camera.scale > 2 ? 1 : 0)}  v ${fixedNoNegativeZero(p[1], camera.scale > 2 ? 1 : 0)} px`;
+        el.textContent = `u ${fixedLabel(p[0], camera.scale > 2 ? 1 : 0)}  v ${fixedLabel(p[1], camera.scale > 2 ? 1 : 0)} px`;
         return;
       }
       const [x, z] = imageToSection(fit, p);
       // As many decimals as one screen pixel resolves.
       const dx = stepDecimals(fit.unitsPerPxX / camera.scale);
       const dz = stepDecimals(fit.unitsPerPxZ / camera.scale);
-      el.textContent = `x ${fixedNoNegativeZero(x, dx)}  z ${fixedNoNegativeZero(z, dz)} ${unit}`;
+      el.textContent = `x ${fixedLabel(x, dx)}  z ${fixedLabel(z, dz)} ${unit}`;
     };
     const onMove = (e: PointerEvent) => {
       const r = box.getBoundingClientRect();

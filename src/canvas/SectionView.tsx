@@ -1,5 +1,7 @@
 // The section view: a react-konva Stage filling its box. Wheel zooms about the cursor; dragging with the
-// space bar held or the middle button pans. The camera is the Stage's own scale and position.
+// space bar held or the middle button pans. The camera is the Stage's own scale and position. The box
+// takes the keyboard focus when pressed (and by Tab), so that Enter and Space go to the tools from here
+// while a focused button or field elsewhere keeps its own (keyForTools).
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { Stage } from 'react-konva';
 import type Konva from 'konva';
@@ -12,7 +14,8 @@ import { OverlayLayer } from './OverlayLayer';
 import { GridLayer } from './GridLayer';
 import { CursorReadout } from './CursorReadout';
 import { usePinchZoom } from './usePinchZoom';
-import { toolPointerDown, useToolDispatch } from './toolDispatch';
+import { toolMidGesture, toolPointerDown, useToolDispatch } from './toolDispatch';
+import { keyForTools } from './keyForTools';
 
 const WHEEL_ZOOM_STEP = 1.0015;
 /** A trackpad pinch arrives as a wheel with ctrlKey and small deltas: a stronger step per unit. */
@@ -38,9 +41,8 @@ export function SectionView() {
   }, []);
 
   useEffect(() => {
-    const typing = (t: EventTarget | null) => t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
     const down = (e: KeyboardEvent) => {
-      if (e.code === 'Space' && !typing(e.target)) {
+      if (e.code === 'Space' && keyForTools(e.target, boxRef.current, panStart.current !== null || toolMidGesture())) {
         setSpaceHeld(true);
         e.preventDefault();
       }
@@ -74,6 +76,8 @@ export function SectionView() {
 
   const onPointerDown = useCallback(
     (e: Konva.KonvaEventObject<PointerEvent>) => {
+      // Pressed, the view has the keyboard: Enter and Space now go to the tools, not to the last button pressed.
+      boxRef.current?.focus({ preventScroll: true });
       if (!(spaceHeld || e.evt.button === 1)) {
         toolPointerDown(e.evt);
         return;
@@ -101,7 +105,7 @@ export function SectionView() {
 
   const cursor = panning ? 'grabbing' : spaceHeld ? 'grab' : 'crosshair';
   return (
-    <div ref={boxRef} className="section-view" data-testid="section-view" style={{ cursor }} onContextMenu={(e) => e.preventDefault()} onAuxClick={(e) => e.preventDefault()}>
+    <div ref={boxRef} className="section-view" data-testid="section-view" tabIndex={0} role="application" aria-label="Section view" style={{ cursor }} onContextMenu={(e) => e.preventDefault()} onAuxClick={(e) => e.preventDefault()}>
       <Stage
         width={viewport.width}
         height={viewport.height}

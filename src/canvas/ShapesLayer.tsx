@@ -1,5 +1,7 @@
 // Digitised horizons, regionals, pins and excess-area fills (section workspace). Nothing here listens:
-// the tools pick shapes from the document themselves. Each shape selects only its own data.
+// the tools pick shapes from the document themselves. Each shape selects only its own data. Long lines
+// are drawn decimated to screen-pixel resolution (decimatePolyline) and again on every zoom; the
+// document, the tools and the analysis keep every vertex.
 import { memo, useMemo } from 'react';
 import { Group, Layer, Line } from 'react-konva';
 import { useShallow } from 'zustand/react/shallow';
@@ -9,6 +11,7 @@ import { activeScenario } from '../core/model/docToSection';
 import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
+import { DECIMATE_ABOVE_VERTICES, decimatePolyline } from './decimatePolyline';
 import { clippedHorizonPx, excessFillGeometry } from './excessFillGeometry';
 import { pinLinePx } from './pinLinePx';
 
@@ -32,14 +35,36 @@ function runsOf(h: DocHorizon): { points: number[]; projected: boolean }[] {
   return runs;
 }
 
+/** How a long line is drawn: the zoom (screen px per image px) and the window of pixel columns (u · scale) kept in detail. */
+interface Decimation { scale: number; columns: [number, number] }
+
+/**
+ * Returns the decimation for a line of `vertices` (null for a line short enough to draw whole, which then does not
+ * redraw on zoom or pan). The window is the view with a view's width each side, moved in steps of a view's width,
+ * so a pan redraws a long line once per view width rather than every frame.
+ */
+function useDecimation(vertices: number): Decimation | null {
+  const long = vertices > DECIMATE_ABOVE_VERTICES;
+  const scale = useSessionStore((s) => (long ? s.camera.scale : 0));
+  const width = useSessionStore((s) => (long ? Math.max(1, Math.ceil(s.viewport.width)) : 1));
+  // Screen x = u · scale + camera.x: the view's left edge is pixel column −camera.x.
+  const step = useSessionStore((s) => (long ? Math.floor(-s.camera.x / Math.max(1, Math.ceil(s.viewport.width))) : 0));
+  return useMemo(() => (long ? { scale, columns: [(step - 1) * width, (step + 2) * width] } : null), [long, scale, width, step]);
+}
+
+/** Returns the flat line as drawn: decimated, or itself without a decimation. */
+const drawnPoints = (flat: number[], d: Decimation | null): number[] => (d ? decimatePolyline(flat, d.scale, d.columns) : flat);
+
 const HorizonShape = memo(function HorizonShape({ id }: { id: string }) {
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
   const selected = useSessionStore((s) => s.selectedHorizonId === id);
+  const decimation = useDecimation(h?.pointsPx.length ?? 0);
   const runs = useMemo(() => (h ? runsOf(h) : []), [h]);
+  const drawn = useMemo(() => runs.map((r) => ({ ...r, points: drawnPoints(r.points, decimation) })), [runs, decimation]);
   if (!h || !h.visible) return null;
   return (
     <Group>
-      {runs.map((r, i) => (
+      {drawn.map((r, i) => (
         <Line key={i} points={r.points} stroke={h.colour} strokeWidth={selected ? 3.5 : 2.2} strokeScaleEnabled={false} lineJoin="round" lineCap="round"
           dash={r.projected ? PROJECTED_DASH : undefined} perfectDrawEnabled={false} listening={false} />
       ))}
@@ -51,7 +76,8 @@ const RegionalShape = memo(function RegionalShape({ id }: { id: string }) {
   const regional = useDocStore((s) => activeScenario(s.doc).regionals[id]);
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
   const selected = useSessionStore((s) => s.selectedHorizonId === id);
-  const points = useMemo(() => (regional ? regional.flat() : []), [regional]);
+  const decimation = useDecimation(regional?.length ?? 0);
+  const points = useMemo(() => drawnPoints(regional ? regional.flat() : [], decimation), [regional, decimation]);
   if (!regional || !h || !h.visible) return null;
   return <Line points={points} stroke={h.colour} opacity={0.9} strokeWidth={selected ? 2.5 : 1.6} dash={REGIONAL_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} />;
 });
@@ -74,14 +100,17 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
   const head = useMemo(() => (h && pins ? clippedHorizonPx(h.pointsPx, pins, frame) : null), [h, pins, frame]);
   const geometry = useMemo(() => (h && regional && pins ? excessFillGeometry(h.pointsPx, regional, pins, frame, head) : null), [h, regional, pins, frame, head]);
+  // The loop follows the horizon between the pins: as long, and decimated the same way.
+  const decimation = useDecimation(geometry ? geometry.loop.length / 2 : 0);
+  const loop = useMemo(() => (geometry ? drawnPoints(geometry.loop, decimation) : []), [geometry, decimation]);
   if (!geometry || !h?.visible) return null;
   return (
     <Group listening={false}>
       <Group clipFunc={clipTo(geometry.above)}>
-        <Line points={geometry.loop} closed fill={FILL_ABOVE} perfectDrawEnabled={false} listening={false} />
+        <Line points={loop} closed fill={FILL_ABOVE} perfectDrawEnabled={false} listening={false} />
       </Group>
       <Group clipFunc={clipTo(geometry.below)}>
-        <Line points={geometry.loop} closed fill={FILL_BELOW} perfectDrawEnabled={false} listening={false} />
+        <Line points={loop} closed fill={FILL_BELOW} perfectDrawEnabled={false} listening={false} />
       </Group>
     </Group>
   );

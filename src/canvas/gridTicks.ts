@@ -25,6 +25,13 @@ export function niceStep(raw: number): number {
   return 10 * p;
 }
 
+/** Returns v to `decimals` places for a label on the view, with the minus sign U+2212 and never "−0" ("−1250.5", "0.0"). */
+export function fixedLabel(v: number, decimals: number): string {
+  const text = v.toFixed(decimals);
+  if (/^-0(\.0*)?$/.test(text)) return text.slice(1);
+  return text.replace('-', '\u2212');
+}
+
 /** Returns the decimals needed to tell ticks `step` apart (0 for steps of 1 or more). */
 export function stepDecimals(step: number): number {
   return Math.max(0, -Math.floor(Math.log10(step) + 1e-9));

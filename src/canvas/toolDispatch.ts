@@ -9,6 +9,7 @@ import { screenToImage } from '../state/camera';
 import { useToolSession } from '../state/toolSessionStore';
 import { toolEntry, TOOLS } from '../tools/toolRegistry';
 import { runTool, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
+import { keyForTools } from './keyForTools';
 
 /** Pointer tolerance for picking, in screen pixels. */
 const PICK_TOLERANCE_SCREEN_PX = 7;
@@ -101,6 +102,11 @@ export function cancelTool(): void {
   dispatchToolEvent({ type: 'cancel' });
 }
 
+/** Returns true while the active tool is mid-gesture (a pointer held, or a line, pin pair or regional begun). */
+export function toolMidGesture(): boolean {
+  return dragging || toolState.name !== toolEntry(toolId).tool.initial.name;
+}
+
 useSessionStore.subscribe((s) => {
   if (s.activeTool === toolId) return;
   cancelTool();
@@ -159,6 +165,8 @@ function onKey(e: KeyboardEvent): void {
     return;
   }
   if (e.key === 'Enter' || e.key === 'Backspace' || e.key === 'Delete') {
+    // A focused button or link keeps its Enter (keyForTools); Backspace and Delete mean nothing to it.
+    if (e.key === 'Enter' && !keyForTools(e.target, boxElement, toolMidGesture())) return;
     e.preventDefault();
     dispatchToolEvent({ type: 'key', key: e.key });
     return;

@@ -2,7 +2,7 @@
 import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { fitCamera, zoomAbout } from '../state/camera';
+import { zoomAbout } from '../state/camera';
 import { openScanFile } from '../state/openScanFile';
 import { ScanPageDialog } from './ScanPageDialog';
 import './scanControls.css';
@@ -11,8 +11,7 @@ const ACCEPT = 'image/png,image/jpeg,image/webp,image/tiff,application/pdf,.png,
 
 export function zoomToFit(): void {
   const scan = useDocStore.getState().doc.scan;
-  const { viewport, setCamera } = useSessionStore.getState();
-  if (scan) setCamera(fitCamera(scan.widthPx, scan.heightPx, viewport.width, viewport.height));
+  if (scan) useSessionStore.getState().fitTo({ u0: 0, v0: 0, width: scan.widthPx, height: scan.heightPx, margin: 24 });
 }
 
 export function zoomByStep(factor: number): void {
@@ -54,9 +53,7 @@ export function ScanControls() {
     <section className="panel-section" aria-label="Scan">
       <h2>Scan</h2>
       {/* A real button (reachable by Tab, Enter and Space) that opens the hidden file input's chooser. */}
-      <button type="button" className="primary" data-testid="open-scan-button" onClick={() => fileInput.current?.click()}
-        // The tools' window key handler takes Enter (finish a line) and cancels its default; here Enter must press the button.
-        onKeyDown={(e) => e.key === 'Enter' && e.stopPropagation()}>Open scan…</button>
+      <button type="button" className="primary" data-testid="open-scan-button" onClick={() => fileInput.current?.click()}>Open scan…</button>
       <input
         ref={fileInput}
         type="file"

@@ -17,6 +17,8 @@ export interface DocState {
   revision: number;
   /** Revision of the last save or open, to warn before closing with unsaved changes. */
   savedRevision: number;
+  /** Bumped by every replace (new, open, restore): what the session derived for one project means nothing for the next. */
+  opened: number;
   apply: (command: DocCommand) => void;
   beginGesture: () => void;
   endGesture: () => void;
@@ -35,6 +37,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
   gestureStart: null,
   revision: 0,
   savedRevision: 0,
+  opened: 0,
   apply: (command) => {
     const { doc, past, gestureStart, revision } = get();
     const next = command(doc);
@@ -67,7 +70,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
   },
   replace: (doc) => {
     const revision = get().revision + 1;
-    set({ doc, past: [], future: [], gestureStart: null, revision, savedRevision: revision });
+    set({ doc, past: [], future: [], gestureStart: null, revision, savedRevision: revision, opened: get().opened + 1 });
   },
   markSaved: () => set({ savedRevision: get().revision }),
 }));

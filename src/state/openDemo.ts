@@ -6,7 +6,6 @@ import { fitCalibration } from '../core/calibration/fitCalibration';
 import { sectionToImage } from '../core/calibration/mapPoints';
 import { emptyProjectDoc, type ControlPoint, type ProjectDoc } from '../core/model/projectDoc';
 import type { Section, XZ } from '../core/model/section';
-import { fitCamera } from './camera';
 import { useDocStore } from './docStore';
 import { putScan } from './scanCache';
 import { useSessionStore } from './sessionStore';
@@ -81,8 +80,7 @@ export async function openDemo(): Promise<void> {
     const id = 'scan-demo';
     putScan(id, { bitmap, bytes });
     useDocStore.getState().replace(demoDoc(id, bitmap.width, bitmap.height));
-    const { viewport } = useSessionStore.getState();
-    session.setCamera(fitCamera(bitmap.width, bitmap.height, viewport.width, viewport.height));
+    session.fitTo({ u0: 0, v0: 0, width: bitmap.width, height: bitmap.height, margin: 24 });
   } catch (e) {
     session.showMessage('error', `The demo section could not be opened: ${e instanceof Error ? e.message : String(e)}`);
   } finally {

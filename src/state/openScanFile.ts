@@ -1,7 +1,6 @@
 // Opens a scan file chosen, dropped or pasted by the user. A bad file leaves the project unchanged.
 import { setScan } from '../core/model/commands/setScan';
 import { decodeScan } from '../io/decodeScan';
-import { fitCamera } from './camera';
 import { useDocStore } from './docStore';
 import { putScan } from './scanCache';
 import { requestScanChoice } from './scanChoiceStore';
@@ -47,8 +46,7 @@ export async function openScanFile(file: File): Promise<boolean> {
         ...(result.kind === 'pdf' ? { page: result.page ?? 0 } : {}),
       }),
     );
-    const { viewport } = useSessionStore.getState();
-    session.setCamera(fitCamera(result.widthPx, result.heightPx, viewport.width, viewport.height));
+    session.fitTo({ u0: 0, v0: 0, width: result.widthPx, height: result.heightPx, margin: 24 });
     const where = result.pageCount && result.pageCount > 1 ? `, page ${(result.page ?? 0) + 1} of ${result.pageCount}` : '';
     const dpi = result.dpi ? ` at ${result.dpi} dpi` : '';
     session.showMessage('info', `Opened ${file.name}${where}${dpi} (${result.widthPx} × ${result.heightPx} px).`);

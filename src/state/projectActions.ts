@@ -4,7 +4,6 @@ import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
 import { decodeScan } from '../io/decodeScan';
 import { downloadFile, safeFileName } from '../io/downloadFile';
 import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
-import { fitCamera } from './camera';
 import { useDocStore } from './docStore';
 import { getScan, putScan, type CachedScan } from './scanCache';
 import { requestScanChoice } from './scanChoiceStore';
@@ -12,17 +11,16 @@ import { useSessionStore } from './sessionStore';
 
 /** Fits the view to the scan, or to the drawn lines when there is no scan. */
 export function fitViewToDoc(doc: ProjectDoc): void {
-  const { viewport, setCamera } = useSessionStore.getState();
+  const { fitTo } = useSessionStore.getState();
   if (doc.scan) {
-    setCamera(fitCamera(doc.scan.widthPx, doc.scan.heightPx, viewport.width, viewport.height));
+    fitTo({ u0: 0, v0: 0, width: doc.scan.widthPx, height: doc.scan.heightPx, margin: 24 });
     return;
   }
   const all = doc.horizons.flatMap((h) => h.pointsPx);
   if (all.length === 0) return;
   const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
   const [u0, v0] = [Math.min(...us), Math.min(...vs)];
-  const cam = fitCamera(Math.max(...us) - u0 + 1, Math.max(...vs) - v0 + 1, viewport.width, viewport.height, 48);
-  setCamera({ scale: cam.scale, x: cam.x - u0 * cam.scale, y: cam.y - v0 * cam.scale });
+  fitTo({ u0, v0, width: Math.max(...us) - u0 + 1, height: Math.max(...vs) - v0 + 1, margin: 48 });
 }
 
 /**

@@ -1,5 +1,6 @@
 // The session slice: camera, active tool, selection and messages. Not saved, not undoable.
 import { create } from 'zustand';
+import { fitTargetCamera, resizedCamera } from './camera';
 
 export interface Camera {
   /** Screen pixels per image pixel. */
@@ -9,11 +10,16 @@ export interface Camera {
   y: number;
 }
 
+/** A box in image pixels the view was fitted to, with the margin (screen px) kept around it. */
+export interface FitTarget { u0: number; v0: number; width: number; height: number; margin: number }
+
 export type MessageKind = 'error' | 'info';
 export interface Message { kind: MessageKind; text: string; id: number }
 
 export interface SessionState {
   camera: Camera;
+  /** What the view was last fitted to, while the user has not zoomed or panned since; null once they have. */
+  fitted: FitTarget | null;
   viewport: { width: number; height: number };
   activeTool: string;
   selectedHorizonId: string | null;
@@ -21,7 +27,11 @@ export interface SessionState {
   busy: string | null;
   /** False until start-up (restore or demo) has finished. */
   started: boolean;
+  /** A zoom or pan of the user's: the view is no longer kept fitted. */
   setCamera: (camera: Camera) => void;
+  /** Fits the view to the target, and keeps it fitted when the view changes size until the user zooms or pans. */
+  fitTo: (target: FitTarget) => void;
+  /** The view's new size: refitted when fitted, else the view's centre kept (resizedCamera). */
   setViewport: (width: number, height: number) => void;
   setTool: (tool: string) => void;
   selectHorizon: (id: string | null) => void;
@@ -35,14 +45,20 @@ let messageId = 0;
 
 export const useSessionStore = create<SessionState>()((set) => ({
   camera: { scale: 1, x: 0, y: 0 },
+  fitted: null,
   viewport: { width: 800, height: 600 },
   activeTool: 'select',
   selectedHorizonId: null,
   message: null,
   busy: null,
   started: false,
-  setCamera: (camera) => set({ camera }),
-  setViewport: (width, height) => set({ viewport: { width, height } }),
+  setCamera: (camera) => set({ camera, fitted: null }),
+  fitTo: (target) => set((s) => ({ camera: fitTargetCamera(target, s.viewport.width, s.viewport.height), fitted: target })),
+  setViewport: (width, height) => set((s) => {
+    if (s.viewport.width === width && s.viewport.height === height) return s;
+    const viewport = { width, height };
+    return { viewport, camera: resizedCamera(s.camera, s.fitted, s.viewport, viewport) };
+  }),
   setTool: (activeTool) => set({ activeTool }),
   selectHorizon: (selectedHorizonId) => set({ selectedHorizonId }),
   showMessage: (kind, text) => set({ message: { kind, text, id: ++messageId } }),

@@ -5,6 +5,7 @@
 // current section's is stale: show it marked as such, never as the current state's spread.
 import { create } from 'zustand';
 import type { MonteCarloRecord } from '../core/analysis/monteCarloRecord';
+import { useDocStore } from './docStore';
 
 /** The sensitivity amplification 1 + W0/D of a scenario (null: no detachment), for the section with `sectionKey`. */
 export interface AmplificationRecord { sectionKey: string; amplification: number | null; pinWidth: number; displacement: number | null }
@@ -31,3 +32,9 @@ export const useUncertaintyStore = create<UncertaintyState>((set) => ({
   }),
   clear: () => set({ byScenario: {}, amplificationByScenario: {} }),
 }));
+
+// Results belong to the project they were run on: a new, opened or restored project starts with none,
+// even when its section happens to give the same key (the same section file opened again).
+useDocStore.subscribe((s, prev) => {
+  if (s.opened !== prev.opened) useUncertaintyStore.getState().clear();
+});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { gridLines, niceStep, stepDecimals } from '../../src/canvas/gridTicks';
+import { fixedLabel, gridLines, niceStep, stepDecimals } from '../../src/canvas/gridTicks';
 import { fitCalibration } from '../../src/core/calibration/fitCalibration';
 
 describe('niceStep', () => {
@@ -54,5 +54,15 @@ describe('gridLines', () => {
     expect(g.stepX).toBe(50);
     expect(g.x[0].value).toBe(0);
     expect(g.x[0].from[0]).toBe(10);
+  });
+});
+
+describe('fixedLabel', () => {
+  it('fixedLabel writes negative values with the minus sign U+2212 (Unicode MINUS SIGN) and never "−0"', () => {
+    expect(fixedLabel(-2800, 0)).toBe('\u22122800');
+    expect(fixedLabel(-1250.46, 1)).toBe('\u22121250.5');
+    expect(fixedLabel(-0.04, 1)).toBe('0.0');
+    expect(fixedLabel(-0, 0)).toBe('0');
+    expect(fixedLabel(37.5, 1)).toBe('37.5');
   });
 });

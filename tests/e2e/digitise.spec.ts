@@ -2,6 +2,7 @@
 // control points, draw horizons by clicks, place pins, draw a regional and derive the others, drag
 // every regional up and see the detachment get shallower (METHOD.md, "Sensitivity to the regional":
 // raising every regional by δ moves the detachment up by δ(1 + W0/D)), undo and redo, zoom and pan.
+import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
@@ -279,4 +280,159 @@ test('workspace basics: full caution in the strip, New returns to Select, Open s
   // The units select has a name, and says that switching only relabels.
   await expect(page.getByRole('combobox', { name: 'Units' })).toBeVisible();
   await expect(page.getByTestId('units-note')).toContainText('labels only — coordinates are not converted');
+});
+
+/** Rows (view px) in the column x where the composited view shows the colour within `tol` (sum of channel differences). */
+async function rowsOfColour(page: Page, x: number, colour: [number, number, number], tol = 60): Promise<number[]> {
+  return page.evaluate(
+    ([px, c, t]) => {
+      const box = document.querySelector('[data-testid="section-view"]') as HTMLElement;
+      const ratio = window.devicePixelRatio || 1;
+      const h = Math.floor(box.clientHeight * ratio);
+      const top: number[][] = Array.from({ length: h }, () => [0, 0, 0, 0]);
+      for (const canvas of Array.from(box.querySelectorAll('canvas'))) {
+        const d = canvas.getContext('2d')!.getImageData(Math.round(px * ratio), 0, 1, Math.min(h, canvas.height)).data;
+        for (let y = 0; y < Math.min(h, canvas.height); y++) if (d[4 * y + 3] > 0) top[y] = [d[4 * y], d[4 * y + 1], d[4 * y + 2], d[4 * y + 3]];
+      }
+      const rows: number[] = [];
+      top.forEach((p, y) => {
+        if (p[3] > 200 && Math.abs(p[0] - c[0]) + Math.abs(p[1] - c[1]) + Math.abs(p[2] - c[2]) < t) rows.push(y / ratio);
+      });
+      return rows;
+    },
+    [x, colour, tol] as const,
+  );
+}
+
+/** Vertices the section view draws as lines (every Konva Line on the stage). */
+async function drawnLineVertices(page: Page): Promise<number> {
+  return page.evaluate(`(() => window.Konva.stages[0].find('Line').reduce((n, l) => n + l.points().length / 2, 0))()`);
+}
+
+test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zoom, selected by a click, and kept whole', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  // A sin² bump 800 m high over the 10 000 m between the pins (area aλ/2 = 4 km², METHOD.md check values), with a
+  // ripple of 20 m and 50 m wavelength: 200 whole wavelengths between the pins add no area.
+  const N = 100_000;
+  const line: [number, number][] = [];
+  for (let k = 0; k < N; k++) {
+    const x = -500 + (11_000 * k) / (N - 1);
+    const bump = x > 0 && x < 10_000 ? 800 * Math.sin((Math.PI * x) / 10_000) ** 2 : 0;
+    line.push([x, 500 + bump + 20 * Math.sin((2 * Math.PI * x) / 50)]);
+  }
+  const section = { units: 'm', pins: [0, 10_000], horizons: [{ name: 'Long line', line, regional: [[-500, 500], [10_500, 500]] }] };
+  await page.getByTestId('open-project').setInputFiles({ name: 'long.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(section)) });
+  await expect(page.getByTestId('message-info')).toContainText('Opened long.json');
+  // The analysis uses every vertex: the excess area is the bump's 4 km² to the table's three decimals.
+  await expect(page.getByTestId('horizon-table')).toContainText('4.000');
+  const box = (await page.getByTestId('section-view').boundingBox())!;
+  // Drawn: the line's red (#c0392b, the first horizon colour) crosses the view at a quarter, half and three quarters.
+  const red: [number, number, number] = [192, 57, 43];
+  for (const f of [0.25, 0.5, 0.75]) await expect.poll(async () => (await rowsOfColour(page, box.width * f, red)).length).toBeGreaterThan(0);
+  // At screen resolution: no more than four vertices per pixel column for the line and again for its fill
+  // (min/max decimation) over the view and a view's width each side, where 100 000 each would be drawn otherwise.
+  const bound = 2 * 4 * (3 * Math.ceil(box.width) + 3) + 50;
+  const fitted = await drawnLineVertices(page);
+  expect(fitted).toBeLessThanOrEqual(bound);
+  await page.screenshot({ path: test.info().outputPath('long-line-fitted.png') });
+
+  // Zoomed in about the middle, it is drawn again at the new resolution, still bounded, still there.
+  const mid = { x: box.x + box.width / 2, y: box.y + (await rowsOfColour(page, box.width / 2, red))[0] };
+  await page.mouse.move(mid.x, mid.y);
+  for (let i = 0; i < 4; i++) await page.mouse.wheel(0, -400);
+  await expect.poll(() => drawnLineVertices(page)).not.toBe(fitted);
+  expect(await drawnLineVertices(page)).toBeLessThanOrEqual(bound);
+  await expect.poll(async () => (await rowsOfColour(page, box.width / 2, red)).length).toBeGreaterThan(0);
+  await page.screenshot({ path: test.info().outputPath('long-line-zoomed.png') });
+  // Panned by more than a view's width (12 × 80 px with the arrow key), the part now in view is drawn in detail.
+  for (let i = 0; i < 12; i++) await page.keyboard.press('ArrowLeft');
+  await expect.poll(async () => (await rowsOfColour(page, box.width / 2, red)).length).toBeGreaterThan(0);
+  await expect.poll(async () => (await rowsOfColour(page, box.width * 0.1, red)).length).toBeGreaterThan(0);
+  expect(await drawnLineVertices(page)).toBeLessThanOrEqual(bound);
+
+  // A click on the drawn line selects its horizon (the tools pick from the document's every vertex).
+  await page.getByTestId('tool-select').click();
+  const rows = await rowsOfColour(page, box.width / 2, red);
+  await page.mouse.click(box.x + 8, box.y + 8);
+  await expect(page.getByTestId('horizon-list').locator('li.selected')).toHaveCount(0);
+  await page.mouse.click(box.x + box.width / 2, box.y + rows[Math.floor(rows.length / 2)]);
+  await expect(page.getByTestId('horizon-list').locator('li').first()).toHaveClass(/selected/);
+
+  // The document keeps all 100 000 vertices.
+  const [dl] = await Promise.all([page.waitForEvent('download'), (async () => {
+    await page.getByTestId('menu-project').click();
+    await page.getByTestId('save-project').click();
+  })()]);
+  const saved = JSON.parse(readFileSync((await dl.path())!, 'utf8')) as { doc: { horizons: { pointsPx: unknown[] }[] } };
+  expect(saved.doc.horizons[0].pointsPx).toHaveLength(N);
+});
+
+test('Enter and Space: a focused button, box or summary keeps its own; the tools take them from the section view or mid-gesture', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  const zoom = page.getByTestId('zoom-readout');
+  const rows = page.getByTestId('horizon-list').locator('li');
+  const view = page.getByTestId('section-view');
+  const box = (await view.boundingBox())!;
+
+  // Enter, then Space, on the focused "Zoom in" button press it (each press zooms in).
+  const zoomIn = page.getByRole('button', { name: 'Zoom in' });
+  await zoomIn.focus();
+  let before = await zoom.textContent();
+  await page.keyboard.press('Enter');
+  await expect(zoom).not.toHaveText(before ?? '');
+  before = await zoom.textContent();
+  await page.keyboard.press('Space');
+  await expect(zoom).not.toHaveText(before ?? '');
+  // Space on a focused tool button chooses that tool; Space on the focused checkbox ticks it; Enter on a
+  // focused summary opens its section.
+  await page.getByTestId('tool-pins').focus();
+  await page.keyboard.press('Space');
+  await expect(page.getByTestId('tool-pins')).toHaveAttribute('aria-pressed', 'true');
+  await page.getByTestId('toggle-grid').focus();
+  await page.keyboard.press('Space');
+  await expect(page.getByTestId('toggle-grid')).toBeChecked();
+  await page.getByTestId('sensitivity-section').locator('summary').focus();
+  await page.keyboard.press('Enter');
+  await expect(page.getByTestId('sensitivity-section')).toHaveAttribute('open', '');
+
+  // The tools: after "Draw horizon" is pressed, clicks on the view give it the keyboard, and Enter finishes the line.
+  const n = await rows.count();
+  await page.getByTestId('tool-draw').click();
+  for (const f of [0.3, 0.5, 0.7]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.15);
+  await expect(view).toBeFocused();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 1);
+  // Held in the view, Space is for panning (the cursor turns to a hand), not for the last button pressed.
+  await page.keyboard.down('Space');
+  await expect(view).toHaveCSS('cursor', 'grab');
+  await page.keyboard.up('Space');
+
+  // Mid-gesture with no control focused (a click on the pane's text), Enter still finishes the line.
+  for (const f of [0.3, 0.6]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.1);
+  await page.getByRole('heading', { name: 'Area–depth graph' }).click();
+  await expect(view).not.toBeFocused();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 2);
+
+  // Mid-gesture but with a button focused, the button keeps Enter: the line goes on (the tool still placing).
+  for (const f of [0.35, 0.65]) await page.mouse.click(box.x + box.width * f, box.y + box.height * 0.2);
+  await zoomIn.focus();
+  before = await zoom.textContent();
+  await page.keyboard.press('Enter');
+  await expect(zoom).not.toHaveText(before ?? '');
+  await expect(page.getByTestId('tool-hint')).toHaveAttribute('data-state', 'placing');
+  await expect(rows).toHaveCount(n + 2);
+  // Nor does Space held on that button start a pan.
+  await page.keyboard.down('Space');
+  await expect(view).toHaveCSS('cursor', 'crosshair');
+  await page.keyboard.up('Space');
+  // With the view focused again (as Tab reaches it), Enter finishes the line.
+  await view.focus();
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(n + 3);
+  await page.screenshot({ path: test.info().outputPath('keys-lines-finished.png') });
 });

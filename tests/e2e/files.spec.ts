@@ -403,6 +403,10 @@ test('the demo figure carries elevation and distance scales, the reference, oran
   // The pane's P50 (e.g. "2600 m") and the report's agree to the figures shown.
   expect(Number.isFinite(parseFloat(p50))).toBe(true);
   await expect(page.getByTestId('report-scenarios-note')).toContainText('one common reference');
+  // The report's text: the detachment elevation and the Monte Carlo elevations are negative here.
+  const reportText = await page.getByTestId('report-page').evaluate((el: HTMLElement) => el.innerText);
+  expect(reportText).toMatch(/elevation \u2212\d/);
+  expect(reportText.split('\n').filter((line) => /(^|[^\w])-\d/.test(line))).toEqual([]);
   await expect.poll(() => page.getByTestId('report-figure').evaluate((img: HTMLImageElement) => img.naturalWidth)).toBeGreaterThan(0);
   await page.screenshot({ path: test.info().outputPath('demo-report.png') });
   await page.getByTestId('report-uncertainty').screenshot({ path: test.info().outputPath('demo-report-uncertainty.png') });
@@ -419,7 +423,11 @@ test('the demo figure carries elevation and distance scales, the reference, oran
     return { axes: all('.section-axes text'), legend: all('.legend text'), inset: all('.area-depth text'), above: d.querySelectorAll('.fill-above').length, ref: d.querySelectorAll('.reference-level').length, bar: d.querySelectorAll('.fieller-bar').length };
   }, svg);
   expect(found.axes).toContain('Elevation z (m)');
-  expect(found.axes.filter((t) => /^-?[\d,]+$/.test(t)).length).toBeGreaterThanOrEqual(6);
+  expect(found.axes.filter((t) => /^\u2212?[\d,]+$/.test(t)).length).toBeGreaterThanOrEqual(6);
+  // The demo lies partly below sea level: its negative elevations take the minus sign U+2212 (Unicode MINUS
+  // SIGN) in the figure's text, never the hyphen-minus (which the SVG attributes keep, as their grammar asks).
+  expect(found.axes.some((t) => /^\u2212[\d,]+$/.test(t))).toBe(true);
+  expect([...found.axes, ...found.legend, ...found.inset].filter((t) => /(^|[^\w])-\d/.test(t))).toEqual([]);
   expect(found.above).toBeGreaterThan(0);
   expect(found.ref).toBe(1);
   expect(found.legend).toContain('excess area above the regional (added)');

@@ -368,6 +368,64 @@ test('a Monte Carlo result is marked as for an earlier state once the section ch
   await expect(result).toContainText('estimate without perturbation');
 });
 
+test('Monte Carlo and sensitivity results of one project never show against the next one opened, nor does a run still going', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await openDemo(page);
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-runs').fill('2000');
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-result')).toBeVisible({ timeout: 60_000 });
+  await page.getByTestId('open-report').click();
+  await expect(page.getByTestId('report-monte-carlo')).toContainText('Monte Carlo run of the state shown.');
+  await page.getByTestId('report-close').click();
+  // Open the demo's own section file (public/demo/section.json): another project, the same scenario id and
+  // the same section in section units, so a result keyed by its section alone would even pass for current.
+  await page.getByTestId('open-project').setInputFiles({ name: 'section.json', mimeType: 'application/json', buffer: readFileSync('public/demo/section.json') });
+  await expect(page.getByTestId('message-info')).toContainText('Opened section.json');
+  await expect(page.getByTestId('result-detachment-elevation')).toContainText(' m');
+  await expect(page.getByTestId('mc-run')).toBeVisible();
+  await expect(page.getByTestId('mc-result')).toHaveCount(0);
+  await page.getByTestId('open-report').click();
+  await expect(page.getByTestId('report-monte-carlo')).toContainText('No Monte Carlo run yet — run one in the Uncertainty panel.');
+  await page.getByTestId('report-close').click();
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-after-open.png') });
+  // A run still going when the project is replaced does not finish into the new one.
+  await page.getByTestId('mc-runs').fill('100000');
+  await page.getByTestId('mc-vertices').check();
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-progress')).toBeVisible();
+  await page.getByTestId('open-project').setInputFiles({ name: 'again.json', mimeType: 'application/json', buffer: readFileSync('public/demo/section.json') });
+  await expect(page.getByTestId('message-info')).toContainText('Opened again.json');
+  await expect(page.getByTestId('mc-progress')).toHaveCount(0);
+  await expect(page.getByTestId('mc-run')).toBeEnabled();
+  await expect(page.getByTestId('mc-result')).toHaveCount(0);
+});
+
+test('negative numbers on the page take the minus sign U+2212, as in the strip: graph readout, panes and cursor readout', async ({ page }) => {
+  // Unicode's MINUS SIGN (U+2212) for text a person reads; the hyphen-minus stays in data files.
+  await openDemo(page);
+  // The demo's detachment lies below sea level: the strip and the pane say so with the minus sign.
+  await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^\u2212\d+ m$/);
+  // Left of the zero-area line the graph's cursor readout gives a negative area.
+  const graph = (await page.getByTestId('area-depth-graph').boundingBox())!;
+  await page.mouse.move(graph.x + graph.width * 0.16, graph.y + graph.height * 0.5);
+  await expect(page.getByTestId('area-depth-graph-readout')).toHaveText(/^Cursor: \u2212\d/);
+  await page.getByTestId('sensitivity-section').locator('summary').click();
+  await page.getByTestId('monte-carlo-section').locator('summary').click();
+  await page.getByTestId('mc-runs').fill('2000');
+  await page.getByTestId('mc-run').click();
+  await expect(page.getByTestId('mc-result')).toBeVisible({ timeout: 60_000 });
+  await page.mouse.move(graph.x + graph.width * 0.16, graph.y + graph.height * 0.5);
+  // Over the section view the cursor readout (below sea level at the bottom of the scan) too.
+  const view = (await page.getByTestId('section-view').boundingBox())!;
+  await page.mouse.move(view.x + view.width / 2, view.y + view.height * 0.8);
+  await expect(page.getByTestId('cursor-readout')).toHaveText(/z \u2212\d/);
+  const text = await page.evaluate(() => document.body.innerText);
+  // No hyphen-minus used as a sign anywhere on the page ("1-2-5" or "Depth-to-detachment" follow a letter or digit).
+  expect(text.split('\n').filter((line) => /(^|[^\w])-\d/.test(line))).toEqual([]);
+  await page.getByTestId('interpretation-pane').screenshot({ path: test.info().outputPath('pane-minus-signs.png') });
+});
+
 /** The screen point on the top horizon's regional at x (section units), where the app draws it after start-up. */
 async function topRegionalAt(page: Page, x: number): Promise<{ x: number; y: number }> {
   const cal = fitCalibration({ kind: 'affine', points: demoCalibration.controlPoints });

@@ -255,11 +255,13 @@ test('the cursor readout shows section x and z of the pixel under the pointer on
   for (const p of cal.controlPoints) {
     await page.mouse.move(box.x + ox + p.u * scale, box.y + oy + p.v * scale);
     const text = (await page.getByTestId('cursor-readout').textContent()) ?? '';
-    const m = /^x (-?[\d.]+) {2}z (-?[\d.]+) m$/.exec(text);
+    // Negative values carry the minus sign U+2212, as every number the app shows.
+    const m = /^x (\u2212?[\d.]+) {2}z (\u2212?[\d.]+) m$/.exec(text.replace(/-/g, 'hyphen'));
     expect(m, text).not.toBeNull();
     // Within one screen pixel of the point (12.5 m of x and 6.25 m of z per scan pixel, from the same file).
-    expect(Math.abs(Number(m![1]) - p.x)).toBeLessThanOrEqual(12.5 / scale);
-    expect(Math.abs(Number(m![2]) - p.z)).toBeLessThanOrEqual(6.25 / scale);
+    const num = (t: string) => Number(t.replace('\u2212', '-'));
+    expect(Math.abs(num(m![1]) - p.x)).toBeLessThanOrEqual(12.5 / scale);
+    expect(Math.abs(num(m![2]) - p.z)).toBeLessThanOrEqual(6.25 / scale);
   }
 });
 

@@ -83,3 +83,45 @@ test('a corrupt image gives a clear message and changes nothing', async ({ page 
   await expect(page.getByTestId('message-error')).toContainText('is not a PNG, JPEG, WebP');
   await expect(page.getByTestId('scan-name')).toContainText('good.png');
 });
+
+test('the view stays fitted when the window changes size, and once zoomed keeps its centre instead', async ({ page }) => {
+  await openApp(page);
+  await page.getByTestId('open-image').setInputFiles({ name: 'gradient.png', mimeType: 'image/png', buffer: gradientPng(1000, 500) });
+  await expect(page.getByTestId('scan-name')).toContainText('gradient.png — 1000 × 500 px');
+  // Fitted as on opening: 24 px margins, centred. The generated image's colour says which pixel is shown
+  // (red = u / 999 · 255, green = v / 499 · 255), so each sampled point must show the image pixel the fit puts there.
+  const expectFitted = async () => {
+    const box = (await page.getByTestId('section-view').boundingBox())!;
+    const scale = Math.min((box.width - 48) / 1000, (box.height - 48) / 500);
+    const ox = (box.width - 1000 * scale) / 2;
+    const oy = (box.height - 500 * scale) / 2;
+    for (const [u, v] of [[40, 30], [960, 470], [500, 250], [150, 420]]) {
+      const [r, g] = await viewPixel(page, ox + u * scale, oy + v * scale);
+      expect(Math.abs(r - (u / 999) * 255), `red at image (${u}, ${v})`).toBeLessThanOrEqual(4);
+      expect(Math.abs(g - (v / 499) * 255), `green at image (${u}, ${v})`).toBeLessThanOrEqual(4);
+    }
+  };
+  await expectFitted();
+  for (const [width, height] of [[1150, 760], [1600, 980]]) {
+    await page.setViewportSize({ width, height });
+    await expect.poll(async () => (await page.getByTestId('section-view').boundingBox())!.width).not.toBe(0);
+    await expect(async () => expectFitted()).toPass({ timeout: 5_000 });
+  }
+  await page.screenshot({ path: test.info().outputPath('fitted-after-resize.png') });
+
+  // Zoomed in by the user, a size change keeps what is at the view's centre there, at the same zoom.
+  const box = (await page.getByTestId('section-view').boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.45, box.y + box.height * 0.55);
+  for (let i = 0; i < 3; i++) await page.mouse.wheel(0, -200);
+  const zoom = await page.getByTestId('zoom-readout').textContent();
+  const atCentre = await viewPixel(page, box.width / 2, box.height / 2);
+  await page.setViewportSize({ width: 1250, height: 820 });
+  await expect(async () => {
+    const now = (await page.getByTestId('section-view').boundingBox())!;
+    expect(now.width).toBeLessThan(box.width);
+    const c = await viewPixel(page, now.width / 2, now.height / 2);
+    expect(Math.abs(c[0] - atCentre[0]) + Math.abs(c[1] - atCentre[1])).toBeLessThanOrEqual(4);
+  }).toPass({ timeout: 5_000 });
+  await expect(page.getByTestId('zoom-readout')).toHaveText(zoom ?? '');
+  await page.screenshot({ path: test.info().outputPath('zoomed-after-resize.png') });
+});

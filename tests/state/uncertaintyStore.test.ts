@@ -2,7 +2,10 @@
 // on, and is stale as soon as anything the analysis reads has changed (journey P2 #1).
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Section } from '../../src/core/model/section';
+import { emptyProjectDoc } from '../../src/core/model/projectDoc';
+import { setUnits } from '../../src/core/model/commands/setUnits';
 import { isStale, sectionKey } from '../../src/core/model/sectionKey';
+import { useDocStore } from '../../src/state/docStore';
 import { useUncertaintyStore } from '../../src/state/uncertaintyStore';
 import type { MonteCarloRecord } from '../../src/core/analysis/monteCarloRecord';
 import { methodExample } from '../core/analysis/sections';
@@ -45,5 +48,31 @@ describe('useUncertaintyStore', () => {
     setAmplification('scenario-1', { sectionKey: sectionKey(s), amplification: 11, pinWidth: 10_000, displacement: 1000 });
     expect(useUncertaintyStore.getState().amplificationByScenario).toBe(before);
     expect(before['scenario-1'].amplification).toBe(11);
+  });
+
+  it('forgets every result when the project is replaced (Project ▸ New, Open, restore), but not on an edit, undo or redo', () => {
+    const s = methodExample();
+    const store = () => useUncertaintyStore.getState();
+    const fill = () => {
+      store().setMonteCarlo('scenario-1', record(s, 3000));
+      store().setAmplification('scenario-1', { sectionKey: sectionKey(s), amplification: 11, pinWidth: 10_000, displacement: 1000 });
+    };
+    useDocStore.getState().replace(emptyProjectDoc());
+    fill();
+    // Edits and their undo/redo keep the results (they are then marked stale by their key, not dropped).
+    useDocStore.getState().apply((d) => setUnits(d, 'ft'));
+    useDocStore.getState().undo();
+    useDocStore.getState().redo();
+    expect(Object.keys(store().byScenario)).toEqual(['scenario-1']);
+    expect(Object.keys(store().amplificationByScenario)).toEqual(['scenario-1']);
+    // A new project has the same scenario id ("scenario-1") as the old one: nothing of the old may show.
+    useDocStore.getState().replace(emptyProjectDoc());
+    expect(store().byScenario).toEqual({});
+    expect(store().amplificationByScenario).toEqual({});
+    // The same again for a document opened from a file whose section gives the very same key.
+    fill();
+    useDocStore.getState().replace({ ...emptyProjectDoc(), title: 'Opened' });
+    expect(store().byScenario['scenario-1']).toBeUndefined();
+    expect(isStale(record(s, 3000), clone(s))).toBe(false);
   });
 });

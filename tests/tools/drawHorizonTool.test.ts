@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { drawHorizonTool } from '../../src/tools/drawHorizon/drawHorizonTool';
+import { renameHorizon } from '../../src/core/model/commands/renameHorizon';
 import { ToolHarness } from './toolHarness';
 import { toolDoc } from './toolFixture';
 
@@ -48,5 +49,12 @@ describe('drawHorizonTool', () => {
     t.click([0, 0]).key('Enter');
     expect(t.doc.horizons).toHaveLength(1);
     expect(t.messages[0]).toMatch(/two vertices/);
+  });
+
+  it('drawHorizonTool: a finished line takes a name no horizon has, when an earlier one was renamed "Horizon 2"', () => {
+    // Names must be unique (README, section file; the validator's "duplicate-name").
+    const t = new ToolHarness(drawHorizonTool, renameHorizon(toolDoc(), 'h1', 'Horizon 2'));
+    t.click([0, 0]).click([10, 10]).key('Enter');
+    expect(t.doc.horizons.map((h) => [h.id, h.name])).toEqual([['h1', 'Horizon 2'], ['h2', 'Horizon 3']]);
   });
 });

@@ -5,7 +5,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { currentFigureSvg } from '../../state/currentFigureSvg';
-import { formatNumber } from '../../io/formatNumber';
+import { formatNumber, typographicMinus } from '../../io/formatNumber';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
@@ -83,7 +83,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
             <tbody>
               {result.horizons.map((h, i) => (
                 <tr key={i}>
-                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{area.factor === 1 ? formatNumber(h.excessArea) : (h.excessArea * area.factor).toFixed(3)}</td><td>{formatNumber(h.depth)}</td>
+                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{area.factor === 1 ? formatNumber(h.excessArea) : typographicMinus((h.excessArea * area.factor).toFixed(3))}</td><td>{formatNumber(h.depth)}</td>
                   <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatNumber(h.chamberlinDepth)}</td>
                   <td>{h.lpsStrain === null ? '—' : `${formatNumber(100 * h.lpsStrain, 3)}%`}</td>
                 </tr>

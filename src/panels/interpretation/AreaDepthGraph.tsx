@@ -134,14 +134,14 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
       <div className="graph-readout" data-testid={testId ? `${testId}-readout` : undefined}>
         {hoverPoint ? (
           <span>
-            <b>{hoverPoint.name}</b>: {formatArea(hoverPoint.area, unit)} at {screenLength(hoverPoint.depth, units)} depth (regional at {screenLength(refElev - hoverPoint.depth, units)})
-            {hoverPoint.residual !== null ? `, off the line by ${formatArea(hoverPoint.residual, unit)}` : ''}
+            <b>{hoverPoint.name}</b>: {withMinus(formatArea(hoverPoint.area, unit))} at {screenLength(hoverPoint.depth, units)} depth (regional at {screenLength(refElev - hoverPoint.depth, units)})
+            {hoverPoint.residual !== null ? `, off the line by ${withMinus(formatArea(hoverPoint.residual, unit))}` : ''}
             {interactive ? (hoverPoint.included ? ' — click to leave it out of the fit' : ' — left out; click to include') : ''}
           </span>
         ) : hover ? (
           <span>
-            Cursor: {formatArea(hover.area, unit)}, depth {screenLength(hover.depth, units)} (elevation {screenLength(refElev - hover.depth, units)})
-            {lineAt(main.series, hover.depth) !== null ? `; line: ${formatArea(lineAt(main.series, hover.depth), unit)}` : ''}
+            Cursor: {withMinus(formatArea(hover.area, unit))}, depth {screenLength(hover.depth, units)} (elevation {screenLength(refElev - hover.depth, units)})
+            {lineAt(main.series, hover.depth) !== null ? `; line: ${withMinus(formatArea(lineAt(main.series, hover.depth), unit))}` : ''}
           </span>
         ) : (
           <span className="hint">Hover for values{interactive ? '; click a point to include or leave out its horizon' : ''}.</span>

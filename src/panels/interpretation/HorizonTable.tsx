@@ -35,7 +35,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
   const rowTitle = (h: SectionAnalysis['horizons'][number]) => [
     `${h.name}${h.included ? '' : ' (left out of the fit)'}`,
     `bed length ${formatNumber(h.bedLength)} ${u}, regional length ${formatNumber(h.regionalLength)} ${u}`,
-    `projected share ${formatNumber(100 * h.projectedAreaShare, 1)} %, off the line ${formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals)} ${unit.label}`,
+    `projected share ${formatNumber(100 * h.projectedAreaShare, 1)} %, off the line ${withMinus(formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals))} ${unit.label}`,
   ].join('\n');
   return (
     <div>
@@ -46,7 +46,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
               <th className="name-col" title="Tick to include the horizon in the area–depth fit">Horizon (in fit)</th>
               <th>Excess area ({unit.label})</th>
               <th>Regional elev. ({u})</th>
-              <th title={`Depth of the regional below the reference, ${formatNumber(analysis.referenceElevation)} ${u}`}>Depth ({u})</th>
+              <th title={`Depth of the regional below the reference, ${withMinus(formatNumber(analysis.referenceElevation))} ${u}`}>Depth ({u})</th>
               <th>Chamberlin depth ({u})</th>
               <th title="Layer-parallel strain e = L / (W + D) − 1; negative = shortened along the layer">Layer strain (%)</th>
               {all && <>

@@ -4,6 +4,7 @@ import { useEffect, useRef, useState } from 'react';
 import type { MonteCarloOptions } from '../../core/analysis/monteCarlo';
 import type { Section } from '../../core/model/section';
 import { isStale, sectionKey } from '../../core/model/sectionKey';
+import { useDocStore } from '../../state/docStore';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
 import { Histogram } from './Histogram';
@@ -62,6 +63,13 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
   const u = section.units;
 
   useEffect(() => () => worker.current?.terminate(), []);
+  // A run of the previous project must not finish into the next one (Project ▸ New, Open, restore).
+  useEffect(() => useDocStore.subscribe((s, prev) => {
+    if (s.opened === prev.opened || !worker.current) return;
+    worker.current.terminate();
+    worker.current = null;
+    setProgress(null);
+  }), []);
 
   const stop = () => {
     worker.current?.terminate();
@@ -77,7 +85,7 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
     stop();
     setError(null);
     // What this run analyses, fixed now: the section may change while it runs.
-    const ran = { section, referenceElevation, fields, scenarioId };
+    const ran = { section, referenceElevation, fields, scenarioId, opened: useDocStore.getState().opened };
     const w = new Worker(new URL('./monteCarlo.worker.ts', import.meta.url), { type: 'module' });
     worker.current = w;
     setProgress({ done: 0, total: options.runs });
@@ -85,8 +93,8 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
       const m = e.data;
       if (m.type === 'progress') setProgress({ done: m.done, total: m.total });
       else {
-        if (m.type === 'done') setMonteCarlo(ran.scenarioId, recordOf(m, ran.section, options, ran.fields, ran.referenceElevation));
-        else setError(m.message);
+        if (m.type === 'failed') setError(m.message);
+        else if (useDocStore.getState().opened === ran.opened) setMonteCarlo(ran.scenarioId, recordOf(m, ran.section, options, ran.fields, ran.referenceElevation));
         w.terminate();
         if (worker.current === w) worker.current = null;
         setProgress(null);

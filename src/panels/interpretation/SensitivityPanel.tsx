@@ -9,7 +9,7 @@ import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
 import { SweepPlot } from './SweepPlot';
 import { formatNumber } from './formatValue';
-import { screenLength } from './screenQuantity';
+import { screenLength, withMinus } from './screenQuantity';
 import { useDocStore } from '../../state/docStore';
 import { sectionKey } from '../../core/model/sectionKey';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
@@ -71,7 +71,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
         up
         xLabel={`Common regional tilt (${u} per 1000 ${u}, rising to the right positive)`}
         yLabel={`Detachment elevation (${u})`}
-        note={`tilt about the ${pivot} pin (x = ${formatNumber(sweep.result.tiltPivotX)} ${u})`}
+        note={`tilt about the ${pivot} pin (x = ${withMinus(formatNumber(sweep.result.tiltPivotX))} ${u})`}
         testId="sensitivity-tilt-plot"
       />
     </div>

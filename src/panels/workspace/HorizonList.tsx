@@ -149,7 +149,7 @@ function TypedHorizon({ selected }: { selected: DocHorizon | undefined }) {
     if (replace && selected) apply((d) => setHorizonPoints(d, selected.id, pointsPx));
     else {
       const id = nextHorizonId(doc);
-      apply((d) => addHorizon(d, { id, name: `Horizon ${id.slice(1)}`, colour: paletteColour(doc.horizons.length), pointsPx }));
+      apply((d) => addHorizon(d, { id, colour: paletteColour(doc.horizons.length), pointsPx }));
       useSessionStore.getState().selectHorizon(id);
     }
     show('info', `${parsed.points.length} points read${parsed.skipped ? `, ${parsed.skipped} lines skipped` : ''}.`);

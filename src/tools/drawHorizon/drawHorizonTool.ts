@@ -18,7 +18,8 @@ function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState
     return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'message', kind: 'info', text: 'A horizon needs at least two vertices.' }] };
   }
   const id = nextHorizonId(doc);
-  const horizon = { id, name: `Horizon ${id.slice(1)}`, colour: paletteColour(doc.horizons.length), pointsPx: points };
+  // Named by addHorizon from the document it is added to: the next "Horizon N" that no horizon has.
+  const horizon = { id, colour: paletteColour(doc.horizons.length), pointsPx: points };
   return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'edit', edit: (d) => addHorizon(d, horizon) }, { type: 'select', horizonId: id }] };
 }
 

@@ -105,11 +105,40 @@ describe('renderSectionSvg', () => {
     const labels = [...svg.matchAll(/<line x1="([\d.]+)" y1="([\d.]+)" x2="[\d.]+" y2="([\d.]+)" stroke="#1d2731"\/><text x="[\d.]+" y="([\d.]+)" text-anchor="end">([^<]+)<\/text>/g)];
     expect(labels.length).toBeGreaterThanOrEqual(3);
     const fy = labels.map((m) => Number(m[2]));
-    const z = labels.map((m) => Number(m[5].replace(/,/g, '')));
+    const z = labels.map((m) => Number(m[5].replace(/,/g, '').replace('\u2212', '-')));
     // Linear in z, and z increases upward (smaller y).
     const slope = (fy[1] - fy[0]) / (z[1] - z[0]);
     expect(slope).toBeLessThan(0);
     labels.forEach((_, i) => expect(fy[i]).toBeCloseTo(fy[0] + slope * (z[i] - z[0]), 1));
+  });
+
+  // Text for readers takes the minus sign U+2212 (Unicode "MINUS SIGN"); attribute values keep the
+  // hyphen-minus, the only sign the SVG number grammar allows (SVG 1.1, "Basic data types").
+  it('writes negative numbers in the figure\'s text with the minus sign U+2212, and attributes in SVG number syntax', () => {
+    // The sample's bumps are triangles 1000 wide and 400, 350, 300 high: excess areas 200 000, 175 000 and
+    // 150 000 m² at depths 0, 250, 500 below the highest regional (z = 500): A = 100 (2000 − h), so the
+    // detachment is 2000 m down, at elevation −1500 m (METHOD.md area–depth; analytic).
+    const doc = sampleDoc();
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: '2024-05-01' });
+    expect(svg).toContain('Detachment at elevation \u22121,500 m: 2,000 m below the reference at elevation 500 m');
+    expect(svg).toContain('estimated detachment: elevation \u22121,500 m, 2,000 m below the reference');
+    const axis = textsOf(svg, 'section-axes');
+    expect(axis.filter((t) => /^\u2212[\d,]+$/.test(t)).length).toBeGreaterThan(0);
+    // Shifted 3000 m down, every elevation is negative: the reference, its label and the inset's axis title.
+    const low: Section = structuredClone(SAMPLE_SECTION);
+    for (const h of low.horizons) for (const pts of [h.line, h.regional]) for (const p of pts) p[1] -= 3000;
+    const lowDoc = sectionToProjectDoc(low, 'Deep');
+    const lowSvg = renderSectionSvg({ doc: lowDoc, analysis: selectAnalysis(lowDoc), scanDataUrl: null, date: '2024-05-01' });
+    expect(lowSvg).toContain('reference level, elevation \u22122,500 m: depths below this line');
+    expect(lowSvg).toContain('Detachment at elevation \u22124,500 m');
+    expect(lowSvg).toContain('depth below reference at elevation \u22122,500 m (m)');
+    for (const s of [svg, lowSvg]) {
+      const texts = [...s.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]);
+      // No hyphen-minus as a sign in any text (the date's hyphens follow a digit).
+      expect(texts.filter((t) => /(^|[^\w])-\d/.test(t))).toEqual([]);
+      const attributes = [...s.matchAll(/\s[\w:-]+="([^"]*)"/g)].map((m) => m[1]).filter((v) => !v.startsWith('data:'));
+      expect(attributes.filter((v) => v.includes('\u2212'))).toEqual([]);
+    }
   });
 
   it('lists only what is drawn: no projected entry without projected segments, one with them', () => {
@@ -167,6 +196,19 @@ describe('the inset area–depth graph', () => {
     expect(result!.areaDepth!.detachmentDepthCI95).not.toBeNull();
     expect(svg).toContain('class="fieller-bar"');
     expect(svg).toMatch(/95%: 1,\d{3}–2,\d{3} m/);
+  });
+
+  it('labels negative excess areas (a syncline below its regional) with the minus sign U+2212', () => {
+    // The middle horizon sags to −150, 400 below its regional at 250: a triangle of −200 000 m² (analytic).
+    const section: Section = structuredClone(SAMPLE_SECTION);
+    section.horizons[1].line[2] = [500, -150];
+    const a = selectAnalysis(sectionToProjectDoc(section, 'Syncline'));
+    const r = a.outcome!.ok ? a.outcome!.analysis : null;
+    expect(r!.horizons[1].excessArea).toBeCloseTo(-200_000, 6);
+    const svg = areaDepthGroup(r, 0, 0, 340, 326);
+    const ticks = [...svg.matchAll(/<text x="[\d.]+" y="[\d.]+" font-size="9.5" text-anchor="middle"[^>]*>([^<]+)<\/text>/g)].map((m) => m[1]);
+    expect(ticks.some((t) => /^\u22120\.\d+$/.test(t))).toBe(true);
+    expect(ticks.filter((t) => t.includes('-'))).toEqual([]);
   });
 
   it('writes "unbounded" instead of a bar when the Fieller interval is unbounded', () => {

@@ -45,7 +45,9 @@ describe('uncertaintyReport', () => {
     const text = r.lines.join('\n');
     expect(text).toContain('Monte Carlo run of the state shown.');
     expect(text).toContain('below the reference at elevation 500 m: P10 1,900 · P50 2,000 · P90 2,150 m (σ 95.5 m)');
-    expect(text).toContain('Detachment elevation: P10 -1,650 · P50 -1,500 · P90 -1,400 m');
+    // Negative numbers in the report's text take the minus sign U+2212 (Unicode "MINUS SIGN").
+    expect(text).toContain('Detachment elevation: P10 \u22121,650 · P50 \u22121,500 · P90 \u22121,400 m');
+    expect(text).not.toMatch(/(^|[^\w])-\d/);
     expect(text).toContain('Displacement: P10 90 · P50 100 · P90 110 m');
     expect(text).toContain('2000 runs, seed 7');
     expect(text).toContain('σ digitising 2 m, regional offset 5 m (all together) and 1 m (each horizon), tilt 0.5 m per 1000 m, calibration scale 0.2 %');
@@ -84,6 +86,9 @@ describe('uncertaintyReport', () => {
     const withRun = resultsCsv(doc, da, uncertaintyReport(record(section), section, analysis))!;
     expect(withRun).toContain('monte_carlo_detachment_depth_p50_m,2000');
     expect(withRun).toContain('monte_carlo_failed_share,0.0125');
+    // Data files stay machine-readable: the hyphen-minus of RFC 4180 CSV read by spreadsheets and Number().
+    expect(withRun).toContain('monte_carlo_detachment_elevation_p50_m,-1500');
+    expect(withRun).not.toContain('\u2212');
   });
 });
 

@@ -1,4 +1,6 @@
 import type { DocHorizon, ImagePx, ProjectDoc } from '../projectDoc';
+import { horizonNameTaken } from './horizonNameTaken';
+import { nextHorizonName } from './nextHorizonName';
 
 /** Returns the next free horizon id ("h1", "h2", …), from the highest numbered id in the document. */
 export function nextHorizonId(doc: ProjectDoc): string {
@@ -10,15 +12,28 @@ export function nextHorizonId(doc: ProjectDoc): string {
   return `h${max + 1}`;
 }
 
-/** Returns the document with a new horizon (image-pixel vertices) inserted at `index` (default: the end, i.e. oldest); unchanged if the id exists. */
+/** Returns `name` trimmed, or with " (2)", " (3)" … when another horizon has it: no two horizons share a name. */
+function freeName(doc: ProjectDoc, id: string, name: string): string {
+  const base = name.trim();
+  if (!horizonNameTaken(doc, id, base)) return base;
+  let k = 2;
+  while (horizonNameTaken(doc, id, `${base} (${k})`)) k++;
+  return `${base} (${k})`;
+}
+
+/**
+ * Returns the document with a new horizon (image-pixel vertices) inserted at `index` (default: the end, i.e. oldest);
+ * unchanged if the id exists. Without a name (or a blank one) it is called nextHorizonName; a name another horizon has gets " (2)" ….
+ */
 export function addHorizon(
   doc: ProjectDoc,
-  horizon: { id: string; name: string; colour: string; pointsPx: ImagePx[] } & Partial<DocHorizon>,
+  horizon: { id: string; name?: string; colour: string; pointsPx: ImagePx[] } & Partial<Omit<DocHorizon, 'name'>>,
   index = doc.horizons.length,
 ): ProjectDoc {
   if (doc.horizons.some((h) => h.id === horizon.id)) return doc;
+  const name = horizon.name?.trim() ? freeName(doc, horizon.id, horizon.name) : nextHorizonName(doc, horizon.id);
   const h: DocHorizon = {
-    visible: true, locked: false, projected: [], ...horizon,
+    visible: true, locked: false, projected: [], ...horizon, name,
     pointsPx: horizon.pointsPx.map(([u, v]) => [u, v]),
   };
   const horizons = doc.horizons.slice();

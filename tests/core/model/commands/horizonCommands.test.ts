@@ -7,6 +7,8 @@ import { insertVertex } from '../../../../src/core/model/commands/insertVertex';
 import { moveHorizon } from '../../../../src/core/model/commands/moveHorizon';
 import { moveVertex } from '../../../../src/core/model/commands/moveVertex';
 import { horizonNameTaken } from '../../../../src/core/model/commands/horizonNameTaken';
+import { nextHorizonName } from '../../../../src/core/model/commands/nextHorizonName';
+import { importHorizons } from '../../../../src/core/model/commands/importHorizons';
 import { renameHorizon } from '../../../../src/core/model/commands/renameHorizon';
 import { reorderHorizons } from '../../../../src/core/model/commands/reorderHorizons';
 import { setHorizonPoints } from '../../../../src/core/model/commands/setHorizonPoints';
@@ -25,6 +27,34 @@ describe('horizon commands', () => {
     expect(next.horizons.map((k) => k.id)).toEqual(['h1', 'h2', 'h3']);
     expect(h(next, 'h3')).toMatchObject({ visible: true, locked: false, projected: [] });
     expect(addHorizon(next, { id: 'h3', name: 'again', colour: '#000', pointsPx: [] })).toBe(next);
+  });
+
+  // The README's section file and the validator (validateSectionArrays, code "duplicate-name") refuse a
+  // horizon name used twice: a new horizon's default name must be one that no horizon has yet.
+  it('addHorizon(doc, horizon) without a name gives the next "Horizon N" that no horizon has, even after renames', () => {
+    let doc = fixtureDoc(); // h1 "Upper", h2 "Lower"
+    // The common case: the id's number ("h3" → "Horizon 3").
+    expect(h(addHorizon(doc, { id: 'h3', colour: '#000', pointsPx: [[0, 300], [1000, 300]] }), 'h3').name).toBe('Horizon 3');
+    // Renamed so that "Horizon 3" and "Horizon 4" are taken: the new h3 skips both.
+    doc = renameHorizon(renameHorizon(doc, 'h1', 'Horizon 3'), 'h2', 'Horizon 4');
+    expect(nextHorizonId(doc)).toBe('h3');
+    expect(nextHorizonName(doc, 'h3')).toBe('Horizon 5');
+    const added = addHorizon(doc, { id: 'h3', colour: '#000', pointsPx: [[0, 300], [1000, 300]] });
+    expect(h(added, 'h3').name).toBe('Horizon 5');
+    expect(new Set(added.horizons.map((k) => k.name)).size).toBe(added.horizons.length);
+    // A blank name is no name; a given name another horizon has gets " (2)", never a second copy.
+    expect(h(addHorizon(doc, { id: 'h3', name: '  ', colour: '#000', pointsPx: [] }), 'h3').name).toBe('Horizon 5');
+    expect(h(addHorizon(doc, { id: 'h3', name: 'Horizon 4', colour: '#000', pointsPx: [] }), 'h3').name).toBe('Horizon 4 (2)');
+  });
+
+  it('addHorizon(doc, horizon) after an import whose unnamed lines were called "Horizon 1", "Horizon 2" does not repeat them', () => {
+    // Imported horizons have ids of their own ("horizon-1" …), so the next drawn one gets id h1, whose own
+    // number names a horizon that exists already.
+    const imported = importHorizons(fixtureDoc(), [{ name: 'Horizon 1', line: [[0, 0], [10, 5]] }, { name: 'Horizon 2', line: [[0, -5], [10, -6]] }], 'm');
+    const renamed = { ...imported, horizons: imported.horizons.filter((k) => k.id !== 'h1' && k.id !== 'h2') };
+    expect(nextHorizonId(renamed)).toBe('h1');
+    const added = addHorizon(renamed, { id: 'h1', colour: '#000', pointsPx: [[0, 300], [1000, 300]] });
+    expect(added.horizons.map((k) => k.name)).toEqual(['Horizon 1', 'Horizon 2', 'Horizon 3']);
   });
 
   it('moveVertex(doc, id, i, p) moves one vertex and leaves the others and the input untouched', () => {
