@@ -3,6 +3,43 @@ import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
+// Imports point one way (DEVELOPERS.md, "Layout"): each folder of src may import itself and the folders
+// listed for it, nothing else. Relative imports are matched on the folder names they pass through,
+// which works because no folder inside src/ reuses the name of a top-level one.
+const MAY_IMPORT = {
+  core: [],
+  format: ['core'],
+  tools: ['core', 'format'],
+  io: ['core', 'format'],
+  state: ['core', 'format', 'tools', 'io'],
+  canvas: ['core', 'format', 'tools', 'io', 'state'],
+  panels: ['core', 'format', 'tools', 'io', 'state'],
+  app: ['core', 'format', 'tools', 'io', 'state', 'canvas', 'panels'],
+  cli: ['core'],
+};
+// Below the stores and the views: plain code with no React, Konva or store.
+const NO_UI_PACKAGES = ['core', 'format', 'tools', 'io', 'cli'];
+const UI_PACKAGES = ['react', 'react-dom', 'react-konva', 'konva', 'zustand'];
+
+function importDirection(folder) {
+  const allowed = MAY_IMPORT[folder];
+  const banned = Object.keys(MAY_IMPORT).filter((f) => f !== folder && !allowed.includes(f));
+  const regex = `^\\.{1,2}/(.*/)?(${banned.join('|')})(/|$)`;
+  const message = `src/${folder} may import only ${allowed.length ? allowed.map((f) => `src/${f}`).join(', ') : 'src/core'}: imports point one way (DEVELOPERS.md).`;
+  const patterns = [{ regex, message }];
+  if (NO_UI_PACKAGES.includes(folder)) {
+    patterns.push({ group: UI_PACKAGES.flatMap((p) => [p, `${p}/*`]), message: `src/${folder} holds no React, Konva or stores (DEVELOPERS.md).` });
+  }
+  return {
+    files: [`src/${folder}/**/*.{ts,tsx}`],
+    rules: {
+      'no-restricted-imports': ['error', { patterns }],
+      // import('…') is not seen by no-restricted-imports.
+      'no-restricted-syntax': ['error', { selector: `ImportExpression[source.value=/${regex.replaceAll('/', '\\/')}/]`, message }],
+    },
+  };
+}
+
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', 'reports/**', 'test-results/**', 'playwright-report/**', 'public/**'] },
   js.configs.recommended,
@@ -22,4 +59,5 @@ export default tseslint.config(
       'react-hooks/exhaustive-deps': 'error',
     },
   },
+  ...Object.keys(MAY_IMPORT).map(importDirection),
 );

@@ -6,7 +6,7 @@ import { WorkspacePanel } from '../panels/WorkspacePanel';
 import { ResultsStrip } from '../panels/ResultsStrip';
 import { InterpretationPane } from '../panels/InterpretationPane';
 import { FileMenu } from '../panels/FileMenu';
-import { openScanFile, scanFileFromClipboard } from '../io/openScanFile';
+import { openScanFile, scanFileFromClipboard } from '../state/openScanFile';
 import { MessageBar } from './MessageBar';
 import { useKeyboardShortcuts } from './useKeyboardShortcuts';
 import { startApp } from './startApp';

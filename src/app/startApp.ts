@@ -1,7 +1,7 @@
 // What happens once when the page opens: the last kept work comes back if there is any worth
 // restoring; otherwise the demo section opens, ready to explore. Autosave starts after either,
 // so that the restore itself is not mistaken for new work.
-import { openDemo } from '../io/openDemo';
+import { openDemo } from '../state/openDemo';
 import { restoreAutosave, startAutosave } from '../state/autosave';
 import { useSessionStore } from '../state/sessionStore';
 

@@ -6,7 +6,7 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { selectLiveAnalysis } from '../state/selectors';
 import { sectionToImage } from '../core/calibration/mapPoints';
-import { formatLength } from '../panels/workspace/formatQuantity';
+import { formatLength } from '../format/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
 
 const COLOUR = '#b3261e';

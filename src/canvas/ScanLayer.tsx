@@ -7,8 +7,8 @@ import { Layer, Group, Image as KonvaImage, Rect } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
-import { TILE_PX, visibleTiles } from './scanTiles';
-import { ensureTilePyramid, getTilePyramid, type TilePyramid } from './scanTilesPyramid';
+import { TILE_PX, visibleTiles } from '../state/scanTiles';
+import { ensureTilePyramid, getTilePyramid, type TilePyramid } from '../state/scanTilesPyramid';
 
 /** Screen pixels past the view's edge that are kept drawn, so a short pan never shows a gap. */
 const MARGIN_PX = 64;

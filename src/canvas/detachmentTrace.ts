@@ -1,7 +1,7 @@
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { interpolateZAt } from '../core/geometry/interpolateZAt';
 import type { Section, XZ } from '../core/model/section';
-import { isExactFit } from '../state/selectors';
+import { isExactFit } from '../core/analysis/isExactFit';
 
 // Where to draw the proposed detachment on the section: at the estimated elevation at the middle
 // of the pins, parallel to the mean regional trend (the mean of each regional's dip between the

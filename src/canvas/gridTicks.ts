@@ -3,7 +3,7 @@
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
 import type { ImagePx } from '../core/model/projectDoc';
-import type { CameraLike } from './scanTiles';
+import type { CameraLike } from '../state/scanTiles';
 
 export interface GridLine {
   value: number;

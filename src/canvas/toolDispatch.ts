@@ -2,38 +2,17 @@
 // commands it returns (edits, gestures, selection, previews, messages). Only this file turns DOM
 // pointer positions into image pixels for the tools.
 import { useEffect, type RefObject } from 'react';
-import { create } from 'zustand';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
-import type { CalibrationPointRef } from '../core/model/commands/calibrationPointRef';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
+import { useToolSession } from '../state/toolSessionStore';
 import { toolEntry, TOOLS } from '../tools/toolRegistry';
-import { runTool, type CalibrationPick, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
+import { runTool, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
 import { keyForTools } from './keyForTools';
 
 /** Pointer tolerance for picking, in screen pixels. */
 const PICK_TOLERANCE_SCREEN_PX = 7;
-
-export interface ToolSession {
-  calibrationPick: CalibrationPick;
-  /** The calibration point whose value field the panel should focus, with a counter to refocus. */
-  focusRef: { ref: CalibrationPointRef; n: number } | null;
-  /** Name of the active tool's state (idle, placing, dragging …), for hints and tests. */
-  stateName: string;
-  helpOpen: boolean;
-  setCalibrationPick: (pick: CalibrationPick) => void;
-  setHelpOpen: (open: boolean) => void;
-}
-
-export const useToolSession = create<ToolSession>()((set) => ({
-  calibrationPick: 'points',
-  focusRef: null,
-  stateName: 'idle',
-  helpOpen: false,
-  setCalibrationPick: (calibrationPick) => set({ calibrationPick }),
-  setHelpOpen: (helpOpen) => set({ helpOpen }),
-}));
 
 // The tool preview is ephemeral: kept outside React; the overlay subscribes and redraws its node.
 let preview: ToolPreview | null = null;

@@ -1,6 +1,8 @@
-// Renders one page of a PDF (a figure in a report) to a bitmap. The PDF library and its worker are
-// bundled with the app and loaded only when a PDF is opened; nothing is fetched from elsewhere.
-import { requestScanChoice } from './decodeScanChoice';
+// Renders one page of a PDF (a figure in a report) to a bitmap. The PDF library, its worker and its
+// standard font data are bundled with the app and loaded only when a PDF is opened; nothing is fetched
+// from elsewhere.
+import type { AskScanChoice } from './decodeScanChoice';
+import { PDF_STANDARD_FONTS_PATH } from './pdfStandardFonts';
 
 export type PdfDecodeResult =
   | { ok: true; bitmap: ImageBitmap; page: number; dpi: number; pageCount: number }
@@ -25,13 +27,21 @@ async function loadPdfjs() {
 
 /**
  * Returns the chosen page rendered on white, or a message. With `page` (0-based) and `widthPx` given
- * (reopening a saved project) no question is asked and the page is rendered at that width.
+ * (reopening a saved project) no question is asked and the page is rendered at that width; otherwise `choose` asks for the page and resolution.
  */
-export async function decodePdf(file: Blob, name: string, maxPixels: number, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
+export async function decodePdf(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
   const pdfjs = await loadPdfjs();
   let doc: Awaited<ReturnType<typeof pdfjs.getDocument>['promise']>;
   try {
-    doc = await pdfjs.getDocument({ data: new Uint8Array(await file.arrayBuffer()), verbosity: 0 }).promise;
+    doc = await pdfjs.getDocument({
+      data: new Uint8Array(await file.arrayBuffer()),
+      verbosity: 0,
+      // Text in a standard font that the PDF does not embed is drawn from pdf.js's own font data, served by
+      // the app (same origin), never from the fonts of this machine: the page is a scan that lines are
+      // digitised on, so a project must re-render it the same on every computer.
+      standardFontDataUrl: new URL(PDF_STANDARD_FONTS_PATH, document.baseURI).href,
+      useSystemFonts: false,
+    }).promise;
   } catch (e) {
     const locked = e instanceof Error && e.name === 'PasswordException';
     return { ok: false, message: locked ? `${name} is protected by a password; save the page as an image first.` : `${name} looks like a PDF but could not be read: it may be damaged or truncated.` };
@@ -44,7 +54,7 @@ export async function decodePdf(file: Blob, name: string, maxPixels: number, pag
     let pageNo = (page ?? 0) + 1;
     let dpi = PDF_DEFAULT_DPI;
     if (page === undefined || widthPx === undefined) {
-      const choice = await requestScanChoice({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
+      const choice = await choose({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
       if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
       pageNo = choice.page + 1;
       dpi = choice.dpi ?? PDF_DEFAULT_DPI;

@@ -4,6 +4,7 @@ import { sniffImageType, type ImageKind } from './sniffImageType';
 import { decodeImageSize } from './decodeImageSize';
 import { decodeTiff } from './decodeTiff';
 import { decodePdf } from './decodePdf';
+import type { AskScanChoice } from './decodeScanChoice';
 
 /** Largest scan accepted, in megapixels. */
 export const MAX_SCAN_MEGAPIXELS = 200;
@@ -48,8 +49,11 @@ async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Pr
   return { ok: true, bitmap, kind, widthPx: bitmap.width, heightPx: bitmap.height, mime: MIME[kind] };
 }
 
-/** Returns the decoded scan, or a message saying why the file cannot be opened (cancelled: the user said no). */
-export async function decodeScan(file: Blob & { name?: string }, options: DecodeOptions = {}): Promise<DecodeResult> {
+/**
+ * Returns the decoded scan, or a message saying why the file cannot be opened (cancelled: the user said no).
+ * `choose` asks which page of a multi-page TIFF, or which page of a PDF and at what resolution, when `options` do not say.
+ */
+export async function decodeScan(file: Blob & { name?: string }, choose: AskScanChoice, options: DecodeOptions = {}): Promise<DecodeResult> {
   const name = file.name || 'the file';
   if (file.size === 0) return { ok: false, message: `${name} is empty.` };
   const kind = sniffImageType(new Uint8Array(await file.slice(0, 16).arrayBuffer()));
@@ -58,10 +62,10 @@ export async function decodeScan(file: Blob & { name?: string }, options: Decode
   }
   let result: DecodeResult;
   if (kind === 'tiff') {
-    const r = await decodeTiff(file, name, MAX_PIXELS, options.page);
+    const r = await decodeTiff(file, name, MAX_PIXELS, choose, options.page);
     result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.tiff, page: r.page, pageCount: r.pageCount } : r;
   } else if (kind === 'pdf') {
-    const r = await decodePdf(file, name, MAX_PIXELS, options.page, options.widthPx);
+    const r = await decodePdf(file, name, MAX_PIXELS, choose, options.page, options.widthPx);
     result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.pdf, page: r.page, pageCount: r.pageCount, dpi: r.dpi } : r;
   } else {
     result = await decodeBrowserImage(file, name, kind);

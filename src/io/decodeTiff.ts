@@ -2,7 +2,7 @@
 // asks which page to open. GeoTIFF georeferencing is not used: calibrate the scan as any other.
 import type { TiffWorkerReply, TiffWorkerRequest } from './workers/decodeTiff.worker';
 import type { TiffPageInfo } from './decodeTiffPixels';
-import { requestScanChoice } from './decodeScanChoice';
+import type { AskScanChoice } from './decodeScanChoice';
 
 export type TiffDecodeResult =
   | { ok: true; bitmap: ImageBitmap; page: number; pageCount: number }
@@ -26,8 +26,8 @@ export function defaultTiffPage(pages: TiffPageInfo[]): TiffPageInfo {
   return full.length > 0 ? pool[0] : pool.reduce((a, b) => (b.widthPx * b.heightPx > a.widthPx * a.heightPx ? b : a));
 }
 
-/** Returns the chosen page of the TIFF as a bitmap (page given: no question), or a message. */
-export async function decodeTiff(file: Blob, name: string, maxPixels: number, page?: number): Promise<TiffDecodeResult> {
+/** Returns the chosen page of the TIFF as a bitmap (page given: no question; else `choose` asks which among several), or a message. */
+export async function decodeTiff(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number): Promise<TiffDecodeResult> {
   const worker = new Worker(new URL('./workers/decodeTiff.worker.ts', import.meta.url), { type: 'module' });
   try {
     const buffer = await file.arrayBuffer();
@@ -37,7 +37,7 @@ export async function decodeTiff(file: Blob, name: string, maxPixels: number, pa
     const { pages } = opened;
     let index = page ?? defaultTiffPage(pages).index;
     if (page === undefined && pages.length > 1) {
-      const choice = await requestScanChoice({ kind: 'tiff', fileName: name, pages });
+      const choice = await choose({ kind: 'tiff', fileName: name, pages });
       if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
       index = choice.page;
     }

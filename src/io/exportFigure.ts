@@ -1,10 +1,7 @@
 // The annotated section as SVG or PNG, drawn from renderSectionSvg. The PNG is the SVG drawn onto
 // a canvas at the chosen size; the scan is inlined as a data: URL so the canvas stays readable.
-import { selectAnalysis } from '../state/selectors';
-import { useDocStore } from '../state/docStore';
-import { getScan } from '../state/scanCache';
-import type { ProjectDoc } from '../core/model/projectDoc';
-import { FIGURE_HEIGHT, FIGURE_WIDTH, renderSectionSvg } from './renderSectionSvg';
+// The figure of the open project is put together in state/currentFigureSvg.
+import { FIGURE_HEIGHT, FIGURE_WIDTH } from './renderSectionSvg';
 
 /** PNG sizes offered; the last is A3 landscape at 300 dpi (420 × 297 mm). */
 export const PNG_SIZES = [
@@ -23,22 +20,17 @@ function blobToDataUrl(blob: Blob): Promise<string> {
   });
 }
 
-/** Returns the scan as a data: URL the SVG can embed (re-encoded as PNG when the browser cannot show the original type), or null. */
-export async function scanDataUrl(doc: ProjectDoc): Promise<string | null> {
-  const cached = getScan(doc.scan?.id);
-  if (!doc.scan || !cached) return null;
-  if (/^image\/(png|jpeg|webp)$/.test(doc.scan.type)) return blobToDataUrl(new Blob([cached.bytes], { type: doc.scan.type }));
+/**
+ * Returns a scan of the given MIME type as a data: URL the SVG can embed: its original bytes for PNG, JPEG and
+ * WebP, else its decoded bitmap re-encoded as PNG (the browser cannot show TIFF or PDF in an SVG).
+ */
+export async function scanDataUrl(type: string, scan: { bitmap: ImageBitmap; bytes: Blob }): Promise<string> {
+  if (/^image\/(png|jpeg|webp)$/.test(type)) return blobToDataUrl(new Blob([scan.bytes], { type }));
   const canvas = document.createElement('canvas');
-  canvas.width = cached.bitmap.width;
-  canvas.height = cached.bitmap.height;
-  canvas.getContext('2d')?.drawImage(cached.bitmap, 0, 0);
+  canvas.width = scan.bitmap.width;
+  canvas.height = scan.bitmap.height;
+  canvas.getContext('2d')?.drawImage(scan.bitmap, 0, 0);
   return canvas.toDataURL('image/png');
-}
-
-/** Returns the figure of the open project as an SVG string (today's date in the title block). */
-export async function currentFigureSvg(): Promise<string> {
-  const doc = useDocStore.getState().doc;
-  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await scanDataUrl(doc), date: new Date().toISOString().slice(0, 10) });
 }
 
 function loadImage(url: string): Promise<HTMLImageElement> {

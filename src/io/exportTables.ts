@@ -7,7 +7,7 @@ import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import type { Section } from '../core/model/section';
-import type { DocAnalysis } from '../state/selectors';
+import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
 import { toCsv } from './csvText';
 import type { UncertaintyReport } from './uncertaintyReport';

@@ -2,7 +2,7 @@
 // named point per horizon (hollow when left out of the fit), the fitted line, and its crossing of zero
 // area at the detachment depth with the 95% Fieller interval as a bar (or the word "unbounded").
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
-import { isExactFit } from '../state/selectors';
+import { isExactFit } from '../core/analysis/isExactFit';
 import { axisTicks } from './axisTicks';
 import { escapeXml } from './escapeXml';
 import { figureAreaUnit } from './figureAreaUnit';

@@ -1,12 +1,14 @@
 // Horizons drawn in a drafting program and saved as SVG: every <path>, <polyline> and <line>,
-// with the transforms of its groups, becomes a line in the drawing's root user units. Two
-// points whose section coordinates the user knows then scale each axis (svgToSectionAxes).
+// with the transforms of its groups and the viewports of nested <svg> elements, becomes a line in
+// the drawing's root user units. Two points whose section coordinates the user knows then scale
+// each axis (svgToSectionAxes).
 // The SVG is read as text by a small tag scanner, never inserted into the page.
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { XZ } from '../core/model/section';
 import { MAX_IMPORT_BYTES, pushProblem, type RowProblem } from './importTypes';
 import { pathDataToPolylines, type Pt } from './svgPathData';
 import { applyMatrix, IDENTITY, multiply, parseTransform, type Matrix } from './svgTransform';
+import { nestedViewport, rootViewportSize, type ViewportSize } from './svgViewport';
 
 export interface SvgLine { name: string; points: Pt[] }
 export type SvgRead = { ok: true; lines: SvgLine[]; problems: RowProblem[] } | { ok: false; message: string; problems: RowProblem[] };
@@ -53,13 +55,21 @@ function shapeLines(tag: string, a: Record<string, string>): Pt[][] | null {
   return v.every(Number.isFinite) ? [[[v[0], v[1]], [v[2], v[3]]]] : null;
 }
 
-/** Returns every path, polyline and line of an SVG text in root user units (group transforms applied), bad ones listed; never throws. */
+/** What a group or <svg> element passes to its content: the matrix to root user units, the viewport percentages refer to, and whether it is drawn. */
+interface Frame { ctm: Matrix; viewport: ViewportSize; hidden: boolean }
+
+/**
+ * Returns every path, polyline and line of an SVG text in root user units (group transforms and nested <svg>
+ * viewports applied; the root's own viewBox is not, so the reference points are read in its user units), bad
+ * ones listed; never throws.
+ */
 export function readSvgLines(text: string): SvgRead {
   const problems: RowProblem[] = [];
   if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The SVG file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
   const body = text.replace(/<!--[\s\S]*?-->/g, '').replace(/<!\[CDATA\[[\s\S]*?\]\]>/g, '');
   if (!/<svg[\s>]/i.test(body)) return { ok: false, message: 'The file is not an SVG drawing (no <svg> element).', problems };
-  const stack: Matrix[] = [IDENTITY];
+  const stack: Frame[] = [{ ctm: IDENTITY, viewport: { width: 100, height: 100 }, hidden: false }];
+  let rootSeen = false;
   const lines: SvgLine[] = [];
   const counter = { n: 0 };
   let count = 0;
@@ -76,9 +86,14 @@ export function readSvgLines(text: string): SvgRead {
     const own = parseTransform(a.transform);
     const where = `<${tag}>${a.id ? ` "${a.id.slice(0, 60)}"` : ''}`;
     if (!own) pushProblem(problems, { where, message: 'has a transform that cannot be read; treated as none' }, counter);
-    const ctm = multiply(stack[stack.length - 1], own ?? IDENTITY);
-    if ((tag === 'g' || tag === 'svg' || tag === 'a') && !selfClosing) { stack.push(ctm); continue; }
-    if (!['path', 'polyline', 'polygon', 'line'].includes(tag)) continue;
+    const parent = stack[stack.length - 1];
+    const ctm = multiply(parent.ctm, own ?? IDENTITY);
+    if ((tag === 'g' || tag === 'svg' || tag === 'a') && !selfClosing) {
+      stack.push(tag === 'svg' ? svgFrame(a, ctm, parent, !rootSeen, where, problems, counter) : { ...parent, ctm });
+      rootSeen ||= tag === 'svg';
+      continue;
+    }
+    if (!['path', 'polyline', 'polygon', 'line'].includes(tag) || parent.hidden) continue;
     count += 1;
     const parts = shapeLines(tag, a);
     const label = (a['inkscape:label'] ?? a['data-name'] ?? a.id ?? `${tag} ${count}`).trim().slice(0, 500) || `${tag} ${count}`;
@@ -92,6 +107,22 @@ export function readSvgLines(text: string): SvgRead {
   }
   if (lines.length === 0) return { ok: false, message: 'The SVG file holds no path, polyline or line to import.', problems };
   return { ok: true, lines, problems };
+}
+
+/** Returns the frame an <svg> element gives its content: the root keeps its user units; a nested one maps its viewport (SVG 1.1 §7.9). */
+function svgFrame(a: Record<string, string>, ctm: Matrix, parent: Frame, isRoot: boolean, where: string, problems: RowProblem[], counter: { n: number }): Frame {
+  if (isRoot) return { ctm, viewport: rootViewportSize(a), hidden: false };
+  if (parent.hidden) return parent;
+  const vp = nestedViewport(a, parent.viewport);
+  if (!vp.ok) {
+    pushProblem(problems, { where, message: `${vp.message}; its content is skipped` }, counter);
+    return { ...parent, hidden: true };
+  }
+  if ('hidden' in vp) {
+    pushProblem(problems, { where, message: 'has a zero width, height or viewBox, so nothing in it is drawn; its content is skipped' }, counter);
+    return { ...parent, hidden: true };
+  }
+  return { ctm: multiply(ctm, vp.matrix), viewport: vp.size, hidden: false };
 }
 
 /** Returns the lines in section units, scaling each axis through the two reference points, or a message when they share an x or a y. */

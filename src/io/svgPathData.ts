@@ -1,21 +1,52 @@
 // Path data ("d") to polylines: M L H V C S Q T A Z, absolute and relative (SVG 1.1 §8.3).
-// Curves are flattened into straight segments; an arc is replaced by its chord plus midpoint
-// samples on the straight line (drafting exports of horizons rarely use arcs).
+// Curves are flattened into straight segments; elliptical arcs follow the SVG 1.1 implementation
+// notes (appendix F.6, svgArc.ts). The two arc flags are single characters "0" or "1" (the path data
+// grammar, §8.3.9), so "a10 10 0 1150 0" reads as flags 1, 1 and the point (50, 0).
+import { arcToPoints } from './svgArc';
 
 export type Pt = [number, number];
 
 const ARGS: Record<string, number> = { m: 2, l: 2, h: 1, v: 1, c: 6, s: 4, q: 4, t: 2, a: 7, z: 0 };
+const NUMBER = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/y;
+const SEPARATORS = /[\s,]*/y;
+const FLAG = /[01]/y;
 
-function tokenize(d: string): (string | number)[] | null {
-  const out: (string | number)[] = [];
-  const re = /([MmLlHhVvCcSsQqTtAaZz])|([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)|([\s,]+)|(.)/g;
-  let m: RegExpExecArray | null;
-  while ((m = re.exec(d)) !== null) {
-    if (m[1]) out.push(m[1]);
-    else if (m[2]) out.push(Number(m[2]));
-    else if (m[4]) return null;
-  }
-  return out;
+/** A reader over path data: commands, numbers and flags, with whitespace and commas between them skipped. */
+function pathReader(d: string) {
+  let pos = 0;
+  const skip = () => {
+    SEPARATORS.lastIndex = pos;
+    SEPARATORS.exec(d);
+    pos = SEPARATORS.lastIndex;
+  };
+  const take = (re: RegExp): string | null => {
+    skip();
+    re.lastIndex = pos;
+    const m = re.exec(d);
+    if (!m) return null;
+    pos = re.lastIndex;
+    return m[0];
+  };
+  return {
+    done: () => (skip(), pos >= d.length),
+    command: (): string | null => {
+      skip();
+      const c = d[pos];
+      if (c !== undefined && /[MmLlHhVvCcSsQqTtAaZz]/.test(c)) {
+        pos += 1;
+        return c;
+      }
+      return null;
+    },
+    number: (): number => {
+      const t = take(NUMBER);
+      return t === null ? NaN : Number(t);
+    },
+    flag: (): number => {
+      const t = take(FLAG);
+      return t === null ? NaN : Number(t);
+    },
+  };
 }
 
 function segmentsFor(p0: Pt, ...ctrl: Pt[]): number {
@@ -28,26 +59,25 @@ function segmentsFor(p0: Pt, ...ctrl: Pt[]): number {
 
 /** Returns the subpaths of the path data as polylines in the path's user units, or null when the data is malformed. */
 export function pathDataToPolylines(d: string): Pt[][] | null {
-  const tokens = tokenize(d);
-  if (!tokens) return null;
+  const read = pathReader(d);
   const lines: Pt[][] = [];
   let cur: Pt[] = [];
   let p: Pt = [0, 0];
   let start: Pt = [0, 0];
   let lastCtrl: Pt | null = null;
   let lastCmd = '';
-  let i = 0;
   let cmd = '';
-  const num = () => { const v = tokens[i++]; return typeof v === 'number' && Number.isFinite(v) ? v : NaN; };
-  while (i < tokens.length) {
-    if (typeof tokens[i] === 'string') cmd = tokens[i++] as string;
+  while (!read.done()) {
+    const next = read.command();
+    if (next) cmd = next;
     else if (!cmd || cmd === 'z' || cmd === 'Z') return null;
     const lower = cmd.toLowerCase();
     const rel = cmd === lower;
     const n = ARGS[lower];
     const a: number[] = [];
-    for (let k = 0; k < n; k++) a.push(num());
-    if (a.some(Number.isNaN)) return null;
+    // Arguments 4 and 5 of an arc are its flags.
+    for (let k = 0; k < n; k++) a.push(lower === 'a' && (k === 3 || k === 4) ? read.flag() : read.number());
+    if (a.some((v) => !Number.isFinite(v))) return null;
     const abs = (x: number, y: number): Pt => (rel ? [p[0] + x, p[1] + y] : [x, y]);
     let ctrl: Pt | null = null;
     if (lower === 'm') {
@@ -85,7 +115,9 @@ export function pathDataToPolylines(d: string): Pt[][] | null {
       }
       ctrl = c; p = e;
     } else if (lower === 'a') {
-      p = abs(a[5], a[6]); cur.push(p);
+      const e = abs(a[5], a[6]);
+      for (const q of arcToPoints(p, a[0], a[1], a[2], a[3], a[4], e)) cur.push(q);
+      p = e;
     }
     lastCtrl = ctrl;
     lastCmd = lower === 'm' ? 'M' : cmd;

@@ -3,7 +3,8 @@
 // sensitivity amplification 1 + W0/D (METHOD.md, "Sensitivity to the regional"). Pure.
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import type { Section } from '../core/model/section';
-import { isStale, type MonteCarloRecord, type Percentiles } from '../state/uncertaintyStore';
+import { isStale } from '../core/model/sectionKey';
+import type { MonteCarloRecord, Percentiles } from '../core/analysis/monteCarloRecord';
 import { formatNumber } from './formatNumber';
 
 /** The report's sentence when the scenario has no Monte Carlo run in this session. */

@@ -24,7 +24,7 @@ import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
 import { scenarioColour } from './interpretation/scenarioColour';
 import './interpretation/interpretation.css';
 
-/** Whether the open project is the built-in invented demo (src/io/openDemo.ts). */
+/** Whether the open project is the built-in invented demo (src/state/openDemo.ts). */
 function isDemo(doc: ProjectDoc): boolean {
   return doc.scan?.id === 'scan-demo' && /demo/i.test(doc.title);
 }

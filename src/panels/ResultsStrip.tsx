@@ -4,7 +4,7 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { formatArea, formatLength } from './workspace/formatQuantity';
+import { formatArea, formatLength } from '../format/formatQuantity';
 import { liveResults } from './workspace/liveResults';
 import './workspace/workspace.css';
 

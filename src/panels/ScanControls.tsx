@@ -3,7 +3,7 @@ import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { zoomAbout } from '../state/camera';
-import { openScanFile } from '../io/openScanFile';
+import { openScanFile } from '../state/openScanFile';
 import { ScanPageDialog } from './ScanPageDialog';
 import './scanControls.css';
 

@@ -1,7 +1,8 @@
 // The small dialog that asks which page of a multi-page TIFF, or which page of a PDF and at what
 // resolution, to open as the scan.
 import { useEffect, useState } from 'react';
-import { useScanChoiceStore, type ScanChoiceRequest } from '../io/decodeScanChoice';
+import type { ScanChoiceRequest } from '../io/decodeScanChoice';
+import { useScanChoiceStore } from '../state/scanChoiceStore';
 import { PDF_DEFAULT_DPI, PDF_DPI_CHOICES, PDF_MAX_SIDE_PX, pdfPagePixels } from '../io/decodePdf';
 import { MAX_SCAN_MEGAPIXELS } from '../io/decodeScan';
 import { defaultTiffPage } from '../io/decodeTiff';

@@ -2,7 +2,7 @@
 // with it, and the keyboard-shortcut overlay.
 import { useEffect } from 'react';
 import { setSettings } from '../core/model/commands/setSettings';
-import { useToolSession } from '../canvas/toolDispatch';
+import { useToolSession } from '../state/toolSessionStore';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { toolEntry, TOOLS } from '../tools/toolRegistry';

@@ -3,16 +3,17 @@
 // Closing the tab with changes not saved to a file asks first (beforeunload).
 import { emptyProjectDoc } from '../core/model/projectDoc';
 import { decodeScan } from '../io/decodeScan';
-import { fitViewToDoc } from '../io/projectActions';
 import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot, type StoredScan } from './autosaveDb';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
+import { fitViewToDoc } from './projectActions';
 import { getScan, putScan } from './scanCache';
+import { requestScanChoice } from './scanChoiceStore';
 
 /** Wait after the last change before writing, in milliseconds. */
 export const AUTOSAVE_DELAY_MS = 500;
 
-/** The scan id of the start-up demo (src/io/openDemo.ts): an untouched demo is not work to bring back. */
+/** The scan id of the start-up demo (src/state/openDemo.ts): an untouched demo is not work to bring back. */
 const DEMO_SCAN_ID = 'scan-demo';
 
 let dbPromise: Promise<IDBDatabase> | null = null;
@@ -59,7 +60,7 @@ export async function restoreAutosave(): Promise<boolean> {
   if (!snap.dirty && doc.scan?.id === DEMO_SCAN_ID) return false;
   if (doc.scan && snap.scan && snap.scan.id === doc.scan.id && snap.scan.bytes.byteLength > 0) {
     const blob = new Blob([snap.scan.bytes], { type: snap.scan.type });
-    const decoded = await decodeScan(Object.assign(blob, { name: snap.scan.name }));
+    const decoded = await decodeScan(Object.assign(blob, { name: snap.scan.name }), requestScanChoice);
     if (decoded.ok) {
       putScan(doc.scan.id, { bitmap: decoded.bitmap, bytes: blob });
       writtenScanId = doc.scan.id;

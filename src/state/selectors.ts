@@ -1,5 +1,6 @@
 // Derived results, computed from the document on demand and memoised; never stored.
-import { analysePrepared, analyseSection, type AnalysisOutcome } from '../core/analysis/analyseSection';
+import { analyseDocSection, type DocAnalysis } from '../core/analysis/analyseDocSection';
+import { analysePrepared } from '../core/analysis/analyseSection';
 import { prepareSection, type PreparedSection } from '../core/analysis/prepareSection';
 import { projectedContribution } from '../core/analysis/projectedContribution';
 import { imageToSection } from '../core/calibration/mapPoints';
@@ -8,53 +9,6 @@ import { meanElevation } from '../core/geometry/meanElevation';
 import { polylineLength } from '../core/geometry/polylineLength';
 import { activeScenario, docToSection, type DocSection } from '../core/model/docToSection';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
-
-/** A horizon the engine could not analyse (its own input problem), left out so that the others still are. */
-export interface LeftOutHorizon { id: string; name: string; reason: string }
-
-export interface DocAnalysis {
-  /** The section analysed: without the left-out horizons (their ids are not in horizonIds). */
-  docSection: DocSection;
-  /** Null when the document is not yet ready to analyse (no calibration, no pins, no regionals). */
-  outcome: AnalysisOutcome | null;
-  /** Horizons left out for a problem of their own (e.g. a regional short of a pin); empty when none. */
-  leftOut: LeftOutHorizon[];
-}
-
-// One unfinished horizon must not hide the results of the others while the user works (the CLI stays
-// strict: it reads analyseSection directly). When every problem the engine reports names a horizon,
-// those horizons are left out with the engine's message as the reason and the rest is analysed again;
-// a problem of the whole section (pins, units) still stops the analysis.
-function analyseLenient(docSection: DocSection): DocAnalysis {
-  if (!docSection.ok || docSection.section.horizons.length === 0) return { docSection, outcome: null, leftOut: [] };
-  const outcome = analyseSection(docSection.section);
-  if (outcome.ok || !outcome.problems.every((p) => p.horizon !== undefined)) return { docSection, outcome, leftOut: [] };
-  const bad = new Map<string, string>();
-  for (const p of outcome.problems) {
-    const reason = problemReason(p.message, p.horizon!);
-    const had = bad.get(p.horizon!);
-    bad.set(p.horizon!, had && had !== reason ? `${had}; ${reason}` : reason);
-  }
-  const keep = docSection.section.horizons.map((h) => !bad.has(h.name));
-  // A problem naming no horizon of the section, or every horizon bad: nothing to gain, report as it is.
-  if (keep.every((k) => k) || !keep.some((k) => k)) return { docSection, outcome, leftOut: [] };
-  const leftOut = docSection.horizonIds.flatMap((id, i) => (keep[i] ? [] : [{ id, name: docSection.section.horizons[i].name, reason: bad.get(docSection.section.horizons[i].name)! }]));
-  const reduced: DocSection = {
-    ...docSection,
-    section: { ...docSection.section, horizons: docSection.section.horizons.filter((_, i) => keep[i]) },
-    horizonIds: docSection.horizonIds.filter((_, i) => keep[i]),
-  };
-  const again = analyseSection(reduced.section);
-  // Leaving some out can bring up a problem of the rest only in theory (problems are per horizon); keep it honest.
-  return again.ok ? { docSection: reduced, outcome: again, leftOut } : { docSection, outcome, leftOut: [] };
-}
-
-/** The engine's message without its leading 'Horizon "name": ' (the pane names the horizon itself). */
-function problemReason(message: string, name: string): string {
-  const prefix = `Horizon "${name}"`;
-  if (!message.startsWith(prefix)) return message;
-  return message.slice(prefix.length).replace(/^\s*[:,]?\s*/, '');
-}
 
 // docToSection reads the scenario, the horizons, the calibration and the units and nothing else, so
 // the result is memoised on those four objects: editing one scenario (or undoing to a document that
@@ -67,7 +21,7 @@ export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysi
   const scenario = activeScenario(doc, scenarioId);
   const hit = scenario ? cache.get(scenario) : undefined;
   if (hit && hit.horizons === doc.horizons && hit.calibration === doc.calibration && hit.units === doc.units) return hit.result;
-  const result = analyseLenient(docToSection(doc, scenarioId));
+  const result = analyseDocSection(docToSection(doc, scenarioId));
   if (scenario) cache.set(scenario, { horizons: doc.horizons, calibration: doc.calibration, units: doc.units, result });
   return result;
 }
@@ -157,15 +111,3 @@ export function selectLiveAnalysis(doc: ProjectDoc, gestureStart: ProjectDoc | n
   live.set(doc, result);
   return result;
 }
-
-/**
- * Whether the area–depth line passes through its points exactly (residual standard error 0, or r² = 1
- * to 12 digits) with points to spare (n ≥ 3): its intervals then have zero width, which reads like
- * certainty; the pane says "exact fit (no scatter)" instead of a zero-width interval.
- */
-export function isExactFit(ad: { n: number; s: number; r2: number } | null | undefined): boolean {
-  return !!ad && ad.n >= 3 && (ad.s === 0 || Math.abs(1 - ad.r2) < 1e-12);
-}
-
-/** What the pane writes in place of the interval of an exact fit. */
-export const EXACT_FIT_TEXT = 'exact fit (no scatter): no interval';

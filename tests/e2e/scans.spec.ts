@@ -9,6 +9,7 @@ import { viewPixel } from './canvasPixels';
 import { gradientPng } from './pngFixture';
 import { samples16, writeTiff, type TiffPageSpec } from '../fixtures/scans/writeTiff';
 import { rectanglePdf } from '../fixtures/scans/onePagePdf';
+import { checkStandardFontText } from './standardFontText';
 
 const near = (a: number, b: number, tol = 6) => Math.abs(a - b) <= tol;
 
@@ -205,6 +206,10 @@ test('a PDF page opens at the chosen page and resolution', async ({ page }) => {
   const corner = await viewPixel(page, cx - 340 * scale, cy - 170 * scale);
   expect(corner.slice(0, 3)).toEqual([255, 255, 255]);
   await page.screenshot({ path: test.info().outputPath('pdf-opened.png') });
+});
+
+test('text in a standard font the PDF does not embed is drawn from the app\'s own copy of the font data', async ({ page }) => {
+  await checkStandardFontText(page, 'pdf-standard-font.png');
 });
 
 test('bad files give their message and leave the open scan unchanged', async ({ page }) => {

@@ -6,7 +6,7 @@ import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/an
 import type { Section } from '../../src/core/model/section';
 import { screenLength, SCREEN_FORMAT } from '../../src/panels/interpretation/screenQuantity';
 import { summaryRows } from '../../src/panels/interpretation/summaryRows';
-import { EXACT_FIT_TEXT, isExactFit } from '../../src/state/selectors';
+import { EXACT_FIT_TEXT, isExactFit } from '../../src/core/analysis/isExactFit';
 import { methodExample, triangleHorizon } from '../core/analysis/sections';
 
 function analyse(s: Section): SectionAnalysis {

@@ -4,8 +4,10 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import type { Section } from '../../src/core/model/section';
 import { emptyProjectDoc } from '../../src/core/model/projectDoc';
 import { setUnits } from '../../src/core/model/commands/setUnits';
+import { isStale, sectionKey } from '../../src/core/model/sectionKey';
 import { useDocStore } from '../../src/state/docStore';
-import { isStale, sectionKey, useUncertaintyStore, type MonteCarloRecord } from '../../src/state/uncertaintyStore';
+import { useUncertaintyStore } from '../../src/state/uncertaintyStore';
+import type { MonteCarloRecord } from '../../src/core/analysis/monteCarloRecord';
 import { methodExample } from '../core/analysis/sections';
 
 const clone = (s: Section): Section => JSON.parse(JSON.stringify(s)) as Section;
@@ -18,31 +20,6 @@ function record(section: Section, p50: number): MonteCarloRecord {
     displacement: { p10: 900, p50: 1000, p90: 1100 }, depthSd: 80, failedShare: 0, finishedAt: 0, depths: new Float64Array([p50]), pointDepth: p50,
   };
 }
-
-describe('sectionKey(section)', () => {
-  it('is equal for equal sections (a copy) and differs for any change the analysis reads', () => {
-    const s = methodExample();
-    expect(sectionKey(clone(s))).toBe(sectionKey(s));
-    const changes: ((c: Section) => void)[] = [
-      (c) => { c.horizons[2].regional[1][1] += 1e-9; },
-      (c) => { c.horizons[0].line[1][0] += 0.5; },
-      (c) => { c.horizons[1].include = false; },
-      (c) => { c.pins = [0, 9999]; },
-      (c) => { c.referenceElevation = 10; },
-      (c) => { c.horizons[3].name = 'H4 renamed'; },
-      (c) => { c.units = 'ft'; },
-      (c) => { c.horizons[0].projected = [[0, 1]]; },
-      (c) => { c.horizons.pop(); },
-    ];
-    const keys = new Set([sectionKey(s)]);
-    for (const change of changes) {
-      const c = clone(s);
-      change(c);
-      keys.add(sectionKey(c));
-    }
-    expect(keys.size).toBe(changes.length + 1);
-  });
-});
 
 describe('useUncertaintyStore', () => {
   beforeEach(() => useUncertaintyStore.getState().clear());

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import { importHorizons, type ImportedHorizon } from '../../core/model/commands/importHorizons';
 import type { LengthUnit } from '../../core/model/section';
 import { svgToSectionAxes } from '../../io/svgHorizons';
-import { fitViewToDoc } from '../../io/projectActions';
+import { fitViewToDoc } from '../../state/projectActions';
 import { formatNumber } from '../../io/formatNumber';
 import type { RowProblem } from '../../io/importTypes';
 import { useDocStore } from '../../state/docStore';

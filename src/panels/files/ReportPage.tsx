@@ -4,11 +4,12 @@
 import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
-import { currentFigureSvg } from '../../io/exportFigure';
+import { currentFigureSvg } from '../../state/currentFigureSvg';
 import { formatNumber, typographicMinus } from '../../io/formatNumber';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
-import { EXACT_FIT_TEXT, isExactFit, selectAnalysis } from '../../state/selectors';
+import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
+import { selectAnalysis } from '../../state/selectors';
 import { figureAreaUnit } from '../../io/figureAreaUnit';
 import { activeScenario } from '../../core/model/docToSection';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';

@@ -1,5 +1,5 @@
 // Banners about work kept in this browser: a restored session (keep it or start fresh) and a full storage quota.
-import { saveProjectFile } from '../../io/projectActions';
+import { saveProjectFile } from '../../state/projectActions';
 import { startFresh } from '../../state/autosave';
 import { useAutosaveStatus } from '../../state/autosaveStatus';
 

@@ -2,8 +2,10 @@
 // common reference (the shown scenario's, or the highest when it has no result), never each
 // scenario's own reference (a tilted regional moves the reference too).
 import type { ProjectDoc } from '../../core/model/projectDoc';
-import { isExactFit, selectAnalysis } from '../../state/selectors';
-import { isStale, type MonteCarloRecord } from '../../state/uncertaintyStore';
+import { isExactFit } from '../../core/analysis/isExactFit';
+import { selectAnalysis } from '../../state/selectors';
+import { isStale } from '../../core/model/sectionKey';
+import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
 
 export interface ScenarioRow {
   id: string; name: string; shown: boolean; n: number | null; displacement: number | null; noDetachment: boolean;

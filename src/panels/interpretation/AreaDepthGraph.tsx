@@ -10,7 +10,7 @@ import { linearScale } from './linearScale';
 import { linspace, meanBand } from './meanBand';
 import { niceTicks } from './niceTicks';
 import { screenLength, screenNumber, withMinus } from './screenQuantity';
-import { isExactFit } from '../../state/selectors';
+import { isExactFit } from '../../core/analysis/isExactFit';
 
 export interface GraphSeriesSpec {
   key: string;

@@ -4,7 +4,7 @@ import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { useSessionStore } from '../../state/sessionStore';
 import { areaUnit, formatNumber } from './formatValue';
 import { resultsTsv } from './resultsTsv';
-import { EXACT_FIT_TEXT } from '../../state/selectors';
+import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { SCREEN_FORMAT, withMinus } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 

@@ -1,6 +1,6 @@
 // The headline numbers of the fit (number first, then the unit), with their 95% intervals.
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
-import { EXACT_FIT_TEXT } from '../../state/selectors';
+import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { SCREEN_FORMAT } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 

@@ -3,8 +3,10 @@
 import { useEffect, useRef, useState } from 'react';
 import type { MonteCarloOptions } from '../../core/analysis/monteCarlo';
 import type { Section } from '../../core/model/section';
+import { isStale, sectionKey } from '../../core/model/sectionKey';
 import { useDocStore } from '../../state/docStore';
-import { isStale, sectionKey, useUncertaintyStore, type MonteCarloRecord } from '../../state/uncertaintyStore';
+import { useUncertaintyStore } from '../../state/uncertaintyStore';
+import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
 import { Histogram } from './Histogram';
 import { formatPercent } from './formatValue';
 import type { MonteCarloDone, MonteCarloReply } from './monteCarloMessages';

@@ -9,7 +9,7 @@ import { scenarioDuplicate } from '../../core/model/commands/scenarioDuplicate';
 import { scenarioRename } from '../../core/model/commands/scenarioRename';
 import { scenarioSwitch } from '../../core/model/commands/scenarioSwitch';
 import { AreaDepthGraph, type GraphSeriesSpec } from './AreaDepthGraph';
-import { EXACT_FIT_TEXT, isExactFit } from '../../state/selectors';
+import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { areaDepthSeries } from './areaDepthSeries';
 import { formatNumber } from './formatValue';
 import { screenLength, screenNumber } from './screenQuantity';

@@ -11,7 +11,8 @@ import { SweepPlot } from './SweepPlot';
 import { formatNumber } from './formatValue';
 import { screenLength, withMinus } from './screenQuantity';
 import { useDocStore } from '../../state/docStore';
-import { sectionKey, useUncertaintyStore } from '../../state/uncertaintyStore';
+import { sectionKey } from '../../core/model/sectionKey';
+import { useUncertaintyStore } from '../../state/uncertaintyStore';
 
 export function SensitivityPanel({ scenarioId, section: current }: { scenarioId: string; section: Section }) {
   // The sweeps re-prepare the whole section: while a regional or pin is dragged they keep the section

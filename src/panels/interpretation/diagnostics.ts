@@ -1,6 +1,6 @@
 import type { AnalysisOutcome } from '../../core/analysis/analyseSection';
 import type { DocSection } from '../../core/model/docToSection';
-import type { LeftOutHorizon } from '../../state/selectors';
+import type { LeftOutHorizon } from '../../core/analysis/analyseDocSection';
 
 // What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
 // called a poor fit: our threshold, a common rule of thumb for area–depth lines.

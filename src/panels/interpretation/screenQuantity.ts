@@ -1,9 +1,9 @@
 // Detachment depth, elevation and displacement as the results strip shows them (one rounding rule
-// for the same quantity in the strip and the pane: formatQuantity of the section workspace, about four
+// for the same quantity in the strip and the pane: src/format/formatQuantity, about four
 // significant figures with a typographic minus). This file only adapts it to null values, so that a
 // change of that formatter's API is met in one place.
 import type { LengthUnit } from '../../core/model/section';
-import { formatLength, formatNumber } from '../workspace/formatQuantity';
+import { formatLength, formatNumber } from '../../format/formatQuantity';
 
 /** The number as the strip rounds it ("−2590", "711.8"); "—" for null or non-finite. */
 export function screenNumber(v: number | null | undefined): string {

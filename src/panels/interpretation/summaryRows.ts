@@ -1,5 +1,5 @@
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
-import { EXACT_FIT_TEXT, isExactFit } from '../../state/selectors';
+import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { formatLength, formatNumber } from './formatValue';
 
 // The summary of the area–depth fit as label / value / interval rows, shared by the pane and the

@@ -1,7 +1,8 @@
 // The active scenario's analysis from the memoised selector, and its graph series.
 import { useMemo } from 'react';
 import { useDocStore } from '../../state/docStore';
-import { selectLiveAnalysis, type DocAnalysis } from '../../state/selectors';
+import { selectLiveAnalysis } from '../../state/selectors';
+import type { DocAnalysis } from '../../core/analysis/analyseDocSection';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { areaDepthSeries, type AreaDepthSeries } from './areaDepthSeries';
 

@@ -8,11 +8,11 @@ import { setCalibration } from '../../core/model/commands/setCalibration';
 import { setUnits } from '../../core/model/commands/setUnits';
 import { updateCalibrationPoint } from '../../core/model/commands/updateCalibrationPoint';
 import type { Calibration } from '../../core/model/projectDoc';
-import { useToolSession } from '../../canvas/toolDispatch';
+import { useToolSession } from '../../state/toolSessionStore';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
 import { residualTooLarge, RESIDUAL_WARN_PX, RESIDUAL_WARN_SHARE } from './calibrationTolerance';
-import { formatNumber } from './formatQuantity';
+import { formatNumber } from '../../format/formatQuantity';
 import { NumberField } from './NumberField';
 
 interface Row { ref: CalibrationPointRef; label: string; u: number; v: number; fields: { key: 'x' | 'z' | 'value'; label: string; value: number }[] }

@@ -1,5 +1,5 @@
 // The keyboard shortcuts, shown on "?" (and from the tool bar's "?" button).
-import { useToolSession } from '../../canvas/toolDispatch';
+import { useToolSession } from '../../state/toolSessionStore';
 import { TOOLS } from '../../tools/toolRegistry';
 
 const GENERAL: [string, string][] = [

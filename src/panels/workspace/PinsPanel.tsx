@@ -8,7 +8,7 @@ import { setPins } from '../../core/model/commands/setPins';
 import { activeScenario } from '../../core/model/docToSection';
 import type { ImagePx, ProjectDoc } from '../../core/model/projectDoc';
 import { useDocStore } from '../../state/docStore';
-import { formatNumber } from './formatQuantity';
+import { formatNumber } from '../../format/formatQuantity';
 import { NumberField } from './NumberField';
 import { pinValueProblem } from './pinValueProblem';
 import { roundForField } from './readNumberInput';

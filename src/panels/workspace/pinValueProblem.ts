@@ -1,6 +1,6 @@
 // Which typed pin positions are refused. A left pin typed right of the right pin used to swap the two
 // silently (losing the user's pin); a value like 1e99 was taken as a pin. Both are refused with a reason.
-import { formatNumber } from './formatQuantity';
+import { formatNumber } from '../../format/formatQuantity';
 
 /** Returns x as the pin fields show it: to 0.01 of the unit, without float noise. */
 const shownX = (x: number) => formatNumber(Math.round(x * 100) / 100, 10);

@@ -10,7 +10,7 @@ import { sampleDoc } from './sampleDoc';
 
 // The real decoder needs browser image APIs; here every embedded scan is "undecodable".
 vi.mock('../../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
-const { openProjectFile } = await import('../../../src/io/projectActions');
+const { openProjectFile } = await import('../../../src/state/projectActions');
 
 const SEED = 20240501;
 const HOSTILE = ['<img src=x onerror=alert(1)>', '"><script>alert(1)</script>', '__proto__', 'constructor', '\u0000\u202e', '=cmd|"/c calc"!A1', 'a'.repeat(10_000)];

@@ -77,3 +77,49 @@ describe('readSvgLines and svgToSectionAxes', () => {
     expect(readSvgLines('<html><body>hi</body></html>').ok).toBe(false);
   });
 });
+
+describe('readSvgLines: nested <svg> viewports (SVG 1.1 §7.7 viewBox, §7.8 preserveAspectRatio, §7.9 new viewports)', () => {
+  const inRoot = (inner: string) => `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 200 100">${inner}</svg>`;
+  const points = (svg: string) => {
+    const r = readSvgLines(svg);
+    if (!r.ok) throw new Error(r.message);
+    return r.lines.map((l) => l.points);
+  };
+
+  it('maps the viewBox onto the x, y, width, height rectangle: (0,0) → (x,y), (10,5) → (x + width, y + height)', () => {
+    // §7.7: scale width/vbWidth and height/vbHeight (here both 10, so uniform scaling changes nothing), then translate to (x, y).
+    expect(points(inRoot('<svg x="20" y="10" width="100" height="50" viewBox="0 0 10 5"><path d="M0 0 L10 5"/></svg>'))).toEqual([[[20, 10], [120, 60]]]);
+    // §7.7: the viewBox's min-x, min-y go to the viewport's corner.
+    expect(points(inRoot('<svg width="100" height="50" viewBox="5 5 10 5"><line x1="5" y1="5" x2="15" y2="10"/></svg>'))).toEqual([[[0, 0], [100, 50]]]);
+  });
+
+  it('keeps the aspect ratio as preserveAspectRatio says: xMidYMid meet by default, none, xMinYMax slice', () => {
+    const nested = (par: string) => inRoot(`<svg x="20" y="10" width="100" height="100" viewBox="0 0 10 5"${par}><path d="M0 0 L10 5"/></svg>`);
+    // §7.8, meet: scale min(100/10, 100/5) = 10; the 100 × 50 drawing is centred in y: ty = 10 + (100 − 50)/2 = 35.
+    expect(points(nested(''))).toEqual([[[20, 35], [120, 85]]]);
+    // §7.8, none: scale 10 across and 20 down, filling the viewport.
+    expect(points(nested(' preserveAspectRatio="none"'))).toEqual([[[20, 10], [120, 110]]]);
+    // §7.8, slice: scale max(10, 20) = 20; xMin keeps x at the left edge, YMax puts the bottom at y + height: ty = 10 + 100 − 100.
+    expect(points(nested(' preserveAspectRatio="xMinYMax slice"'))).toEqual([[[20, 10], [220, 110]]]);
+  });
+
+  it('reads percentages of the parent viewport (§7.10) and composes with group transforms and deeper nesting', () => {
+    // Root viewport 200 × 100 (its viewBox): x = 10% → 20, y = 50% → 50; without a viewBox only the translation applies.
+    expect(points(inRoot('<svg x="10%" y="50%" width="50%" height="50%"><path d="M0 0 L1 1"/></svg>'))).toEqual([[[20, 50], [21, 51]]]);
+    // Absolute units at 96 user units per inch (CSS Values and Units Level 3 §6.2: 1in = 2.54cm = 96px).
+    expect(points(inRoot('<svg x="1in" y="2.54cm"><path d="M0 0 L1 1"/></svg>'))[0][0]).toEqual([96, 96]);
+    // translate(5 5), then a viewport of scale 2 at (10,10), then one of scale 3 at (1,1) inside it:
+    // (0,0) → (1,1) → (10 + 2·1, 10 + 2·1) = (12,12) → (17,17); (1,1) → (1 + 3, 1 + 3) = (4,4) → (18,18) → (23,23).
+    const deep = inRoot('<g transform="translate(5 5)"><svg x="10" y="10" width="100" height="100" viewBox="0 0 50 50">'
+      + '<svg x="1" y="1" width="30" height="30" viewBox="0 0 10 10"><path d="M0 0 L1 1"/></svg></svg></g>');
+    expect(points(deep)).toEqual([[[17, 17], [23, 23]]]);
+  });
+
+  it('leaves the root viewBox alone (reference points are read in root user units) and skips an empty nested viewport', () => {
+    const r = readSvgLines(inRoot('<path id="kept" d="M0 0 L200 100"/><svg width="0" height="50"><path id="hidden" d="M0 0 L1 1"/></svg><svg viewBox="0 0 1"><path d="M0 0 L1 1"/></svg>'));
+    if (!r.ok) throw new Error(r.message);
+    expect(r.lines.map((l) => [l.name, l.points])).toEqual([['kept', [[0, 0], [200, 100]]]]);
+    // §7.9: a zero width disables rendering; a viewBox of three numbers cannot be read. Both are listed.
+    expect(r.problems).toHaveLength(2);
+  });
+});

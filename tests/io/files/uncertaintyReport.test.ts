@@ -7,7 +7,8 @@ import { amplificationOf, NO_MONTE_CARLO_TEXT, uncertaintyReport } from '../../.
 import { resultsCsv } from '../../../src/io/exportTables';
 import { reportScenarioRows } from '../../../src/panels/files/reportScenarioRows';
 import { selectAnalysis } from '../../../src/state/selectors';
-import { sectionKey, type MonteCarloRecord } from '../../../src/state/uncertaintyStore';
+import { sectionKey } from '../../../src/core/model/sectionKey';
+import type { MonteCarloRecord } from '../../../src/core/analysis/monteCarloRecord';
 import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
 
 /** The sample with the lower crest raised 1 m: the points scatter a little about the line. */

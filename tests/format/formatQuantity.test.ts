@@ -1,6 +1,6 @@
 // The numbers of the results strip: the minus sign U+2212 throughout, and no "−0" (journey P3 #1).
 import { describe, expect, it } from 'vitest';
-import { formatArea, formatLength, formatNumber, minusSign } from '../../../src/panels/workspace/formatQuantity';
+import { formatArea, formatLength, formatNumber, minusSign } from '../../src/format/formatQuantity';
 
 describe('formatNumber(v, digits)', () => {
   it('writes negative values with the minus sign U+2212', () => {

@@ -1,10 +1,11 @@
 // Opens a scan file chosen, dropped or pasted by the user. A bad file leaves the project unchanged.
 import { setScan } from '../core/model/commands/setScan';
-import { useDocStore } from '../state/docStore';
-import { useSessionStore } from '../state/sessionStore';
-import { putScan } from '../state/scanCache';
-import { ensureTilePyramid } from '../canvas/scanTilesPyramid';
-import { decodeScan } from './decodeScan';
+import { decodeScan } from '../io/decodeScan';
+import { useDocStore } from './docStore';
+import { putScan } from './scanCache';
+import { requestScanChoice } from './scanChoiceStore';
+import { ensureTilePyramid } from './scanTilesPyramid';
+import { useSessionStore } from './sessionStore';
 
 let scanCounter = 0;
 let opening = false;
@@ -19,7 +20,7 @@ export async function openScanFile(file: File): Promise<boolean> {
   opening = true;
   session.setBusy(`Opening ${file.name} …`);
   try {
-    const result = await decodeScan(file);
+    const result = await decodeScan(file, requestScanChoice);
     if (!result.ok) {
       session.showMessage(result.cancelled ? 'info' : 'error', result.message);
       return false;

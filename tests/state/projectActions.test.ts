@@ -1,13 +1,13 @@
 // Opening a file over unsaved changes asks first, as New does; "Cancel" changes nothing.
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { setProjectInfo } from '../../../src/core/model/commands/setProjectInfo';
-import { serializeProject } from '../../../src/io/projectFile';
-import { useDocStore } from '../../../src/state/docStore';
-import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
+import { setProjectInfo } from '../../src/core/model/commands/setProjectInfo';
+import { serializeProject } from '../../src/io/projectFile';
+import { useDocStore } from '../../src/state/docStore';
+import { SAMPLE_SECTION, sampleDoc } from '../io/files/sampleDoc';
 
-vi.mock('../../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
-const { newProject, openNotes, openProjectFile } = await import('../../../src/io/projectActions');
-const { putScan } = await import('../../../src/state/scanCache');
+vi.mock('../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
+const { newProject, openNotes, openProjectFile } = await import('../../src/state/projectActions');
+const { putScan } = await import('../../src/state/scanCache');
 
 const other = new File([JSON.stringify(SAMPLE_SECTION)], 'other-section.json');
 const confirm = vi.fn<(q: string) => boolean>();

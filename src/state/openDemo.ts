@@ -6,9 +6,9 @@ import { fitCalibration } from '../core/calibration/fitCalibration';
 import { sectionToImage } from '../core/calibration/mapPoints';
 import { emptyProjectDoc, type ControlPoint, type ProjectDoc } from '../core/model/projectDoc';
 import type { Section, XZ } from '../core/model/section';
-import { useDocStore } from '../state/docStore';
-import { useSessionStore } from '../state/sessionStore';
-import { putScan } from '../state/scanCache';
+import { useDocStore } from './docStore';
+import { putScan } from './scanCache';
+import { useSessionStore } from './sessionStore';
 
 const DEMO_COLOURS = ['#b5522b', '#2f6f4f', '#2b5f8a', '#7a3f8f', '#4d5d2a', '#8a3030', '#1f6f8b', '#8a6d1f'];
 

@@ -1,7 +1,7 @@
 // Numbers as a geologist reads them on screen: a few significant figures, no thousands separators
 // (so a value can be copied back into a field), areas in km² when metres make them long. Negative numbers
 // take the minus sign (U+2212); a value that rounds to zero is "0", never "−0".
-import type { LengthUnit } from '../../core/model/section';
+import type { LengthUnit } from '../core/model/section';
 
 /** Returns v with about `digits` significant figures, as plain decimal text ("—" when not finite, "0" for ±0). */
 export function formatNumber(v: number, digits = 4): string {

@@ -1,9 +1,9 @@
 // The uncertainty report of a scenario from the session's last Monte Carlo run (uncertaintyStore).
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
-import { selectAnalysis } from '../state/selectors';
-import { useUncertaintyStore } from '../state/uncertaintyStore';
-import { uncertaintyReport, type UncertaintyReport } from './uncertaintyReport';
+import { uncertaintyReport, type UncertaintyReport } from '../io/uncertaintyReport';
+import { selectAnalysis } from './selectors';
+import { useUncertaintyStore } from './uncertaintyStore';
 
 /** Returns the uncertainty report of the scenario (default the active one) as the session holds it now. */
 export function currentUncertainty(doc: ProjectDoc, scenarioId = activeScenario(doc).id): UncertaintyReport {

@@ -1,12 +1,13 @@
 // The file menu's project actions: open (project or section file), save, new. A file that cannot
 // be opened leaves the open project exactly as it was.
 import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
-import { useDocStore } from '../state/docStore';
-import { getScan, putScan, type CachedScan } from '../state/scanCache';
-import { useSessionStore } from '../state/sessionStore';
-import { decodeScan } from './decodeScan';
-import { downloadFile, safeFileName } from './downloadFile';
-import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from './projectFile';
+import { decodeScan } from '../io/decodeScan';
+import { downloadFile, safeFileName } from '../io/downloadFile';
+import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
+import { useDocStore } from './docStore';
+import { getScan, putScan, type CachedScan } from './scanCache';
+import { requestScanChoice } from './scanChoiceStore';
+import { useSessionStore } from './sessionStore';
 
 /** Fits the view to the scan, or to the drawn lines when there is no scan. */
 export function fitViewToDoc(doc: ProjectDoc): void {
@@ -67,7 +68,7 @@ export async function openProjectFile(file: File): Promise<boolean> {
     let decodedScan: CachedScan | null = null;
     if (scan && doc.scan) {
       const blob = new Blob([scan.bytes as Uint8Array<ArrayBuffer>], { type: scan.type });
-      const decoded = await decodeScan(Object.assign(blob, { name: scan.name }));
+      const decoded = await decodeScan(Object.assign(blob, { name: scan.name }), requestScanChoice);
       if (!decoded.ok) {
         session.showMessage('error', `${file.name}: the scan stored in it cannot be shown (${decoded.message}). Nothing was changed.`);
         return false;

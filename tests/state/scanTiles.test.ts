@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { TILE_PX, chooseLevel, tileImageRect, tileLevels, visibleTiles } from '../../src/canvas/scanTiles';
+import { TILE_PX, chooseLevel, tileImageRect, tileLevels, visibleTiles } from '../../src/state/scanTiles';
 
 describe('tileLevels', () => {
   it('tileLevels(10000, 10000) halves down to a level that fits in one tile', () => {

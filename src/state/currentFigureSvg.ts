@@ -1,0 +1,20 @@
+// The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg.
+import type { ProjectDoc } from '../core/model/projectDoc';
+import { scanDataUrl } from '../io/exportFigure';
+import { renderSectionSvg } from '../io/renderSectionSvg';
+import { useDocStore } from './docStore';
+import { getScan } from './scanCache';
+import { selectAnalysis } from './selectors';
+
+/** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not open in this browser. */
+export async function docScanDataUrl(doc: ProjectDoc): Promise<string | null> {
+  const cached = getScan(doc.scan?.id);
+  if (!doc.scan || !cached) return null;
+  return scanDataUrl(doc.scan.type, cached);
+}
+
+/** Returns the figure of the open project as an SVG string (today's date in the title block). */
+export async function currentFigureSvg(): Promise<string> {
+  const doc = useDocStore.getState().doc;
+  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10) });
+}
