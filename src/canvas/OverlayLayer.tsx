@@ -1,8 +1,8 @@
 // Handles, previews and calibration marks drawn above the shapes (section workspace). Handles are one
-// custom shape each (thousands of vertices stay cheap); the tool preview is drawn from the ephemeral
+// custom shape each (thousands of vertices stay cheap), for the vertices in view only (handlesInView); the tool preview is drawn from the ephemeral
 // preview outside React and redrawn with batchDraw when it changes.
 import { memo, useEffect, useRef } from 'react';
-import { Layer, Shape, Text } from 'react-konva';
+import { Label, Layer, Shape, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
 import { calibrationPoints } from '../core/model/commands/calibrationPointRef';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
@@ -10,6 +10,7 @@ import { activeScenario } from '../core/model/docToSection';
 import type { ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
+import { handlesInView } from './handlesInView';
 import { getToolPreview, subscribeToolPreview } from './toolDispatch';
 import { pinLinePx } from './pinLinePx';
 
@@ -20,16 +21,34 @@ function squares(ctx: Ctx, points: readonly ImagePx[], half: number): void {
   for (const [u, v] of points) ctx.rect(u - half, v - half, 2 * half, 2 * half);
 }
 
+/** Most vertex handles drawn at once; past it the user is asked to zoom in (handlesInView). */
+const HANDLE_CAP = 3000;
+
 const VertexHandles = memo(function VertexHandles({ scale }: { scale: number }) {
   const tool = useSessionStore((s) => s.activeTool);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
+  const camera = useSessionStore((s) => s.camera);
+  const viewport = useSessionStore((s) => s.viewport);
+  const inset = useSessionStore((s) => s.viewInsetBottom);
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === selectedId));
   if (!h || !h.visible || (tool !== 'edit' && tool !== 'projected')) return null;
   const half = 3.5 / scale;
+  const seen = handlesInView(h.pointsPx, { ...camera, ...viewport }, HANDLE_CAP);
+  if (!seen.points) {
+    // At the view's bottom left above the results strip (messages float at its top), in image px, drawn at screen size.
+    return (
+      <Label x={(12 - camera.x) / scale} y={(viewport.height - inset - 40 - camera.y) / scale} scaleX={1 / scale} scaleY={1 / scale} listening={false}>
+        <Tag fill="#ffffff" opacity={0.92} stroke="#90a4ae" strokeWidth={1} cornerRadius={3} />
+        <Text text={`${seen.count.toLocaleString('en')} vertices of “${h.name}” in view: zoom in to see and drag single vertices`}
+          fontSize={13} fill="#1d2a33" padding={6} />
+      </Label>
+    );
+  }
+  const points = seen.points;
   return (
     <Shape listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={h.colour} strokeWidth={1.5} strokeScaleEnabled={false}
       sceneFunc={(ctx, shape) => {
-        squares(ctx, h.pointsPx, half);
+        squares(ctx, points, half);
         ctx.fillStrokeShape(shape);
       }} />
   );

@@ -21,6 +21,8 @@ export interface SessionState {
   /** What the view was last fitted to, while the user has not zoomed or panned since; null once they have. */
   fitted: FitTarget | null;
   viewport: { width: number; height: number };
+  /** Screen px at the view's bottom covered by the live results strip (notes drawn on the view keep above it). */
+  viewInsetBottom: number;
   activeTool: string;
   selectedHorizonId: string | null;
   message: Message | null;
@@ -33,6 +35,7 @@ export interface SessionState {
   fitTo: (target: FitTarget) => void;
   /** The view's new size: refitted when fitted, else the view's centre kept (resizedCamera). */
   setViewport: (width: number, height: number) => void;
+  setViewInsetBottom: (px: number) => void;
   setTool: (tool: string) => void;
   selectHorizon: (id: string | null) => void;
   showMessage: (kind: MessageKind, text: string) => void;
@@ -47,6 +50,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
   camera: { scale: 1, x: 0, y: 0 },
   fitted: null,
   viewport: { width: 800, height: 600 },
+  viewInsetBottom: 0,
   activeTool: 'select',
   selectedHorizonId: null,
   message: null,
@@ -59,6 +63,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
     const viewport = { width, height };
     return { viewport, camera: resizedCamera(s.camera, s.fitted, s.viewport, viewport) };
   }),
+  setViewInsetBottom: (viewInsetBottom) => set((s) => (s.viewInsetBottom === viewInsetBottom ? s : { viewInsetBottom })),
   setTool: (activeTool) => set({ activeTool }),
   selectHorizon: (selectedHorizonId) => set({ selectedHorizonId }),
   showMessage: (kind, text) => set({ message: { kind, text, id: ++messageId } }),

@@ -360,6 +360,22 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
   await page.mouse.click(box.x + box.width / 2, box.y + rows[Math.floor(rows.length / 2)]);
   await expect(page.getByTestId('horizon-list').locator('li').first()).toHaveClass(/selected/);
 
+  // Editing: with thousands of vertices in view their handles would merge into a band, so the view asks the
+  // user to zoom in instead; zoomed in far enough, the handles of the vertices in view are drawn.
+  const handleShapes = `(() => window.Konva.stages[0].find('Shape').filter((s) => s.getClassName() === 'Shape' && s.fill() === '#ffffff' && s.stroke() === '#c0392b').length)()`;
+  const zoomNote = () => page.evaluate(`(() => window.Konva.stages[0].find('Text').map((t) => t.text()).filter((t) => t.includes('zoom in to see')).join())()`);
+  await page.getByTestId('tool-edit').click();
+  await expect.poll(zoomNote).toMatch(/^[\d,]+ vertices of “Long line” in view: zoom in to see/);
+  expect(await page.evaluate(handleShapes)).toBe(0);
+  await page.screenshot({ path: test.info().outputPath('long-line-zoom-note.png') });
+  await page.mouse.move(box.x + box.width / 2, box.y + rows[Math.floor(rows.length / 2)]);
+  for (let i = 0; i < 12; i++) await page.mouse.wheel(0, -400);
+  await expect.poll(zoomNote).toBe('');
+  // The handles' shape (white squares outlined in the line's colour) is on the stage, and was not before.
+  await expect.poll(() => page.evaluate(handleShapes)).toBe(1);
+  await page.screenshot({ path: test.info().outputPath('long-line-handles.png') });
+  await page.getByTestId('tool-select').click();
+
   // The document keeps all 100 000 vertices.
   const [dl] = await Promise.all([page.waitForEvent('download'), (async () => {
     await page.getByTestId('menu-project').click();

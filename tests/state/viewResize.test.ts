@@ -75,3 +75,14 @@ describe('the view when it changes size', () => {
     expect(session()).toBe(before);
   });
 });
+
+describe('the results strip over the view', () => {
+  it('setViewInsetBottom(px) records the strip height and does not move the view (the strip changes height while the user works)', () => {
+    useSessionStore.setState({ viewport: { width: 1000, height: 700 }, camera: { scale: 1, x: 0, y: 0 }, fitted: null, viewInsetBottom: 0 });
+    session().fitTo({ u0: 0, v0: 0, width: 2400, height: 1200, margin: 24 });
+    const before = session().camera;
+    session().setViewInsetBottom(90);
+    expect(session().viewInsetBottom).toBe(90);
+    expect(session().camera).toEqual(before);
+  });
+});
