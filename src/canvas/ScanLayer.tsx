@@ -37,7 +37,9 @@ export const ScanLayer = memo(function ScanLayer() {
   const scan = useDocStore((s) => s.doc.scan);
   useSyncExternalStore(subscribeScans, scanCacheVersion);
   const cached = getScan(scan?.id);
-  const pyramid = useTilePyramid(scan?.id, cached?.bitmap);
+  const bitmap = cached?.bitmap ?? undefined;
+  // A scan kept but not shown (scanCache) draws nothing, not even tiles cut earlier under the same id.
+  const pyramid = useTilePyramid(bitmap ? scan?.id : undefined, bitmap);
   const layerRef = useRef<Konva.Layer>(null);
   const groupRef = useRef<Konva.Group>(null);
 
@@ -97,7 +99,7 @@ export const ScanLayer = memo(function ScanLayer() {
     <Layer listening={false} ref={layerRef}>
       <Rect x={0} y={0} width={scan.widthPx} height={scan.heightPx} fill="#ffffff" perfectDrawEnabled={false} />
       {/* Until the tiles are cut (a scan restored from a saved project or the demo), the whole bitmap is drawn. */}
-      {!pyramid && cached && <KonvaImage image={cached.bitmap} x={0} y={0} width={scan.widthPx} height={scan.heightPx} perfectDrawEnabled={false} />}
+      {!pyramid && bitmap && <KonvaImage image={bitmap} x={0} y={0} width={scan.widthPx} height={scan.heightPx} perfectDrawEnabled={false} />}
       <Group ref={groupRef} />
     </Layer>
   );

@@ -19,6 +19,19 @@ export function pdfPagePixels(widthPt: number, heightPt: number, dpi: number): {
   return { widthPx: Math.round((widthPt * dpi) / 72), heightPx: Math.round((heightPt * dpi) / 72) };
 }
 
+/**
+ * Returns the scale (pixels per point) at which a page of widthPt × heightPt points renders to widthPx × heightPx
+ * pixels once each side is rounded as pdfPagePixels rounds it: the middle of the scales that give both, so a page
+ * reopens at the size it was first rendered at; when no scale gives both (or no height is given), the one that gives the width.
+ */
+export function pdfScaleForPixels(widthPt: number, heightPt: number, widthPx: number, heightPx?: number): number {
+  if (heightPx === undefined) return widthPx / widthPt;
+  // round(w·s) = W exactly when (W − ½)/w ≤ s < (W + ½)/w; the same for the height; both hold where the ranges overlap.
+  const lo = Math.max((widthPx - 0.5) / widthPt, (heightPx - 0.5) / heightPt);
+  const hi = Math.min((widthPx + 0.5) / widthPt, (heightPx + 0.5) / heightPt);
+  return lo < hi ? (lo + hi) / 2 : widthPx / widthPt;
+}
+
 async function loadPdfjs() {
   const [pdfjs, worker] = await Promise.all([import('pdfjs-dist'), import('pdfjs-dist/build/pdf.worker.min.mjs?url')]);
   pdfjs.GlobalWorkerOptions.workerSrc = worker.default;
@@ -26,10 +39,11 @@ async function loadPdfjs() {
 }
 
 /**
- * Returns the chosen page rendered on white, or a message. With `page` (0-based) and `widthPx` given
- * (reopening a saved project) no question is asked and the page is rendered at that width; otherwise `choose` asks for the page and resolution.
+ * Returns the chosen page rendered on white, or a message. With `saved` (reopening a saved project: the page, 0-based,
+ * and the pixel size it was rendered at) no question is asked and the page is rendered at that size
+ * (pdfScaleForPixels); otherwise `choose` asks for the page and resolution.
  */
-export async function decodePdf(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number, widthPx?: number): Promise<PdfDecodeResult> {
+export async function decodePdf(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, saved?: { page: number; widthPx: number; heightPx?: number }): Promise<PdfDecodeResult> {
   const pdfjs = await loadPdfjs();
   let doc: Awaited<ReturnType<typeof pdfjs.getDocument>['promise']>;
   try {
@@ -51,9 +65,9 @@ export async function decodePdf(file: Blob, name: string, maxPixels: number, cho
       const vp = (await doc.getPage(n)).getViewport({ scale: 1 });
       return { widthPt: vp.width, heightPt: vp.height };
     };
-    let pageNo = (page ?? 0) + 1;
+    let pageNo = (saved?.page ?? 0) + 1;
     let dpi = PDF_DEFAULT_DPI;
-    if (page === undefined || widthPx === undefined) {
+    if (!saved) {
       const choice = await choose({ kind: 'pdf', fileName: name, pageCount: doc.numPages, pageSize });
       if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
       pageNo = choice.page + 1;
@@ -62,12 +76,12 @@ export async function decodePdf(file: Blob, name: string, maxPixels: number, cho
     if (pageNo < 1 || pageNo > doc.numPages) return { ok: false, message: `${name} has no page ${pageNo}.` };
     const pdfPage = await doc.getPage(pageNo);
     const base = pdfPage.getViewport({ scale: 1 });
-    const scale = widthPx !== undefined && page !== undefined ? widthPx / base.width : dpi / 72;
+    const scale = saved ? pdfScaleForPixels(base.width, base.height, saved.widthPx, saved.heightPx) : dpi / 72;
     const viewport = pdfPage.getViewport({ scale });
     const w = Math.round(viewport.width);
     const h = Math.round(viewport.height);
     if (w * h > maxPixels || Math.max(w, h) > PDF_MAX_SIDE_PX) {
-      return { ok: false, message: `Page ${pageNo} of ${name} at ${dpi} dpi would be ${((w * h) / 1e6).toFixed(0)} megapixels; choose a lower resolution (the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels).` };
+      return { ok: false, message: `Page ${pageNo} of ${name} at ${Math.round(scale * 72)} dpi would be ${((w * h) / 1e6).toFixed(0)} megapixels; choose a lower resolution (the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels).` };
     }
     const canvas = document.createElement('canvas');
     canvas.width = w;

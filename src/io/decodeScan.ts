@@ -26,8 +26,12 @@ export type DecodeResult =
     }
   | { ok: false; message: string; cancelled?: boolean };
 
-/** Reopening a saved scan: the page to take and, for a PDF, the width it was rendered at (no questions asked). */
-export interface DecodeOptions { page?: number; widthPx?: number }
+/**
+ * Reopening a saved scan: the page it was opened at (0-based) and its pixel size. With `widthPx` given nothing is
+ * asked: a multi-page file opens at `page` (or its default page when none is saved) and a PDF page is rendered at
+ * the saved size; the caller compares the decoded size with the saved one (reopenScan).
+ */
+export interface DecodeOptions { page?: number; widthPx?: number; heightPx?: number }
 
 const MIME: Record<string, string> = { png: 'image/png', jpeg: 'image/jpeg', webp: 'image/webp', tiff: 'image/tiff', pdf: 'application/pdf' };
 /** Leading bytes read to find the pixel size (a JPEG's frame header can follow a long metadata block). */
@@ -51,7 +55,8 @@ async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Pr
 
 /**
  * Returns the decoded scan, or a message saying why the file cannot be opened (cancelled: the user said no).
- * `choose` asks which page of a multi-page TIFF, or which page of a PDF and at what resolution, when `options` do not say.
+ * `choose` asks which page of a multi-page TIFF, or which page of a PDF and at what resolution, unless `options`
+ * give the saved size (reopening: never asked).
  */
 export async function decodeScan(file: Blob & { name?: string }, choose: AskScanChoice, options: DecodeOptions = {}): Promise<DecodeResult> {
   const name = file.name || 'the file';
@@ -62,10 +67,11 @@ export async function decodeScan(file: Blob & { name?: string }, choose: AskScan
   }
   let result: DecodeResult;
   if (kind === 'tiff') {
-    const r = await decodeTiff(file, name, MAX_PIXELS, choose, options.page);
+    const r = await decodeTiff(file, name, MAX_PIXELS, choose, options.page, options.widthPx === undefined);
     result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.tiff, page: r.page, pageCount: r.pageCount } : r;
   } else if (kind === 'pdf') {
-    const r = await decodePdf(file, name, MAX_PIXELS, choose, options.page, options.widthPx);
+    const saved = options.widthPx === undefined ? undefined : { page: options.page ?? 0, widthPx: options.widthPx, heightPx: options.heightPx };
+    const r = await decodePdf(file, name, MAX_PIXELS, choose, saved);
     result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.pdf, page: r.page, pageCount: r.pageCount, dpi: r.dpi } : r;
   } else {
     result = await decodeBrowserImage(file, name, kind);

@@ -26,8 +26,11 @@ export function defaultTiffPage(pages: TiffPageInfo[]): TiffPageInfo {
   return full.length > 0 ? pool[0] : pool.reduce((a, b) => (b.widthPx * b.heightPx > a.widthPx * a.heightPx ? b : a));
 }
 
-/** Returns the chosen page of the TIFF as a bitmap (page given: no question; else `choose` asks which among several), or a message. */
-export async function decodeTiff(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number): Promise<TiffDecodeResult> {
+/**
+ * Returns the chosen page of the TIFF as a bitmap, or a message: `page` when given, else the default page, except that
+ * `choose` asks which among several when `mayAsk` (false when reopening a saved scan).
+ */
+export async function decodeTiff(file: Blob, name: string, maxPixels: number, choose: AskScanChoice, page?: number, mayAsk = true): Promise<TiffDecodeResult> {
   const worker = new Worker(new URL('./workers/decodeTiff.worker.ts', import.meta.url), { type: 'module' });
   try {
     const buffer = await file.arrayBuffer();
@@ -36,7 +39,7 @@ export async function decodeTiff(file: Blob, name: string, maxPixels: number, ch
     if (opened.type !== 'pages') return { ok: false, message: `${name} could not be read.` };
     const { pages } = opened;
     let index = page ?? defaultTiffPage(pages).index;
-    if (page === undefined && pages.length > 1) {
+    if (page === undefined && mayAsk && pages.length > 1) {
       const choice = await choose({ kind: 'tiff', fileName: name, pages });
       if (!choice) return { ok: false, message: `Opening ${name} was cancelled.`, cancelled: true };
       index = choice.page;

@@ -1,7 +1,8 @@
-// Horizons drawn in a drafting program and saved as SVG: every <path>, <polyline> and <line>,
+// Horizons drawn in a drafting program and saved as SVG: every drawn <path>, <polyline> and <line>,
 // with the transforms of its groups and the viewports of nested <svg> elements, becomes a line in
-// the drawing's root user units. Two points whose section coordinates the user knows then scale
-// each axis (svgToSectionAxes).
+// the drawing's root user units. Shapes that are only definitions (in <defs>, <symbol>, <clipPath>,
+// <mask>, <marker> or <pattern>) are not drawn and not imported. Two points whose section
+// coordinates the user knows then scale each axis (svgToSectionAxes).
 // The SVG is read as text by a small tag scanner, never inserted into the page.
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { XZ } from '../core/model/section';
@@ -58,10 +59,22 @@ function shapeLines(tag: string, a: Record<string, string>): Pt[][] | null {
 /** What a group or <svg> element passes to its content: the matrix to root user units, the viewport percentages refer to, and whether it is drawn. */
 interface Frame { ctm: Matrix; viewport: ViewportSize; hidden: boolean }
 
+/** Elements that pass their content on to be drawn (with their transform or viewport). */
+const DRAWN_CONTAINERS = new Set(['g', 'svg', 'a']);
 /**
- * Returns every path, polyline and line of an SVG text in root user units (group transforms and nested <svg>
+ * Elements whose content is never drawn where it stands, only when referenced: SVG 1.1 §5.3 ("elements that
+ * are descendants of a 'defs' are not rendered directly") and §5.5 'symbol' ("never rendered directly");
+ * likewise 'clipPath' (§14.3.5), 'mask' (§14.4), 'marker' (§11.6.2) and 'pattern' (§13.3) — those four
+ * section numbers recalled from memory. Lower case, as tags are compared.
+ */
+const DEFINITION_CONTAINERS = new Set(['defs', 'symbol', 'clippath', 'mask', 'marker', 'pattern']);
+/** Elements read as lines. */
+const SHAPES = new Set(['path', 'polyline', 'polygon', 'line']);
+
+/**
+ * Returns every drawn path, polyline and line of an SVG text in root user units (group transforms and nested <svg>
  * viewports applied; the root's own viewBox is not, so the reference points are read in its user units), bad
- * ones listed; never throws.
+ * ones listed; shapes that are only definitions are left out; never throws.
  */
 export function readSvgLines(text: string): SvgRead {
   const problems: RowProblem[] = [];
@@ -73,27 +86,39 @@ export function readSvgLines(text: string): SvgRead {
   const lines: SvgLine[] = [];
   const counter = { n: 0 };
   let count = 0;
+  let notDrawn = 0;
   const re = /<(\/?)([A-Za-z][\w:.-]*)((?:[^>"']|"[^"]*"|'[^']*')*?)(\/?)>/g;
   let m: RegExpExecArray | null;
   while ((m = re.exec(body)) !== null) {
     const [, closing, rawTag, attrText, selfClosing] = m;
     const tag = rawTag.replace(/^.*:/, '').toLowerCase();
     if (closing) {
-      if ((tag === 'g' || tag === 'svg' || tag === 'a') && stack.length > 1) stack.pop();
+      if ((DRAWN_CONTAINERS.has(tag) || DEFINITION_CONTAINERS.has(tag)) && stack.length > 1) stack.pop();
+      continue;
+    }
+    const parent = stack[stack.length - 1];
+    if (parent.hidden || DEFINITION_CONTAINERS.has(tag)) {
+      // Nothing in here is drawn: keep track of the nesting, read nothing else.
+      if ((DRAWN_CONTAINERS.has(tag) || DEFINITION_CONTAINERS.has(tag)) && !selfClosing) stack.push({ ...parent, hidden: true });
+      else if (SHAPES.has(tag)) notDrawn += 1;
       continue;
     }
     const a = attributes(attrText);
     const own = parseTransform(a.transform);
     const where = `<${tag}>${a.id ? ` "${a.id.slice(0, 60)}"` : ''}`;
     if (!own) pushProblem(problems, { where, message: 'has a transform that cannot be read; treated as none' }, counter);
-    const parent = stack[stack.length - 1];
     const ctm = multiply(parent.ctm, own ?? IDENTITY);
-    if ((tag === 'g' || tag === 'svg' || tag === 'a') && !selfClosing) {
+    if (DRAWN_CONTAINERS.has(tag) && !selfClosing) {
       stack.push(tag === 'svg' ? svgFrame(a, ctm, parent, !rootSeen, where, problems, counter) : { ...parent, ctm });
       rootSeen ||= tag === 'svg';
       continue;
     }
-    if (!['path', 'polyline', 'polygon', 'line'].includes(tag) || parent.hidden) continue;
+    if (tag === 'use') {
+      // A copy of another element (SVG 1.1 §5.6): not followed, so say that what it draws is not imported.
+      pushProblem(problems, { where, message: 'draws a copy of another element; copies are not imported' }, counter);
+      continue;
+    }
+    if (!SHAPES.has(tag)) continue;
     count += 1;
     const parts = shapeLines(tag, a);
     const label = (a['inkscape:label'] ?? a['data-name'] ?? a.id ?? `${tag} ${count}`).trim().slice(0, 500) || `${tag} ${count}`;
@@ -105,14 +130,16 @@ export function readSvgLines(text: string): SvgRead {
       } else lines.push({ name: parts.length > 1 ? `${label} ${k + 1}` : label, points });
     });
   }
-  if (lines.length === 0) return { ok: false, message: 'The SVG file holds no path, polyline or line to import.', problems };
+  if (lines.length === 0) {
+    const why = notDrawn > 0 ? ` (${notDrawn} ${notDrawn === 1 ? 'shape is' : 'shapes are'} only definitions, in <defs> or the like, or in an empty viewport, and not drawn)` : '';
+    return { ok: false, message: `The SVG file holds no drawn path, polyline or line to import${why}.`, problems };
+  }
   return { ok: true, lines, problems };
 }
 
 /** Returns the frame an <svg> element gives its content: the root keeps its user units; a nested one maps its viewport (SVG 1.1 §7.9). */
 function svgFrame(a: Record<string, string>, ctm: Matrix, parent: Frame, isRoot: boolean, where: string, problems: RowProblem[], counter: { n: number }): Frame {
   if (isRoot) return { ctm, viewport: rootViewportSize(a), hidden: false };
-  if (parent.hidden) return parent;
   const vp = nestedViewport(a, parent.viewport);
   if (!vp.ok) {
     pushProblem(problems, { where, message: `${vp.message}; its content is skipped` }, counter);

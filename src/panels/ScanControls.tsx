@@ -1,6 +1,7 @@
 // Opening a scan and fitting the view: the first things a user does.
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useSyncExternalStore } from 'react';
 import { useDocStore } from '../state/docStore';
+import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
 import { zoomAbout } from '../state/camera';
 import { openScanFile } from '../state/openScanFile';
@@ -38,6 +39,8 @@ export function ScanControls() {
   const showGrid = useDocStore((s) => s.doc.settings.showGrid);
   const calibrated = useDocStore((s) => s.doc.calibration !== null);
   const scale = useSessionStore((s) => s.camera.scale);
+  useSyncExternalStore(subscribeScans, scanCacheVersion);
+  const notShown = getScan(scan?.id)?.notShown;
   const fileInput = useRef<HTMLInputElement>(null);
   useEffect(() => {
     // "1" shows the scan at actual size (one image pixel per screen pixel).
@@ -74,6 +77,7 @@ export function ScanControls() {
           {scan.name}{scan.page !== undefined ? ` (page ${scan.page + 1})` : ''} — {scan.widthPx} × {scan.heightPx} px
         </p>
       )}
+      {scan && notShown && <p className="hint warn" data-testid="scan-not-shown">Not shown: {notShown}</p>}
       <div className="button-row">
         <button type="button" onClick={() => zoomByStep(1 / 1.25)} title="Zoom out (−)" aria-label="Zoom out">−</button>
         <span className="zoom-readout" data-testid="zoom-readout">{(scale * 100).toFixed(scale < 0.1 ? 1 : 0)}%</span>

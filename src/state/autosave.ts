@@ -2,13 +2,12 @@
 // scan's bytes go to IndexedDB; on the next visit the last state comes back (with "Start fresh").
 // Closing the tab with changes not saved to a file asks first (beforeunload).
 import { emptyProjectDoc } from '../core/model/projectDoc';
-import { decodeScan } from '../io/decodeScan';
 import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot, type StoredScan } from './autosaveDb';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
-import { fitViewToDoc } from './projectActions';
+import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
 import { getScan, putScan } from './scanCache';
-import { requestScanChoice } from './scanChoiceStore';
+import { useSessionStore } from './sessionStore';
 
 /** Wait after the last change before writing, in milliseconds. */
 export const AUTOSAVE_DELAY_MS = 500;
@@ -58,13 +57,20 @@ export async function restoreAutosave(): Promise<boolean> {
   if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
   // The untouched start-up demo is not work to bring back.
   if (!snap.dirty && doc.scan?.id === DEMO_SCAN_ID) return false;
+  let notShown: string | null = null;
   if (doc.scan && snap.scan && snap.scan.id === doc.scan.id && snap.scan.bytes.byteLength > 0) {
     const blob = new Blob([snap.scan.bytes], { type: snap.scan.type });
-    const decoded = await decodeScan(Object.assign(blob, { name: snap.scan.name }), requestScanChoice);
-    if (decoded.ok) {
-      putScan(doc.scan.id, { bitmap: decoded.bitmap, bytes: blob });
-      writtenScanId = doc.scan.id;
+    // At the saved page and size, nothing asked (reopenSavedScan). A scan that cannot be shown keeps its bytes in
+    // the cache, not shown: the next write must not drop the browser's only copy of it.
+    const reopened = await reopenSavedScan(blob, doc.scan);
+    if (reopened.ok) {
+      putScan(doc.scan.id, reopened.cached);
+      notShown = reopened.notShown;
+    } else {
+      notShown = `The scan "${doc.scan.name}" kept in this browser cannot be shown (${reopened.message}). ${SCAN_NOT_SHOWN_WORDS}`;
+      putScan(doc.scan.id, { bitmap: null, bytes: blob, notShown: reopened.message });
     }
+    writtenScanId = doc.scan.id;
   }
   useDocStore.getState().replace(doc);
   // The camera is session state, not kept: frame the restored scan (or drawing) in the current viewport.
@@ -72,6 +78,7 @@ export async function restoreAutosave(): Promise<boolean> {
   // A restored session that had not been saved to a file is still unsaved.
   if (snap.dirty) useDocStore.setState({ savedRevision: useDocStore.getState().revision - 1 });
   useAutosaveStatus.setState({ restoredFrom: snap.savedAt || new Date().toISOString() });
+  if (notShown) useSessionStore.getState().showMessage('error', notShown);
   return true;
 }
 

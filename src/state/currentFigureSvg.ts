@@ -6,11 +6,11 @@ import { useDocStore } from './docStore';
 import { getScan } from './scanCache';
 import { selectAnalysis } from './selectors';
 
-/** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not open in this browser. */
+/** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not shown in this browser. */
 export async function docScanDataUrl(doc: ProjectDoc): Promise<string | null> {
   const cached = getScan(doc.scan?.id);
-  if (!doc.scan || !cached) return null;
-  return scanDataUrl(doc.scan.type, cached);
+  if (!doc.scan || !cached?.bitmap) return null;
+  return scanDataUrl(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes });
 }
 
 /** Returns the figure of the open project as an SVG string (today's date in the title block). */

@@ -1,13 +1,15 @@
 // The file menu's project actions: open (project or section file), save, new. A file that cannot
 // be opened leaves the open project exactly as it was.
-import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
-import { decodeScan } from '../io/decodeScan';
+import { emptyProjectDoc, type ProjectDoc, type ScanRef } from '../core/model/projectDoc';
 import { downloadFile, safeFileName } from '../io/downloadFile';
 import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
+import { reopenScan } from '../io/reopenScan';
 import { useDocStore } from './docStore';
 import { getScan, putScan, type CachedScan } from './scanCache';
-import { requestScanChoice } from './scanChoiceStore';
 import { useSessionStore } from './sessionStore';
+
+/** Said after the reason a saved scan is not shown (reopenSavedScan). */
+export const SCAN_NOT_SHOWN_WORDS = 'The scan is not shown; the horizons, calibration, pins and regionals are unchanged (they are kept in scan pixels) and the scan stays in the project. To see it behind the lines, open the image they were digitised on again (Open scan…) at the same page and resolution.';
 
 /** Fits the view to the scan, or to the drawn lines when there is no scan. */
 export function fitViewToDoc(doc: ProjectDoc): void {
@@ -28,9 +30,26 @@ export function fitViewToDoc(doc: ProjectDoc): void {
  * browser (same scan id in the cache) is shown with it, so say that instead of "open the image again".
  */
 export function openNotes(notes: string[], doc: ProjectDoc, scanInFile: boolean): string[] {
-  if (!doc.scan || scanInFile || !getScan(doc.scan.id)) return notes;
+  if (!doc.scan || scanInFile || !getScan(doc.scan.id)?.bitmap) return notes;
   const name = doc.scan.name;
   return notes.map((n) => (n.includes(SCAN_NOT_STORED_MARK) ? `The file has no scan; showing "${name}", still open in this browser (save again to store it in the file).` : n));
+}
+
+/**
+ * Returns the saved scan of a document ready for the scan cache, decoded at the page and size its lines were
+ * digitised at without asking anything (io/reopenScan); or, when it decodes to another size, its bytes kept but
+ * not shown, with the message to give (`notShown`); or why it cannot be decoded at all.
+ *
+ * Kept but not shown, rather than refused or shown: the horizons, calibration, pins and regionals are in scan
+ * pixels and the results stand without the image, so a geologist keeps the work (refusing would lock it away,
+ * and at start-up the demo would take its place); drawn over a scan of another size, every line would sit on the
+ * wrong rock. The bytes stay, so saving the project again loses nothing.
+ */
+export async function reopenSavedScan(bytes: Blob, scan: ScanRef): Promise<{ ok: true; cached: CachedScan; notShown: string | null } | { ok: false; message: string }> {
+  const reopened = await reopenScan(bytes, scan);
+  if (reopened.ok) return { ok: true, cached: { bitmap: reopened.bitmap, bytes }, notShown: null };
+  if (!reopened.decodedPx) return { ok: false, message: reopened.message };
+  return { ok: true, cached: { bitmap: null, bytes, notShown: reopened.message }, notShown: `${reopened.message} ${SCAN_NOT_SHOWN_WORDS}` };
 }
 
 /** Returns true when there are no unsaved changes or the user agrees to discard them (asked with the question). */
@@ -66,24 +85,29 @@ export async function openProjectFile(file: File): Promise<boolean> {
     }
     const { doc, scan } = opened;
     let decodedScan: CachedScan | null = null;
+    let notShown: string | null = null;
     if (scan && doc.scan) {
       const blob = new Blob([scan.bytes as Uint8Array<ArrayBuffer>], { type: scan.type });
-      const decoded = await decodeScan(Object.assign(blob, { name: scan.name }), requestScanChoice);
-      if (!decoded.ok) {
-        session.showMessage('error', `${file.name}: the scan stored in it cannot be shown (${decoded.message}). Nothing was changed.`);
+      const reopened = await reopenSavedScan(blob, doc.scan);
+      if (!reopened.ok) {
+        session.showMessage('error', `${file.name}: the scan stored in it cannot be shown (${reopened.message}). Nothing was changed.`);
         return false;
       }
-      decodedScan = { bitmap: decoded.bitmap, bytes: blob };
+      decodedScan = reopened.cached;
+      notShown = reopened.notShown;
     }
     // Asked now, not before reading: the changes still stand at this moment (the read and decode take time).
     if (!unsavedChangesMayGo(`Discard the changes not saved to a file and open ${file.name}?`)) {
-      decodedScan?.bitmap.close();
+      decodedScan?.bitmap?.close();
       return false;
     }
     if (decodedScan && doc.scan) putScan(doc.scan.id, decodedScan);
     useDocStore.getState().replace(doc);
     fitViewToDoc(doc);
-    session.showMessage('info', [`Opened ${file.name}.`, ...openNotes(opened.notes, doc, Boolean(scan))].join(' '));
+    const said = [`Opened ${file.name}.`, ...openNotes(opened.notes, doc, Boolean(scan))];
+    // A scan not shown is an error to read, not a note that fades: it stays until dismissed.
+    if (notShown) session.showMessage('error', [...said, notShown].join(' '));
+    else session.showMessage('info', said.join(' '));
     return true;
   } finally {
     session.setBusy(null);

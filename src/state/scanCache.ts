@@ -1,7 +1,12 @@
 // Decoded scans and their original bytes, keyed by the document's scan id. Kept out of the
 // document (and its undo history) because bitmaps are neither plain data nor cheap to copy.
 
-export interface CachedScan { bitmap: ImageBitmap; bytes: Blob }
+/**
+ * A scan's original bytes and its decoded bitmap. `bitmap` is null for a scan kept but not shown (a saved scan that
+ * no longer decodes to the size its lines were digitised at), `notShown` saying why: its bytes still go into the
+ * project file and the browser's copy, so nothing of the project is lost.
+ */
+export interface CachedScan { bitmap: ImageBitmap | null; bytes: Blob; notShown?: string }
 
 const scans = new Map<string, CachedScan>();
 const listeners = new Set<() => void>();

@@ -1,13 +1,20 @@
-// Opening a file over unsaved changes asks first, as New does; "Cancel" changes nothing.
+// Opening a file over unsaved changes asks first, as New does; "Cancel" changes nothing. A saved scan reopens at
+// its saved page and size without a question, and one that decodes to another size is kept but not shown.
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { setProjectInfo } from '../../src/core/model/commands/setProjectInfo';
+import type { DecodeResult } from '../../src/io/decodeScan';
+import type { AskScanChoice } from '../../src/io/decodeScanChoice';
 import { serializeProject } from '../../src/io/projectFile';
 import { useDocStore } from '../../src/state/docStore';
 import { SAMPLE_SECTION, sampleDoc } from '../io/files/sampleDoc';
 
-vi.mock('../../src/io/decodeScan', () => ({ decodeScan: async () => ({ ok: false, message: 'cannot decode in tests' }) }));
+// Decoding needs a browser (createImageBitmap, workers, pdf.js); here it answers as the test says.
+const decodeScan = vi.hoisted(() => vi.fn(async (..._args: unknown[]): Promise<unknown> => ({ ok: false, message: 'cannot decode in tests' })));
+vi.mock('../../src/io/decodeScan', () => ({ decodeScan }));
 const { newProject, openNotes, openProjectFile } = await import('../../src/state/projectActions');
-const { putScan } = await import('../../src/state/scanCache');
+const { getScan, putScan } = await import('../../src/state/scanCache');
+const { useSessionStore } = await import('../../src/state/sessionStore');
+const { useScanChoiceStore } = await import('../../src/state/scanChoiceStore');
 
 const other = new File([JSON.stringify(SAMPLE_SECTION)], 'other-section.json');
 const confirm = vi.fn<(q: string) => boolean>();
@@ -73,5 +80,63 @@ describe('openNotes', () => {
     expect(said).not.toMatch(/open the image again/);
     // A file that carries its scan needs no such note.
     expect(openNotes([], doc, true)).toEqual([]);
+  });
+});
+
+describe('openProjectFile with a scan in the file', () => {
+  const scanRef = { id: 'scan-saved', name: 'report.pdf', widthPx: 591, heightPx: 886, type: 'application/pdf', page: 1 };
+  const bytes = Uint8Array.from([37, 80, 68, 70, 45]);
+  const file = () => new File([serializeProject({ ...sampleDoc(), scan: scanRef }, { type: scanRef.type, name: scanRef.name, bytes })], 'saved.foldroot.json');
+  const decodedAt = (widthPx: number, heightPx: number) => {
+    const bitmap = { width: widthPx, height: heightPx, close: vi.fn() } as unknown as ImageBitmap;
+    return { ok: true, bitmap, kind: 'pdf', widthPx, heightPx, mime: 'application/pdf', page: 1, pageCount: 2, dpi: 150 } satisfies DecodeResult;
+  };
+
+  beforeEach(() => {
+    vi.stubGlobal('window', { confirm: () => true });
+    useDocStore.getState().replace(sampleDoc());
+    useSessionStore.getState().clearMessage();
+  });
+  afterEach(() => {
+    vi.unstubAllGlobals();
+    decodeScan.mockReset();
+  });
+
+  it('decodes it at the saved page and size and asks nothing', async () => {
+    decodeScan.mockResolvedValue(decodedAt(591, 886));
+    expect(await openProjectFile(file())).toBe(true);
+    expect(decodeScan).toHaveBeenCalledTimes(1);
+    const [blob, ask, options] = decodeScan.mock.calls[0] as [Blob, AskScanChoice, unknown];
+    expect(options).toEqual({ page: 1, widthPx: 591, heightPx: 886 });
+    expect(new Uint8Array(await blob.arrayBuffer())).toEqual(bytes);
+    // The function it was given to ask with does not ask: no page question is put to the user.
+    expect(await ask({ kind: 'pdf', fileName: 'report.pdf', pageCount: 2, pageSize: async () => ({ widthPt: 1, heightPt: 1 }) })).toBeNull();
+    expect(useScanChoiceStore.getState().request).toBeNull();
+    expect(getScan('scan-saved')?.bitmap).not.toBeNull();
+    expect(useSessionStore.getState().message).toMatchObject({ kind: 'info', text: 'Opened saved.foldroot.json.' });
+  });
+
+  it('opens the work with the scan kept but not shown when it decodes to another size, and says what differs', async () => {
+    const wrong = decodedAt(591, 887);
+    decodeScan.mockResolvedValue(wrong);
+    expect(await openProjectFile(file())).toBe(true);
+    expect(useDocStore.getState().doc.scan).toEqual(scanRef);
+    expect(useDocStore.getState().doc.horizons).toHaveLength(3);
+    const cached = getScan('scan-saved')!;
+    expect(cached.bitmap).toBeNull();
+    expect(new Uint8Array(await cached.bytes.arrayBuffer())).toEqual(bytes);
+    expect((wrong.bitmap.close as ReturnType<typeof vi.fn>)).toHaveBeenCalled();
+    const message = useSessionStore.getState().message!;
+    expect(message.kind).toBe('error');
+    expect(message.text).toContain('The scan "report.pdf" (page 2) now opens at 591 × 887 px, but the lines were digitised on it at 591 × 886 px, so they would not line up with it.');
+    expect(message.text).toContain('The scan is not shown');
+  });
+
+  it('changes nothing when the scan cannot be decoded at all', async () => {
+    decodeScan.mockResolvedValue({ ok: false, message: 'report.pdf looks like a PDF but could not be read' });
+    const before = useDocStore.getState().doc;
+    expect(await openProjectFile(file())).toBe(false);
+    expect(useDocStore.getState().doc).toBe(before);
+    expect(useSessionStore.getState().message?.text).toMatch(/cannot be shown \(report\.pdf looks like a PDF but could not be read\)\. Nothing was changed\./);
   });
 });

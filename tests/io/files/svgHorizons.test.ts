@@ -123,3 +123,50 @@ describe('readSvgLines: nested <svg> viewports (SVG 1.1 §7.7 viewBox, §7.8 pre
     expect(r.problems).toHaveLength(2);
   });
 });
+
+describe('readSvgLines: definitions are not drawn (SVG 1.1 §5.3 the \'defs\' element, §5.5 the \'symbol\' element)', () => {
+  const inRoot = (inner: string) => `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 200 100">${inner}</svg>`;
+  const read = (svg: string) => {
+    const r = readSvgLines(svg);
+    if (!r.ok) throw new Error(r.message);
+    return r;
+  };
+  const named = (svg: string) => read(svg).lines.map((l) => [l.name, l.points]);
+
+  it('leaves out shapes inside <defs>, however deep, and reads what follows with its own transform', () => {
+    // §5.3: "elements that are descendants of a 'defs' are not rendered directly".
+    const svg = inRoot('<g transform="translate(10 0)">'
+      + '<defs><path id="in-defs" d="M0 0 L5 5"/><g transform="scale(3)"><polyline id="deeper" points="0,0 1,1"/><line id="deepest" x1="0" y1="0" x2="1" y2="1"/></g></defs>'
+      + '<path id="drawn" d="M0 50 L100 50"/></g><line id="after" x1="0" y1="90" x2="200" y2="90"/>');
+    // The group's translate(10 0) still applies after </defs> (SVG 1.1 §7.5 nested transformations, section number recalled from memory), and nothing else does.
+    expect(named(svg)).toEqual([['drawn', [[10, 50], [110, 50]]], ['after', [[0, 90], [200, 90]]]]);
+  });
+
+  it('leaves out shapes in <symbol>, <clipPath>, <mask>, <marker> and <pattern>, inside or outside <defs>', () => {
+    // §5.5: 'symbol' elements are never rendered directly; likewise clipPath (§14.3.5), mask (§14.4),
+    // marker (§11.6.2) and pattern (§13.3) — these four section numbers recalled from memory.
+    for (const el of ['symbol', 'clipPath', 'mask', 'marker', 'pattern']) {
+      const outside = inRoot(`<${el} id="def"><path id="hidden" d="M0 0 L9 9"/></${el}><path id="drawn" d="M0 10 L20 10"/>`);
+      expect(named(outside), el).toEqual([['drawn', [[0, 10], [20, 10]]]]);
+      const inside = inRoot(`<defs><${el} id="def"><g><path id="hidden" d="M0 0 L9 9"/></g></${el}><path id="also-hidden" d="M1 1 L2 2"/></defs><path id="drawn" d="M0 10 L20 10"/>`);
+      expect(named(inside), el).toEqual([['drawn', [[0, 10], [20, 10]]]]);
+    }
+  });
+
+  it('reads tag names with a namespace prefix and leaves an empty <defs/> without effect', () => {
+    // XML Namespaces: svg:defs is the same element as defs in the SVG namespace.
+    const svg = '<svg xmlns="http://www.w3.org/2000/svg" xmlns:svg="http://www.w3.org/2000/svg"><svg:defs><svg:path id="def" d="M0 0 L1 1"/></svg:defs>'
+      + '<svg:defs/><svg:path id="drawn" d="M0 0 L3 4"/></svg>';
+    expect(named(svg)).toEqual([['drawn', [[0, 0], [3, 4]]]]);
+  });
+
+  it('says so when every shape is only a definition, and lists a <use> it does not follow', () => {
+    const only = readSvgLines(inRoot('<defs><path id="a" d="M0 0 L1 1"/><path id="b" d="M0 0 L2 2"/></defs>'));
+    expect(only.ok).toBe(false);
+    if (!only.ok) expect(only.message).toMatch(/no drawn path.*2 shapes are only definitions/);
+    // §5.6: a 'use' draws a copy of the element it references; the copy is not imported, and the list says so.
+    const r = read(inRoot('<defs><path id="bed" d="M0 0 L1 1"/></defs><use id="copy" href="#bed" x="5"/><path id="drawn" d="M0 0 L1 0"/>'));
+    expect(r.lines.map((l) => l.name)).toEqual(['drawn']);
+    expect(r.problems).toEqual([{ where: '<use> "copy"', message: 'draws a copy of another element; copies are not imported' }]);
+  });
+});

@@ -1,0 +1,81 @@
+// Restoring the work kept in the browser: the scan comes back at its saved page and size without a question,
+// and a scan that cannot be shown (another size, or not decodable) is kept, not dropped by the next write.
+import { IDBFactory } from 'fake-indexeddb';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { setProjectInfo } from '../../src/core/model/commands/setProjectInfo';
+import type { DecodeResult } from '../../src/io/decodeScan';
+import { openAutosaveDb, readSnapshot, writeSnapshot } from '../../src/state/autosaveDb';
+import { useDocStore } from '../../src/state/docStore';
+import { sampleDoc } from '../io/files/sampleDoc';
+
+// Decoding needs a browser (createImageBitmap, workers, pdf.js); here it answers as the test says.
+const decodeScan = vi.hoisted(() => vi.fn(async (..._args: unknown[]): Promise<unknown> => ({ ok: false, message: 'cannot decode in tests' })));
+vi.mock('../../src/io/decodeScan', () => ({ decodeScan }));
+const { autosaveNow, restoreAutosave } = await import('../../src/state/autosave');
+const { getScan } = await import('../../src/state/scanCache');
+const { useSessionStore } = await import('../../src/state/sessionStore');
+
+const factory = new IDBFactory();
+const scanRef = { id: 'scan-kept', name: 'sheet.tif', widthPx: 500, heightPx: 250, type: 'image/tiff', page: 1 };
+const bytes = Uint8Array.from([73, 73, 42, 0, 8, 0]);
+
+function decodedAt(widthPx: number, heightPx: number): DecodeResult {
+  const bitmap = { width: widthPx, height: heightPx, close: vi.fn() } as unknown as ImageBitmap;
+  return { ok: true, bitmap, kind: 'tiff', widthPx, heightPx, mime: 'image/tiff', page: 1, pageCount: 3 };
+}
+
+/** Keeps a project with the scan in the (fake) browser database, as the last session left it. */
+async function keep(): Promise<void> {
+  const db = await openAutosaveDb(factory);
+  const doc = { ...sampleDoc(), scan: scanRef };
+  await writeSnapshot(db, { savedAt: '2026-01-01T00:00:00.000Z', doc, dirty: true }, { id: scanRef.id, type: scanRef.type, name: scanRef.name, bytes: bytes.slice().buffer }, true);
+}
+
+async function keptScanBytes(): Promise<Uint8Array | null> {
+  const snap = await readSnapshot(await openAutosaveDb(factory));
+  return snap?.scan ? new Uint8Array(snap.scan.bytes) : null;
+}
+
+describe('restoreAutosave with a kept scan', () => {
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    useSessionStore.getState().clearMessage();
+    await keep();
+  });
+  afterEach(() => {
+    vi.unstubAllGlobals();
+    decodeScan.mockReset();
+  });
+
+  it('decodes it at the saved page and size, asking nothing', async () => {
+    decodeScan.mockResolvedValue(decodedAt(500, 250));
+    expect(await restoreAutosave()).toBe(true);
+    expect(decodeScan.mock.calls[0][2]).toEqual({ page: 1, widthPx: 500, heightPx: 250 });
+    expect(getScan(scanRef.id)?.bitmap).not.toBeNull();
+    expect(useSessionStore.getState().message).toBeNull();
+  });
+
+  it('restores the work with the scan not shown when it decodes to another size, says so, and keeps its bytes', async () => {
+    decodeScan.mockResolvedValue(decodedAt(320, 160));
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.scan).toEqual(scanRef);
+    expect(getScan(scanRef.id)?.bitmap).toBeNull();
+    const message = useSessionStore.getState().message!;
+    expect(message.kind).toBe('error');
+    expect(message.text).toContain('The scan "sheet.tif" (page 2) now opens at 320 × 160 px, but the lines were digitised on it at 500 × 250 px, so they would not line up with it.');
+    // The next write after an edit keeps the scan's bytes in the browser.
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited after the restore' }));
+    await autosaveNow();
+    expect(await keptScanBytes()).toEqual(bytes);
+  });
+
+  it('keeps the bytes of a scan that cannot be decoded at all, and says so', async () => {
+    decodeScan.mockResolvedValue({ ok: false, message: 'sheet.tif could not be decoded' });
+    expect(await restoreAutosave()).toBe(true);
+    expect(getScan(scanRef.id)?.bitmap).toBeNull();
+    expect(useSessionStore.getState().message?.text).toContain('The scan "sheet.tif" kept in this browser cannot be shown (sheet.tif could not be decoded).');
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited after the restore' }));
+    await autosaveNow();
+    expect(await keptScanBytes()).toEqual(bytes);
+  });
+});
