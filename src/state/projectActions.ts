@@ -18,11 +18,22 @@ export function fitViewToDoc(doc: ProjectDoc): void {
     fitTo({ u0: 0, v0: 0, width: doc.scan.widthPx, height: doc.scan.heightPx, margin: 24 });
     return;
   }
-  const all = doc.horizons.flatMap((h) => h.pointsPx);
-  if (all.length === 0) return;
-  const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
-  const [u0, v0] = [Math.min(...us), Math.min(...vs)];
-  fitTo({ u0, v0, width: Math.max(...us) - u0 + 1, height: Math.max(...vs) - v0 + 1, margin: 48 });
+  // The box of every vertex, in a plain loop: a spread of a long traced line's vertices into Math.min overflows the stack.
+  let [u0, v0, u1, v1] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (const h of doc.horizons) {
+    for (const [u, v] of h.pointsPx) {
+      if (u < u0) u0 = u;
+      if (u > u1) u1 = u;
+      if (v < v0) v0 = v;
+      if (v > v1) v1 = v;
+    }
+  }
+  // Nothing to frame: the view is no longer fitted to what was open before (a resize must not frame it again).
+  if (u0 > u1) {
+    useSessionStore.setState({ fitted: null });
+    return;
+  }
+  fitTo({ u0, v0, width: u1 - u0 + 1, height: v1 - v0 + 1, margin: 48 });
 }
 
 /**
@@ -132,5 +143,7 @@ export async function saveProjectFile(): Promise<void> {
 /** Opens an empty project, asking first when there are unsaved changes. */
 export function newProject(): void {
   if (!unsavedChangesMayGo('Discard the changes not saved to a file and start a new project?')) return;
-  useDocStore.getState().replace(emptyProjectDoc());
+  const doc = emptyProjectDoc();
+  useDocStore.getState().replace(doc);
+  fitViewToDoc(doc);
 }

@@ -140,3 +140,24 @@ describe('openProjectFile with a scan in the file', () => {
     expect(useSessionStore.getState().message?.text).toMatch(/cannot be shown \(report\.pdf looks like a PDF but could not be read\)\. Nothing was changed\./);
   });
 });
+
+describe('fitViewToDoc(doc) and New', () => {
+  it('frames the box of every vertex of a long traced line without a scan (300,000 vertices)', async () => {
+    // Our own check, worked by hand: u runs 10 … 300 009; v = 20 + k + (k mod 7) is lowest at k = 0 (20) and highest
+    // at k = 299 998 (20 + 299 998 + 6 = 300 024), so the box is 300 000 × 300 005 px; margin 48 (fitViewToDoc's).
+    const { fitViewToDoc } = await import('../../src/state/projectActions');
+    const doc = sampleDoc();
+    const line: [number, number][] = Array.from({ length: 300_000 }, (_, k) => [10 + k, 20 + (k % 7) + k]);
+    const one = { ...doc, scan: null, horizons: [{ ...doc.horizons[0], pointsPx: line }] };
+    fitViewToDoc(one);
+    expect(useSessionStore.getState().fitted).toEqual({ u0: 10, v0: 20, width: 300_000, height: 300_005, margin: 48 });
+  });
+
+  it('New leaves the view unfitted, so a resize does not frame the previous project again', () => {
+    vi.stubGlobal('window', { confirm: () => true });
+    useSessionStore.getState().fitTo({ u0: 0, v0: 0, width: 2400, height: 1200, margin: 24 });
+    newProject();
+    expect(useSessionStore.getState().fitted).toBeNull();
+    vi.unstubAllGlobals();
+  });
+});

@@ -51,7 +51,7 @@ export function prepareSection(section: Section, options: { referenceElevation?:
 
 /** As prepareSection, but the clipped lines live in a reused buffer: read the result before the next call, keep none of its arrays. */
 export function prepareSectionScratch(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
-  return prepare(section, options, undefined);
+  return prepare(section, options, fromPool);
 }
 
 function prepare(section: Section, options: { referenceElevation?: number }, clipAllocate: Allocate | undefined): SectionPreparation {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analysePrepared, analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
-import { prepareSection } from '../../../src/core/analysis/prepareSection';
+import { prepareSection, prepareSectionScratch } from '../../../src/core/analysis/prepareSection';
 import type { Section, XZ } from '../../../src/core/model/section';
 import { expectClose } from '../geometry/close';
 import { methodExample, pts, triangleHorizon } from './sections';
@@ -232,5 +232,21 @@ describe('analyseSection and prepareSection share a reused buffer safely', () =>
     const fresh = prepareSection(s2);
     if (!scratch.ok || !fresh.ok) throw new Error('s2 rejected');
     expect(scratch.analysis).toEqual(analysePrepared(fresh.prepared));
+  });
+});
+
+describe('prepareSectionScratch(section) and prepareSection(section)', () => {
+  it('scratch lines come from one reused buffer, kept lines from buffers of their own', () => {
+    // Our own check of where the arrays live (the scratch buffer grows to fit, then is reused).
+    const s = methodExample();
+    for (let k = 0; k < 3; k++) prepareSectionScratch(s);
+    const a = prepareSectionScratch(s);
+    const b = prepareSectionScratch(s);
+    const kept = prepareSection(s);
+    if (!a.ok || !b.ok || !kept.ok) throw new Error('methodExample rejected');
+    expect(a.prepared.horizons[0].line.xs.buffer).toBe(b.prepared.horizons[0].line.xs.buffer);
+    expect(a.prepared.horizons[0].line.xs.buffer).toBe(a.prepared.horizons[3].regional.zs.buffer);
+    expect(kept.prepared.horizons[0].line.xs.buffer).not.toBe(a.prepared.horizons[0].line.xs.buffer);
+    expect(kept.prepared.horizons[0].line.xs.buffer).not.toBe(kept.prepared.horizons[1].line.xs.buffer);
   });
 });
