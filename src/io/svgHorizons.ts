@@ -104,6 +104,12 @@ export function readSvgLines(text: string): SvgRead {
       continue;
     }
     const a = attributes(attrText);
+    if (displayNone(a)) {
+      // Not drawn, nor anything in it (SVG 1.1 §11.5, 'display': none; section number recalled from memory): a layer the author hid is not imported.
+      if (DRAWN_CONTAINERS.has(tag) && !selfClosing) stack.push({ ...parent, hidden: true });
+      else if (SHAPES.has(tag)) notDrawn += 1;
+      continue;
+    }
     const own = parseTransform(a.transform);
     const where = `<${tag}>${a.id ? ` "${a.id.slice(0, 60)}"` : ''}`;
     if (!own) pushProblem(problems, { where, message: 'has a transform that cannot be read; treated as none' }, counter);
@@ -131,10 +137,17 @@ export function readSvgLines(text: string): SvgRead {
     });
   }
   if (lines.length === 0) {
-    const why = notDrawn > 0 ? ` (${notDrawn} ${notDrawn === 1 ? 'shape is' : 'shapes are'} only definitions, in <defs> or the like, or in an empty viewport, and not drawn)` : '';
+    const why = notDrawn > 0 ? ` (${notDrawn} ${notDrawn === 1 ? 'shape is' : 'shapes are'} only definitions (in <defs> or the like), hidden, or in an empty viewport, and not drawn)` : '';
     return { ok: false, message: `The SVG file holds no drawn path, polyline or line to import${why}.`, problems };
   }
   return { ok: true, lines, problems };
+}
+
+/** True when the element's 'display' is none, as an attribute or in its style (the style wins, as CSS over a presentation attribute). */
+function displayNone(a: Record<string, string>): boolean {
+  const inStyle = /(?:^|;)\s*display\s*:\s*([^;!]+)/i.exec(a.style ?? '');
+  const value = inStyle ? inStyle[1] : a.display;
+  return value !== undefined && value.trim().toLowerCase() === 'none';
 }
 
 /** Returns the frame an <svg> element gives its content: the root keeps its user units; a nested one maps its viewport (SVG 1.1 §7.9). */

@@ -170,3 +170,29 @@ describe('readSvgLines: definitions are not drawn (SVG 1.1 §5.3 the \'defs\' el
     expect(r.problems).toEqual([{ where: '<use> "copy"', message: 'draws a copy of another element; copies are not imported' }]);
   });
 });
+
+describe('readSvgLines: hidden layers are not drawn (SVG 1.1 §11.5 the \'display\' property: "none" renders neither the element nor its children)', () => {
+  const inRoot = (inner: string) => `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 200 100">${inner}</svg>`;
+  const names = (svg: string) => {
+    const r = readSvgLines(svg);
+    if (!r.ok) throw new Error(r.message);
+    return r.lines.map((l) => l.name);
+  };
+
+  it('leaves out a group hidden by its attribute or its style, with everything in it, and a hidden single shape', () => {
+    const svg = inRoot('<g id="old" display="none"><path id="draft" d="M0 0 L9 9"/><g><line id="deep" x1="0" y1="0" x2="1" y2="1"/></g></g>'
+      + '<g style="opacity:1; display : none"><path id="styled" d="M0 0 L5 5"/></g>'
+      + '<path id="one" style="display:none" d="M0 0 L2 2"/><path id="drawn" d="M0 10 L20 10"/>');
+    expect(names(svg)).toEqual(['drawn']);
+  });
+
+  it('reads a group whose style shows it although its attribute hides it (the style property wins over the presentation attribute, SVG 1.1 §6.4, section number recalled from memory)', () => {
+    expect(names(inRoot('<g display="none" style="display:inline"><path id="shown" d="M0 0 L3 3"/></g>'))).toEqual(['shown']);
+  });
+
+  it('says so when every shape is hidden', () => {
+    const r = readSvgLines(inRoot('<g display="none"><path d="M0 0 L1 1"/></g>'));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toMatch(/no drawn path.*1 shape is only definitions \(in <defs> or the like\), hidden, or in an empty viewport/);
+  });
+});
