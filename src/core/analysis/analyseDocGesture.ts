@@ -4,7 +4,7 @@
 // reason, and the rest is analysed. While a gesture moves only regionals, the gesture's start is prepared
 // once (validated, clipped, measured, with the same horizons left out) and each step re-measures only the
 // moved regionals: the loop area changes by exactly −W0·Δr (the shoelace loop splits into the horizon part
-// and −∫ regional dx over the pins = −W0·r; docs/method.md, excess area and regional elevation), the
+// and −∫ regional dx over the pins = −W0·r; docs/method.md §Pins, regional and excess area), the
 // regional length and elevation are those of the new clipped regional, and analysePrepared gives what
 // analyseSection would. Whatever the fast step cannot vouch for — a moved regional that misses or folds
 // back over a pin (and so may cross itself), a left-out horizon's regional moved, anything but regionals
