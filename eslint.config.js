@@ -15,7 +15,7 @@ const MAY_IMPORT = {
   canvas: ['core', 'format', 'tools', 'io', 'state'],
   panels: ['core', 'format', 'tools', 'io', 'state'],
   app: ['core', 'format', 'tools', 'io', 'state', 'canvas', 'panels'],
-  cli: ['core'],
+  cli: ['core', 'format'],
 };
 // Below the stores and the views: plain code with no React, Konva or store.
 const NO_UI_PACKAGES = ['core', 'format', 'tools', 'io', 'cli'];

@@ -9,7 +9,8 @@ import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { imageToSection } from '../core/calibration/mapPoints';
 import { DragReadout } from './DragReadout';
-import { fixedLabel, stepDecimals } from './gridTicks';
+import { formatFixed } from '../format/formatQuantity';
+import { stepDecimals } from '../format/niceTicks';
 import './cursorReadout.css';
 
 export function CursorReadout() {
@@ -31,14 +32,14 @@ export function CursorReadout() {
       const { camera } = useSessionStore.getState();
       const p = screenToImage(camera, last.x, last.y);
       if (!fit) {
-        el.textContent = `u ${fixedLabel(p[0], camera.scale > 2 ? 1 : 0)}  v ${fixedLabel(p[1], camera.scale > 2 ? 1 : 0)} px`;
+        el.textContent = `u ${formatFixed(p[0], camera.scale > 2 ? 1 : 0)}  v ${formatFixed(p[1], camera.scale > 2 ? 1 : 0)} px`;
         return;
       }
       const [x, z] = imageToSection(fit, p);
       // As many decimals as one screen pixel resolves.
       const dx = stepDecimals(fit.unitsPerPxX / camera.scale);
       const dz = stepDecimals(fit.unitsPerPxZ / camera.scale);
-      el.textContent = `x ${fixedLabel(x, dx)}  z ${fixedLabel(z, dz)} ${unit}`;
+      el.textContent = `x ${formatFixed(x, dx)}  z ${formatFixed(z, dz)} ${unit}`;
     };
     const onMove = (e: PointerEvent) => {
       const r = box.getBoundingClientRect();

@@ -6,7 +6,7 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { selectLiveAnalysis } from '../state/selectors';
 import { sectionToImage } from '../core/calibration/mapPoints';
-import { formatLength } from '../format/formatQuantity';
+import { EXACT_FIT_TEXT, formatInterval, formatLength } from '../format/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
 
 const COLOUR = '#b3261e';
@@ -28,11 +28,11 @@ export function DetachmentLayer() {
     if (!trace) return null;
     const px = (pts: [number, number][]) => pts.flatMap((q) => sectionToImage(docSection.fit, q));
     const u = outcome.analysis.units;
-    // The strip's rounding (formatQuantity), so the section, the strip and the pane show one number.
+    // The one formatting rule (src/format), so the section, the strip and the pane show one number.
     const len = (v: number) => formatLength(v, u);
     const e = trace.elevationInterval;
-    const interval = e === 'unbounded' ? '95% interval unbounded' : e === 'none' ? 'no interval (two horizons)' : e === 'exact' ? 'exact fit (no scatter), no interval'
-      : `95%: ${len(e[0])} to ${len(e[1])}`;
+    const interval = e === 'unbounded' ? '95% interval unbounded' : e === 'none' ? 'no interval (two horizons)' : e === 'exact' ? EXACT_FIT_TEXT
+      : `95%: ${formatInterval(e, u)}`;
     return {
       line: px(trace.line),
       band: trace.band ? px([trace.band.upper[0], trace.band.upper[1], trace.band.lower[1], trace.band.lower[0]]) : null,

@@ -8,7 +8,8 @@ import { useDocStore } from '../state/docStore';
 import { useFittedCalibration } from '../state/useFittedCalibration';
 import { useSessionStore } from '../state/sessionStore';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
-import { fixedLabel, gridLines, type GridLine } from './gridTicks';
+import { formatFixed } from '../format/formatQuantity';
+import { gridLines, type GridLine } from './gridTicks';
 
 const LINE = 'rgba(31, 111, 139, 0.45)';
 const LABEL = '#17404f';
@@ -48,11 +49,11 @@ function drawGrid(ctx: Konva.Context, shape: Konva.Shape, fit: FittedCalibration
   const suffix = fit ? ` ${unit}` : ' px';
   for (const l of grid.x) {
     const sx = crossing(l, 'y', 10);
-    if (sx !== null && sx > 40 && sx < viewport.width - 220) label(`${fit ? 'x' : 'u'} ${fixedLabel(l.value, grid.decimalsX)}${suffix}`, sx + 3, 10);
+    if (sx !== null && sx > 40 && sx < viewport.width - 220) label(`${fit ? 'x' : 'u'} ${formatFixed(l.value, grid.decimalsX)}${suffix}`, sx + 3, 10);
   }
   for (const l of grid.z) {
     const sy = crossing(l, 'x', 4);
-    if (sy !== null && sy > 24 && sy < viewport.height - 12) label(`${fit ? 'z' : 'v'} ${fixedLabel(l.value, grid.decimalsZ)}${suffix}`, 4, sy - 8);
+    if (sy !== null && sy > 24 && sy < viewport.height - 12) label(`${fit ? 'z' : 'v'} ${formatFixed(l.value, grid.decimalsZ)}${suffix}`, 4, sy - 8);
   }
 }
 

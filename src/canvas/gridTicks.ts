@@ -4,6 +4,7 @@ import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
 import type { ImagePx } from '../core/model/projectDoc';
 import type { CameraLike } from '../state/scanTiles';
+import { niceStep, stepDecimals } from '../format/niceTicks';
 
 export interface GridLine {
   value: number;
@@ -17,25 +18,6 @@ export interface GridLines { x: GridLine[]; z: GridLine[]; stepX: number; stepZ:
 /** Most lines drawn per axis (a guard against a degenerate calibration, not a display choice). */
 const MAX_LINES = 400;
 
-/** Returns the smallest 1, 2 or 5 × 10^k that is at least `raw` (raw > 0), or NaN for a non-positive or non-finite raw. */
-export function niceStep(raw: number): number {
-  if (!(raw > 0) || !Number.isFinite(raw)) return NaN;
-  const p = 10 ** Math.floor(Math.log10(raw));
-  for (const m of [1, 2, 5, 10]) if (m * p >= raw * (1 - 1e-12)) return m * p;
-  return 10 * p;
-}
-
-/** Returns v to `decimals` places for a label on the view, with the minus sign U+2212 and never "−0" ("−1250.5", "0.0"). */
-export function fixedLabel(v: number, decimals: number): string {
-  const text = v.toFixed(decimals);
-  if (/^-0(\.0*)?$/.test(text)) return text.slice(1);
-  return text.replace('-', '\u2212');
-}
-
-/** Returns the decimals needed to tell ticks `step` apart (0 for steps of 1 or more). */
-export function stepDecimals(step: number): number {
-  return Math.max(0, -Math.floor(Math.log10(step) + 1e-9));
-}
 
 function linesFor(values: [number, number], step: number, fixed: 'x' | 'z', other: [number, number], toScreen: (x: number, z: number) => [number, number]): GridLine[] {
   const out: GridLine[] = [];
@@ -66,8 +48,8 @@ export function gridLines(fit: FittedCalibration | null, camera: CameraLike, vie
   const corners = [toSection(toImage(0, 0)), toSection(toImage(viewW, 0)), toSection(toImage(0, viewH)), toSection(toImage(viewW, viewH))];
   const xr: [number, number] = [Math.min(...corners.map((c) => c[0])), Math.max(...corners.map((c) => c[0]))];
   const zr: [number, number] = [Math.min(...corners.map((c) => c[1])), Math.max(...corners.map((c) => c[1]))];
-  const stepX = niceStep((targetPx * (fit ? fit.unitsPerPxX : 1)) / camera.scale);
-  const stepZ = niceStep((targetPx * (fit ? fit.unitsPerPxZ : 1)) / camera.scale);
+  const stepX = niceStep((targetPx * (fit ? fit.unitsPerPxX : 1)) / camera.scale, 1, 'up');
+  const stepZ = niceStep((targetPx * (fit ? fit.unitsPerPxZ : 1)) / camera.scale, 1, 'up');
   return {
     x: linesFor(xr, stepX, 'x', zr, toScreen),
     z: linesFor(zr, stepZ, 'z', xr, toScreen),

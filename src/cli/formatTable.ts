@@ -1,27 +1,26 @@
 import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../core/analysis/caution';
+import { isExactFit } from '../core/analysis/isExactFit';
+import { EXACT_FIT_TEXT, formatChamberlin, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
 
-function num(v: number | null, digits = 4): string {
-  if (v === null || !Number.isFinite(v)) return '—';
-  return Math.abs(v) >= 1e7 || (Math.abs(v) < 1e-3 && v !== 0) ? v.toExponential(digits - 1) : Number(v.toPrecision(Math.max(digits, 6))).toString();
-}
+// The terminal writes numbers by the one rule of src/format (as the screen, the figure and the report do).
 
-function range(r: [number, number] | null, n: number): string {
-  return r ? `${num(r[0])} to ${num(r[1])}` : n === 2 ? 'none (n = 2)' : 'none';
+function range(r: [number, number] | null, d: AreaDepthResult, u: string): string {
+  return r ? formatInterval(r, u) : d.n === 2 ? 'none (n = 2)' : 'none';
 }
 
 /** docs/method.md §Fieller interval: an unbounded Fieller interval is reported as "unbounded", never as a number. */
-function fiellerRange(d: AreaDepthResult): string {
-  return d.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded' : range(d.detachmentDepthCI95, d.n);
+function fiellerRange(d: AreaDepthResult, u: string): string {
+  return d.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded' : range(d.detachmentDepthCI95, d, u);
 }
 
 /** The analysis as a plain-text table for a terminal (section units, areas in units²); `source`, when given, is its first line (project and scenario). */
 export function formatTable(a: SectionAnalysis, source: string | null = null): string {
   const u = a.units;
-  const head = ['Horizon', 'Fit', `Excess area (${u}²)`, `Bed length (${u})`, `Regional length (${u})`, `Regional elev. (${u})`, `Depth (${u})`, `Chamberlin (${u})`, 'LPS strain'];
+  const head = ['Horizon', 'Fit', `Excess area (${u}²)`, `Bed length (${u})`, `Regional length (${u})`, `Regional elev. (${u})`, `Depth (${u})`, `Chamberlin (${u})`, 'LPS strain (%)'];
   const rows = a.horizons.map((h) => [
     h.name, h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
-    num(h.regionalElevation), num(h.depth), num(h.chamberlinDepth), h.lpsStrain === null ? '—' : h.lpsStrain.toFixed(4),
+    num(h.regionalElevation), num(h.depth), formatChamberlin(h), h.lpsStrain === null ? '—' : num(100 * h.lpsStrain),
   ]);
   const widths = head.map((t, c) => Math.max(t.length, ...rows.map((r) => r[c].length)));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
@@ -36,14 +35,14 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   ];
   const d = a.areaDepth;
   if (d) {
-    out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${d.r2.toFixed(4)}`);
+    out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${formatR2(d.r2, isExactFit(d))}`);
     // D = −slope is only a displacement when the slope is negative (docs/method.md §Area-depth line); the JSON keeps the number.
     out.push(d.noDetachment
       ? '  slope ≥ 0: no displacement estimate'
-      : `  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95, d.n)})`);
+      : `  Displacement D = ${num(d.displacement)} ${u} (${isExactFit(d) ? EXACT_FIT_TEXT : `95%: ${range(d.displacementCI95, d, u)}`})`);
     out.push(d.detachmentDepth === null
       ? '  Detachment: none below these horizons'
-      : `  Detachment depth ${num(d.detachmentDepth)} ${u} below the reference, elevation ${num(d.detachmentElevation)} ${u} (95% Fieller: ${fiellerRange(d)})`);
+      : `  Detachment depth ${num(d.detachmentDepth)} ${u} below the reference, elevation ${num(d.detachmentElevation)} ${u} (${isExactFit(d) ? EXACT_FIT_TEXT : `95% Fieller: ${fiellerRange(d, u)}`})`);
   } else {
     out.push('Area–depth line: none (see notes).');
   }

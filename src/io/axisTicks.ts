@@ -1,5 +1,5 @@
 // Axis ticks for exported figures: 1-2-5 steps, widened until the labels fit side by side.
-import { niceStep } from './formatNumber';
+import { niceStep, stepMultiples } from '../format/niceTicks';
 
 const nextStep = (s: number): number => {
   const p = 10 ** Math.floor(Math.log10(s) + 1e-9);
@@ -13,12 +13,12 @@ const nextStep = (s: number): number => {
  */
 export function axisTicks(lo: number, hi: number, lengthPx: number, label: (v: number) => string, charPx: number, target = 5): number[] {
   if (!(hi > lo) || !Number.isFinite(lo) || !Number.isFinite(hi)) return [];
-  let step = niceStep((hi - lo) / Math.max(1, target - 1));
+  let step = niceStep((hi - lo) / Math.max(1, target - 1), 1, 'down');
   for (let guard = 0; guard < 40; guard++) {
-    const out: number[] = [];
-    // Multiples of the step (not running sums), trimmed to 12 digits: 3 × 0.1 is 0.3, not 0.30000000000000004.
-    for (let k = Math.ceil(lo / step - 1e-9); k * step <= hi + step * 1e-9; k++) out.push(Number((k * step).toPrecision(12)) || 0);
-    const widest = Math.max(0, ...out.map((v) => label(v).length)) * charPx + 2 * charPx;
+    const out = stepMultiples(lo, hi, step);
+    let longest = 0;
+    for (const v of out) longest = Math.max(longest, label(v).length);
+    const widest = longest * charPx + 2 * charPx;
     if (out.length <= target && out.length * widest <= lengthPx) return out;
     step = nextStep(step);
   }

@@ -26,6 +26,7 @@ export function cleanSection(section: Section): Section {
     ...section,
     pins: [cleanCoordinate(section.pins[0]), cleanCoordinate(section.pins[1])],
     ...(section.referenceElevation !== undefined ? { referenceElevation: cleanCoordinate(section.referenceElevation) } : {}),
+    ...(section.resolution !== undefined ? { resolution: Number(section.resolution.toPrecision(6)) } : {}),
     horizons: section.horizons.map((h) => ({ ...h, line: h.line.map(cleanPoint), regional: h.regional.map(cleanPoint) })),
   };
 }

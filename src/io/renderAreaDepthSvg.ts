@@ -5,8 +5,7 @@ import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { isExactFit } from '../core/analysis/isExactFit';
 import { axisTicks } from './axisTicks';
 import { escapeXml } from './escapeXml';
-import { figureAreaUnit } from './figureAreaUnit';
-import { formatNumber } from './formatNumber';
+import { areaUnit, EXACT_FIT_TEXT, formatInterval, formatNumber, largestMagnitude } from '../format/formatQuantity';
 
 const RED = '#b3261e';
 const BLUE = '#1f6f8b';
@@ -20,7 +19,7 @@ export function shortName(name: string, max = 12): string {
 /** The detachment's interval as the graph writes it: bounded [lo, hi], or a word. */
 function intervalOf(analysis: SectionAnalysis): { lo: number; hi: number } | string {
   const ad = analysis.areaDepth!;
-  if (isExactFit(ad)) return 'exact fit (no scatter)';
+  if (isExactFit(ad)) return EXACT_FIT_TEXT;
   if (ad.detachmentDepthCI95) return { lo: ad.detachmentDepthCI95[0], hi: ad.detachmentDepthCI95[1] };
   const k = ad.detachmentDepthInterval.kind;
   return k === 'unbounded' ? '95% interval unbounded' : `no 95% interval (n = ${ad.n})`;
@@ -39,7 +38,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   const ad = analysis.areaDepth;
   const zd = ad && !ad.noDetachment && ad.detachmentDepth !== null && Number.isFinite(ad.detachmentDepth) ? ad.detachmentDepth : null;
   const interval = ad && zd !== null ? intervalOf(analysis) : null;
-  const unit = figureAreaUnit(analysis.units, Math.max(0, ...analysis.horizons.map((r) => Math.abs(r.excessArea))));
+  const unit = areaUnit(analysis.units, largestMagnitude(analysis.horizons.map((r) => r.excessArea)));
   const areas = analysis.horizons.map((r) => r.excessArea * unit.factor);
   const depths = analysis.horizons.map((r) => r.depth);
   const aLo = Math.min(0, ...areas);
@@ -56,11 +55,11 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   const py = (d: number) => T + ((d - dLo) / (dHi - dLo)) * (B - T);
   parts.unshift(`<defs><clipPath id="ad-clip"><rect x="${L}" y="${T}" width="${R - L}" height="${B - T}"/></clipPath></defs>`);
   parts.push(`<rect x="${L}" y="${T}" width="${R - L}" height="${B - T}" fill="#fbfbfa" stroke="#c4cbd1"/>`);
-  const aLabel = (a: number) => formatNumber(a, 3);
+  const aLabel = (a: number) => formatNumber(a);
   for (const a of axisTicks(aLo, aHi, R - L, aLabel, 6)) {
     parts.push(`<line x1="${px(a)}" y1="${B}" x2="${px(a)}" y2="${B + 4}" stroke="#5b6975"/><text x="${px(a)}" y="${B + 15}" font-size="9.5" text-anchor="middle" fill="#1d2731">${aLabel(a)}</text>`);
   }
-  const dLabel = (d: number) => formatNumber(d, 4);
+  const dLabel = (d: number) => formatNumber(d);
   for (const d of axisTicks(dLo, dHi, B - T, () => 'xx', 6, 6)) {
     parts.push(`<line x1="${L - 4}" y1="${py(d)}" x2="${L}" y2="${py(d)}" stroke="#5b6975"/><text x="${L - 6}" y="${py(d) + 3}" font-size="9.5" text-anchor="end" fill="#1d2731">${dLabel(d)}</text>`);
   }
@@ -96,7 +95,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
       if (cut) parts.push(`<path d="M ${cx - 4} ${yb - 6} L ${cx} ${yb} L ${cx + 4} ${yb - 6}" stroke="${RED}" stroke-width="1.6" fill="none"/>`);
     }
     parts.push(`<circle cx="${cx}" cy="${py(zd)}" r="4.5" fill="${RED}"/>`);
-    const words = typeof interval === 'string' ? interval : `95%: ${formatNumber(interval.lo)}–${formatNumber(interval.hi)} ${u}`;
+    const words = typeof interval === 'string' ? interval : `95%: ${formatInterval([interval.lo, interval.hi], u)}`;
     parts.push(`<text x="${cx + 9}" y="${py(zd) - 4}" font-size="10" font-weight="bold" fill="${RED}">detachment ${formatNumber(zd)} ${u}</text>`);
     parts.push(`<text x="${cx + 9}" y="${py(zd) + 9}" font-size="9.5" fill="${RED}">${escapeXml(words)}</text>`);
   } else if (ad && ad.noDetachment) {

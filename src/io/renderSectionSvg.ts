@@ -15,7 +15,8 @@ import { isExactFit } from '../core/analysis/isExactFit';
 import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { areaDepthGroup } from './renderAreaDepthSvg';
 import { escapeXml } from './escapeXml';
-import { formatNumber, niceStep } from './formatNumber';
+import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../format/formatQuantity';
+import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
 
@@ -168,11 +169,11 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   out.push(`<text x="42" y="40" font-size="22" font-weight="bold">${escapeXml(doc.title.slice(0, 100))}</text>`);
   out.push(`<text x="${FIGURE_WIDTH - 42}" y="40" font-size="12" text-anchor="end">Author: ${escapeXml(doc.author.slice(0, 60) || '—')}   ·   Date: ${escapeXml(date)}   ·   Scenario: ${escapeXml(scenario.name.slice(0, 60))}</text>`);
   const ref = result ? `the reference at elevation ${formatNumber(result.referenceElevation)} ${u}` : 'the reference';
-  const ciText = ad && isExactFit(ad) ? ' (exact fit, no scatter: no interval)'
-    : ad?.detachmentDepthCI95 ? ` (95%: ${formatNumber(ad.detachmentDepthCI95[0])}–${formatNumber(ad.detachmentDepthCI95[1])} ${u})`
+  const ciText = ad && isExactFit(ad) ? ` (${EXACT_FIT_TEXT})`
+    : ad?.detachmentDepthCI95 ? ` (95%: ${formatInterval(ad.detachmentDepthCI95, u)})`
     : ad && ad.detachmentDepthInterval.kind === 'unbounded' ? ' (95% interval unbounded)' : '';
   const headline = ad && !ad.noDetachment && ad.detachmentDepth !== null
-    ? `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}: ${formatNumber(ad.detachmentDepth)} ${u} below ${ref}${ciText}; displacement ${formatNumber(ad.displacement)} ${u}; r² = ${ad.r2.toFixed(4)} over ${ad.n} horizons`
+    ? `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}: ${formatNumber(ad.detachmentDepth)} ${u} below ${ref}${ciText}; displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatR2(ad.r2, isExactFit(ad))} over ${ad.n} horizons`
     : ad && ad.noDetachment ? 'No detachment below these horizons (area does not decrease with depth).'
     : `No area–depth result: ${ds.ok ? (analysis.outcome && !analysis.outcome.ok ? analysis.outcome.problems[0]?.message ?? 'input problems' : 'fewer than two horizons with regionals') : ds.message}`;
   out.push(`<text x="42" y="70" font-size="13.5">${escapeXml(headline.slice(0, 200))}</text></g>`);
@@ -272,7 +273,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   const by = PANEL.y + PANEL.h + 30;
   if (fit) {
     const unitsPerFig = 1 / frame.s;
-    const len = niceStep(PANEL.w * 0.25 * unitsPerFig);
+    const len = niceStep(PANEL.w * 0.25 * unitsPerFig, 1, 'down');
     const w = len / unitsPerFig;
     out.push(`<g class="scale-bar"><rect x="${PANEL.x}" y="${by}" width="${w / 2}" height="6" fill="#1d2731"/><rect x="${PANEL.x + w / 2}" y="${by}" width="${w / 2}" height="6" fill="#ffffff" stroke="#1d2731"/>`);
     out.push(`<text x="${PANEL.x}" y="${by + 20}" font-size="11">0</text><text x="${PANEL.x + w}" y="${by + 20}" font-size="11" text-anchor="middle">${formatNumber(len)} ${u}</text></g>`);

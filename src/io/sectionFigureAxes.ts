@@ -5,7 +5,7 @@
 // elevation lines horizontal and distance lines vertical, whatever the scan's rotation.
 import { axisTicks } from './axisTicks';
 import { escapeXml } from './escapeXml';
-import { formatNumber } from './formatNumber';
+import { formatNumber } from '../format/formatQuantity';
 import { sectionToFigure, type Box, type SectionFrame } from './sectionFigureFrame';
 
 export type { Box } from './sectionFigureFrame';

@@ -5,7 +5,7 @@ import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import type { Section } from '../core/model/section';
 import { isStale } from '../core/model/sectionKey';
 import type { MonteCarloRecord, Percentiles } from '../core/analysis/monteCarloRecord';
-import { formatNumber } from './formatNumber';
+import { formatNumber } from '../format/formatQuantity';
 
 /** The report's sentence when the scenario has no Monte Carlo run in this session. */
 export const NO_MONTE_CARLO_TEXT = 'No Monte Carlo run yet — run one in the Uncertainty panel.';

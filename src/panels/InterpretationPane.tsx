@@ -17,8 +17,7 @@ import { MonteCarloPanel } from './interpretation/MonteCarloPanel';
 import { ScenarioPanel } from './interpretation/ScenarioPanel';
 import { SensitivityPanel } from './interpretation/SensitivityPanel';
 import { diagnostics } from './interpretation/diagnostics';
-import { areaUnit } from './interpretation/formatValue';
-import { screenLength } from './interpretation/screenQuantity';
+import { areaUnit, formatLength, largestMagnitude } from '../format/formatQuantity';
 import { outlierFlags } from './interpretation/outlierFlags';
 import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
 import { scenarioColour } from './interpretation/scenarioColour';
@@ -78,7 +77,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
   const { analysis, series, docSection, outcome } = sa;
   const diag = useMemo(() => diagnostics(docSection, outcome, sa.leftOut), [docSection, outcome, sa.leftOut]);
   const flags = useMemo(() => (series ? outlierFlags(series.points, series.fit.fit) : []), [series]);
-  const unit = analysis ? areaUnit(analysis.units, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea)))) : null;
+  const unit = analysis ? areaUnit(analysis.units, largestMagnitude(analysis.horizons.map((h) => h.excessArea))) : null;
   const toggle = useCallback((id: string, included: boolean) => apply((d) => scenarioSetIncluded(d, id, included)), [apply]);
 
   // Split choices for the second segment: between consecutive included depths.
@@ -141,10 +140,10 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
                 )}
                 {two && (
                   <ul>
-                    <li>Above the split: {two.upper.result ? `D = ${screenLength(two.upper.result.displacement, u)}, n = ${two.upper.result.n}` : 'no line (fewer than two horizons)'}</li>
-                    <li>Below the split: {two.lower.result ? `D = ${screenLength(two.lower.result.displacement, u)}, detachment ${screenLength(two.lower.result.detachmentDepth, u)} deep, n = ${two.lower.result.n}` : 'no line (fewer than two horizons)'}</li>
-                    <li>Upper detachment: {two.upperDisplacement !== null ? `displacement ${screenLength(two.upperDisplacement, u)}` : '—'}
-                      {two.upperDetachmentDepth !== null ? `, depth ${screenLength(two.upperDetachmentDepth, u)} (elevation ${screenLength(two.upperDetachmentElevation, u)})` : ''}</li>
+                    <li>Above the split: {two.upper.result ? `D = ${formatLength(two.upper.result.displacement, u)}, n = ${two.upper.result.n}` : 'no line (fewer than two horizons)'}</li>
+                    <li>Below the split: {two.lower.result ? `D = ${formatLength(two.lower.result.displacement, u)}, detachment ${formatLength(two.lower.result.detachmentDepth, u)} deep, n = ${two.lower.result.n}` : 'no line (fewer than two horizons)'}</li>
+                    <li>Upper detachment: {two.upperDisplacement !== null ? `displacement ${formatLength(two.upperDisplacement, u)}` : '—'}
+                      {two.upperDetachmentDepth !== null ? `, depth ${formatLength(two.upperDetachmentDepth, u)} (elevation ${formatLength(two.upperDetachmentElevation, u)})` : ''}</li>
                     {two.notes.map((n) => <li key={n} className="hint">{n}</li>)}
                   </ul>
                 )}
@@ -174,7 +173,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
             <MonteCarloPanel scenarioId={scenario.id} section={docSection.section} referenceElevation={analysis.referenceElevation} />
           </details>
         )}
-        {analysis && <p className="hint">Reference elevation for depths: {screenLength(analysis.referenceElevation, u)} ({scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).</p>}
+        {analysis && <p className="hint">Reference elevation for depths: {formatLength(analysis.referenceElevation, u)} ({scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).</p>}
         <Cautions />
       </div>
     </>

@@ -4,15 +4,14 @@ import { imageToSection } from '../core/calibration/mapPoints';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
 import { activeScenario } from '../core/model/docToSection';
 import type { ImagePx, ProjectDoc } from '../core/model/projectDoc';
+import { formatFixed, MINUS } from '../format/formatQuantity';
+import { stepDecimals } from '../format/niceTicks';
 
-/** Decimals that resolve `step` (as the cursor readout and grid do). */
-const stepDecimals = (step: number) => Math.max(0, -Math.floor(Math.log10(step) + 1e-9));
 
-/** Returns v to `decimals` places with the minus sign U+2212 (and "+" when `signed`), never "−0". */
+/** Returns v as formatFixed writes it, with "+" before a positive value when `signed`. */
 function fixed(v: number, decimals: number, signed = false): string {
-  const text = v.toFixed(decimals);
-  if (/^-?0(\.0*)?$/.test(text)) return text.replace('-', '');
-  return text.startsWith('-') ? `\u2212${text.slice(1)}` : signed ? `+${text}` : text;
+  const text = formatFixed(v, decimals);
+  return signed && !text.startsWith(MINUS) && Number(v.toFixed(decimals)) !== 0 ? `+${text}` : text;
 }
 
 const moved = (a: ImagePx, b: ImagePx) => a[0] !== b[0] || a[1] !== b[1];

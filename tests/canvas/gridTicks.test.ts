@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { fixedLabel, gridLines, niceStep, stepDecimals } from '../../src/canvas/gridTicks';
+import { gridLines } from '../../src/canvas/gridTicks';
+import { formatFixed } from '../../src/format/formatQuantity';
+import { niceStep as ladder, stepDecimals } from '../../src/format/niceTicks';
+
+const niceStep = (raw: number) => ladder(raw, 1, 'up');
 import { fitCalibration } from '../../src/core/calibration/fitCalibration';
 
 describe('niceStep', () => {
@@ -57,12 +61,12 @@ describe('gridLines', () => {
   });
 });
 
-describe('fixedLabel', () => {
-  it('fixedLabel writes negative values with the minus sign U+2212 (Unicode MINUS SIGN) and never "−0"', () => {
-    expect(fixedLabel(-2800, 0)).toBe('\u22122800');
-    expect(fixedLabel(-1250.46, 1)).toBe('\u22121250.5');
-    expect(fixedLabel(-0.04, 1)).toBe('0.0');
-    expect(fixedLabel(-0, 0)).toBe('0');
-    expect(fixedLabel(37.5, 1)).toBe('37.5');
+describe('formatFixed', () => {
+  it('formatFixed writes negative values with the minus sign U+2212 (Unicode MINUS SIGN) and never "−0"', () => {
+    expect(formatFixed(-2800, 0)).toBe('\u22122800');
+    expect(formatFixed(-1250.46, 1)).toBe('\u22121250.5');
+    expect(formatFixed(-0.04, 1)).toBe('0.0');
+    expect(formatFixed(-0, 0)).toBe('0');
+    expect(formatFixed(37.5, 1)).toBe('37.5');
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import { formatTable } from '../../src/cli/formatTable';
 import { toJsonReport } from '../../src/cli/toJsonReport';
+import { formatNumber as num } from '../../src/format/formatQuantity';
 import type { Section } from '../../src/core/model/section';
 import { methodExample, triangleHorizon } from '../core/analysis/sections';
 
@@ -17,18 +18,31 @@ function folds(areas: number[]): Section {
 }
 
 describe('formatTable(analysis)', () => {
-  it('prints the bounded intervals as numbers for the synthetic example of docs/method.md §Check values', () => {
-    // Source: the synthetic example of docs/method.md §Check values: an exact line, so both intervals close onto D = 1000 m and zd = 3000 m.
+  it('says "exact fit: no interval" for the exact line of docs/method.md §Check values, never a zero-width interval', () => {
+    // Source: the synthetic example of docs/method.md §Check values: an exact line, so both intervals would close onto D = 1000 m and zd = 3000 m.
     const t = formatTable(analysed(methodExample()));
-    expect(t).toContain('Displacement D = 1000 m (95%: 1000 to 1000)');
-    expect(t).toContain('Detachment depth 3000 m below the reference, elevation -3000 m (95% Fieller: 3000 to 3000)');
+    expect(t).toContain('Displacement D = 1000 m (exact fit: no interval)');
+    expect(t).toContain('Detachment depth 3000 m below the reference, elevation \u22123000 m (exact fit: no interval)');
+    expect(t).not.toMatch(/1000 to 1000|3000 to 3000/);
+    expect(t).toMatch(/r² = 1$/m);
+  });
+
+  it('prints a bounded interval as numbers for a line with scatter, and r² that does not read 1', () => {
+    // The example of docs/method.md §Check values with one area 0.1 km² too large: the points scatter about the line.
+    const s = methodExample();
+    s.horizons[1] = triangleHorizon('H2', 2.1e6, -1000, 10_000);
+    const a = analysed(s);
+    const t = formatTable(a);
+    const d = a.areaDepth!;
+    expect(t).toContain(`(95%: ${num(d.displacementCI95![0])} to ${num(d.displacementCI95![1])} m)`);
+    expect(t).not.toMatch(/r² = 1$/m);
   });
 
   it('prints "unbounded" when g ≥ 1, never a number (docs/method.md §Fieller interval)', () => {
     // Areas scattered about a weak slope: g = 37.4 (worked by hand in analyseSection.test.ts).
     const a = analysed(folds([2.0e6, 1.0e6, 2.1e6, 0.9e6]));
     expect(a.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');
-    expect(formatTable(a)).toMatch(/Detachment depth [-\d.]+ m below the reference, elevation [-\d.]+ m \(95% Fieller: unbounded\)/);
+    expect(formatTable(a)).toMatch(/Detachment depth [\u2212\d.]+ m below the reference, elevation [\u2212\d.]+ m \(95% Fieller: unbounded\)/);
   });
 
   it('prints "none (n = 2)" for both intervals with two horizons', () => {

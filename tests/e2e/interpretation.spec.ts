@@ -64,7 +64,7 @@ test('the pane shows the engine’s detachment for the demo, which matches the t
   await expect(page.getByTestId('result-displacement')).toHaveText(/^\d+ m$/);
   await expect(page.getByTestId('result-detachment-depth')).toHaveText((await page.getByTestId('strip-detachment-depth').textContent()) ?? '');
   // The demo is a forward model with no scatter: the pane says so rather than showing a zero-width interval.
-  await expect(page.getByTestId('interval-r2')).toHaveText('exact fit (no scatter): no interval');
+  await expect(page.getByTestId('interval-r2')).toHaveText('exact fit: no interval');
   await expect(page.getByTestId('interval-detachment-depth')).toHaveCount(0);
   await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');
   // The demo is a forward model (docs/method.md §Forward models): the analysis returns its D and detachment to rounding.

@@ -4,7 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import type { Section } from '../../src/core/model/section';
-import { screenLength, SCREEN_FORMAT } from '../../src/panels/interpretation/screenQuantity';
+import { formatLength, formatNumber } from '../../src/format/formatQuantity';
 import { summaryRows } from '../../src/panels/interpretation/summaryRows';
 import { EXACT_FIT_TEXT, isExactFit } from '../../src/core/analysis/isExactFit';
 import { methodExample, triangleHorizon } from '../core/analysis/sections';
@@ -15,7 +15,7 @@ function analyse(s: Section): SectionAnalysis {
   return out.analysis;
 }
 
-const row = (a: SectionAnalysis, key: string, fmt = SCREEN_FORMAT) => summaryRows(a, fmt).find((r) => r.key === key)!;
+const row = (a: SectionAnalysis, key: string) => summaryRows(a).find((r) => r.key === key)!;
 
 /** the synthetic example of docs/method.md §Check values (our own) with the second horizon's area 0.1 km² too large: the points scatter. */
 function scattered(): Section {
@@ -24,7 +24,7 @@ function scattered(): Section {
   return s;
 }
 
-describe('summaryRows(analysis, format)', () => {
+describe('summaryRows(analysis)', () => {
   it('an exact line (the synthetic example of docs/method.md §Check values: s = 0, r² = 1) says "exact fit" once, beside r², and no zero-width interval', () => {
     const a = analyse(methodExample());
     expect(isExactFit(a.areaDepth)).toBe(true);
@@ -38,9 +38,9 @@ describe('summaryRows(analysis, format)', () => {
     expect(isExactFit(ad)).toBe(false);
     const f = ad.detachmentDepthInterval;
     if (f.kind !== 'bounded') throw new Error(`expected a bounded interval, got ${f.kind}`);
-    expect(row(a, 'detachment-depth').interval).toBe(`${SCREEN_FORMAT.num(f.lo)} to ${SCREEN_FORMAT.num(f.hi)} m`);
-    expect(row(a, 'detachment-elevation').interval).toBe(`${SCREEN_FORMAT.num(a.referenceElevation - f.hi)} to ${SCREEN_FORMAT.num(a.referenceElevation - f.lo)} m`);
-    expect(row(a, 'displacement').interval).toBe(`${SCREEN_FORMAT.num(ad.displacementCI95![0])} to ${SCREEN_FORMAT.num(ad.displacementCI95![1])} m`);
+    expect(row(a, 'detachment-depth').interval).toBe(`${formatNumber(f.lo)} to ${formatNumber(f.hi)} m`);
+    expect(row(a, 'detachment-elevation').interval).toBe(`${formatNumber(a.referenceElevation - f.hi)} to ${formatNumber(a.referenceElevation - f.lo)} m`);
+    expect(row(a, 'displacement').interval).toBe(`${formatNumber(ad.displacementCI95![0])} to ${formatNumber(ad.displacementCI95![1])} m`);
     // The interval brackets the estimate (Fieller's interval contains x̂0 when bounded).
     expect(f.lo).toBeLessThan(ad.detachmentDepth!);
     expect(f.hi).toBeGreaterThan(ad.detachmentDepth!);
@@ -57,9 +57,9 @@ describe('summaryRows(analysis, format)', () => {
   it('the pane’s lengths are the strip’s: typographic minus, about four significant figures', () => {
     const a = analyse(methodExample());
     expect(row(a, 'detachment-elevation').text).toBe('−3000 m');
-    expect(row(a, 'detachment-elevation').text).toBe(screenLength(-3000, 'm'));
+    expect(row(a, 'detachment-elevation').text).toBe(formatLength(-3000, 'm'));
     expect(row(a, 'displacement').text).toBe('1000 m');
-    expect(screenLength(711.83, 'm')).toBe('711.8 m');
-    expect(screenLength(null, 'm')).toBe('—');
+    expect(formatLength(711.83, 'm')).toBe('711.8 m');
+    expect(formatLength(null, 'm')).toBe('—');
   });
 });

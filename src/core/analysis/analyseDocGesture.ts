@@ -12,6 +12,7 @@
 import { imageToSection } from '../calibration/mapPoints';
 import { clipPolylineToPins } from '../geometry/clipPolylineToPins';
 import { meanElevation } from '../geometry/meanElevation';
+import { lengthBeyondSpan } from '../geometry/lengthBeyondSpan';
 import { polylineLength } from '../geometry/polylineLength';
 import { activeScenario, docToSection, type DocSection } from '../model/docToSection';
 import type { ProjectDoc, Scenario } from '../model/projectDoc';
@@ -72,6 +73,7 @@ export function analyseDocGesture(doc: ProjectDoc, start: ProjectDoc, base: DocG
     const rest = Math.abs(excessArea - projected.area);
     horizons[i] = {
       ...h, regional: clipped, excessArea, regionalElevation: r, regionalLength: polylineLength(clipped.xs, clipped.zs),
+      regionalBeyond: lengthBeyondSpan(clipped.xs, clipped.zs),
       projectedArea: projected.area, projectedLength: projected.length,
       projectedAreaShare: projected.area === 0 ? 0 : Math.abs(projected.area) / (Math.abs(projected.area) + rest),
     };

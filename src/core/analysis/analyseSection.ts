@@ -10,7 +10,10 @@ export type { AreaDepthResult } from './fitAreaDepth';
 
 export interface HorizonResult {
   name: string; included: boolean; excessArea: number; bedLength: number; regionalLength: number;
-  regionalElevation: number; depth: number; chamberlinDepth: number | null; lpsStrain: number | null;
+  regionalElevation: number; depth: number; chamberlinDepth: number | null;
+  /** Why there is no Chamberlin depth (L ≤ W, or a shortening below the digitising resolution); null when there is one. */
+  chamberlinReason: string | null;
+  lpsStrain: number | null;
   projectedAreaShare: number; projectedLength: number; residual: number | null;
 }
 
@@ -40,23 +43,23 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
   const residuals = new Map(fitIdx.map((i, k) => [i, area.fit ? area.fit.residuals[k] : null]));
   const notes = [...area.notes];
   const horizons = p.horizons.map((h, i): HorizonResult => {
-    const chamberlin = chamberlinDepth(h.excessArea, h.bedLength, h.regionalLength);
+    const chamberlin = chamberlinDepth(h.excessArea, h.bedBeyond - h.regionalBeyond, p.resolution, p.units);
     if (h.projectedLength > 0) {
       notes.push(`Horizon "${h.name}": ${(100 * h.projectedAreaShare).toFixed(1)}% of its excess area and ${round(h.projectedLength)} ${p.units} of its bed length are projected (interpreted); treat its values as projected, not measured.`);
     }
     return {
       name: h.name, included: h.included, excessArea: h.excessArea, bedLength: h.bedLength,
       regionalLength: h.regionalLength, regionalElevation: h.regionalElevation, depth: depths[i],
-      chamberlinDepth: chamberlin,
+      chamberlinDepth: chamberlin.depth, chamberlinReason: chamberlin.reason,
       lpsStrain: useD ? layerParallelStrain(h.bedLength, h.regionalLength, ad.displacement) : null,
       projectedAreaShare: h.projectedAreaShare, projectedLength: h.projectedLength,
       residual: residuals.get(i) ?? null,
     };
   });
-  const noChamberlin = horizons.filter((h) => h.chamberlinDepth === null).map((h) => `"${h.name}"`);
-  if (noChamberlin.length > 0) {
-    notes.push(`No Chamberlin depth for ${noChamberlin.join(', ')}: bed length does not exceed regional length.`);
-  }
+  // One note per reason, naming its horizons.
+  const byReason = new Map<string, string[]>();
+  for (const h of horizons) if (h.chamberlinReason !== null) byReason.set(h.chamberlinReason, [...(byReason.get(h.chamberlinReason) ?? []), `"${h.name}"`]);
+  for (const [reason, names] of byReason) notes.push(`No Chamberlin depth for ${names.join(', ')}: ${reason}.`);
   return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes };
 }
 

@@ -1,9 +1,29 @@
 // Chamberlin (1910, J. Geology 18:228–251): H = A / (L − W), the height of the detachment below
 // the horizon's regional, assuming bed length is conserved. Undefined when L ≤ W (docs/method.md §Chamberlin depth).
+// L − W is a small difference of two long sums, so the caller forms it without cancellation
+// (lengthBeyondSpan of the line less that of the regional). When it is positive but below what the
+// digitising resolves, H = A / (L − W) is noise — a 1 mm bump over 10 km gives about 10¹⁰ m — so no depth is
+// given and the reason says why.
 
-/** Chamberlin depth H = A/(L − W) in section units; null when L ≤ W or any input is not finite. */
-export function chamberlinDepth(excessArea: number, bedLength: number, regionalLength: number): number | null {
-  if (!Number.isFinite(excessArea) || !Number.isFinite(bedLength) || !Number.isFinite(regionalLength)) return null;
-  const shortening = bedLength - regionalLength;
-  return shortening > 0 ? excessArea / shortening : null;
+/** The Chamberlin depth of a horizon, or why there is none. */
+export type ChamberlinResult = { depth: number; reason: null } | { depth: null; reason: string };
+
+/**
+ * Returns H = A / (L − W) (section units) from the excess area A (units²) and the bed-length shortening
+ * L − W (units); no depth, with the reason, when L − W ≤ 0, when it is below `resolution` (the smallest
+ * length the digitising resolves, units), or when an input is not finite.
+ */
+export function chamberlinDepth(excessArea: number, shortening: number, resolution = 0, units = ''): ChamberlinResult {
+  if (!Number.isFinite(excessArea) || !Number.isFinite(shortening)) return { depth: null, reason: 'its lengths or area are not finite numbers' };
+  if (!(shortening > 0)) return { depth: null, reason: 'bed length does not exceed regional length' };
+  if (shortening < resolution) {
+    const u = units ? ` ${units}` : '';
+    return { depth: null, reason: `not meaningful: the bed is only ${short(shortening)}${u} longer than its regional, less than the ${short(resolution)}${u} the digitising resolves` };
+  }
+  return { depth: excessArea / shortening, reason: null };
+}
+
+/** Two significant figures, in exponent form outside 10⁻³ … 10⁶ ("2.5", "1.0e-6"). */
+function short(v: number): string {
+  return v >= 1e-3 && v < 1e6 ? String(Number(v.toPrecision(2))) : v.toExponential(1).replace('e+', 'e');
 }

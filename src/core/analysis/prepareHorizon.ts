@@ -18,6 +18,9 @@ export interface PreparedHorizon {
   /** Bed length L and regional length W between the pins (units, W measured along the regional). */
   bedLength: number;
   regionalLength: number;
+  /** Each line's length beyond the pin width (lengthBeyondSpan, units): L − W = bedBeyond − regionalBeyond, formed without cancellation. */
+  bedBeyond: number;
+  regionalBeyond: number;
   /** r = (1/W0) ∫ regional dx over the pins (units). */
   regionalElevation: number;
   /** Signed area carried by projected runs (see projectedContribution) and their length. */
@@ -114,6 +117,8 @@ export function prepareHorizon(
       name, included, line, regional, excessArea,
       bedLength: lin.length,
       regionalLength: reg.length,
+      bedBeyond: lin.lengthBeyondSpan,
+      regionalBeyond: reg.lengthBeyondSpan,
       regionalElevation,
       projectedArea: proj.area,
       projectedLength: proj.length,

@@ -1,4 +1,4 @@
-import type { LengthUnit, Section } from '../model/section';
+import { DEFAULT_RESOLUTION, type LengthUnit, type Section } from '../model/section';
 import { validateSectionArrays, type Allocate, type SectionProblem } from '../model/validateSection';
 import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
@@ -21,6 +21,8 @@ export interface PreparedSection {
   areas: Float64Array;
   regionalElevations: Float64Array;
   included: Uint8Array;
+  /** The smallest length the digitising resolves (units; Section.resolution, else DEFAULT_RESOLUTION). */
+  resolution: number;
 }
 
 // The validated input points only live until each horizon is clipped (the clipped lines are
@@ -94,6 +96,7 @@ function prepare(section: Section, options: { referenceElevation?: number }, cli
       units: s.units, pins: s.pins, pinWidth: s.pins[1] - s.pins[0],
       referenceElevation: option ?? s.referenceElevation ?? highest,
       horizons, areas, regionalElevations, included,
+      resolution: section.resolution !== undefined && Number.isFinite(section.resolution) && section.resolution > 0 ? section.resolution : DEFAULT_RESOLUTION,
     },
   };
 }

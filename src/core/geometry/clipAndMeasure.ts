@@ -20,6 +20,8 @@ export interface MeasuredClip {
   zOrigin: number;
   /** Length of the clipped line (units), as polylineLength. */
   length: number;
+  /** Length minus the pin width, summed per segment without cancellation (units), as lengthBeyondSpan. */
+  lengthBeyondSpan: number;
   /** x-monotone chains of the clipped line, as xMonotoneChains(clipped.xs, clipped.zs). */
   chains: XMonotoneChains;
   /** chains.count === 1: x strictly increases along every segment of positive length, so the line cannot cross itself. */
@@ -56,7 +58,7 @@ export function clipAndMeasure(
 
 function unclipped(left: number, right: number, zOrigin: number | undefined): MeasuredClip {
   return {
-    clip: { leftContacts: left, rightContacts: right, clipped: null }, integral: 0, zOrigin: zOrigin ?? 0, length: 0,
+    clip: { leftContacts: left, rightContacts: right, clipped: null }, integral: 0, zOrigin: zOrigin ?? 0, length: 0, lengthBeyondSpan: 0,
     chains: chainsFromStarts(new Float64Array(0), 0, [], [], 0), xMonotone: false,
   };
 }
@@ -75,7 +77,7 @@ function zAt(Z: ArrayLike<number>, seg: number, t: number): number {
 const UNSET = 2;
 
 /** Running measures of a cut line (reused by every call: the loop writes them, cutAndMeasure reads them at once). */
-const run = { integral: 0, length: 0, dir: UNSET };
+const run = { integral: 0, length: 0, beyond: 0, dir: UNSET };
 
 /**
  * The clip of a left-to-right line: the start point on the left pin, the input vertices strictly
@@ -109,7 +111,7 @@ function cutAndMeasure(
   const clipped: ClippedPolyline = { xs, zs, projected, source, reversed };
   return {
     clip: { leftContacts: 1, rightContacts: 1, clipped },
-    integral: run.integral / 2, zOrigin: zO, length: run.length, chains, xMonotone: chains.count === 1,
+    integral: run.integral / 2, zOrigin: zO, length: run.length, lengthBeyondSpan: run.beyond, chains, xMonotone: chains.count === 1,
   };
 }
 
@@ -128,6 +130,7 @@ function measureCut(
   // Running measures; (px, pz) the previous vertex, (rx, rz) it relative to the first one (pL, z0).
   let integral = 0;
   let length = 0;
+  let beyond = 0;
   let px = pL;
   let pz = z0;
   let rx = 0;
@@ -151,7 +154,12 @@ function measureCut(
     const dx = x - px;
     const dz = z - pz;
     integral += (pz - zO + (z - zO)) * dx;
-    length += Math.sqrt(dx * dx + dz * dz);
+    const len = Math.sqrt(dx * dx + dz * dz);
+    length += len;
+    // len − |dx| = dz² / (len + |dx|) without cancellation; a step back adds its |dx| twice (as lengthBeyondSpan).
+    const adx = dx < 0 ? -dx : dx;
+    if (len > 0) beyond += (dz * dz) / (len + adx);
+    if (dx < 0) beyond += 2 * adx;
     // Step 3: the segment's x-direction relative to the first vertex; a change starts a new chain (as xMonotoneChains).
     const qx = x - pL;
     const qz = z - z0;
@@ -170,5 +178,6 @@ function measureCut(
   }
   run.integral = integral;
   run.length = length;
+  run.beyond = beyond;
   run.dir = dir;
 }

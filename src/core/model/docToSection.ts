@@ -52,6 +52,8 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
     units: doc.units,
     pins: [Math.min(pl, pr), Math.max(pl, pr)],
     horizons,
+    // One scan pixel: the digitising resolves no finer length change.
+    resolution: Math.max(Math.abs(fit.unitsPerPxX), Math.abs(fit.unitsPerPxZ)),
     ...(scenario.referenceElevation !== undefined ? { referenceElevation: scenario.referenceElevation } : {}),
   };
   return { ok: true, section, fit, horizonIds, skipped };

@@ -24,5 +24,14 @@ export interface Section {
   pins: [number, number];
   /** Reference elevation for depths; default the highest regional elevation. */
   referenceElevation?: number;
+  /**
+   * The smallest length the digitising resolves (units): one scan pixel for a section digitised in the app;
+   * default DEFAULT_RESOLUTION, the grid section files store coordinates on. A bed-length shortening below it
+   * gives no Chamberlin depth.
+   */
+  resolution?: number;
   horizons: SectionHorizon[];
 }
+
+/** Section files store coordinates on a grid of 10⁻⁶ units: no length change below it is digitised. */
+export const DEFAULT_RESOLUTION = 1e-6;

@@ -5,7 +5,7 @@ import { importHorizons, type ImportedHorizon } from '../../core/model/commands/
 import type { LengthUnit } from '../../core/model/section';
 import { svgToSectionAxes } from '../../io/svgHorizons';
 import { fitViewToDoc } from '../../state/projectActions';
-import { formatNumber } from '../../io/formatNumber';
+import { formatNumber } from '../../format/formatQuantity';
 import type { RowProblem } from '../../io/importTypes';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';

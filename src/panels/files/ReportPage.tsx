@@ -5,12 +5,11 @@ import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { currentFigureSvg } from '../../state/currentFigureSvg';
-import { formatNumber, typographicMinus } from '../../io/formatNumber';
+import { areaUnit, formatAreaNumber, formatChamberlin, formatInterval, formatNumber, formatPercent, formatR2, largestMagnitude } from '../../format/formatQuantity';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { selectAnalysis } from '../../state/selectors';
-import { figureAreaUnit } from '../../io/figureAreaUnit';
 import { activeScenario } from '../../core/model/docToSection';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { uncertaintyReport } from '../../io/uncertaintyReport';
@@ -51,8 +50,8 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
   const refText = result
     ? `${formatNumber(result.referenceElevation)} ${u} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional, by default'})`
     : '—';
-  const range = (p: [number, number] | null, exact: boolean) => (exact ? 'exact fit: none' : p ? `${formatNumber(p[0])} to ${formatNumber(p[1])}` : '—');
-  const area = figureAreaUnit(u, Math.max(0, ...(result?.horizons ?? []).map((h) => Math.abs(h.excessArea))));
+  const range = (p: [number, number] | null, exact: boolean) => (exact ? EXACT_FIT_TEXT : p ? formatInterval(p, u) : '—');
+  const area = areaUnit(u, largestMagnitude((result?.horizons ?? []).map((h) => h.excessArea)));
   return createPortal(
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">
@@ -83,9 +82,9 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
             <tbody>
               {result.horizons.map((h, i) => (
                 <tr key={i}>
-                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{area.factor === 1 ? formatNumber(h.excessArea) : typographicMinus((h.excessArea * area.factor).toFixed(3))}</td><td>{formatNumber(h.depth)}</td>
-                  <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatNumber(h.chamberlinDepth)}</td>
-                  <td>{h.lpsStrain === null ? '—' : `${formatNumber(100 * h.lpsStrain, 3)}%`}</td>
+                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{formatAreaNumber(h.excessArea, area)}</td><td>{formatNumber(h.depth)}</td>
+                  <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatChamberlin(h)}</td>
+                  <td>{formatPercent(h.lpsStrain)}</td>
                 </tr>
               ))}
             </tbody>
@@ -98,7 +97,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
           <p data-testid="report-summary">
             {ad.noDetachment
               ? 'Excess area does not decrease with depth: there is no detachment below these horizons.'
-              : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
+              : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? formatInterval(ad.detachmentDepthCI95, u) : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatR2(ad.r2, isExactFit(ad))} over ${ad.n} horizons.`}
           </p>
         )}
         {result && result.notes.length > 0 && <ul className="report-notes">{result.notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}

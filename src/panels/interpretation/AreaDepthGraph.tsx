@@ -4,12 +4,11 @@
 import { useMemo, useRef, useState } from 'react';
 import type { TwoSegmentFit } from '../../core/analysis/twoSegmentFit';
 import type { AreaDepthSeries, GraphPoint } from './areaDepthSeries';
-import { areaUnit, formatArea, formatNumber } from './formatValue';
+import { areaUnit, EXACT_FIT_TEXT, formatArea, formatInterval, formatLength, formatNumber, largestMagnitude } from '../../format/formatQuantity';
 import { graphDomain } from './graphDomain';
 import { linearScale } from './linearScale';
 import { linspace, meanBand } from './meanBand';
-import { niceTicks } from './niceTicks';
-import { screenLength, screenNumber, withMinus } from './screenQuantity';
+import { niceTicks } from '../../format/niceTicks';
 import { isExactFit } from '../../core/analysis/isExactFit';
 
 export interface GraphSeriesSpec {
@@ -42,7 +41,7 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
   const [hoverPoint, setHoverPoint] = useState<GraphPoint | null>(null);
   const H = height;
   const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly, units), [series, dataOnly, units]);
-  const unit = useMemo(() => areaUnit(units, Math.max(0, ...series.flatMap((s) => s.series.points.map((p) => Math.abs(p.area))))), [series, units]);
+  const unit = useMemo(() => areaUnit(units, largestMagnitude(series.flatMap((s) => s.series.points.map((p) => p.area)))), [series, units]);
   if (!domain) return <p className="hint">No horizons with a regional yet.</p>;
   const xs = linearScale(domain.area, [M.left, W - M.right]);
   const ys = linearScale(domain.depth, [M.top, H - M.bottom]);
@@ -84,13 +83,13 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
         {areaTicks.map((t) => (
           <g key={`a${t}`}>
             <line x1={xs.map(t / unit.factor)} x2={xs.map(t / unit.factor)} y1={M.top} y2={H - M.bottom} className={t === 0 ? 'grid zero' : 'grid'} />
-            <text x={xs.map(t / unit.factor)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{withMinus(formatNumber(t, decimalsOf(t)))}</text>
+            <text x={xs.map(t / unit.factor)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{formatNumber(t)}</text>
           </g>
         ))}
         {depthTicks.map((t) => (
           <g key={`d${t}`}>
             <line x1={M.left} x2={W - M.right} y1={ys.map(t)} y2={ys.map(t)} className="grid" />
-            <text x={M.left - 4} y={ys.map(t) + 3.5} className="tick" textAnchor="end">{withMinus(formatNumber(t, decimalsOf(t)))}</text>
+            <text x={M.left - 4} y={ys.map(t) + 3.5} className="tick" textAnchor="end">{formatNumber(t)}</text>
           </g>
         ))}
         <text x={(M.left + W - M.right) / 2} y={H - 6} className="axis-label" textAnchor="middle">Excess area ({unit.label})</text>
@@ -134,14 +133,14 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
       <div className="graph-readout" data-testid={testId ? `${testId}-readout` : undefined}>
         {hoverPoint ? (
           <span>
-            <b>{hoverPoint.name}</b>: {withMinus(formatArea(hoverPoint.area, unit))} at {screenLength(hoverPoint.depth, units)} depth (regional at {screenLength(refElev - hoverPoint.depth, units)})
-            {hoverPoint.residual !== null ? `, off the line by ${withMinus(formatArea(hoverPoint.residual, unit))}` : ''}
+            <b>{hoverPoint.name}</b>: {formatArea(hoverPoint.area, units, unit)} at {formatLength(hoverPoint.depth, units)} depth (regional at {formatLength(refElev - hoverPoint.depth, units)})
+            {hoverPoint.residual !== null ? `, off the line by ${formatArea(hoverPoint.residual, units, unit)}` : ''}
             {interactive ? (hoverPoint.included ? ' — click to leave it out of the fit' : ' — left out; click to include') : ''}
           </span>
         ) : hover ? (
           <span>
-            Cursor: {withMinus(formatArea(hover.area, unit))}, depth {screenLength(hover.depth, units)} (elevation {screenLength(refElev - hover.depth, units)})
-            {lineAt(main.series, hover.depth) !== null ? `; line: ${withMinus(formatArea(lineAt(main.series, hover.depth), unit))}` : ''}
+            Cursor: {formatArea(hover.area, units, unit)}, depth {formatLength(hover.depth, units)} (elevation {formatLength(refElev - hover.depth, units)})
+            {lineAt(main.series, hover.depth) !== null ? `; line: ${formatArea(lineAt(main.series, hover.depth), units, unit)}` : ''}
           </span>
         ) : (
           <span className="hint">Hover for values{interactive ? '; click a point to include or leave out its horizon' : ''}.</span>
@@ -149,12 +148,6 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
       </div>
     </div>
   );
-}
-
-function decimalsOf(t: number): number {
-  const s = String(t);
-  const dot = s.indexOf('.');
-  return dot < 0 || s.includes('e') ? 0 : s.length - dot - 1;
 }
 
 type Scale = ReturnType<typeof linearScale>;
@@ -185,8 +178,8 @@ function Detachment({ s, xs, ys, units, labelled, testId }: { s: GraphSeriesSpec
       <path d={`M ${x0} ${y - 6} L ${x0 + 6} ${y} L ${x0} ${y + 6} L ${x0 - 6} ${y} Z`} fill={s.colour} stroke="#ffffff" strokeWidth={1} />
       {labelled && (
         <text x={x0 + 9} y={y + 4} className="detachment-label">
-          detachment {screenLength(r.detachmentDepth, units)}
-          {isExactFit(r) ? ' (exact fit: no interval)' : f.kind === 'bounded' ? ` (95%: ${screenNumber(f.lo)}–${screenNumber(f.hi)})` : f.kind === 'unbounded' ? ' (95% interval unbounded)' : ''}
+          detachment {formatLength(r.detachmentDepth, units)}
+          {isExactFit(r) ? ` (${EXACT_FIT_TEXT})` : f.kind === 'bounded' ? ` (95%: ${formatInterval([f.lo, f.hi], units)})` : f.kind === 'unbounded' ? ' (95% interval unbounded)' : ''}
         </text>
       )}
     </g>

@@ -1,9 +1,8 @@
 // Histogram of Monte Carlo detachment depths with P10, P50 and P90 marked.
 import { histogramBins } from './histogramBins';
 import { linearScale } from './linearScale';
-import { niceTicks } from './niceTicks';
-import { formatNumber } from './formatValue';
-import { withMinus } from './screenQuantity';
+import { niceTicks } from '../../format/niceTicks';
+import { formatNumber } from '../../format/formatQuantity';
 
 const W = 400;
 const H = 190;
@@ -33,7 +32,7 @@ export function Histogram({ values, spread, units, point, label }: Props) {
       ))}
       <line x1={M.left} x2={W - M.right} y1={sy.map(0)} y2={sy.map(0)} className="axis" />
       {niceTicks(h.edges[0], h.edges[h.edges.length - 1], 5).values.map((t) => (
-        <text key={t} x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{withMinus(formatNumber(t))}</text>
+        <text key={t} x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{formatNumber(t)}</text>
       ))}
       {niceTicks(0, top, 3).values.map((t) => (
         <text key={`c${t}`} x={M.left - 4} y={sy.map(t) + 3.5} className="tick" textAnchor="end">{t}</text>

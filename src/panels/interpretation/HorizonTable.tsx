@@ -2,10 +2,9 @@
 import { useState } from 'react';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { useSessionStore } from '../../state/sessionStore';
-import { areaUnit, formatNumber } from './formatValue';
+import { areaUnit, formatAreaNumber, formatChamberlin, formatNumber, largestMagnitude } from '../../format/formatQuantity';
 import { resultsTsv } from './resultsTsv';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
-import { SCREEN_FORMAT, withMinus } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 
 interface Props {
@@ -19,7 +18,7 @@ interface Props {
 export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle }: Props) {
   const [all, setAll] = useState(false);
   const u = analysis.units;
-  const unit = areaUnit(u, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea))));
+  const unit = areaUnit(u, largestMagnitude(analysis.horizons.map((h) => h.excessArea)));
   const copy = () => {
     const text = resultsTsv(analysis, scenarioName);
     const { showMessage } = useSessionStore.getState();
@@ -35,7 +34,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
   const rowTitle = (h: SectionAnalysis['horizons'][number]) => [
     `${h.name}${h.included ? '' : ' (left out of the fit)'}`,
     `bed length ${formatNumber(h.bedLength)} ${u}, regional length ${formatNumber(h.regionalLength)} ${u}`,
-    `projected share ${formatNumber(100 * h.projectedAreaShare, 1)} %, off the line ${withMinus(formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals))} ${unit.label}`,
+    `projected share ${formatNumber(100 * h.projectedAreaShare)} %, off the line ${formatAreaNumber(h.residual, unit)} ${unit.label}`,
   ].join('\n');
   return (
     <div>
@@ -46,7 +45,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
               <th className="name-col" title="Tick to include the horizon in the area–depth fit">Horizon (in fit)</th>
               <th>Excess area ({unit.label})</th>
               <th>Regional elev. ({u})</th>
-              <th title={`Depth of the regional below the reference, ${withMinus(formatNumber(analysis.referenceElevation))} ${u}`}>Depth ({u})</th>
+              <th title={`Depth of the regional below the reference, ${formatNumber(analysis.referenceElevation)} ${u}`}>Depth ({u})</th>
               <th>Chamberlin depth ({u})</th>
               <th title="Layer-parallel strain e = L / (W + D) − 1; negative = shortened along the layer">Layer strain (%)</th>
               {all && <>
@@ -67,16 +66,16 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
                     <span className="name-text">{h.name}</span>
                   </label>
                 </td>
-                <td>{withMinus(formatNumber(h.excessArea * unit.factor, unit.decimals))}</td>
-                <td>{withMinus(formatNumber(h.regionalElevation))}</td>
-                <td>{withMinus(formatNumber(h.depth))}</td>
-                <td>{withMinus(formatNumber(h.chamberlinDepth))}</td>
-                <td>{withMinus(formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain, 1))}</td>
+                <td>{formatAreaNumber(h.excessArea, unit)}</td>
+                <td>{formatNumber(h.regionalElevation)}</td>
+                <td>{formatNumber(h.depth)}</td>
+                <td title={h.chamberlinReason ?? undefined}>{formatChamberlin(h)}</td>
+                <td>{formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain)}</td>
                 {all && <>
-                  <td>{withMinus(formatNumber(h.bedLength))}</td>
-                  <td>{withMinus(formatNumber(h.regionalLength))}</td>
-                  <td>{withMinus(formatNumber(100 * h.projectedAreaShare, 1))}</td>
-                  <td>{withMinus(formatNumber(h.residual === null ? null : h.residual * unit.factor, unit.decimals))}</td>
+                  <td>{formatNumber(h.bedLength)}</td>
+                  <td>{formatNumber(h.regionalLength)}</td>
+                  <td>{formatNumber(100 * h.projectedAreaShare)}</td>
+                  <td>{formatAreaNumber(h.residual, unit)}</td>
                 </>}
               </tr>
             ))}
@@ -87,7 +86,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
         All columns (bed and regional length, projected share, distance off the line); hover a row for them</label>
       <table className="summary-table" data-testid="summary-table">
         <tbody>
-          {summaryRows(analysis, SCREEN_FORMAT).map((r) => (
+          {summaryRows(analysis).map((r) => (
             <tr key={r.key}>
               <th>{r.label}</th>
               <td>{r.text}</td>

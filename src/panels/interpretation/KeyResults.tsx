@@ -1,7 +1,6 @@
 // The headline numbers of the fit (number first, then the unit), with their 95% intervals.
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
-import { SCREEN_FORMAT } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 
 const KEYS: [string, string][] = [
@@ -12,7 +11,7 @@ const KEYS: [string, string][] = [
 ];
 
 export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
-  const rows = summaryRows(analysis, SCREEN_FORMAT);
+  const rows = summaryRows(analysis);
   const get = (k: string) => rows.find((r) => r.key === k)!;
   const n = get('n');
   return (

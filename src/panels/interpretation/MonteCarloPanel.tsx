@@ -8,9 +8,8 @@ import { useDocStore } from '../../state/docStore';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
 import { Histogram } from './Histogram';
-import { formatPercent } from './formatValue';
+import { formatLength, formatPercent } from '../../format/formatQuantity';
 import type { MonteCarloDone, MonteCarloReply } from './monteCarloMessages';
-import { screenLength } from './screenQuantity';
 
 /** The text shown over a result computed for another state of the section. */
 export const STALE_TEXT = 'These results are for an earlier state of the section — run again.';
@@ -149,10 +148,10 @@ function MonteCarloResult({ result, stale }: { result: MonteCarloRecord; stale: 
   const u = result.units;
   const three = (sp: MonteCarloRecord['depth'], id?: string) => (
     <>
-      <span data-testid={id && `${id}-p10`}>{screenLength(sp?.p10, u)}</span> / <span data-testid={id && `${id}-p50`}>{screenLength(sp?.p50, u)}</span> / <span data-testid={id && `${id}-p90`}>{screenLength(sp?.p90, u)}</span>
+      <span data-testid={id && `${id}-p10`}>{formatLength(sp?.p10, u)}</span> / <span data-testid={id && `${id}-p50`}>{formatLength(sp?.p50, u)}</span> / <span data-testid={id && `${id}-p90`}>{formatLength(sp?.p90, u)}</span>
     </>
   );
-  const ref = screenLength(result.referenceElevation, u);
+  const ref = formatLength(result.referenceElevation, u);
   return (
     <div className={`mc-result${stale ? ' stale' : ''}`} data-testid="mc-result" data-stale={stale ? 'yes' : 'no'}>
       {stale && <p className="diagnostic warning mc-stale" data-testid="mc-stale">{STALE_TEXT}</p>}
@@ -160,10 +159,10 @@ function MonteCarloResult({ result, stale }: { result: MonteCarloRecord; stale: 
         <tbody>
           <tr><th>Detachment elevation P10 / P50 / P90</th><td>{three(result.elevation, 'mc-elevation')}</td></tr>
           <tr><th>Detachment depth below {ref} P10 / P50 / P90</th>
-            <td><span data-testid="mc-p10">{screenLength(result.depth?.p10, u)}</span> / <span data-testid="mc-p50">{screenLength(result.depth?.p50, u)}</span> / <span data-testid="mc-p90">{screenLength(result.depth?.p90, u)}</span></td></tr>
+            <td><span data-testid="mc-p10">{formatLength(result.depth?.p10, u)}</span> / <span data-testid="mc-p50">{formatLength(result.depth?.p50, u)}</span> / <span data-testid="mc-p90">{formatLength(result.depth?.p90, u)}</span></td></tr>
           <tr><th>Displacement P10 / P50 / P90</th><td>{three(result.displacement)}</td></tr>
           <tr><th>Runs without a valid detachment</th><td data-testid="mc-failed">{formatPercent(result.failedShare)} of {result.runs}</td></tr>
-          <tr><th>Depth spread (standard deviation)</th><td>{screenLength(result.depthSd, u)}</td></tr>
+          <tr><th>Depth spread (standard deviation)</th><td>{formatLength(result.depthSd, u)}</td></tr>
           <tr><th>Run</th><td className="interval">seed {result.seed}, {result.method === 'vertices' ? 'every vertex perturbed' : 'areas drawn directly'}</td></tr>
         </tbody>
       </table>
@@ -172,7 +171,7 @@ function MonteCarloResult({ result, stale }: { result: MonteCarloRecord; stale: 
           label={`Detachment depth below ${ref} (${u})`} />
       )}
       {/* The unperturbed estimate of an earlier section is not the current one: say nothing of it then. */}
-      {!stale && <p className="hint">Dashed line: the estimate without perturbation ({screenLength(result.pointDepth, u)}). Report the spread, not one number.</p>}
+      {!stale && <p className="hint">Dashed line: the estimate without perturbation ({formatLength(result.pointDepth, u)}). Report the spread, not one number.</p>}
     </div>
   );
 }

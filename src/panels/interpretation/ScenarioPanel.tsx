@@ -11,8 +11,7 @@ import { scenarioSwitch } from '../../core/model/commands/scenarioSwitch';
 import { AreaDepthGraph, type GraphSeriesSpec } from './AreaDepthGraph';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { areaDepthSeries } from './areaDepthSeries';
-import { formatNumber } from './formatValue';
-import { screenLength, screenNumber } from './screenQuantity';
+import { formatLength, formatNumber, formatR2 } from '../../format/formatQuantity';
 import { scenarioAnalysisOf } from './useScenarioAnalysis';
 import { scenarioColour } from './scenarioColour';
 
@@ -31,7 +30,7 @@ export function ScenarioPanel() {
   const base = rows.find((r) => r.analysis);
   const commonRef = base?.analysis?.referenceElevation ?? null;
   const refText = base && commonRef !== null
-    ? `${screenLength(commonRef, doc.units)}, ${base.scenario.referenceElevation !== undefined ? 'the reference set in' : 'the highest regional of'} ${base.scenario.name}`
+    ? `${formatLength(commonRef, doc.units)}, ${base.scenario.referenceElevation !== undefined ? 'the reference set in' : 'the highest regional of'} ${base.scenario.name}`
     : '';
   const overlay: GraphSeriesSpec[] = rows.filter((r) => r.analysis).map((r) => ({
     key: r.scenario.id, label: r.scenario.name, colour: r.colour, series: areaDepthSeries(r.analysis!, r.horizonIds, commonRef ?? undefined),
@@ -82,7 +81,7 @@ export function ScenarioPanel() {
             <tr>
               <th className="name-col">Scenario</th>
               <th title="95% interval below each value">Detachment elevation ({doc.units})</th>
-              <th title={commonRef !== null ? `Below ${refText}` : undefined}>Depth below {commonRef !== null ? screenLength(commonRef, doc.units) : 'ref.'}</th>
+              <th title={commonRef !== null ? `Below ${refText}` : undefined}>Depth below {commonRef !== null ? formatLength(commonRef, doc.units) : 'ref.'}</th>
               <th>Displace&shy;ment ({doc.units})</th>
               <th title="Horizons in the fit">n</th>
             </tr>
@@ -94,8 +93,8 @@ export function ScenarioPanel() {
               const f = ad?.detachmentDepthInterval;
               const zref = analysis?.referenceElevation ?? 0;
               const interval = !ok || !f ? '—' : isExactFit(ad) ? 'exact fit' : f.kind === 'bounded'
-                ? `${screenNumber(zref - f.hi)} to ${screenNumber(zref - f.lo)}` : f.kind === 'unbounded' ? 'unbounded' : 'none';
-              const title = ad ? `${s.name}: n = ${ad.n}, r² = ${formatNumber(ad.r2, 4)}${isExactFit(ad) ? ` (${EXACT_FIT_TEXT})` : ''}; own reference ${screenLength(zref, doc.units)}` : s.name;
+                ? `${formatNumber(zref - f.hi)} to ${formatNumber(zref - f.lo)}` : f.kind === 'unbounded' ? 'unbounded' : 'none';
+              const title = ad ? `${s.name}: n = ${ad.n}, r² = ${formatR2(ad.r2, isExactFit(ad))}${isExactFit(ad) ? ` (${EXACT_FIT_TEXT})` : ''}; own reference ${formatLength(zref, doc.units)}` : s.name;
               return (
                 <tr key={s.id} className={s.id === active ? 'active' : ''} title={title}>
                   <td className="name-col">{s.name}</td>
@@ -104,11 +103,11 @@ export function ScenarioPanel() {
                   ) : (
                     <>
                       <td>
-                        <div className="primary" data-testid={`compare-elevation-${s.id}`}>{ok ? screenNumber(ad.detachmentElevation) : ad ? 'none' : '—'}</div>
+                        <div className="primary" data-testid={`compare-elevation-${s.id}`}>{ok ? formatNumber(ad.detachmentElevation) : ad ? 'none' : '—'}</div>
                         {ok && <div className="interval">{interval === 'exact fit' || interval === 'unbounded' || interval === 'none' ? interval : `95%: ${interval}`}</div>}
                       </td>
-                      <td>{ok && commonRef !== null ? screenNumber(commonRef - ad.detachmentElevation!) : '—'}</td>
-                      <td>{ok ? screenNumber(ad.displacement) : '—'}</td>
+                      <td>{ok && commonRef !== null ? formatNumber(commonRef - ad.detachmentElevation!) : '—'}</td>
+                      <td>{ok ? formatNumber(ad.displacement) : '—'}</td>
                       <td>{ad?.n ?? 0}</td>
                     </>
                   )}
@@ -122,7 +121,7 @@ export function ScenarioPanel() {
         <>
           <p className="hint">All scenarios' fits on one graph, depths below {refText}.</p>
           <AreaDepthGraph series={overlay} units={doc.units} dataOnly={false} testId="scenario-overlay" height={240}
-            depthLabel={`Depth below ${screenLength(commonRef, doc.units)} (${doc.units})`} />
+            depthLabel={`Depth below ${formatLength(commonRef, doc.units)} (${doc.units})`} />
         </>
       )}
     </div>

@@ -8,8 +8,7 @@ import { prepareSection } from '../../core/analysis/prepareSection';
 import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
 import { SweepPlot } from './SweepPlot';
-import { formatNumber } from './formatValue';
-import { screenLength, withMinus } from './screenQuantity';
+import { formatLength, formatNumber } from '../../format/formatQuantity';
 import { useDocStore } from '../../state/docStore';
 import { sectionKey } from '../../core/model/sectionKey';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
@@ -44,11 +43,11 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
   const amp = sweep.result.amplification;
   const ampText = amp === null
     ? 'No detachment at the base case: no amplification factor.'
-    : `Amplification 1 + W/D = ${formatNumber(amp, 1)}: raising every regional by 10 ${u} moves the detachment ${formatNumber(10 * amp)} ${u} up.`;
+    : `Amplification 1 + W/D = ${formatNumber(amp, 3)}: raising every regional by 10 ${u} moves the detachment ${formatNumber(10 * amp)} ${u} up.`;
   return (
     <div className="sensitivity">
       <p className="amplification" data-testid="sensitivity-amplification">{ampText}</p>
-      <p className="hint">Curves in detachment elevation, which needs no reference: a depth below the highest regional would move with that regional as it is shifted.{sweep.result.base && !sweep.result.base.noDetachment && sweep.result.base.detachmentElevation !== null ? ` Unshifted: ${screenLength(sweep.result.base.detachmentElevation, u)}.` : ''}</p>
+      <p className="hint">Curves in detachment elevation, which needs no reference: a depth below the highest regional would move with that regional as it is shifted.{sweep.result.base && !sweep.result.base.noDetachment && sweep.result.base.detachmentElevation !== null ? ` Unshifted: ${formatLength(sweep.result.base.detachmentElevation, u)}.` : ''}</p>
       <div className="field-row">
         <label>Offset range ± <input type="number" min={1} value={offsetRange} onChange={(e) => setOffsetRange(Number(e.target.value) || 1)} /> {u}</label>
       </div>
@@ -58,7 +57,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
         up
         xLabel={`Common regional offset (${u}, up positive)`}
         yLabel={`Detachment elevation (${u})`}
-        note={amp === null ? 'no detachment at 0' : `amplification 1 + W/D = ${formatNumber(amp, 1)}`}
+        note={amp === null ? 'no detachment at 0' : `amplification 1 + W/D = ${formatNumber(amp, 3)}`}
         testId="sensitivity-offset-plot"
       />
       <div className="field-row">
@@ -71,7 +70,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
         up
         xLabel={`Common regional tilt (${u} per 1000 ${u}, rising to the right positive)`}
         yLabel={`Detachment elevation (${u})`}
-        note={`tilt about the ${pivot} pin (x = ${withMinus(formatNumber(sweep.result.tiltPivotX))} ${u})`}
+        note={`tilt about the ${pivot} pin (x = ${formatNumber(sweep.result.tiltPivotX)} ${u})`}
         testId="sensitivity-tilt-plot"
       />
     </div>

@@ -1,9 +1,8 @@
 // A small line plot of a detachment value against a swept value (across), for the sensitivity pane:
 // elevation is drawn with up as up, depth with down as down.
 import { linearScale } from './linearScale';
-import { niceDomain, niceTicks } from './niceTicks';
-import { formatNumber } from './formatValue';
-import { screenNumber, withMinus } from './screenQuantity';
+import { niceDomain, niceTicks } from '../../format/niceTicks';
+import { formatNumber } from '../../format/formatQuantity';
 
 interface Props {
   xs: number[];
@@ -43,13 +42,13 @@ export function SweepPlot({ xs, values, up, xLabel, yLabel, note, testId }: Prop
       {niceTicks(x0, x1, 6).values.map((t) => (
         <g key={`x${t}`}>
           <line x1={sx.map(t)} x2={sx.map(t)} y1={M.top} y2={H - M.bottom} className={t === 0 ? 'grid zero' : 'grid'} />
-          <text x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{withMinus(formatNumber(t, decimals(t)))}</text>
+          <text x={sx.map(t)} y={H - M.bottom + 13} className="tick" textAnchor="middle">{formatNumber(t)}</text>
         </g>
       ))}
       {niceTicks(d0, d1, 4).values.map((t) => (
         <g key={`y${t}`}>
           <line x1={M.left} x2={W - M.right} y1={sy.map(t)} y2={sy.map(t)} className="grid" />
-          <text x={M.left - 4} y={sy.map(t) + 3.5} className="tick" textAnchor="end">{screenNumber(t)}</text>
+          <text x={M.left - 4} y={sy.map(t) + 3.5} className="tick" textAnchor="end">{formatNumber(t)}</text>
         </g>
       ))}
       {runs.map((r, i) => <polyline key={i} points={r} className="sweep-line" />)}
@@ -58,10 +57,4 @@ export function SweepPlot({ xs, values, up, xLabel, yLabel, note, testId }: Prop
       <text x={M.left + 4} y={M.top - 7} className="plot-note">{note}</text>
     </svg>
   );
-}
-
-function decimals(t: number): number {
-  const s = String(t);
-  const dot = s.indexOf('.');
-  return dot < 0 || s.includes('e') ? 0 : s.length - dot - 1;
 }

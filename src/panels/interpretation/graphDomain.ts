@@ -1,5 +1,5 @@
 import type { AreaDepthSeries } from './areaDepthSeries';
-import { niceDomain } from './niceTicks';
+import { niceDomain } from '../../format/niceTicks';
 
 // The part of the area–depth plane to show: the points only ("zoom to data"), or the points plus
 // zero area and the detachment with its bounded interval. Long intervals are cut at three data

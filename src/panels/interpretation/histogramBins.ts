@@ -1,4 +1,4 @@
-import { niceStep } from './niceTicks';
+import { niceStep } from '../../format/niceTicks';
 
 export interface Histogram { edges: number[]; counts: number[] }
 

@@ -1,9 +1,10 @@
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
-import { formatNumber } from './formatValue';
+import { plainNumber } from '../../format/formatQuantity';
 import { summaryRows } from './summaryRows';
 
-// The results table as tab-separated text for the clipboard (spreadsheets paste it into cells).
+// The results table as tab-separated text for the clipboard (spreadsheets paste it into cells), so its
+// numbers are plain, as in the data files (src/format plainNumber): ASCII minus, no unit in the cell.
 // Areas in the section unit squared, lengths in the section unit; the caution travels with it (DEVELOPERS.md §Project rules).
 
 function clean(text: string): string {
@@ -13,19 +14,20 @@ function clean(text: string): string {
 /** Tab-separated per-horizon table, summary and caution, lines joined by "\n". */
 export function resultsTsv(a: SectionAnalysis, scenarioName: string): string {
   const u = a.units;
+  const pct = (v: number | null) => plainNumber(v === null ? null : 100 * v);
   const lines: string[][] = [
     ['Scenario', clean(scenarioName)],
     [],
     ['Horizon', 'Included', `Excess area (${u}²)`, `Regional elevation (${u})`, `Depth (${u})`, `Bed length (${u})`, `Regional length (${u})`,
       `Chamberlin depth (${u})`, 'Layer-parallel strain (%)', 'Projected share (%)', `Residual (${u}²)`],
     ...a.horizons.map((h) => [
-      clean(h.name), h.included ? 'yes' : 'no', formatNumber(h.excessArea), formatNumber(h.regionalElevation, 1), formatNumber(h.depth, 1),
-      formatNumber(h.bedLength, 1), formatNumber(h.regionalLength, 1), formatNumber(h.chamberlinDepth, 1),
-      formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain, 2), formatNumber(100 * h.projectedAreaShare, 1), formatNumber(h.residual),
+      clean(h.name), h.included ? 'yes' : 'no', plainNumber(h.excessArea), plainNumber(h.regionalElevation), plainNumber(h.depth),
+      plainNumber(h.bedLength), plainNumber(h.regionalLength), plainNumber(h.chamberlinDepth),
+      pct(h.lpsStrain), pct(h.projectedAreaShare), plainNumber(h.residual),
     ]),
     [],
-    ['Summary', 'Value', '95% interval'],
-    ...summaryRows(a).map((r) => [r.label, r.text, r.interval]),
+    ['Summary', 'Value', 'Unit', 'Low 95%', 'High 95%', 'Note'],
+    ...summaryRows(a).map((r) => [r.label, r.unit === '%' ? pct(r.value) : plainNumber(r.value), r.unit, plainNumber(r.low), plainNumber(r.high), r.low === null ? r.interval : '']),
     [],
     ['Caution', SECTION_CAUTION],
   ];

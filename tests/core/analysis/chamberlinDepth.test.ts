@@ -1,16 +1,69 @@
 import { describe, expect, it } from 'vitest';
 import { chamberlinDepth } from '../../../src/core/analysis/chamberlinDepth';
 import { layerParallelStrain } from '../../../src/core/analysis/layerParallelStrain';
+import { analyseSection } from '../../../src/core/analysis/analyseSection';
+import { lengthBeyondSpan } from '../../../src/core/geometry/lengthBeyondSpan';
+import type { Section } from '../../../src/core/model/section';
 
-describe('chamberlinDepth(A, L, W)', () => {
+describe('chamberlinDepth(A, L − W, resolution)', () => {
   it('is A / (L − W)', () => {
     // Source: Chamberlin (1910), H = A / (L − W) (docs/method.md §Chamberlin depth).
-    expect(chamberlinDepth(2e6, 11_000, 10_000)).toBe(2000);
+    expect(chamberlinDepth(2e6, 11_000 - 10_000)).toEqual({ depth: 2000, reason: null });
   });
-  it('is null when L ≤ W or an input is not finite', () => {
-    expect(chamberlinDepth(1e6, 10_000, 10_000)).toBeNull();
-    expect(chamberlinDepth(1e6, 9000, 10_000)).toBeNull();
-    expect(chamberlinDepth(Number.NaN, 11_000, 10_000)).toBeNull();
+  it('gives no depth, with the reason, when L ≤ W, when L − W is below the resolution, or an input is not finite', () => {
+    expect(chamberlinDepth(1e6, 0).reason).toBe('bed length does not exceed regional length');
+    expect(chamberlinDepth(1e6, -1000).depth).toBeNull();
+    expect(chamberlinDepth(Number.NaN, 1000).depth).toBeNull();
+    const tiny = chamberlinDepth(5, 2.5e-10, 2.5, 'm');
+    expect(tiny.depth).toBeNull();
+    expect(tiny.reason).toMatch(/^not meaningful: the bed is only 2\.5e-10 m longer than its regional, less than the 2\.5 m the digitising resolves$/);
+  });
+});
+
+// A sin² bump z = a·sin²(πx/λ) over one wavelength λ (flat regional z = 0): for a ≪ λ the arc length exceeds
+// λ by ∫ ½ z′² dx = a²π²/(4λ) (small-slope series of the arc-length integral, √(1 + s²) ≈ 1 + s²/2; analytic),
+// and its excess area is aλ/2. At a = 1 mm over λ = 10 km, L − W ≈ 2.47e-10 m while L itself is 10⁴ m: two long
+// sums would lose it in their last digits, and A / (L − W) ≈ 2e10 m would be shown as a depth.
+function bump(a: number, lambda: number, n: number): Section {
+  const line: [number, number][] = [];
+  for (let i = 0; i <= n; i++) {
+    const x = (lambda * i) / n;
+    line.push([x, a * Math.sin((Math.PI * x) / lambda) ** 2]);
+  }
+  return { units: 'm', pins: [0, lambda], referenceElevation: 0, horizons: [{ name: 'Bump', line, regional: [[0, 0], [lambda, 0]] }] };
+}
+
+describe('Chamberlin depth of a nearly flat bed', () => {
+  it('lengthBeyondSpan gives L − W of a 1 mm bump over 10 km to the analytic a²π²/(4λ), without cancellation', () => {
+    const s = bump(1e-3, 10_000, 4000);
+    const [xs, zs] = [s.horizons[0].line.map((p) => p[0]), s.horizons[0].line.map((p) => p[1])];
+    const expected = (1e-3 ** 2 * Math.PI ** 2) / (4 * 10_000);
+    expect(Math.abs(lengthBeyondSpan(xs, zs) / expected - 1)).toBeLessThan(1e-5);
+    // The same bump 10⁶ times larger (a = 1 km over 10⁷ m): the rule scales as a²/λ, so the sum does too.
+    const big = bump(1000, 1e7, 4000);
+    const bigExpected = (1000 ** 2 * Math.PI ** 2) / (4 * 1e7);
+    expect(Math.abs(lengthBeyondSpan(big.horizons[0].line.map((p) => p[0]), big.horizons[0].line.map((p) => p[1])) / bigExpected - 1)).toBeLessThan(1e-5);
+  });
+
+  it('the analysis gives no Chamberlin depth for it, "not meaningful" with the reason, instead of ~10¹⁰ m', () => {
+    const out = analyseSection(bump(1e-3, 10_000, 4000));
+    if (!out.ok) throw new Error(out.problems[0].message);
+    const h = out.analysis.horizons[0];
+    expect(h.excessArea).toBeCloseTo(1e-3 * 10_000 / 2, 9);
+    expect(h.chamberlinDepth).toBeNull();
+    expect(h.chamberlinReason).toMatch(/^not meaningful: the bed is only 2\.5e-10 m longer than its regional, less than the 1\.0e-6 m the digitising resolves$/);
+    expect(out.analysis.notes.some((n) => n.startsWith('No Chamberlin depth for "Bump": not meaningful'))).toBe(true);
+  });
+
+  it('a bump large enough to digitise keeps its depth A / (L − W) from the same sums', () => {
+    // a = 200 m over λ = 10 km: L − W ≈ a²π²/(4λ) = 9.87 m (plus O(a⁴) terms), A = aλ/2 = 10⁶ m².
+    const out = analyseSection({ ...bump(200, 10_000, 4000), resolution: 2.5 });
+    if (!out.ok) throw new Error(out.problems[0].message);
+    const h = out.analysis.horizons[0];
+    expect(h.chamberlinReason).toBeNull();
+    expect(h.chamberlinDepth! * (h.bedLength - h.regionalLength)).toBeCloseTo(h.excessArea, 3);
+    expect(h.chamberlinDepth!).toBeGreaterThan(1e6 / 9.87 * 0.99);
+    expect(h.chamberlinDepth!).toBeLessThan(1e6 / 9.87 * 1.01);
   });
 });
 

@@ -44,9 +44,9 @@ describe('uncertaintyReport', () => {
     expect(r.status).toBe('current');
     const text = r.lines.join('\n');
     expect(text).toContain('Monte Carlo run of the state shown.');
-    expect(text).toContain('below the reference at elevation 500 m: P10 1,900 · P50 2,000 · P90 2,150 m (σ 95.5 m)');
+    expect(text).toContain('below the reference at elevation 500 m: P10 1900 · P50 2000 · P90 2150 m (σ 95.5 m)');
     // Negative numbers in the report's text take the minus sign U+2212 (Unicode "MINUS SIGN").
-    expect(text).toContain('Detachment elevation: P10 \u22121,650 · P50 \u22121,500 · P90 \u22121,400 m');
+    expect(text).toContain('Detachment elevation: P10 \u22121650 · P50 \u22121500 · P90 \u22121400 m');
     expect(text).not.toMatch(/(^|[^\w])-\d/);
     expect(text).toContain('Displacement: P10 90 · P50 100 · P90 110 m');
     expect(text).toContain('2000 runs, seed 7');

@@ -22,7 +22,7 @@ describe('pinValueProblem(side, x, other, extent, unit)', () => {
   });
 
   it('refuses absurd values such as 1e99 and non-finite ones', () => {
-    expect(pinValueProblem('right', 1e99, 1000, scan, 'm')).toMatch(/^x = 1e\+99 m is far outside the scan \(allowed −81000 to 99000 m\)$/);
+    expect(pinValueProblem('right', 1e99, 1000, scan, 'm')).toMatch(/^x = 1e99 m is far outside the scan \(allowed −81000 to 99000 m\)$/);
     expect(pinValueProblem('left', -1e99, 17_000, scan, 'm')).toMatch(/far outside the scan/);
     expect(pinValueProblem('left', Number.NaN, 17_000, scan, 'm')).toMatch(/finite/);
     expect(pinValueProblem('left', Number.POSITIVE_INFINITY, null, null, 'px')).toMatch(/finite/);

@@ -1,23 +1,6 @@
+// Histogram bins of the Monte Carlo pane: every finite value counted once, 1-2-5 widths (common practice for chart axes).
 import { describe, expect, it } from 'vitest';
-import { areaUnit, formatArea, formatLength, formatNumber, formatPercent } from '../../src/panels/interpretation/formatValue';
 import { histogramBins } from '../../src/panels/interpretation/histogramBins';
-
-describe('formatValue', () => {
-  it('puts the number first, then the unit, with an ASCII minus and no "-0"', () => {
-    expect(formatLength(-2500.4, 'm')).toBe('-2500 m');
-    expect(formatLength(-0.2, 'm')).toBe('0 m');
-    expect(formatLength(null, 'ft')).toBe('—');
-    expect(formatNumber(0.99812, 4)).toBe('0.9981');
-    expect(formatPercent(0.1234)).toBe('12.3 %');
-  });
-
-  it('shows large metre areas in km² and small ones in m²', () => {
-    const u = areaUnit('m', 2.5e6);
-    expect(formatArea(2.5e6, u)).toBe('2.500 km²');
-    expect(areaUnit('m', 5000).label).toBe('m²');
-    expect(areaUnit('ft', 3e7).label).toBe('10⁶ ft²');
-  });
-});
 
 describe('histogramBins(values, target)', () => {
   it('counts every finite value once in bins of a 1-2-5 width', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { niceDomain, niceStep, niceTicks } from '../../src/panels/interpretation/niceTicks';
+import { niceDomain, niceStep, niceTicks } from '../../src/format/niceTicks';
 
 describe('niceTicks(min, max, target)', () => {
   // Common practice for chart axes: steps of 1, 2 or 5 times a power of ten.
