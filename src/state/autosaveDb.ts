@@ -3,6 +3,7 @@
 // The factory is a parameter so tests run against fake-indexeddb.
 import { checkProjectDoc } from '../core/model/projectSchema';
 import type { ProjectDoc } from '../core/model/projectDoc';
+import { packDoc, unpackDoc } from './autosavePack';
 
 const DB_NAME = 'foldroot-autosave';
 const DB_VERSION = 1;
@@ -52,7 +53,8 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
 export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   const tx = db.transaction([STATE, SCANS], 'readwrite');
   const finished = done(tx);
-  tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: snap.doc, dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
+  // Lines packed into typed arrays (autosavePack): the browser copies each as one block.
+  tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
     const scans = tx.objectStore(SCANS);
     scans.clear();
@@ -66,7 +68,8 @@ export async function readSnapshot(db: IDBDatabase): Promise<AutosaveSnapshot | 
   const tx = db.transaction([STATE, SCANS], 'readonly');
   const state = (await request(tx.objectStore(STATE).get(CURRENT))) as { savedAt?: unknown; doc?: unknown; dirty?: unknown; scanId?: unknown } | undefined;
   if (!state) return null;
-  const checked = checkProjectDoc(state.doc);
+  // Packed lines are unpacked first; a snapshot kept before packing has plain lines and passes as it is.
+  const checked = checkProjectDoc(unpackDoc(state.doc));
   if (!checked.ok) return null;
   let scan: StoredScan | null = null;
   if (typeof state.scanId === 'string') {
