@@ -93,10 +93,15 @@ export function fitCalibration(cal: Calibration): CalibrationFit {
   if (!solved) return { ok: false, message: 'The control points are collinear or repeated: spread at least three across the scan.' };
   const { a, b } = solved;
   const det = a[1] * b[2] - a[2] * b[1];
-  const pxPerUnit = Math.sqrt(1 / Math.abs(det));
+  // The misfit in pixels is the section-unit misfit (dx, dz) taken back through the inverse of the fitted
+  // mapping, (du, dv) = J⁻¹ (dx, dz) with J = [[a1, a2], [b1, b2]]: one scale for both directions (such as
+  // the geometric mean √|det⁻¹|) is wrong by √VE in each direction once the vertical exaggeration is not 1.
   const residuals = cal.points.map((p, i) => {
-    const r = Math.hypot(a[0] + a[1] * p.u + a[2] * p.v - p.x, b[0] + b[1] * p.u + b[2] * p.v - p.z);
-    return { index: i, axis: 'xz' as const, residual: r, residualPx: r * pxPerUnit };
+    const dx = a[0] + a[1] * p.u + a[2] * p.v - p.x;
+    const dz = b[0] + b[1] * p.u + b[2] * p.v - p.z;
+    const du = (b[2] * dx - a[2] * dz) / det;
+    const dv = (a[1] * dz - b[1] * dx) / det;
+    return { index: i, axis: 'xz' as const, residual: Math.hypot(dx, dz), residualPx: Math.hypot(du, dv) };
   });
   const xs = cal.points.map((p) => p.x);
   const zs = cal.points.map((p) => p.z);

@@ -77,6 +77,28 @@ describe('fitCalibration (affine)', () => {
     expect(r.fit.worstRelativeResidual).toBeCloseTo(5 / 10_008, 12);
   });
 
+  it('fitCalibration(affine) gives each misfit in pixels along each axis at 2:1 vertical exaggeration (hand-computed)', () => {
+    // Scan at 1 m per pixel across and 0.5 m per pixel down (2 px per m of z: vertical exaggeration 2), x = u,
+    // z = −v/2, corners of a 100 px square. One corner's typed value is off by δ = 8 m in x (then in z). For the
+    // four corners of a square the affine fit's hat matrix has h_ii = 3/4 and leaves only the contrast
+    // (1, −1, −1, 1)/2, so every corner keeps a misfit of δ/4 = 2 m along that axis, and the fitted scale on that
+    // axis grows by δ/(2·100) = 0.04 m/px (worked by hand; standard least-squares algebra). Back in pixels:
+    // 2 m across at 1.04 m/px = 25/13 px; 2 m of z at 0.46 m/px = 100/23 px. One scale for both (the geometric
+    // mean, √(1/|det|)) would say 2.77 and 2.95 px instead.
+    const pixels: [number, number][] = [[0, 0], [100, 0], [0, 100], [100, 100]];
+    const exact = fitCalibration({ kind: 'affine', points: pixels.map(([u, v]) => ({ u, v, x: u, z: -v / 2 })) });
+    expect(exact.ok && exact.fit.verticalExaggeration).toBeCloseTo(2, 12);
+    for (const [axis, expectedPx] of [['x', 25 / 13], ['z', 100 / 23]] as const) {
+      const points = pixels.map(([u, v], i) => ({ u, v, x: u + (axis === 'x' && i === 3 ? 8 : 0), z: -v / 2 + (axis === 'z' && i === 3 ? 8 : 0) }));
+      const r = fitCalibration({ kind: 'affine', points });
+      if (!r.ok) throw new Error(r.message);
+      for (const res of r.fit.residuals) {
+        expect(res.residual).toBeCloseTo(2, 9);
+        expect(res.residualPx).toBeCloseTo(expectedPx, 9);
+      }
+    }
+  });
+
   it('fitCalibration(affine) refuses collinear or too few points with a message', () => {
     const line = [0, 1, 2].map((k) => ({ u: 100 * k, v: 50 * k, x: 10 * k, z: 5 * k }));
     const r = fitCalibration({ kind: 'affine', points: line });
