@@ -113,7 +113,7 @@ function SelectedHorizon({ h }: { h: DocHorizon }) {
       </div>
       <div className="button-row">
         <button type="button" data-testid="propose-regional" disabled={!hasPins}
-          title="A straight regional through the horizon's lowest points near each pin; adjust it with the Regional tool"
+          title="A straight regional through the horizon's level at each pin: a robust (Theil–Sen) line through its vertices within 15 % of the pin width of that pin; adjust it with the Regional tool"
           onClick={() => {
             const before = useDocStore.getState().doc;
             apply((d) => proposeRegional(d, h.id));
