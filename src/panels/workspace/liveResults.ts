@@ -96,6 +96,6 @@ export function liveResults(doc: ProjectDoc): LiveResults {
     displacement: quick ? quick.displacement : null,
     noDetachment: quick?.noDetachment ?? false,
     referenceElevation: zref,
-    note: !quick ? 'Include at least two horizons at different depths for an area–depth line.' : quick.noDetachment ? 'No detachment below these horizons: excess area does not decrease with depth.' : null,
+    note: !quick ? 'Include at least two horizons at different depths for an area–depth line.' : quick.noDetachment ? 'No detachment below these horizons: the area–depth line does not reach zero area below the deepest one.' : null,
   };
 }
