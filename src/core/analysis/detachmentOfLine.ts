@@ -1,6 +1,6 @@
 // Where the area–depth line A = a + b·h puts the detachment (Epard & Groshong 1993 for
 // shortening; Groshong 1994, Tectonics 13, for extension, whose "lost area" below the regional
-// is negative A; docs/method.md, "Area–depth"). A = D·(zd − h) holds for either sign of D, so the
+// is negative A; docs/method.md §Area-depth line). A = D·(zd − h) holds for either sign of D, so the
 // detachment is the zero crossing zd = −a/b whenever that lies below the deepest horizon in the
 // fit, whatever the sign of the slope: shortening when D = −b > 0, extension when D < 0. A zero
 // slope, or a zero crossing at or above the deepest horizon, is "no detachment below these horizons".

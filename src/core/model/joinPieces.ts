@@ -4,7 +4,7 @@ import type { Allocate, PointArrays } from './readPoints';
 import type { XZ } from './section';
 import type { SectionProblem } from './sectionProblem';
 
-// A horizon cut by faults is measured along its joined line (docs/method.md, "Faults and pieces";
+// A horizon cut by faults is measured along its joined line (docs/method.md §Faults and horizons in pieces;
 // Epard & Groshong 1993 for area balance across fault-related folds): each piece in order, and
 // between the end of one piece and the start of the next (the two cutoffs, both on one fault)
 // the fault's own trace, in whichever direction it runs. A thrust repeat makes the joined line

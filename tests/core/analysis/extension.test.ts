@@ -4,7 +4,7 @@ import { evaluateShifted } from '../../../src/core/analysis/evaluateShifted';
 import { prepareSection } from '../../../src/core/analysis/prepareSection';
 import { regionalAmplification, regionalSensitivity } from '../../../src/core/analysis/sensitivity';
 import type { Section } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 import { methodExample, triangleHorizon } from './sections';
 
 // Extension (Groshong 1994, Tectonics 13: "lost area" below the regional): A = D·(zd − h) with D < 0.
@@ -56,13 +56,13 @@ describe('extension: negative areas and D < 0', () => {
   });
 
   it('follows zd\' = zd − δ(1 + W0/D) for either sign of D (amplification 1 + W0/D = −9 for D = −1000 m)', () => {
-    // Closed form of docs/method.md "Sensitivity to the regional" (our derivation, exact for flat regionals).
+    // Closed form of docs/method.md §Sensitivity to the regional (our derivation, exact for flat regionals).
     for (const [make, D] of [[extensionExample, -1000], [methodExample, 1000]] as const) {
       const p = prepareSection(make());
       if (!p.ok) throw new Error('unexpected problems');
       const offsets = [-50, 0, 40, 80];
       const sweep = regionalSensitivity(p.prepared, { offsets, tilts: [] });
-      sweep.offsets.forEach((pt, i) => expectClose(pt.depth!, 3000 - offsets[i] * (1 + 10_000 / D), 1e-10, 1e-9));
+      sweep.offsets.forEach((pt, i) => expectClose(pt.depth!, 3000 - offsets[i] * (1 + 10_000 / D), 1e-10, { abs: 1e-9 }));
       expectClose(regionalAmplification(10_000, sweep.base)!, 1 + 10_000 / D, 1e-12);
     }
   });

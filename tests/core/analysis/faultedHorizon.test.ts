@@ -2,10 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
 import { selfIntersections } from '../../../src/core/geometry/selfIntersections';
 import type { Section, XZ } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 
 // A horizon in pieces is measured along its joined line: pieces in order, joined along the fault
-// between the cutoffs (docs/method.md, "Faults and pieces"; Epard & Groshong 1993).
+// between the cutoffs (docs/method.md §Faults and horizons in pieces; Epard & Groshong 1993).
 
 /**
  * A small Z-shaped thrust repeat, pins [0, 10], regional z = 0, fault z = x − 4:

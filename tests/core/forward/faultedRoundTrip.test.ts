@@ -3,10 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { faultedSection, type FaultedSpec } from '../../../src/core/forward/faultedSection';
 import type { XZ } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 
 // Forward model of a faulted section (vertical simple shear over a ramp-flat fault; Gibbs 1983,
-// J. Struct. Geol. 5, for the construction; exactness our derivation, docs/method.md "Forward model"):
+// J. Struct. Geol. 5, for the construction; exactness our derivation, docs/method.md §Forward models):
 // every horizon's excess area is D·(z_r − zd), so the area–depth line must return D and zd (Epard &
 // Groshong 1993 for shortening, Groshong 1994 for extension) to rounding.
 
@@ -32,7 +32,7 @@ describe('faulted forward model, round trip through the analysis', () => {
           // Heave and throw between the two cutoffs the model put on the fault (either digitising order).
           const [fw, hw] = [truth.horizons[i].footwallCutoff, truth.horizons[i].hangingWallCutoff];
           expectClose(h.cutoffs[0].heave, Math.abs(hw[0] - fw[0]), 1e-12);
-          expectClose(h.cutoffs[0].throw, Math.abs(hw[1] - fw[1]), 1e-12, 1e-9);
+          expectClose(h.cutoffs[0].throw, Math.abs(hw[1] - fw[1]), 1e-12, { abs: 1e-9 });
         });
         expectClose(a.areaDepth!.displacement, D, 1e-9);
         expectClose(a.areaDepth!.detachmentElevation!, truth.detachmentElevation, 1e-9);
@@ -72,7 +72,7 @@ describe('faulted forward model, round trip through the analysis', () => {
       const { section, truth } = faultedSection({ units: 'm', pins: [0, 30000], displacement: disp, fault, horizons, rightToLeft });
       const out = analyseSection(section);
       if (!out.ok) throw new Error(out.problems.map((p) => p.message).join('\n'));
-      out.analysis.horizons.forEach((h, i) => expectClose(h.excessArea, truth.horizons[i].excessArea, 1e-9, 1e-6));
+      out.analysis.horizons.forEach((h, i) => expectClose(h.excessArea, truth.horizons[i].excessArea, 1e-9, { abs: 1e-6 }));
       expectClose(out.analysis.areaDepth!.displacement, disp, 1e-8);
       expectClose(out.analysis.areaDepth!.detachmentElevation!, zd, 1e-8);
     }));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { nearestOnPolyline } from '../../../src/core/geometry/nearestOnPolyline';
-import { expectClose } from './close';
+import { expectClose } from '../../expectClose';
 
 // Analytic: the nearest point of a segment is the foot of the perpendicular, clamped to the segment
 // (common practice in computational geometry, recalled from memory).
