@@ -1,0 +1,37 @@
+// Moves each pixel of a traced path onto the centre of the line it follows, across the path's local
+// direction, so the vertices sit at sub-pixel precision on the ink (or on a colour boundary) rather than on
+// the pixel grid the search works on.
+import { centreAcross } from './centreAcross';
+import type { PixelFeatures } from './pixelFeatures';
+import { rasterCentre, type Raster } from './raster';
+
+/** Pixels either side along the path that set its local direction. */
+const DIRECTION_SPAN = 3;
+
+/**
+ * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
+ * normal of the path's local direction to the line centre found in `f` (centreAcross). A path of one pixel comes
+ * back as that pixel's centre; an empty path as [].
+ */
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures): [number, number][] {
+  const pts = path.map((k) => rasterCentre(r, k));
+  const n = pts.length;
+  if (n < 2) return pts;
+  const out: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    const a = pts[Math.max(0, i - DIRECTION_SPAN)];
+    const b = pts[Math.min(n - 1, i + DIRECTION_SPAN)];
+    const tx = b[0] - a[0];
+    const ty = b[1] - a[1];
+    const len = Math.hypot(tx, ty);
+    if (!(len > 0)) {
+      out.push(pts[i]);
+      continue;
+    }
+    const nx = -ty / len;
+    const ny = tx / len;
+    const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny);
+    out.push([pts[i][0] + o * nx, pts[i][1] + o * ny]);
+  }
+  return out;
+}

@@ -1,0 +1,34 @@
+// One traced stretch, from the tree of its first anchor to its second: the least-cost pixel path, moved
+// onto the line centre and simplified, ending exactly on both anchors so consecutive stretches join.
+import type { PixelFeatures } from './pixelFeatures';
+import { pathToSource, type PathTree } from './shortestPathTree';
+import { refineToCentre } from './refineToCentre';
+import { simplifyPolyline } from './simplifyPolyline';
+
+/** Douglas–Peucker tolerance for traced stretches, in image px: well under a pixel, so the simplified line stays on the ink. */
+export const TRACE_TOLERANCE_PX = 0.3;
+
+/** Returns the window pixel index holding image point (x, y), or −1 outside the window. */
+export function pixelIndexAt(f: { x0: number; y0: number; w: number; h: number }, x: number, y: number): number {
+  const i = Math.floor(x - f.x0);
+  const j = Math.floor(y - f.y0);
+  return i < 0 || j < 0 || i >= f.w || j >= f.h ? -1 : j * f.w + i;
+}
+
+/**
+ * Returns the traced stretch from `from` (the tree's source pixel holds it) to `to`, in image px: first point
+ * `from`, last point `to`, the vertices between on the line centre, simplified to `tol`. Returns null when `to`
+ * lies outside the tree's window or cannot be reached.
+ */
+export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [number, number], to: readonly [number, number], tol = TRACE_TOLERANCE_PX): [number, number][] | null {
+  const target = pixelIndexAt(f, to[0], to[1]);
+  if (target < 0) return null;
+  const path = pathToSource(tree, target);
+  if (path.length === 0) return null;
+  const pts = refineToCentre(path, f, f);
+  // The ends are the anchors themselves (already on the line centre when snapped).
+  pts[0] = [from[0], from[1]];
+  if (pts.length === 1) pts.push([to[0], to[1]]);
+  else pts[pts.length - 1] = [to[0], to[1]];
+  return simplifyPolyline(pts, tol);
+}
