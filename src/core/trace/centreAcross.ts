@@ -15,7 +15,7 @@ const STEP = 0.5;
 /**
  * Returns the signed offset (image px, along the unit normal (nx, ny)) of the line centre from (x, y): the centroid of
  * the darkness above the profile's brighter end when the profile shows an ink ridge, else of the edge strength above
- * its minimum when it shows a boundary; 0 when it shows neither. The offset is at most PROFILE_HALF_PX either way.
+ * its minimum when it shows a boundary; NaN when it shows neither. The offset is at most PROFILE_HALF_PX either way.
  */
 export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number, ny: number, half = PROFILE_HALF_PX): number {
   const m = Math.round(half / STEP);
@@ -38,7 +38,7 @@ export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number,
   }
   const edgeBase = Math.max(eMin, Math.min(edge[0], edge[2 * m]));
   if (ePeak - edgeBase >= EDGE_CONTRAST) return centroid(edge, edgeBase, m);
-  return 0;
+  return NaN;
 }
 
 function centroid(values: number[], base: number, m: number): number {

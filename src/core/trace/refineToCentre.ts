@@ -10,13 +10,15 @@ const DIRECTION_SPAN = 3;
 
 /**
  * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
- * normal of the path's local direction to the line centre found in `f` (centreAcross). A path of one pixel comes
- * back as that pixel's centre; an empty path as [].
+ * normal of the path's local direction to the line centre found in `f` (centreAcross), and the fraction of them that
+ * found a line there (the others keep their pixel centre). A path of one pixel comes back as that pixel's centre
+ * (fraction 1); an empty path as no points (fraction 0).
  */
-export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures): [number, number][] {
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures): { points: [number, number][]; onLine: number } {
   const pts = path.map((k) => rasterCentre(r, k));
   const n = pts.length;
-  if (n < 2) return pts;
+  if (n < 2) return { points: pts, onLine: n };
+  let found = 0;
   const out: [number, number][] = [];
   for (let i = 0; i < n; i++) {
     const a = pts[Math.max(0, i - DIRECTION_SPAN)];
@@ -31,7 +33,12 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
     const nx = -ty / len;
     const ny = tx / len;
     const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny);
+    if (Number.isNaN(o)) {
+      out.push(pts[i]);
+      continue;
+    }
+    found++;
     out.push([pts[i][0] + o * nx, pts[i][1] + o * ny]);
   }
-  return out;
+  return { points: out, onLine: found / n };
 }

@@ -7,6 +7,8 @@ import { simplifyPolyline } from './simplifyPolyline';
 
 /** Douglas–Peucker tolerance for traced stretches, in image px: well under a pixel, so the simplified line stays on the ink. */
 export const TRACE_TOLERANCE_PX = 0.3;
+/** Fraction of a path that must lie on a line (ink or boundary) for it to be followed; below it the stretch is straight. */
+export const MIN_ON_LINE = 0.6;
 
 /** Returns the window pixel index holding image point (x, y), or −1 outside the window. */
 export function pixelIndexAt(f: { x0: number; y0: number; w: number; h: number }, x: number, y: number): number {
@@ -17,15 +19,17 @@ export function pixelIndexAt(f: { x0: number; y0: number; w: number; h: number }
 
 /**
  * Returns the traced stretch from `from` (the tree's source pixel holds it) to `to`, in image px: first point
- * `from`, last point `to`, the vertices between on the line centre, simplified to `tol`. Returns null when `to`
- * lies outside the tree's window or cannot be reached.
+ * `from`, last point `to`, the vertices between on the line centre, simplified to `tol`. Where the path finds no
+ * drawn line along most of its length (less than MIN_ON_LINE: bare paper, a smooth tone) the stretch is straight,
+ * [from, to]: there is nothing to follow. Returns null when `to` lies outside the tree's window or cannot be reached.
  */
 export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [number, number], to: readonly [number, number], tol = TRACE_TOLERANCE_PX): [number, number][] | null {
   const target = pixelIndexAt(f, to[0], to[1]);
   if (target < 0) return null;
   const path = pathToSource(tree, target);
   if (path.length === 0) return null;
-  const pts = refineToCentre(path, f, f);
+  const { points: pts, onLine } = refineToCentre(path, f, f);
+  if (onLine < MIN_ON_LINE) return [[from[0], from[1]], [to[0], to[1]]];
   // The ends are the anchors themselves (already on the line centre when snapped).
   pts[0] = [from[0], from[1]];
   if (pts.length === 1) pts.push([to[0], to[1]]);

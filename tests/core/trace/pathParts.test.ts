@@ -113,6 +113,12 @@ describe('line centre at sub-pixel precision', () => {
     expect(Math.hypot(snapped![0] - 25.6, snapped![1] - 17.4)).toBeLessThan(0.15);
   });
 
+  it('finds no line across bare paper (NaN, not a made-up centre)', () => {
+    const scan = renderScan({ w: 30, h: 30, paper, angleRad: 0, noise: 4, seed: 8, layers: [] });
+    const f = pixelFeatures(scan.rgba, scan.w, scan.h, 0, 0);
+    expect(centreAcross(f, 15, 15, 0, 1)).toBeNaN();
+  });
+
   it('leaves a click on bare paper alone', () => {
     const scan = renderScan({ w: 30, h: 30, paper, angleRad: 0, noise: 4, seed: 9, layers: [] });
     const f = pixelFeatures(scan.rgba, scan.w, scan.h, 0, 0);

@@ -57,6 +57,15 @@ describe('tracing a drawn line (live-wire over darkness and colour edges)', () =
     expect(max).toBeLessThan(1);
   });
 
+  it('runs straight where nothing is drawn: a smooth tone is not a line', () => {
+    // Analytic: on a scan with no line the stretch is the chord itself, two points.
+    const spec: ScanSpec = { w: 300, h: 120, paper, angleRad: 0, noise: 0, seed: 1, layers: [] };
+    const scan = renderScan(spec);
+    for (let y = 0; y < scan.h; y++) for (let x = 0; x < scan.w; x++) for (let c = 0; c < 3; c++) scan.rgba[(y * scan.w + x) * 4 + c] = Math.round(40 + (x / scan.w) * 180 + (y / scan.h) * 30);
+    const f = featuresOf(scan);
+    expect(traceThrough(scan, f, [[20.5, 30.5], [280.5, 90.5]])).toEqual([[20.5, 30.5], [280.5, 90.5]]);
+  });
+
   it('bridges a gap in the ink and stays on the line either side', () => {
     const curve = sineCurve(100, 20, 500, 0.5);
     const gapFrom = 290;
