@@ -261,6 +261,7 @@ async function main(): Promise<void> {
   } finally {
     server.kill();
   }
+  execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
 }
 
 main().catch((e) => {

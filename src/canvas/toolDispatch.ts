@@ -118,6 +118,9 @@ function execute(commands: ToolCommand[]): void {
       case 'message':
         useSessionStore.getState().showMessage(c.kind, c.text);
         break;
+      case 'clearMessage':
+        useSessionStore.getState().clearMessage();
+        break;
     }
   }
 }

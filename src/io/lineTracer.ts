@@ -18,7 +18,7 @@ const PATHS_KEPT = 256;
 /** Trees the worker keeps; the same number as its session keeps. */
 const TREES_KEPT = 4;
 
-interface TreeRef { id: number; from: ImagePx; win: Raster; ready: boolean }
+interface TreeRef { id: number; from: ImagePx; win: Raster }
 
 const keyOf = (from: ImagePx, to: ImagePx) => `${from[0]},${from[1]}|${to[0]},${to[1]}`;
 
@@ -29,6 +29,7 @@ export class ScanLineTracer {
   /** The tree asked for while another is being built: only the latest is kept. */
   private wanted: { from: ImagePx; win: Raster } | null = null;
   private building = false;
+  private chain: Promise<void> = Promise.resolve();
   private tiles = new Map<string, true>();
   private paths = new Map<string, ImagePx[]>();
   private asked = new Set<string>();
@@ -67,25 +68,39 @@ export class ScanLineTracer {
     return q ? [q[0], q[1]] : null;
   }
 
-  /** Returns the traced stretch from `from` to `to` when ready (first point `from`, last `to`), else null and starts it. */
-  stretch(from: ImagePx, to: ImagePx): ImagePx[] | null {
+  /**
+   * Returns the traced stretch from `from` to `to` when ready (first point `from`, last `to`), else null and starts it:
+   * a placed stretch (`placed`) by a search that stops at `to`; a preview by the anchor's tree, which then answers
+   * later pointer positions at once.
+   */
+  stretch(from: ImagePx, to: ImagePx, placed = false): ImagePx[] | null {
     const key = keyOf(from, to);
     const done = this.paths.get(key);
     if (done) return done;
-    const inside = (p: ImagePx) => p[0] >= 0 && p[1] >= 0 && p[0] <= this.bitmap.width && p[1] <= this.bitmap.height;
+    const W = this.bitmap.width;
+    const H = this.bitmap.height;
+    const inside = (p: ImagePx) => p[0] >= 0 && p[1] >= 0 && p[0] <= W && p[1] <= H;
     // Off the scan, or no length to follow: a straight stretch.
     if (!inside(from) || !inside(to) || Math.hypot(to[0] - from[0], to[1] - from[1]) < 1.5) return [from, to];
     if (this.closed) return [from, to];
-    const tree = [...this.trees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to));
+    if (this.asked.has(key)) return null;
+    const tree = [...this.trees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H));
     if (tree) {
-      if (!this.asked.has(key)) {
-        this.asked.add(key);
-        this.post({ type: 'path', id: tree.id, key, to: [to[0], to[1]] });
-      }
+      this.asked.add(key);
+      this.post({ type: 'path', id: tree.id, key, to: [to[0], to[1]] });
       return null;
     }
-    this.wanted = { from, win: traceWindow(from, to, this.bitmap.width, this.bitmap.height) };
-    void this.pump();
+    const win = traceWindow(from, to, W, H);
+    if (placed) {
+      this.asked.add(key);
+      this.enqueue(async () => {
+        const tileKeys = await this.sendTiles(win);
+        this.post({ type: 'once', key, from: [from[0], from[1]], to: [to[0], to[1]], win, tileKeys });
+      });
+      return null;
+    }
+    this.wanted = { from, win };
+    this.pumpTree();
     return null;
   }
 
@@ -93,48 +108,63 @@ export class ScanLineTracer {
     this.worker.postMessage(m, transfer);
   }
 
-  /** Sends the wanted tree (its missing tiles first) when no other is being built. */
-  private async pump(): Promise<void> {
+  /** Runs sends one after another, so the worker gets every tile before the request that needs it. */
+  private enqueue(job: () => Promise<void>): void {
+    this.chain = this.chain.then(job).catch((err: unknown) => console.error(`Line tracing: ${err instanceof Error ? err.message : String(err)}`));
+  }
+
+  /** Sends the window's tiles the worker lacks (each one pixel wider where the image allows); returns the window's tile keys. */
+  private async sendTiles(win: Raster): Promise<string[]> {
+    const W = this.bitmap.width;
+    const H = this.bitmap.height;
+    const tiles = tilesOver(win, W, H);
+    for (const t of tiles) {
+      if (this.tiles.has(t.key)) {
+        this.tiles.delete(t.key);
+        this.tiles.set(t.key, true);
+        continue;
+      }
+      const cx0 = Math.max(0, t.x0 - 1);
+      const cy0 = Math.max(0, t.y0 - 1);
+      const crop = { x0: cx0, y0: cy0, w: Math.min(W, t.x0 + t.w + 1) - cx0, h: Math.min(H, t.y0 + t.h + 1) - cy0 };
+      const bitmap = await createImageBitmap(this.bitmap, crop.x0, crop.y0, crop.w, crop.h);
+      if (this.closed) return [];
+      this.post({ type: 'tile', key: t.key, tile: { x0: t.x0, y0: t.y0, w: t.w, h: t.h }, crop, bitmap }, [bitmap]);
+      this.tiles.set(t.key, true);
+    }
+    // Past the cap, forget the least recently used tiles that this window does not need.
+    const need = new Set(tiles.map((t) => t.key));
+    const drop: string[] = [];
+    for (const k of this.tiles.keys()) {
+      if (this.tiles.size - drop.length <= TILES_KEPT) break;
+      if (!need.has(k)) drop.push(k);
+    }
+    if (drop.length > 0) {
+      for (const k of drop) this.tiles.delete(k);
+      this.post({ type: 'drop', keys: drop });
+    }
+    return tiles.map((t) => t.key);
+  }
+
+  /** Sends the wanted tree when no other is being built (only the latest wanted is kept). */
+  private pumpTree(): void {
     if (this.building || !this.wanted || this.closed) return;
     const { from, win } = this.wanted;
     this.wanted = null;
     this.building = true;
-    const tiles = tilesOver(win, this.bitmap.width, this.bitmap.height);
-    const W = this.bitmap.width;
-    const H = this.bitmap.height;
-    try {
-      for (const t of tiles) {
-        if (this.tiles.has(t.key)) {
-          this.tiles.delete(t.key);
-          this.tiles.set(t.key, true);
-          continue;
-        }
-        const cx0 = Math.max(0, t.x0 - 1);
-        const cy0 = Math.max(0, t.y0 - 1);
-        const crop = { x0: cx0, y0: cy0, w: Math.min(W, t.x0 + t.w + 1) - cx0, h: Math.min(H, t.y0 + t.h + 1) - cy0 };
-        const bitmap = await createImageBitmap(this.bitmap, crop.x0, crop.y0, crop.w, crop.h);
+    this.enqueue(async () => {
+      try {
+        const tileKeys = await this.sendTiles(win);
         if (this.closed) return;
-        this.post({ type: 'tile', key: t.key, tile: { x0: t.x0, y0: t.y0, w: t.w, h: t.h }, crop, bitmap }, [bitmap]);
-        this.tiles.set(t.key, true);
+        const id = this.nextId++;
+        this.trees.push({ id, from, win });
+        while (this.trees.length > TREES_KEPT) this.trees.shift();
+        this.post({ type: 'tree', id, from: [from[0], from[1]], win, tileKeys });
+      } catch (err) {
+        this.building = false;
+        throw err;
       }
-      // Past the cap, forget the least recently used tiles that this window does not need.
-      const need = new Set(tiles.map((t) => t.key));
-      const drop: string[] = [];
-      for (const k of this.tiles.keys()) {
-        if (this.tiles.size - drop.length <= TILES_KEPT) break;
-        if (!need.has(k)) drop.push(k);
-      }
-      if (drop.length > 0) {
-        for (const k of drop) this.tiles.delete(k);
-        this.post({ type: 'drop', keys: drop });
-      }
-      const id = this.nextId++;
-      this.trees.push({ id, from, win, ready: false });
-      while (this.trees.length > TREES_KEPT) this.trees.shift();
-      this.post({ type: 'tree', id, from: [from[0], from[1]], win, tileKeys: tiles.map((t) => t.key) });
-    } catch {
-      this.building = false;
-    }
+    });
   }
 
   private receive(m: TraceWorkerReply): void {
@@ -142,15 +172,14 @@ export class ScanLineTracer {
     if (m.type === 'treeDone') {
       this.building = false;
       this.bytesHeld = m.bytesHeld;
-      const t = this.trees.find((k) => k.id === m.id);
-      if (t) t.ready = true;
-      void this.pump();
+      this.pumpTree();
     } else if (m.type === 'path') {
       this.asked.delete(m.key);
       if (m.points) {
         this.paths.set(m.key, m.points);
         while (this.paths.size > PATHS_KEPT) this.paths.delete(this.paths.keys().next().value as string);
       } else {
+        // That tree is no longer kept: the next ask builds another.
         this.trees = this.trees.filter((t) => t.id !== m.id);
       }
     } else {

@@ -28,8 +28,11 @@ export type CalibrationPick = 'points' | 'xPoints' | 'zPoints';
 export interface LineTracer {
   /** Returns the line centre within `radiusPx` image px of `p` (sub-pixel), or null where no line is drawn. */
   snap(p: ImagePx, radiusPx: number): ImagePx | null;
-  /** Returns the traced stretch from `from` to `to` (first point `from`, last `to`, image px) when ready, else null and starts it. */
-  stretch(from: ImagePx, to: ImagePx): ImagePx[] | null;
+  /**
+   * Returns the traced stretch from `from` to `to` (first point `from`, last `to`, image px) when ready, else null and
+   * starts it; `placed` for a stretch whose anchor is placed (computed first), not a preview to the pointer.
+   */
+  stretch(from: ImagePx, to: ImagePx, placed?: boolean): ImagePx[] | null;
 }
 
 export interface ToolContext {
@@ -67,7 +70,9 @@ export type ToolCommand =
   | { type: 'select'; horizonId: string | null }
   | { type: 'focusCalibrationPoint'; ref: CalibrationPointRef }
   | { type: 'preview'; preview: ToolPreview | null }
-  | { type: 'message'; kind: 'error' | 'info'; text: string };
+  | { type: 'message'; kind: 'error' | 'info'; text: string }
+  /** Takes down the message shown (one the tool showed while waiting). */
+  | { type: 'clearMessage' };
 
 export interface ToolResult<S> { next?: S; commands?: ToolCommand[] }
 

@@ -32,7 +32,7 @@ export function addAnchor(line: TracedLine, p: ImagePx, ctx: ToolContext, alt: b
   const last = line.anchors[line.anchors.length - 1];
   if (Math.hypot(last[0] - q[0], last[1] - q[1]) < 1e-9) return null;
   const straight = !follows(ctx, alt);
-  const points = straight ? null : (ctx.tracer?.stretch(last, q) ?? null);
+  const points = straight ? null : (ctx.tracer?.stretch(last, q, true) ?? null);
   return { anchors: [...line.anchors, q], stretches: [...line.stretches, { straight, points }] };
 }
 
@@ -41,7 +41,7 @@ export function resolveStretches(line: TracedLine, ctx: ToolContext): TracedLine
   let changed = false;
   const stretches = line.stretches.map((s, i) => {
     if (s.straight || s.points || !ctx.tracer) return s;
-    const points = ctx.tracer.stretch(line.anchors[i], line.anchors[i + 1]);
+    const points = ctx.tracer.stretch(line.anchors[i], line.anchors[i + 1], true);
     if (!points) return s;
     changed = true;
     return { straight: false, points };

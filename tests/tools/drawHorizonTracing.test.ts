@@ -48,6 +48,8 @@ describe('drawHorizonTool with a line tracer', () => {
     expect(t.doc.horizons).toHaveLength(2);
     expect(t.doc.horizons[1].pointsPx.length).toBe(31);
     expect(t.state.name).toBe('idle');
+    // The waiting note is taken down (the harness records a cleared message as '').
+    expect(t.messages.at(-1)).toBe('');
   });
 
   it('places a straight stretch on Alt-click; Backspace and undo each remove the last stretch, traced or straight', () => {

@@ -46,6 +46,7 @@ export class ToolHarness<S extends { name: string }> {
       } else if (c.type === 'select') this.selected = c.horizonId;
       else if (c.type === 'preview') this.preview = c.preview;
       else if (c.type === 'message') this.messages.push(c.text);
+      else if (c.type === 'clearMessage') this.messages.push('');
       else if (c.type === 'focusCalibrationPoint') this.focused = c.ref;
     }
     return this;

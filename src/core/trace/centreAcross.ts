@@ -12,6 +12,10 @@ export const INK_CONTRAST = 0.15;
 export const EDGE_CONTRAST = 0.15;
 const STEP = 0.5;
 
+// Reused profile buffers (a point is centred many times per preview).
+let dark = new Float64Array(0);
+let edge = new Float64Array(0);
+
 /**
  * Returns the signed offset (image px, along the unit normal (nx, ny)) of the line centre from (x, y): the centroid of
  * the darkness above the profile's brighter end when the profile shows an ink ridge, else of the edge strength above
@@ -19,20 +23,27 @@ const STEP = 0.5;
  */
 export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number, ny: number, half = PROFILE_HALF_PX): number {
   const m = Math.round(half / STEP);
-  const dark: number[] = [];
-  const edge: number[] = [];
-  for (let s = -m; s <= m; s++) {
-    const o = s * STEP;
-    dark.push(sampleBilinear(f.dark, f, x + o * nx, y + o * ny));
-    edge.push(sampleBilinear(f.edge, f, x + o * nx, y + o * ny));
+  const n = 2 * m + 1;
+  if (dark.length < n) {
+    dark = new Float64Array(n);
+    edge = new Float64Array(n);
   }
   let peak = -Infinity;
-  for (const d of dark) if (d > peak) peak = d;
+  for (let s = -m; s <= m; s++) {
+    const o = s * STEP;
+    const d = sampleBilinear(f.dark, f, x + o * nx, y + o * ny);
+    dark[s + m] = d;
+    if (d > peak) peak = d;
+  }
   const darkBase = Math.max(dark[0], dark[2 * m]);
   if (peak - darkBase >= INK_CONTRAST) return centroid(dark, darkBase, m);
+  // No ink ridge: read the edge profile (only now, so a traced ink line costs one profile per point).
   let ePeak = -Infinity;
   let eMin = Infinity;
-  for (const e of edge) {
+  for (let s = -m; s <= m; s++) {
+    const o = s * STEP;
+    const e = sampleBilinear(f.edge, f, x + o * nx, y + o * ny);
+    edge[s + m] = e;
     if (e > ePeak) ePeak = e;
     if (e < eMin) eMin = e;
   }
@@ -41,7 +52,7 @@ export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number,
   return NaN;
 }
 
-function centroid(values: number[], base: number, m: number): number {
+function centroid(values: Float64Array, base: number, m: number): number {
   let sw = 0;
   let swo = 0;
   for (let s = -m; s <= m; s++) {

@@ -9,20 +9,37 @@ import { rasterCentre, type Raster } from './raster';
 const DIRECTION_SPAN = 3;
 
 /**
+ * Centres already found, by path pixel and the pixel DIRECTION_SPAN ahead of it (the one behind is fixed by the
+ * tree): paths to nearby pointer positions share all but their last pixels, so a preview re-centres only those.
+ */
+export type CentreCache = Map<number, [number, number] | null>;
+
+/**
  * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
  * normal of the path's local direction to the line centre found in `f` (centreAcross), and the fraction of them that
  * found a line there (the others keep their pixel centre). A path of one pixel comes back as that pixel's centre
  * (fraction 1); an empty path as no points (fraction 0).
  */
-export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures): { points: [number, number][]; onLine: number } {
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number } {
   const pts = path.map((k) => rasterCentre(r, k));
   const n = pts.length;
   if (n < 2) return { points: pts, onLine: n };
   let found = 0;
   const out: [number, number][] = [];
+  const size = r.w * r.h;
   for (let i = 0; i < n; i++) {
+    const ahead = Math.min(n - 1, i + DIRECTION_SPAN);
+    const key = path[i] * size + path[ahead];
+    const known = cache?.get(key);
+    if (known !== undefined) {
+      if (known) {
+        found++;
+        out.push(known);
+      } else out.push(pts[i]);
+      continue;
+    }
     const a = pts[Math.max(0, i - DIRECTION_SPAN)];
-    const b = pts[Math.min(n - 1, i + DIRECTION_SPAN)];
+    const b = pts[ahead];
     const tx = b[0] - a[0];
     const ty = b[1] - a[1];
     const len = Math.hypot(tx, ty);
@@ -34,11 +51,14 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
     const ny = tx / len;
     const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny);
     if (Number.isNaN(o)) {
+      cache?.set(key, null);
       out.push(pts[i]);
       continue;
     }
     found++;
-    out.push([pts[i][0] + o * nx, pts[i][1] + o * ny]);
+    const q: [number, number] = [pts[i][0] + o * nx, pts[i][1] + o * ny];
+    cache?.set(key, q);
+    out.push(q);
   }
   return { points: out, onLine: found / n };
 }

@@ -15,9 +15,11 @@ export interface PathTree { w: number; h: number; source: number; dist: Int32Arr
 
 /**
  * Returns the shortest-path tree from `source` over the integer step costs `cost` (cost of stepping onto a pixel;
- * a diagonal step costs ≈ √2 times as much, as 181/128). A source outside the window gives a tree that reaches nothing.
+ * a diagonal step costs ≈ √2 times as much, as 181/128). With a `target` pixel the search stops once the target is
+ * settled (its path is then final; farther pixels may be unreached). A source outside the window gives a tree
+ * that reaches nothing.
  */
-export function shortestPathTree(cost: Uint8Array, w: number, h: number, source: number): PathTree {
+export function shortestPathTree(cost: Uint8Array, w: number, h: number, source: number, target = -1): PathTree {
   const n = w * h;
   const dist = new Int32Array(n).fill(0x7fffffff);
   const pred = new Uint8Array(n).fill(NO_STEP);
@@ -37,6 +39,7 @@ export function shortestPathTree(cost: Uint8Array, w: number, h: number, source:
       queued--;
       if (done[k]) continue;
       done[k] = 1;
+      if (k === target) return tree;
       const y = (k / w) | 0;
       const x = k - y * w;
       for (let s = 0; s < 8; s++) {

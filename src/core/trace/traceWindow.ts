@@ -11,15 +11,15 @@ const BASE_MARGIN_PX = 48;
 
 /**
  * Returns the image-pixel window to search for a stretch from `from` to `to` in an image of `imageW` × `imageH`:
- * their bounding box grown by 48 px + 10 % of the stretch across it, and by 64 px + half the stretch ahead of `to`
+ * their bounding box grown by 48 px + 5 % of the stretch across it, and by 64 px + 30 % of the stretch ahead of `to`
  * along the stretch's main axis; clipped to the image (empty when both points lie outside).
  */
 export function traceWindow(from: readonly [number, number], to: readonly [number, number], imageW: number, imageH: number): Raster {
   const dx = to[0] - from[0];
   const dy = to[1] - from[1];
   const span = Math.max(Math.abs(dx), Math.abs(dy));
-  const side = BASE_MARGIN_PX + 0.1 * span;
-  const ahead = 64 + 0.5 * span;
+  const side = BASE_MARGIN_PX + 0.05 * span;
+  const ahead = 64 + 0.3 * span;
   let x0 = Math.min(from[0], to[0]) - side;
   let x1 = Math.max(from[0], to[0]) + side;
   let y0 = Math.min(from[1], to[1]) - side;
@@ -36,9 +36,16 @@ export function traceWindow(from: readonly [number, number], to: readonly [numbe
   return { x0: ix0, y0: iy0, w: Math.max(0, ix1 - ix0), h: Math.max(0, iy1 - iy0) };
 }
 
-/** Returns true when image point p lies inside the window at least `insetPx` from its edges. */
-export function windowCovers(win: Raster, p: readonly [number, number], insetPx = 2): boolean {
-  return p[0] >= win.x0 + insetPx && p[1] >= win.y0 + insetPx && p[0] <= win.x0 + win.w - insetPx && p[1] <= win.y0 + win.h - insetPx;
+/**
+ * Returns true when image point p lies inside the window at least `insetPx` from each edge that is not the image's own
+ * edge (an image of `imageW` × `imageH`): a window clipped at the image's edge covers the pixels along it.
+ */
+export function windowCovers(win: Raster, p: readonly [number, number], imageW = Infinity, imageH = Infinity, insetPx = 2): boolean {
+  const left = win.x0 > 0 ? insetPx : 0;
+  const top = win.y0 > 0 ? insetPx : 0;
+  const right = win.x0 + win.w < imageW ? insetPx : 0;
+  const bottom = win.y0 + win.h < imageH ? insetPx : 0;
+  return p[0] >= win.x0 + left && p[1] >= win.y0 + top && p[0] <= win.x0 + win.w - right && p[1] <= win.y0 + win.h - bottom;
 }
 
 /** A tile of the image: its column and row and the image pixels it covers (clipped to the image). */

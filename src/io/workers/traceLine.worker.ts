@@ -1,7 +1,8 @@
 // Follows drawn lines off the main thread. Protocol: 'tile' (a tile's pixels as a transferred bitmap, one
 // pixel wider than the tile where the image allows) stores its features; 'drop' forgets tiles; 'tree'
 // builds an anchor's shortest-path tree over a window and answers 'treeDone'; 'path' answers the traced
-// stretch to a point (null when that tree is no longer kept). Messages are handled in order.
+// stretch to a point (null when that tree is no longer kept); 'once' traces one placed stretch without
+// keeping a tree. Messages are handled in order.
 import type { Raster } from '../../core/trace/raster';
 import { TraceSession } from '../../core/trace/traceSession';
 
@@ -9,7 +10,8 @@ export type TraceWorkerRequest =
   | { type: 'tile'; key: string; tile: Raster; crop: Raster; bitmap: ImageBitmap }
   | { type: 'drop'; keys: string[] }
   | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[] }
-  | { type: 'path'; id: number; key: string; to: [number, number] };
+  | { type: 'path'; id: number; key: string; to: [number, number] }
+  | { type: 'once'; key: string; from: [number, number]; to: [number, number]; win: Raster; tileKeys: string[] };
 
 export type TraceWorkerReply =
   | { type: 'treeDone'; id: number; bytesHeld: number }
@@ -46,6 +48,7 @@ self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
         reply({ type: 'treeDone', id: m.id, bytesHeld: session.bytesHeld() });
       }
     } else if (m.type === 'path') reply({ type: 'path', id: m.id, key: m.key, points: session.path(m.id, m.to) });
+    else if (m.type === 'once') reply({ type: 'path', id: -1, key: m.key, points: session.traceOnce(m.from, m.to, m.win, m.tileKeys) });
   } catch (err) {
     reply({ type: 'error', message: err instanceof Error ? err.message : String(err) });
   }

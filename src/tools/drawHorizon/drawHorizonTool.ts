@@ -64,7 +64,11 @@ function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState
 /** Finishes now, or once the traced stretches still computing are ready. */
 function finishWhenReady(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
   const line = resolveStretches(lineOf(s), ctx);
-  if (!computing(line)) return finish(lineVertices(line), ctx.doc);
+  if (!computing(line)) {
+    const done = finish(lineVertices(line), ctx.doc);
+    // Take down the note shown while waiting.
+    return s.finishing ? { ...done, commands: [...(done.commands ?? []), { type: 'clearMessage' }] } : done;
+  }
   return show({ ...withLine(s, line), finishing: true }, ctx, [{ type: 'message', kind: 'info', text: 'Tracing the last stretch…' }]);
 }
 

@@ -54,10 +54,13 @@ describe('tracing by tiles in a window (what the worker does)', () => {
   });
 
   it('grows the window ahead of the pointer and across the stretch, clipped to the image', () => {
-    // Arithmetic of the rule for a 200 px stretch: 48 + 20 = 68 px around both points, 64 + 100 = 164 px ahead:
-    // x from 100 − 68 = 32 to 300 + 164 = 464, y from 100 − 68 = 32 to 120 + 68 = 188.
-    expect(traceWindow([100, 100], [300, 120], 2000, 1000)).toEqual({ x0: 32, y0: 32, w: 432, h: 156 });
+    // Arithmetic of the rule (48 px + 5 % around both points, 64 px + 30 % ahead) for a 200 px stretch: 58 px around,
+    // 124 px ahead: x from 100 − 58 = 42 to 300 + 124 = 424, y from 100 − 58 = 42 to 120 + 58 = 178.
+    expect(traceWindow([100, 100], [300, 120], 2000, 1000)).toEqual({ x0: 42, y0: 42, w: 382, h: 136 });
     // Leftwards near the image's edge: clipped at 0.
-    expect(traceWindow([300, 100], [100, 120], 2000, 1000)).toEqual({ x0: 0, y0: 32, w: 368, h: 156 });
+    expect(traceWindow([300, 100], [100, 120], 2000, 1000)).toEqual({ x0: 0, y0: 42, w: 358, h: 136 });
+    // A window clipped at the image's edge covers the pixels along that edge; elsewhere it keeps an inset.
+    expect(windowCovers({ x0: 0, y0: 0, w: 100, h: 50 }, [99.5, 10], 100, 50)).toBe(true);
+    expect(windowCovers({ x0: 0, y0: 0, w: 100, h: 50 }, [99.5, 10], 1000, 500)).toBe(false);
   });
 });
