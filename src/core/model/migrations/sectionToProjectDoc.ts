@@ -12,8 +12,14 @@ export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d3
 /** Returns a project document holding the section, calibrated onto a true-scale canvas; title is the given name. */
 export function sectionToProjectDoc(section: Section, title = 'Section'): ProjectDoc {
   const all: XZ[] = section.horizons.flatMap((h) => [...h.line, ...h.regional]);
-  const zs = all.map((p) => p[1]);
-  const zMid = zs.length ? (Math.min(...zs) + Math.max(...zs)) / 2 : 0;
+  // In a loop: spreading a long traced line's elevations into Math.min overflows the call stack.
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  for (const p of all) {
+    if (p[1] < zMin) zMin = p[1];
+    if (p[1] > zMax) zMax = p[1];
+  }
+  const zMid = all.length ? (zMin + zMax) / 2 : 0;
   all.push([section.pins[0], zMid], [section.pins[1], zMid]);
   const calibration = canvasCalibration(all);
   const fitted = fitCalibration(calibration);
