@@ -525,6 +525,7 @@ async function main(): Promise<void> {
     server.kill();
   }
   console.log(`\n${rows.length} rows measured.`);
+  execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
 }
 
 main().catch((e) => {
