@@ -212,6 +212,8 @@ function demo(): void {
   console.log('Horizon                    clicks  RMS (px)  max (px)  vertices');
   const traced: Section['horizons'] = [];
   for (const hz of section.horizons) {
+    // The fold demo's horizons are unbroken lines; a horizon in pieces would be traced piece by piece.
+    if (!hz.line) throw new Error(`benchTrace: horizon "${hz.name}" is in pieces; this measure expects unbroken lines`);
     const truth = hz.line.map(([x, z]) => toImage(x, z));
     let pick: { clicks: number; rms: number; max: number; pts: [number, number][] } | null = null;
     for (let n = 2; n <= 16; n++) {
