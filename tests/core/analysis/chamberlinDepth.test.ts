@@ -36,13 +36,13 @@ function bump(a: number, lambda: number, n: number): Section {
 describe('Chamberlin depth of a nearly flat bed', () => {
   it('lengthBeyondSpan gives L − W of a 1 mm bump over 10 km to the analytic a²π²/(4λ), without cancellation', () => {
     const s = bump(1e-3, 10_000, 4000);
-    const [xs, zs] = [s.horizons[0].line.map((p) => p[0]), s.horizons[0].line.map((p) => p[1])];
+    const [xs, zs] = [s.horizons[0].line!.map((p) => p[0]), s.horizons[0].line!.map((p) => p[1])];
     const expected = (1e-3 ** 2 * Math.PI ** 2) / (4 * 10_000);
     expect(Math.abs(lengthBeyondSpan(xs, zs) / expected - 1)).toBeLessThan(1e-5);
     // The same bump 10⁶ times larger (a = 1 km over 10⁷ m): the rule scales as a²/λ, so the sum does too.
     const big = bump(1000, 1e7, 4000);
     const bigExpected = (1000 ** 2 * Math.PI ** 2) / (4 * 1e7);
-    expect(Math.abs(lengthBeyondSpan(big.horizons[0].line.map((p) => p[0]), big.horizons[0].line.map((p) => p[1])) / bigExpected - 1)).toBeLessThan(1e-5);
+    expect(Math.abs(lengthBeyondSpan(big.horizons[0].line!.map((p) => p[0]), big.horizons[0].line!.map((p) => p[1])) / bigExpected - 1)).toBeLessThan(1e-5);
   });
 
   it('the analysis gives no Chamberlin depth for it, "not meaningful" with the reason, instead of ~10¹⁰ m', () => {
