@@ -20,7 +20,7 @@ import { createServer } from 'node:net';
 import { chromium, type Page } from '@playwright/test';
 import { forwardSection } from '../src/core/forward/forwardSection';
 import { sectionToProjectDoc } from '../src/core/model/migrations/sectionToProjectDoc';
-import type { Section } from '../src/core/model/section';
+import type { LineSection as Section } from '../src/core/model/section';
 import { fitCamera } from '../src/state/camera';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
@@ -525,6 +525,7 @@ async function main(): Promise<void> {
     server.kill();
   }
   console.log(`\n${rows.length} rows measured.`);
+  execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
 }
 
 main().catch((e) => {
