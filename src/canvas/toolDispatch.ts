@@ -123,16 +123,21 @@ function imagePoint(box: HTMLElement, clientX: number, clientY: number): [number
 
 let boxElement: HTMLElement | null = null;
 
-/** A second press within this time and distance counts as a double-click (pointer events carry no click count). */
+/**
+ * A second press within this time and distance counts as a double-click (pointer events carry no click count).
+ * The distance is measured between the two presses' scan positions (in screen pixels at the current zoom), so a
+ * press after the view panned or zoomed is a new click wherever it lands on the screen.
+ */
 const DOUBLE_CLICK_MS = 450;
 const DOUBLE_CLICK_SCREEN_PX = 6;
-let lastPress = { t: -Infinity, x: 0, y: 0, clicks: 0 };
+let lastPress = { t: -Infinity, p: [0, 0] as [number, number], clicks: 0 };
 
-function clickCount(evt: PointerEvent): number {
+function clickCount(evt: PointerEvent, p: [number, number]): number {
   const t = evt.timeStamp;
-  const near = Math.hypot(evt.clientX - lastPress.x, evt.clientY - lastPress.y) <= DOUBLE_CLICK_SCREEN_PX;
+  const scale = useSessionStore.getState().camera.scale;
+  const near = Math.hypot(p[0] - lastPress.p[0], p[1] - lastPress.p[1]) * scale <= DOUBLE_CLICK_SCREEN_PX;
   const clicks = near && t - lastPress.t <= DOUBLE_CLICK_MS ? lastPress.clicks + 1 : 1;
-  lastPress = { t, x: evt.clientX, y: evt.clientY, clicks };
+  lastPress = { t, p, clicks };
   return clicks;
 }
 
@@ -140,7 +145,8 @@ function clickCount(evt: PointerEvent): number {
 export function toolPointerDown(evt: PointerEvent): void {
   if (!boxElement) return;
   dragging = true;
-  dispatchToolEvent({ type: 'pointerDown', p: imagePoint(boxElement, evt.clientX, evt.clientY), button: evt.button, clicks: clickCount(evt), shift: evt.shiftKey, alt: evt.altKey });
+  const p = imagePoint(boxElement, evt.clientX, evt.clientY);
+  dispatchToolEvent({ type: 'pointerDown', p, button: evt.button, clicks: clickCount(evt, p), shift: evt.shiftKey, alt: evt.altKey });
 }
 
 /** True when a key belongs to a text field or select that has focus. */

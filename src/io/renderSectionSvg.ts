@@ -254,10 +254,17 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     const reg = scenario.regionals[h.id];
     const c = escapeXml(h.colour);
     if (reg && reg.length >= 2) {
-      out.push(`<polyline points="${pts(reg.map(fig))}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
+      const line = pts(reg.map(fig));
+      // A white outline under the dashes keeps the regional visible over a fill of its own colour.
+      out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="4.5" stroke-dasharray="7 4"/>`);
+      out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
       drawn.regionals = true;
     }
-    if (h.pointsPx.length >= 2) out.push(`<polyline points="${pts(h.pointsPx.map(fig))}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
+    if (h.pointsPx.length >= 2) {
+      const line = pts(h.pointsPx.map(fig));
+      out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="5" stroke-linejoin="round"/>`);
+      out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
+    }
     for (const [a, b] of h.projected) {
       const run = h.pointsPx.slice(a, b + 1);
       if (run.length >= 2) {

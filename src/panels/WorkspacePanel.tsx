@@ -47,8 +47,9 @@ export function WorkspacePanel() {
     <>
       <ToolBar />
       <CalibrationPanel />
-      <HorizonList />
+      {/* The pins before the horizon list: two fields that stay in reach however many horizons there are. */}
       <PinsPanel />
+      <HorizonList />
       <HelpOverlay />
     </>
   );
