@@ -21,7 +21,7 @@ import type { FoldSpec } from '../src/core/forward/forwardSpec';
 import { chainCrossings } from '../src/core/geometry/chainCrossings';
 import { clipAndMeasure } from '../src/core/geometry/clipAndMeasure';
 import { shoelaceArea } from '../src/core/geometry/shoelaceArea';
-import type { Section } from '../src/core/model/section';
+import type { LineSection as Section } from '../src/core/model/section';
 import { validateSectionArrays } from '../src/core/model/validateSectionArrays';
 
 const json = process.argv.includes('--json');

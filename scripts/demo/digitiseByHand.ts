@@ -56,6 +56,8 @@ export function digitiseByHand(section: Section, toImage: Affine, toSection: Aff
   return {
     ...section,
     horizons: section.horizons.map((h) => {
+      // Jitter would move a piece's end off its fault, so only unbroken lines are digitised this way.
+      if (!h.line) throw new Error(`digitiseByHand: horizon "${h.name}" is in pieces; only unbroken lines are digitised by hand`);
       const px = h.line.map((q) => apply(toImage, q));
       const clicks = clicksAlong(px, o);
       const line: XZ[] = clicks.map(([u, v]) => {

@@ -202,7 +202,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     : ad && ad.detachmentDepthInterval.kind === 'unbounded' ? ' (95% interval unbounded)' : '';
   const headline = ad && !ad.noDetachment && ad.detachmentDepth !== null
     ? `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}: ${formatNumber(ad.detachmentDepth)} ${u} below ${ref}${ciText}; displacement ${formatNumber(ad.displacement)} ${u}; r² = ${ad.r2.toFixed(4)} over ${ad.n} horizons`
-    : ad && ad.noDetachment ? 'No detachment below these horizons (area does not decrease with depth).'
+    : ad && ad.noDetachment ? 'No detachment below these horizons (the area–depth line does not reach zero below them).'
     : `No area–depth result: ${ds.ok ? (analysis.outcome && !analysis.outcome.ok ? analysis.outcome.problems[0]?.message ?? 'input problems' : 'fewer than two horizons with regionals') : ds.message}`;
   out.push(`<text x="42" y="70" font-size="13.5">${escapeXml(headline.slice(0, 200))}</text></g>`);
   // The section panel.
@@ -216,6 +216,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
     ds.section.horizons.forEach((h, i) => {
+      if (!h.line) return;
       const line = toCoordinateArrays(h.line), reg = toCoordinateArrays(h.regional);
       const cl = clipPolylineToPins(line.xs, line.zs, pL, pR).clipped;
       const cr = clipPolylineToPins(reg.xs, reg.zs, pL, pR).clipped;

@@ -99,7 +99,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
         {ad && (
           <p data-testid="report-summary">
             {ad.noDetachment
-              ? 'Excess area does not decrease with depth: there is no detachment below these horizons.'
+              ? 'The area–depth line does not reach zero area below the deepest horizon: there is no detachment below these horizons.'
               : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
           </p>
         )}
