@@ -23,6 +23,7 @@ import { clipAndMeasure } from '../src/core/geometry/clipAndMeasure';
 import { shoelaceArea } from '../src/core/geometry/shoelaceArea';
 import type { Section } from '../src/core/model/section';
 import { validateSectionArrays } from '../src/core/model/validateSectionArrays';
+import { minOf, maxOf } from '../src/core/stats/minMax';
 
 const json = process.argv.includes('--json');
 
@@ -184,7 +185,7 @@ function main(): void {
   const ours = analyseSection(section);
   if (!ours.ok) throw new Error('bench section rejected');
   const theirs = clippedAreas(section);
-  const worst = Math.max(...ours.analysis.horizons.map((h, i) => Math.abs(h.excessArea - theirs[i]) / Math.abs(theirs[i])));
+  const worst = maxOf(ours.analysis.horizons.map((h, i) => Math.abs(h.excessArea - theirs[i]) / Math.abs(theirs[i])));
 
   const mcSection = benchSection(6, 100);
   const mcOptions: MonteCarloOptions = {
@@ -214,7 +215,7 @@ function main(): void {
   ];
   const line = (a: string, b: string, c: string) => `${a.padEnd(40)} ${b.padStart(10)}  ${c}`;
   const yes = (ok: boolean) => (ok ? 'met' : 'NOT met');
-  console.log(`Section: ${vertices.length} horizons × ${Math.min(...vertices)}–${Math.max(...vertices)} vertices (forward model); Monte Carlo: ${mcVertices.length} × ${Math.min(...mcVertices)}–${Math.max(...mcVertices)}.`);
+  console.log(`Section: ${vertices.length} horizons × ${minOf(vertices)}–${maxOf(vertices)} vertices (forward model); Monte Carlo: ${mcVertices.length} × ${minOf(mcVertices)}–${maxOf(mcVertices)}.`);
   console.log(`Node ${process.version}; medians in ms.\n`);
   console.log(line('measure', 'median ms', 'relative'));
   for (const r of rows) console.log(line(...r));

@@ -13,6 +13,7 @@ import { forwardSection } from '../src/core/forward/forwardSection';
 import { sectionToProjectDoc } from '../src/core/model/migrations/sectionToProjectDoc';
 import type { Section } from '../src/core/model/section';
 import { fitCamera } from '../src/state/camera';
+import { minOf, maxOf } from '../src/core/stats/minMax';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
 const VITE = 'node_modules/vite/bin/vite.js';
@@ -175,9 +176,9 @@ async function dragToNumbers(page: Page): Promise<{ vertices: number; openMs: nu
   const view = await page.getByTestId('section-view').evaluate((el) => ({ w: el.clientWidth, h: el.clientHeight }));
   const box = (await page.getByTestId('section-view').boundingBox())!;
   const all = doc.horizons.flatMap((h) => h.pointsPx);
-  const u0 = Math.min(...all.map((p) => p[0]));
-  const v0 = Math.min(...all.map((p) => p[1]));
-  const cam = fitCamera(Math.max(...all.map((p) => p[0])) - u0 + 1, Math.max(...all.map((p) => p[1])) - v0 + 1, view.w, view.h, 48);
+  const u0 = minOf(all.map((p) => p[0]));
+  const v0 = minOf(all.map((p) => p[1]));
+  const cam = fitCamera(maxOf(all.map((p) => p[0])) - u0 + 1, maxOf(all.map((p) => p[1])) - v0 + 1, view.w, view.h, 48);
   const reg = doc.scenarios[0].regionals[doc.horizons[0].id];
   const u = (reg[0][0] + reg[reg.length - 1][0]) / 2;
   const v = reg[0][1] + ((reg[reg.length - 1][1] - reg[0][1]) * (u - reg[0][0])) / (reg[reg.length - 1][0] - reg[0][0]);

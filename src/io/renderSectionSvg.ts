@@ -18,6 +18,7 @@ import { areaDepthGroup } from './renderAreaDepthSvg';
 import { escapeXml } from './escapeXml';
 import { formatNumber, niceStep } from './formatNumber';
 import { halo, sectionAxes } from './sectionFigureAxes';
+import { minOf, maxOf } from '../core/stats/minMax';
 
 export const FIGURE_WIDTH = 1400;
 export const FIGURE_HEIGHT = 990;
@@ -45,7 +46,7 @@ function extentPx(doc: ProjectDoc, extra: ImagePx[]): [number, number, number, n
   const all: ImagePx[] = [...extra, ...doc.horizons.flatMap((h) => h.pointsPx), ...doc.scenarios.flatMap((s) => [...Object.values(s.regionals).flat(), ...(s.pinsPx ?? [])])];
   if (all.length === 0) return [0, 0, 1000, 700];
   const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
-  const [u0, u1, v0, v1] = [Math.min(...us), Math.max(...us), Math.min(...vs), Math.max(...vs)];
+  const [u0, u1, v0, v1] = [minOf(us), maxOf(us), minOf(vs), maxOf(vs)];
   const m = 0.06 * Math.max(u1 - u0, v1 - v0, 1);
   return [u0 - m, v0 - m, u1 + m, v1 + m];
 }
@@ -158,7 +159,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   }
   const corners = fit ? [[u0, v0], [u1, v0], [u0, v1], [u1, v1]].map((p) => imageToSection(fit, p as ImagePx)) : [];
   const xs = corners.map((c) => c[0]), zs = corners.map((c) => c[1]);
-  const [xLo, xHi, zLo, zHi] = [Math.min(...xs), Math.max(...xs), Math.min(...zs), Math.max(...zs)];
+  const [xLo, xHi, zLo, zHi] = [minOf(xs), maxOf(xs), minOf(zs), maxOf(zs)];
   const toFig = (q: XZ) => fig(sectionToImage(fit!, q));
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
@@ -173,9 +174,9 @@ export function renderSectionSvg(input: SectionFigureInput): string {
       // As on the canvas (excessFillGeometry): the loop is drawn twice, clipped to the half-planes above
       // and below the regional, so lobes above it (added) and below it (subtracted) differ in colour.
       const zsAll = [...cl.zs, ...cr.zs];
-      const margin = Math.max(...zsAll) - Math.min(...zsAll) + (pR - pL);
+      const margin = maxOf(zsAll) - minOf(zsAll) + (pR - pL);
       const half = (zFar: number) => pts([...Array.from(cr.xs, (x, j) => toFig([x, cr.zs[j]])), toFig([pR, zFar]), toFig([pL, zFar])]);
-      defs.push(`<clipPath id="above-${i}"><polygon points="${half(Math.max(...zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(Math.min(...zsAll) - margin)}"/></clipPath>`);
+      defs.push(`<clipPath id="above-${i}"><polygon points="${half(maxOf(zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(minOf(zsAll) - margin)}"/></clipPath>`);
       const diffs = Array.from(cl.xs, (x, j) => cl.zs[j] - zAt(cr.xs, cr.zs, x));
       const tol = 1e-9 * (Math.abs(zHi - zLo) + 1);
       const isAbove = diffs.some((d) => d > tol), isBelow = diffs.some((d) => d < -tol);

@@ -9,6 +9,7 @@ import { meanElevation } from '../core/geometry/meanElevation';
 import { polylineLength } from '../core/geometry/polylineLength';
 import { activeScenario, docToSection, type DocSection } from '../core/model/docToSection';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
+import { maxOf } from '../core/stats/minMax';
 
 // docToSection reads the scenario, the horizons, the calibration and the units and nothing else, so
 // the result is memoised on those four objects: editing one scenario (or undoing to a document that
@@ -92,7 +93,7 @@ function shifted(doc: ProjectDoc, base: GestureBase): DocAnalysis | null {
     elevations[i] = r;
   }
   const section = docSection.section;
-  const referenceElevation = section.referenceElevation ?? Math.max(...elevations);
+  const referenceElevation = section.referenceElevation ?? maxOf(elevations);
   const analysis = analysePrepared({ ...p, referenceElevation, horizons, areas, regionalElevations: elevations });
   return { docSection: { ...docSection, section: { ...section, horizons: sectionHorizons } }, outcome: { ok: true, analysis, warnings: [] }, leftOut: [] };
 }

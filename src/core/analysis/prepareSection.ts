@@ -74,7 +74,7 @@ function prepare(section: Section, options: { referenceElevation?: number }, cli
     const flags = h.projected && h.projected.length > 0 ? projectedSegmentFlags(h.projected, h.lineX.length) : undefined;
     const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units, clipAllocate);
     if (p.ok) horizons.push(p.horizon);
-    else problems.push(...p.problems);
+    else for (const q of p.problems) problems.push(q);
   }
   if (problems.length > 0) return { ok: false, problems };
   const n = horizons.length;
