@@ -76,7 +76,7 @@ function loops(section: Section): { xs: Float64Array; zs: Float64Array }[] {
 function clippedAreas(section: Section): number[] {
   const [pL, pR] = section.pins;
   return section.horizons.map((h) => {
-    // A local origin (METHOD.md, Numerics), as the engine uses; the library then works on small numbers.
+    // A local origin (docs/method.md §Numerics), as the engine uses; the library then works on small numbers.
     const z0 = h.regional[0][1];
     const ring: [number, number][] = [...h.line, ...[...h.regional].reverse()].map((p) => [p[0] - pL, p[1] - z0]);
     let lo = Infinity;

@@ -11,7 +11,7 @@ import { detachmentTrace } from './detachmentTrace';
 
 const COLOUR = '#b3261e';
 // Screen pixels: small type on a translucent white backing, so it stays legible over scan art and
-// hides little of it (journey P3 #9).
+// hides little of it.
 const FONT = 11;
 const LINE_HEIGHT = 1.2;
 const PAD = 3;

@@ -6,7 +6,7 @@ import { isExactFit } from '../core/analysis/isExactFit';
 // Where to draw the proposed detachment on the section: at the estimated elevation at the middle
 // of the pins, parallel to the mean regional trend (the mean of each regional's dip between the
 // pins), so that its mean elevation over the pins is the area–depth estimate. The 95% band uses the
-// Fieller interval on depth (METHOD.md). Our construction for display; the estimate itself is a level.
+// Fieller interval on depth (docs/method.md §Fieller interval). Our construction for display; the estimate itself is a level.
 
 export interface DetachmentTrace {
   /** The line and the band's upper and lower edges, section units, left to right. */

@@ -1,5 +1,5 @@
 // Polygons for the translucent excess-area fills, in image pixels: the loop between a horizon and its
-// regional across the pins (METHOD.md's construction), and the half-planes above and below the
+// regional across the pins (the construction of docs/method.md §Pins, regional and excess area), and the half-planes above and below the
 // regional used as clip regions, so lobes above the regional and below it get different fills.
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';

@@ -1,6 +1,6 @@
 // `npm run --silent analyse -- FILE [--json] [--scenario NAME]`: analyse a section file, a
 // section under "section", or the app's project file (its active scenario, or the one named),
-// and print a table, or the JSON shape of issue 3. Bad input: exit code 2 and one line on
+// and print a table, or the JSON report of src/cli/README.md §JSON report. Bad input: exit code 2 and one line on
 // stderr. A thin shell over src/core.
 import { readFileSync } from 'node:fs';
 import { analyseSection } from '../core/analysis/analyseSection';

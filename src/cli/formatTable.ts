@@ -11,7 +11,7 @@ function range(r: [number, number] | null, n: number): string {
   return r ? `${num(r[0])} to ${num(r[1])}` : n === 2 ? 'none (n = 2)' : 'none';
 }
 
-/** METHOD.md: an unbounded Fieller interval is reported as "unbounded", never as a number. */
+/** docs/method.md §Fieller interval: an unbounded Fieller interval is reported as "unbounded", never as a number. */
 function fiellerRange(d: AreaDepthResult): string {
   return d.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded' : range(d.detachmentDepthCI95, d.n);
 }
@@ -38,7 +38,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   const d = a.areaDepth;
   if (d) {
     out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${d.r2.toFixed(4)}`);
-    // D = −slope is only a displacement when the slope is negative (METHOD.md); the JSON keeps the number.
+    // D = −slope is only a displacement when the slope is negative (docs/method.md §Area-depth line); the JSON keeps the number.
     out.push(d.noDetachment
       ? '  slope ≥ 0: no displacement estimate'
       : `  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95, d.n)})`);

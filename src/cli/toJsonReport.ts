@@ -1,7 +1,7 @@
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 
-/** The --json shape of issue 3, keys exactly as listed there; non-finite numbers become null; the caution ends the notes. */
+/** The --json report (src/cli/README.md §JSON report), keys exactly as listed there; non-finite numbers become null; the caution ends the notes. */
 export interface JsonReport {
   pinWidth: number;
   referenceElevation: number;

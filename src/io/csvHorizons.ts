@@ -79,7 +79,7 @@ export function parseHorizonsCsv(text: string): HorizonImport {
   return { ok: true, horizons, units, problems };
 }
 
-/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (RULES.md: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header; coordinates rounded to 1e-6 unit (cleanCoordinate). */
+/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (DEVELOPERS.md §Project rules: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header; coordinates rounded to 1e-6 unit (cleanCoordinate). */
 export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit): string {
   const rows: (string | number)[][] = [['horizon', `x_${units}`, `z_${units}`]];
   for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, cleanCoordinate(x), cleanCoordinate(z)]);

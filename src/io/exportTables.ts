@@ -1,5 +1,5 @@
 // Tables and data files written from the document: results CSV, horizons in section units, the
-// section file for the command line. Every results table carries the caution (RULES.md).
+// section file for the command line. Every results table carries the caution (DEVELOPERS.md §Project rules).
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection } from '../core/calibration/mapPoints';

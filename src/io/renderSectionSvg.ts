@@ -214,7 +214,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
     }
   }
   if (fit && ds.ok && result) {
-    // The reference level of the depths (METHOD.md: h = zref − r), labelled at the right end.
+    // The reference level of the depths (docs/method.md §Area-depth line: h = zref − r), labelled at the right end.
     const zr = result.referenceElevation;
     out.push(`<line class="reference-level" ${sectionLine(fit, fig, [xLo, zr], [xHi, zr])} stroke="#1d2731" stroke-width="1.3" stroke-dasharray="10 3 2 3"/>`);
     const at = toFig([xHi, zr]);
@@ -259,7 +259,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   out.push(legend.svg);
   const insetTop = legend.bottom + 14;
   out.push(areaDepthGroup(result, 1030, insetTop, 340, PANEL.y + PANEL.h - insetTop));
-  // The caution (METHOD.md), in every export.
+  // The caution (docs/method.md §Cautions), in every export.
   const cy = FIGURE_HEIGHT - 96;
   out.push(`<g class="caution"><rect x="30" y="${cy}" width="${FIGURE_WIDTH - 60}" height="76" fill="#fff8e6" stroke="#9a5b00"/>`);
   wrap(`Caution: ${SECTION_CAUTION}`, 190).forEach((line, i) => out.push(`<text x="42" y="${cy + 22 + i * 17}" font-size="12" fill="#6b3f00">${escapeXml(line)}</text>`));

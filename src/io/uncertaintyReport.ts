@@ -1,6 +1,6 @@
 // The uncertainty part of the report and the results table: the last Monte Carlo run of the scenario
 // (marked when it was computed for another state of the section, or said to be missing) and the
-// sensitivity amplification 1 + W0/D (METHOD.md, "Sensitivity to the regional"). Pure.
+// sensitivity amplification 1 + W0/D (docs/method.md §Sensitivity to the regional). Pure.
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import type { Section } from '../core/model/section';
 import { isStale } from '../core/model/sectionKey';

@@ -1,6 +1,6 @@
 // The compact live results beside the section (section workspace): each horizon's excess area and the
 // detachment depth and displacement of the area–depth line, following every drag (liveResults). The full
-// caution of METHOD.md stands beside them in small type: the strip may be the only result on screen.
+// caution (docs/method.md §Cautions) stands beside them in small type: the strip may be the only result on screen.
 import { useEffect, useRef } from 'react';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { useDocStore } from '../state/docStore';

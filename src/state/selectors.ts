@@ -30,7 +30,7 @@ export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysi
 // While a regional is dragged only the active scenario's regionals change. The section at the start of
 // the gesture is prepared once (validated, clipped, measured); each step then re-measures only the
 // moved regionals: the loop area changes by exactly −W0·Δr (the shoelace loop splits into the horizon
-// part and −∫ regional dx over the pins = −W0·r; METHOD.md, excess area and regional elevation), the
+// part and −∫ regional dx over the pins = −W0·r; docs/method.md §Pins, regional and excess area), the
 // regional length and elevation are those of the new clipped regional, and analysePrepared gives the
 // same analysis as analyseSection would. Anything else changed (pins, horizons, calibration, included
 // horizons, a regional that no longer crosses each pin once) takes the full analysis.

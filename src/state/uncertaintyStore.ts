@@ -1,5 +1,5 @@
 // The session's last uncertainty results per scenario: the Monte Carlo spread and the sensitivity
-// amplification 1 + W0/D (METHOD.md, "Sensitivity to the regional"). Not in the document and not
+// amplification 1 + W0/D (docs/method.md §Sensitivity to the regional). Not in the document and not
 // undoable: they are derived, but too slow to recompute on demand (a run takes seconds), so they are
 // kept with the key of the section they were computed from. A result whose key differs from the
 // current section's is stale: show it marked as such, never as the current state's spread.

@@ -3,7 +3,7 @@ import { analyseSection } from '../../src/core/analysis/analyseSection';
 import type { Section } from '../../src/core/model/section';
 import { detachmentTrace } from '../../src/canvas/detachmentTrace';
 import { methodExample } from '../core/analysis/sections';
-import { expectClose } from '../core/geometry/close';
+import { expectClose } from '../expectClose';
 
 function trace(s: Section) {
   const out = analyseSection(s);
@@ -12,8 +12,8 @@ function trace(s: Section) {
 }
 
 describe('detachmentTrace(section, analysis)', () => {
-  it('draws the METHOD.md example’s detachment flat at −3000 m over the pins widened a little', () => {
-    // Source: METHOD.md synthetic example (our own): zd = 3000 m below a reference at 0 m, flat regionals.
+  it('draws the synthetic example’s (docs/method.md §Check values) detachment flat at −3000 m over the pins widened a little', () => {
+    // Source: the synthetic example of docs/method.md §Check values (our own): zd = 3000 m below a reference at 0 m, flat regionals.
     const t = trace(methodExample())!;
     expect(t.trend).toBe(0);
     for (const [, z] of t.line) expectClose(z, -3000, 1e-10);

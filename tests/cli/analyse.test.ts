@@ -29,8 +29,8 @@ const example = () => JSON.parse(readFileSync(join(fixtures, 'method-example.jso
 const T = 60_000;
 
 describe('analyse FILE --json', () => {
-  it('prints exactly the issue-3 shape for the METHOD.md synthetic example', () => {
-    // Source: METHOD.md synthetic example: slope −1000 m, intercept 3 km², zd = 3000 m.
+  it('prints exactly the JSON report of src/cli/README.md for the synthetic example of docs/method.md §Check values', () => {
+    // Source: the synthetic example of docs/method.md §Check values: slope −1000 m, intercept 3 km², zd = 3000 m.
     const r = analyse(join(fixtures, 'method-example.json'), '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
@@ -91,7 +91,7 @@ describe('analyse PROJECT_FILE: the project file the app saves', () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     expect(r.stdout).toBe(expectedJson(saved.doc));
-    // Source: METHOD.md synthetic example (slope −1000 m, intercept 3 km², zd = 3000 m), through the
+    // Source: the synthetic example of docs/method.md §Check values (slope −1000 m, intercept 3 km², zd = 3000 m), through the
     // stand-in calibration's pixel round trip, so to rounding only.
     const j = JSON.parse(r.stdout);
     expect(j.areaDepth.slope).toBeCloseTo(-1000, 6);
@@ -132,7 +132,7 @@ describe('analyse PROJECT_FILE: the project file the app saves', () => {
   it('accepts a version-0 project file, migrated by the core migrations', () => {
     const r = analyse(writeCase('v0', { format: 'foldroot-project', version: 0, title: 'Old', section: example() }), '--json');
     expect(r.code).toBe(0);
-    // Source: METHOD.md synthetic example, to rounding after the migration's pixel round trip.
+    // Source: the synthetic example of docs/method.md §Check values, to rounding after the migration's pixel round trip.
     expect(JSON.parse(r.stdout).areaDepth.detachmentDepth).toBeCloseTo(3000, 6);
   }, T);
 

@@ -17,14 +17,14 @@ function folds(areas: number[]): Section {
 }
 
 describe('formatTable(analysis)', () => {
-  it('prints the bounded intervals as numbers for the METHOD.md synthetic example', () => {
-    // Source: METHOD.md synthetic example: an exact line, so both intervals close onto D = 1000 m and zd = 3000 m.
+  it('prints the bounded intervals as numbers for the synthetic example of docs/method.md §Check values', () => {
+    // Source: the synthetic example of docs/method.md §Check values: an exact line, so both intervals close onto D = 1000 m and zd = 3000 m.
     const t = formatTable(analysed(methodExample()));
     expect(t).toContain('Displacement D = 1000 m (95%: 1000 to 1000)');
     expect(t).toContain('Detachment depth 3000 m below the reference, elevation -3000 m (95% Fieller: 3000 to 3000)');
   });
 
-  it('prints "unbounded" when g ≥ 1, never a number (METHOD.md)', () => {
+  it('prints "unbounded" when g ≥ 1, never a number (docs/method.md §Fieller interval)', () => {
     // Areas scattered about a weak slope: g = 37.4 (worked by hand in analyseSection.test.ts).
     const a = analysed(folds([2.0e6, 1.0e6, 2.1e6, 0.9e6]));
     expect(a.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');
@@ -32,14 +32,14 @@ describe('formatTable(analysis)', () => {
   });
 
   it('prints "none (n = 2)" for both intervals with two horizons', () => {
-    // METHOD.md: n = 2 leaves no degrees of freedom, so no interval.
+    // docs/method.md §Fieller interval: n = 2 leaves no degrees of freedom, so no interval.
     const t = formatTable(analysed(folds([2.5e6, 2.0e6])));
     expect(t).toContain('(95%: none (n = 2))');
     expect(t).toContain('(95% Fieller: none (n = 2))');
   });
 
   it('prints no displacement for a slope ≥ 0, while the JSON keeps the number', () => {
-    // Areas grow with depth: slope +1000 m, D = −slope = −1000 m is no displacement (METHOD.md: b ≥ 0, no detachment).
+    // Areas grow with depth: slope +1000 m, D = −slope = −1000 m is no displacement (docs/method.md §Area-depth line: no zero crossing below the horizons, no detachment).
     const a = analysed(folds([1.0e6, 1.5e6, 2.0e6, 2.5e6]));
     const t = formatTable(a);
     expect(t).toContain('  slope ≥ 0: no displacement estimate\n  Detachment: none below these horizons');

@@ -5,7 +5,7 @@ import type { ProjectDoc } from '../../src/core/model/projectDoc';
 import type { Section } from '../../src/core/model/section';
 import { serializeProject } from '../../src/io/projectFile';
 
-// The app's real project file for the command-line tests: the METHOD.md synthetic example drawn
+// The app's real project file for the command-line tests: the synthetic example (docs/method.md §Check values) drawn
 // by sectionToProjectDoc (as opening a section file in the app does), with a second scenario,
 // written by the app's own serializeProject. tests/fixtures/sections/project-embedded.json holds
 // this text; `REGEN=1 npx vitest run tests/cli` rewrites it.

@@ -1,6 +1,6 @@
 // The digitising journey with real mouse and keyboard events: open a generated scan, calibrate it with
 // control points, draw horizons by clicks, place pins, draw a regional and derive the others, drag
-// every regional up and see the detachment get shallower (METHOD.md, "Sensitivity to the regional":
+// every regional up and see the detachment get shallower (docs/method.md §Sensitivity to the regional:
 // raising every regional by δ moves the detachment up by δ(1 + W0/D)), undo and redo, zoom and pan.
 import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
@@ -248,7 +248,7 @@ test('workspace basics: full caution in the strip, New returns to Select, Open s
   page.on('dialog', (d) => void d.accept());
   await gotoStarted(page);
   await expect(page.getByTestId('busy')).toHaveCount(0);
-  // The demo's strip carries the whole caution of METHOD.md, not a shortened one.
+  // The demo's strip carries the whole caution of docs/method.md §Cautions, not a shortened one.
   await expect(page.getByTestId('strip-caution')).toContainText('the decision belongs to a licensed professional under local codes');
   for (const [width, height] of [[1400, 900], [1920, 1080]]) {
     await page.setViewportSize({ width, height });
@@ -313,7 +313,7 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
   page.on('dialog', (d) => void d.accept());
   await gotoStarted(page);
   await expect(page.getByTestId('busy')).toHaveCount(0);
-  // A sin² bump 800 m high over the 10 000 m between the pins (area aλ/2 = 4 km², METHOD.md check values), with a
+  // A sin² bump 800 m high over the 10 000 m between the pins (area aλ/2 = 4 km², docs/method.md §Check values), with a
   // ripple of 20 m and 50 m wavelength: 200 whole wavelengths between the pins add no area.
   const N = 100_000;
   const line: [number, number][] = [];

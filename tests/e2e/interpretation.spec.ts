@@ -67,7 +67,7 @@ test('the pane shows the engine’s detachment for the demo, which matches the t
   await expect(page.getByTestId('interval-r2')).toHaveText('exact fit (no scatter): no interval');
   await expect(page.getByTestId('interval-detachment-depth')).toHaveCount(0);
   await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');
-  // The demo is a forward model (METHOD.md "Forward models"): the analysis returns its D and detachment to rounding.
+  // The demo is a forward model (docs/method.md §Forward models): the analysis returns its D and detachment to rounding.
   expect(Math.abs(a.areaDepth!.displacement - truth.displacement)).toBeLessThan(0.5);
   expect(Math.abs(a.areaDepth!.detachmentElevation! - truth.detachmentElevation)).toBeLessThan(0.5);
   expectRounded(await shown(page.getByTestId('result-detachment-elevation')), truth.detachmentElevation);
@@ -318,7 +318,7 @@ test('Shift-dragging the regionals up: the strip, pane, graph and the line on th
   expectShownMatches(during, moved);
   await expectPaneMatches(page, moved);
 
-  // The direction and size the method predicts (METHOD.md, "Sensitivity to the regional"): raising every
+  // The direction and size the method predicts (docs/method.md §Sensitivity to the regional): raising every
   // regional by δ leaves D as it was and raises the detachment by δ(1 + W0/D), so it is shallower.
   const delta = moved.horizons[0].regionalElevation - before.horizons[0].regionalElevation;
   expect(delta).toBeGreaterThan(0);

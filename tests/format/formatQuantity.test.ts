@@ -1,4 +1,4 @@
-// The numbers of the results strip: the minus sign U+2212 throughout, and no "−0" (journey P3 #1).
+// The numbers of the results strip: the minus sign U+2212 throughout, and no "−0".
 import { describe, expect, it } from 'vitest';
 import { formatArea, formatLength, formatNumber, minusSign } from '../../src/format/formatQuantity';
 

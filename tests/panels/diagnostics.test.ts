@@ -1,4 +1,4 @@
-// The pane's plain-word diagnostics name a horizon left out for its own problem, with the reason (review #25).
+// The pane's plain-word diagnostics name a horizon left out for its own problem, with the reason.
 import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../src/core/analysis/analyseSection';
 import { diagnostics } from '../../src/panels/interpretation/diagnostics';

@@ -1,5 +1,5 @@
 // The area–depth graph's axes: one horizon, or all points at one depth or area, gets a readable span
-// (journey P3 #10: not a depth axis of 0 to 0.06 m); a normal fit is shown with its detachment.
+// (not a depth axis of 0 to 0.06 m); a normal fit is shown with its detachment.
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import type { Section } from '../../src/core/model/section';
@@ -45,7 +45,7 @@ describe('graphDomain(series, dataOnly, units)', () => {
     expect(ft.depth[1] - ft.depth[0]).toBeGreaterThanOrEqual(500);
   });
 
-  it('the METHOD.md synthetic example: the points and the detachment at 3000 m, from the reference down', () => {
+  it('the synthetic example of docs/method.md §Check values: the points and the detachment at 3000 m, from the reference down', () => {
     const d = graphDomain([series(methodExample())], false, 'm')!;
     expect(d.depth[0]).toBe(0);
     expect(d.depth[1]).toBeGreaterThanOrEqual(3000);
@@ -56,7 +56,7 @@ describe('graphDomain(series, dataOnly, units)', () => {
 });
 
 describe('areaDepthSeries(analysis, ids, referenceElevation)', () => {
-  it('below another reference: depths shift by the difference, the detachment elevation stays (METHOD.md synthetic example)', () => {
+  it('below another reference: depths shift by the difference, the detachment elevation stays (the synthetic example of docs/method.md §Check values)', () => {
     // zref 0 → −500: h' = h − 500, so zd' = 3000 − 500 = 2500 m and the elevation −500 − 2500 = −3000 m as before.
     const a = analyse(methodExample());
     const s = areaDepthSeries(a, ['a', 'b', 'c', 'd'], -500);

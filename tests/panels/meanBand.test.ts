@@ -4,7 +4,7 @@ import { fiellerInterval } from '../../src/core/stats/fiellerInterval';
 import { linspace, meanBand } from '../../src/panels/interpretation/meanBand';
 import { minOf } from '../../src/core/stats/minMax';
 
-// Graybill & Iyer, Regression Analysis (1994), reaction-chamber example (METHOD.md check values).
+// Graybill & Iyer, Regression Analysis (1994), reaction-chamber example (docs/method.md §Check values).
 const x = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100];
 const y = [206.36, 225.52, 252.18, 289.33, 318.11, 349.49, 383.03, 410.7, 444.4, 469.14, 501.16];
 

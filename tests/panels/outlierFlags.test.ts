@@ -3,7 +3,7 @@ import { leastSquares } from '../../src/core/stats/leastSquares';
 import type { GraphPoint } from '../../src/panels/interpretation/areaDepthSeries';
 import { outlierFlags } from '../../src/panels/interpretation/outlierFlags';
 
-// On the METHOD.md synthetic line A = 1000·(3000 − h) (our own example), with one point moved off.
+// On the synthetic line A = 1000·(3000 − h) of docs/method.md §Check values (our own example), with one point moved off.
 function points(offsets: number[], projected: number[] = []): GraphPoint[] {
   return [500, 1000, 1500, 2000, 2500, 2800].map((h, i) => ({
     id: `h${i}`, name: `H${i}`, depth: h, area: 1000 * (3000 - h) + (offsets[i] ?? 0), included: true, residual: null,

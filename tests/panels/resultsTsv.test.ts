@@ -12,7 +12,7 @@ function analysis() {
 }
 
 describe('resultsTsv(analysis, scenarioName)', () => {
-  // METHOD.md synthetic example (our own): D = 1000 m, zd = 3000 m, W0 = 10 km, A = 2.5 … 1.0 km².
+  // the synthetic example of docs/method.md §Check values (our own): D = 1000 m, zd = 3000 m, W0 = 10 km, A = 2.5 … 1.0 km².
   const tsv = resultsTsv(analysis(), 'Base\tcase');
   const rows = tsv.split('\n').map((l) => l.split('\t'));
 
@@ -37,7 +37,7 @@ describe('resultsTsv(analysis, scenarioName)', () => {
     expect(rows[rows.length - 1]).toEqual(['Caution', SECTION_CAUTION]);
   });
 
-  it('summaryRows reports an exact line as an exact fit with no interval, not as a zero-width one (journey P3 #5)', () => {
+  it('summaryRows reports an exact line as an exact fit with no interval, not as a zero-width one', () => {
     const d = summaryRows(analysis()).find((r) => r.key === 'detachment-depth')!;
     expect(d.interval).toBe('');
     expect(rows.find((r) => r[0] === 'r²')![2]).toBe('exact fit (no scatter): no interval');

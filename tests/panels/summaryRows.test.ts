@@ -1,5 +1,5 @@
 // The summary rows of the pane and the copied table: an exact line has no interval to show (a zero-width
-// 95% interval reads like certainty, journey P3 #5); a scattered one shows the engine's intervals; the
+// 95% interval reads like certainty); a scattered one shows the engine's intervals; the
 // pane writes lengths as the results strip does.
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
@@ -17,7 +17,7 @@ function analyse(s: Section): SectionAnalysis {
 
 const row = (a: SectionAnalysis, key: string, fmt = SCREEN_FORMAT) => summaryRows(a, fmt).find((r) => r.key === key)!;
 
-/** METHOD.md synthetic example (our own) with the second horizon's area 0.1 km² too large: the points scatter. */
+/** the synthetic example of docs/method.md §Check values (our own) with the second horizon's area 0.1 km² too large: the points scatter. */
 function scattered(): Section {
   const s = methodExample();
   s.horizons[1] = triangleHorizon('H2', 2.1e6, -1000, 10_000);
@@ -25,7 +25,7 @@ function scattered(): Section {
 }
 
 describe('summaryRows(analysis, format)', () => {
-  it('an exact line (METHOD.md synthetic example: s = 0, r² = 1) says "exact fit" once, beside r², and no zero-width interval', () => {
+  it('an exact line (the synthetic example of docs/method.md §Check values: s = 0, r² = 1) says "exact fit" once, beside r², and no zero-width interval', () => {
     const a = analyse(methodExample());
     expect(isExactFit(a.areaDepth)).toBe(true);
     expect(row(a, 'r2').interval).toBe(EXACT_FIT_TEXT);

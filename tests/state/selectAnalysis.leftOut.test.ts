@@ -1,4 +1,4 @@
-// One unfinished horizon must not block the analysis of the others in the app (review #25): the
+// One unfinished horizon must not block the analysis of the others in the app: the
 // selector leaves out the horizons the engine reports a problem of their own for, names them with the
 // engine's reason, and analyses the rest; a problem of the whole section still stops it, and the engine
 // itself (what the command line runs) stays strict.
@@ -12,7 +12,7 @@ import { selectAnalysis, selectLiveAnalysis } from '../../src/state/selectors';
 const px = (x: number, z: number): [number, number] => [(x + 1000) / 2.5, -z / 2.5];
 
 /**
- * A forward model (METHOD.md, "Forward models"): pins 0 and 10 000 m, regionals at −500, −1000, −1500,
+ * A forward model (docs/method.md §Forward models): pins 0 and 10 000 m, regionals at −500, −1000, −1500,
  * −2000 m, D = 1000 m and the detachment 3000 m below the highest regional (elevation −3500 m), so
  * A = D·(zd − h) = 3.0, 2.5, 2.0, 1.5 km², each a triangle fold 8000 m wide (area = base · height / 2).
  * `shortRegional`: that horizon's regional stops at x = 9500 m, short of the right pin.

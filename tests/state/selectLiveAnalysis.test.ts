@@ -1,6 +1,6 @@
 // The gesture fast path of the selectors must give the engine's full answer: every per-horizon value
 // and the area–depth fit equal analyseSection on the same document while regionals are raised, tilted
-// and bent (METHOD.md: moving a regional changes the loop area by −W0·Δr, our derivation), including a
+// and bent (docs/method.md §Sensitivity to the regional: moving a regional changes the loop area by −W0·Δr, our derivation), including a
 // horizon with a projected run; anything else changed takes the full analysis.
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';

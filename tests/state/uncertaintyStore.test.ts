@@ -1,5 +1,5 @@
 // The session store of uncertainty results: a result is kept with the key of the section it was run
-// on, and is stale as soon as anything the analysis reads has changed (journey P2 #1).
+// on, and is stale as soon as anything the analysis reads has changed.
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Section } from '../../src/core/model/section';
 import { emptyProjectDoc } from '../../src/core/model/projectDoc';
@@ -42,7 +42,7 @@ describe('useUncertaintyStore', () => {
   it('keeps the amplification, and leaves the store as it is when nothing changed', () => {
     const s = methodExample();
     const { setAmplification } = useUncertaintyStore.getState();
-    // METHOD.md synthetic example: 1 + W0/D = 1 + 10 000 / 1000 = 11.
+    // the synthetic example of docs/method.md §Check values: 1 + W0/D = 1 + 10 000 / 1000 = 11.
     setAmplification('scenario-1', { sectionKey: sectionKey(s), amplification: 11, pinWidth: 10_000, displacement: 1000 });
     const before = useUncertaintyStore.getState().amplificationByScenario;
     setAmplification('scenario-1', { sectionKey: sectionKey(s), amplification: 11, pinWidth: 10_000, displacement: 1000 });

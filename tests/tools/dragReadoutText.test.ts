@@ -1,4 +1,4 @@
-// The readout beside the pointer while dragging (journey P3 #17): the dragged regional handle's z, a
+// The readout beside the pointer while dragging: the dragged regional handle's z, a
 // whole regional's Δz, a pin's x; in section units from the calibration (10 m per pixel, z = 1000 m at v = 0).
 import { describe, expect, it } from 'vitest';
 import { offsetRegionals } from '../../src/core/model/commands/offsetRegionals';

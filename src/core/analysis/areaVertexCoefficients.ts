@@ -2,7 +2,7 @@ import type { ClippedPolyline } from '../geometry/clipPolylineToPins';
 
 // The excess area is a shoelace sum over the loop "horizon from left pin to right pin, regional
 // back", so for fixed x it is linear in every z: ∂A/∂zₖ = (x₍ₖ₊₁₎ − x₍ₖ₋₁₎)/2 for a clipped vertex k,
-// with the loop's neighbours at the pins closing the ends (METHOD.md, our derivation). A clipped
+// with the loop's neighbours at the pins closing the ends (docs/method.md §Area variance of a horizon, our derivation). A clipped
 // end vertex is interpolated between input vertices j and j+1 at fraction λ, so it passes
 // (1 − λ) and λ of its coefficient back to them. Independent vertical noise σ on the input
 // vertices then moves A by a normal amount of variance σ² Σ cᵢ².

@@ -1,4 +1,4 @@
-// The caution of METHOD.md, shown in the app and in every export (RULES.md).
+// The caution of docs/method.md §Cautions, shown in the app and in every export (DEVELOPERS.md §Project rules).
 
 /** The caution text to print beside every depth-to-detachment result. */
 export const SECTION_CAUTION =

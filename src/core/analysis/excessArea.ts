@@ -3,7 +3,7 @@ import { clipPolylineToPins } from '../geometry/clipPolylineToPins';
 import { toCoordinateArrays } from '../geometry/toCoordinateArrays';
 import type { XZ } from '../model/section';
 
-// Excess area (Epard & Groshong 1993; METHOD.md): the horizon from its left-pin crossing to its
+// Excess area (Epard & Groshong 1993; docs/method.md §Pins, regional and excess area): the horizon from its left-pin crossing to its
 // right-pin crossing, then the regional back; the loop's shoelace area, signed so that a horizon
 // above its regional is positive. Overturned limbs are weighted by the loop's winding.
 

@@ -6,7 +6,7 @@ import type { LengthUnit } from '../model/section';
 
 // The area–depth line of Epard & Groshong (1993): least squares A = a + b·h over the included
 // horizons; D = −b, zd = −a/b, detachment elevation zref − zd; 95% interval on D from the
-// slope's t interval and on zd by Fieller's theorem (METHOD.md). b ≥ 0 is reported as
+// slope's t interval and on zd by Fieller's theorem (docs/method.md §Area-depth line, §Fieller interval). b ≥ 0 is reported as
 // "no detachment below these horizons", never as a depth.
 
 export interface AreaDepthResult {
@@ -76,7 +76,7 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
   };
 }
 
-/** Fieller's g = t² s² / (b² Sxx) at 95% (METHOD.md), as fiellerInterval computes it. */
+/** Fieller's g = t² s² / (b² Sxx) at 95% (docs/method.md §Fieller interval), as fiellerInterval computes it. */
 function fiellerG(fit: LineFit): number {
   const t = studentTQuantile(0.975, fit.df);
   return (t * t * fit.s * fit.s) / (fit.slope * fit.slope * fit.sxx);

@@ -10,11 +10,11 @@ import type { SectionAdjustment } from './shiftRegionals';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
 import { toCoordinateArrays } from '../geometry/toCoordinateArrays';
 
-// Monte Carlo of the detachment (METHOD.md "Practice": propagate digitising and regional error,
+// Monte Carlo of the detachment (docs/method.md §Sensitivity to the regional: propagate digitising and regional error,
 // report P10/P50/P90). Each run draws, in this fixed order: a common regional offset, a common
 // regional tilt about the chosen pin, a calibration scale factor, per-horizon regional offsets,
 // then the digitising noise — either one normal area change per horizon with variance σ² Σ cᵢ²
-// ('analytic', METHOD.md, exact because the area is linear in z) or σ on every input vertex with
+// ('analytic', docs/method.md §Area variance of a horizon, exact because the area is linear in z) or σ on every input vertex with
 // the horizon re-clipped ('vertices', the brute force the analytic method is checked against).
 
 export interface MonteCarloOptions {
@@ -104,7 +104,7 @@ export function monteCarlo(section: Section, options: MonteCarloOptions, onProgr
 
 type NoiseDraw = (normal: () => number, out: Float64Array) => boolean;
 
-/** One normal area change per horizon, σ·√(Σ cᵢ²) (METHOD.md). */
+/** One normal area change per horizon, σ·√(Σ cᵢ²) (docs/method.md §Area variance of a horizon). */
 function analyticNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
   const sds = p.horizons.map((h, i) => sigma * Math.sqrt(areaNoiseFactor(h.line, section.horizons[i].line.length, p.pins)));
   return (normal, out) => {

@@ -58,7 +58,7 @@ function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: strin
 
 /** x where segments s and t (vertex k to k + 1) of xs/zs meet: the line intersection, or for collinear overlap an end inside both. */
 function crossingX(xs: ArrayLike<number>, zs: ArrayLike<number>, s: number, t: number): number {
-  // Relative to segment s's start (METHOD.md, Numerics), as chainCrossings tests them.
+  // Relative to segment s's start (docs/method.md §Numerics), as chainCrossings tests them.
   const x0 = xs[s], z0 = zs[s];
   const rx = xs[s + 1] - x0, rz = zs[s + 1] - z0;
   const cx = xs[t] - x0, cz = zs[t] - z0;

@@ -2,7 +2,7 @@ import { createEvaluationScratch, evaluateShifted, type QuickDetachment } from '
 import type { PreparedSection } from './prepareSection';
 import type { SectionAdjustment } from './shiftRegionals';
 
-// Sensitivity of the detachment to the regional (METHOD.md "Sensitivity to the regional", our
+// Sensitivity of the detachment to the regional (docs/method.md §Sensitivity to the regional, our
 // derivation): raising every regional by δ drops each excess area by W0·δ and each depth by δ,
 // so zd' = zd − δ(1 + W0/D); a regional error is amplified by 1 + W0/D. The sweeps below use the
 // exact fast path (shiftRegionals), so they hold for inclined and curved regionals too.

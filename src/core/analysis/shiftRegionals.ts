@@ -3,9 +3,9 @@ import type { PreparedSection } from './prepareSection';
 // Exact re-evaluation of the per-horizon measures when every regional is moved by a linear
 // function f(x) = δᵢ + t·(x − xPivot) and, optionally, the whole section is rescaled.
 // Moving the regional by f changes the loop integral by −∫_{pL}^{pR} f dx, exact for any
-// polyline because f is linear (our derivation, METHOD.md "Sensitivity to the regional");
+// polyline because f is linear (our derivation, docs/method.md §Sensitivity to the regional);
 // r moves by the mean of f over the pins. Depths keep the prepared reference elevation fixed,
-// so a common offset δ gives A' = A − W0·δ and h' = h − δ as in METHOD.md.
+// so a common offset δ gives A' = A − W0·δ and h' = h − δ as in docs/method.md §Sensitivity to the regional.
 
 /** How to move the regionals (section units; tilt is dz/dx) and rescale (k multiplies x and z). All optional. */
 export interface SectionAdjustment {

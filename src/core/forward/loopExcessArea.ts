@@ -7,7 +7,7 @@ import type { XZ } from '../model/section';
  */
 export function loopExcessArea(horizon: XZ[], regional: XZ[]): number {
   if (horizon.length < 2 || regional.length < 2) return 0;
-  // Local origin: map-scale coordinates would otherwise cancel digits (METHOD.md, Numerics).
+  // Local origin: map-scale coordinates would otherwise cancel digits (docs/method.md §Numerics).
   const ox = horizon[0][0];
   const oz = horizon[0][1];
   const loop: XZ[] = [...horizon, ...[...regional].reverse()];

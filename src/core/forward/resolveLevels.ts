@@ -19,7 +19,7 @@ export function resolveLevels(spec: ForwardSpec): ForwardLevels {
     if (!Number.isFinite(r)) throw new Error(`forward model: horizon "${h.name}" needs a regionalElevation or a depth`);
     return r;
   });
-  // The default reference is the highest regional elevation, as the analysis assumes (METHOD.md).
+  // The default reference is the highest regional elevation, as the analysis assumes (docs/method.md §Area-depth line).
   const referenceElevation = spec.referenceElevation ?? maxOf(regionalElevations);
   const hasElevation = spec.detachmentElevation !== undefined;
   if (hasElevation === (spec.detachmentDepth !== undefined)) {

@@ -13,7 +13,7 @@ export function areaBetweenPolylines(
   bx: ArrayLike<number>,
   bz: ArrayLike<number>,
 ): number {
-  // A local z origin keeps digits at map-scale elevations (METHOD.md, Numerics).
+  // A local z origin keeps digits at map-scale elevations (docs/method.md §Numerics).
   const zOrigin = bz.length > 0 ? bz[0] : az.length > 0 ? az[0] : 0;
   return trapezoidIntegral(ax, az, zOrigin) - trapezoidIntegral(bx, bz, zOrigin);
 }

@@ -26,7 +26,7 @@ export function chainCrossings(xs: ArrayLike<number>, zs: ArrayLike<number>, cha
 interface PairContext {
   xs: ArrayLike<number>;
   zs: ArrayLike<number>;
-  /** Local origin (the first vertex), subtracted before each orientation test (METHOD.md, Numerics). */
+  /** Local origin (the first vertex), subtracted before each orientation test (docs/method.md §Numerics). */
   x0: number;
   z0: number;
   chains: XMonotoneChains;

@@ -3,12 +3,12 @@ import { pinContacts, type PinContacts } from './pinContacts';
 import { chainsFromStarts, type XMonotoneChains } from './xMonotoneChains';
 
 // Clip a horizon or regional at its exact crossings with the vertical pins x = pL and x = pR
-// (METHOD.md: "each line must cross each pin exactly once") and measure the clipped line: the
+// (docs/method.md §Pins, regional and excess area: "each line must cross each pin exactly once") and measure the clipped line: the
 // trapezoid integral ∫ (z − zOrigin) dx (exact for a polyline; the excess area and the regional
 // elevation are built from it), the length, and its x-monotone chains (the self-crossing test
 // needs them; a line that is one chain cannot cross itself). Two passes: pinContacts reads x
 // only, to count contacts and find the clip; then one loop cuts the part between the pins and
-// measures it as it copies (STYLE.md: typed-array loops in the analysis hot path). Each sum is
+// measures it as it copies (DEVELOPERS.md §Code style: typed-array loops in the analysis hot path). Each sum is
 // formed exactly as trapezoidIntegral and polylineLength form it, so the values agree to the last bit.
 
 /** A pin clip plus the measures of the clipped line (zero measures and no chains when it is null). */

@@ -1,7 +1,7 @@
 import { clipAndMeasure } from './clipAndMeasure';
 
 // Clip a horizon or regional at its exact crossings with the vertical pins x = pL and x = pR
-// (METHOD.md: "each line must cross each pin exactly once"). Contacts with each pin are counted
+// (docs/method.md §Pins, regional and excess area: "each line must cross each pin exactly once"). Contacts with each pin are counted
 // so a line that misses a pin, touches it, or folds back across it is reported, never guessed.
 
 /** A polyline clipped to the pins, running from x = pL (first vertex, exact) to x = pR (last vertex, exact). */

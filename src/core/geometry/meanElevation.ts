@@ -1,6 +1,6 @@
 import { trapezoidIntegral } from './trapezoidIntegral';
 
-// Regional elevation r = (1/W0) ∫ regional(x) dx over the pins (METHOD.md, after Epard & Groshong 1993).
+// Regional elevation r = (1/W0) ∫ regional(x) dx over the pins (Epard & Groshong 1993; docs/method.md §Pins, regional and excess area).
 // The integral is exact for a polyline; the first vertex's z is the local origin for accuracy.
 
 /** Mean elevation (units) of a polyline over its x-span, (1/Δx) ∫ z dx; NaN when first and last x are equal. */

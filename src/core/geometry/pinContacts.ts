@@ -1,5 +1,5 @@
 // Count a line's contacts with the two vertical pins x = pL and x = pR and find where a valid
-// clip starts and ends (METHOD.md: "each line must cross each pin exactly once"). A contact is a
+// clip starts and ends (docs/method.md §Pins, regional and excess area: "each line must cross each pin exactly once"). A contact is a
 // crossing, a touch, or a run of vertices along the pin, counted when the line leaves the pin
 // line, so a line that misses a pin, touches it, or folds back across it is reported, never
 // guessed. Only x is read: this is the cheap first pass of clipAndMeasure, which then cuts and

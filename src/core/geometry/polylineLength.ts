@@ -1,4 +1,4 @@
-// Plain length of a polyline: the bed length L and the regional length W of METHOD.md.
+// Plain length of a polyline: the bed length L and the regional length W of docs/method.md §Lengths.
 
 /** Length (units) of the open polyline xs/zs[from..to); 0 for fewer than 2 vertices. */
 export function polylineLength(

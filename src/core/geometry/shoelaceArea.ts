@@ -1,5 +1,5 @@
 // Shoelace (Gauss) area of a closed ring. The first vertex is the local origin: map-scale
-// coordinates (x ~ 1e6) would otherwise lose digits by cancellation (METHOD.md, Numerics).
+// coordinates (x ~ 1e6) would otherwise lose digits by cancellation (docs/method.md §Numerics).
 
 /** Signed area (units²) of the closed ring xs/zs[from..to), counter-clockwise positive; 0 for fewer than 3 vertices. */
 export function shoelaceArea(

@@ -1,6 +1,6 @@
 import type { XZ } from '../model/section';
 
-// The analysis runs on typed arrays (allocation-free loops, STYLE.md); sections store [x, z] pairs.
+// The analysis runs on typed arrays (allocation-free loops, DEVELOPERS.md §Code style); sections store [x, z] pairs.
 
 /** Separate x and z arrays (units) of the points, in order; empty arrays for no points. */
 export function toCoordinateArrays(points: readonly XZ[]): { xs: Float64Array; zs: Float64Array } {

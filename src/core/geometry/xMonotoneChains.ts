@@ -3,7 +3,7 @@
 // (direction 0). Zero-length segments (repeated vertices) join the chain they sit in. Within a
 // chain, segments that are not neighbours have disjoint x-ranges, which is what makes the
 // monotone-chain self-intersection test work (see selfIntersections). Coordinates are compared
-// relative to the first vertex, the local origin the intersection tests use (METHOD.md, Numerics).
+// relative to the first vertex, the local origin the intersection tests use (docs/method.md §Numerics).
 
 /** Chains in line order; segment indices are input segments (segment s joins vertices s and s+1). */
 export interface XMonotoneChains {

@@ -1,7 +1,7 @@
 // Fieller's interval for the x at which the mean response equals y0 (inverse prediction,
 // calibration): all x with (a + b·x − y0)² ≤ t² s² (1/n + (x − x̄)²/Sxx). With g = t² s² / (b² Sxx)
 // the set is a bounded interval only when g < 1 (Fieller 1954, JRSS B 16:175–185; Draper & Smith
-// 1998, §3.2; METHOD.md). Otherwise it is a pair of rays or the whole line: reported, never a number.
+// 1998, §3.2; docs/method.md §Fieller interval). Otherwise it is a pair of rays or the whole line: reported, never a number.
 
 import type { LineFit } from './leastSquares';
 import { studentTQuantile } from './studentTQuantile';

@@ -1,5 +1,5 @@
 // Two-sided confidence interval on a fitted slope: b ± t(½ + level/2, n − 2)·SE(b)
-// (Draper & Smith 1998, §1.4; METHOD.md "95% interval on D").
+// (Draper & Smith 1998, §1.4; docs/method.md §Slope interval).
 
 import type { LineFit } from './leastSquares';
 import { studentTQuantile } from './studentTQuantile';

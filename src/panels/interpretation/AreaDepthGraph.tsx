@@ -125,7 +125,7 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
         )))}
       </svg>
       {series.length > 1 && (
-        // Below the plot, not on it, so that it never covers a point (journey P3 #8).
+        // Below the plot, not on it, so that it never covers a point.
         <ul className="graph-legend" data-testid={testId ? `${testId}-legend` : undefined}>
           {series.map((s) => (
             <li key={`k${s.key}`}><span className="legend-line" style={{ background: s.colour }} />{s.label}</li>

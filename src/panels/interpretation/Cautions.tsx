@@ -1,4 +1,4 @@
-// The caution of METHOD.md, always visible with the results (RULES.md).
+// The caution of docs/method.md §Cautions, always visible with the results (DEVELOPERS.md §Project rules).
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 
 export function Cautions() {

@@ -25,7 +25,7 @@ export function ScenarioPanel() {
     () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, s.id)) })),
     [doc, gestureStart],
   );
-  // One reference for every scenario (journey P2 #3): the base case's (the first scenario that can be
+  // One reference for every scenario: the base case's (the first scenario that can be
   // analysed), normally its highest regional. Depths below each scenario's own reference differ by the
   // difference of the references and invite a wrong comparison; elevations compare as they are.
   const base = rows.find((r) => r.analysis);

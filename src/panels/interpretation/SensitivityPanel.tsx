@@ -1,7 +1,7 @@
 // Detachment elevation against a common regional offset and tilt (exact fast path of the engine), with
-// the amplification 1 + W0/D of METHOD.md written on the plot. Elevation, not depth: a depth needs a
+// the amplification 1 + W0/D (docs/method.md §Sensitivity to the regional) written on the plot. Elevation, not depth: a depth needs a
 // reference, and the highest regional moves with the offset, so a depth curve would disagree with the
-// main pane's depth for the same shift (journey P3 #15); the elevation has no such ambiguity.
+// main pane's depth for the same shift; the elevation has no such ambiguity.
 import { useEffect, useMemo, useState } from 'react';
 import type { Section } from '../../core/model/section';
 import { prepareSection } from '../../core/analysis/prepareSection';

@@ -24,7 +24,7 @@ export interface AreaDepthSeries {
 /**
  * Graph points (horizon ids from docToSection, same order) and the fit of the included ones; depths below
  * `referenceElevation` when given (to compare scenarios against one reference: the line's slope and its
- * detachment elevation do not depend on it, METHOD.md "Area–depth"), else below the analysis's own.
+ * detachment elevation do not depend on it, docs/method.md §Area-depth line), else below the analysis's own.
  */
 export function areaDepthSeries(analysis: SectionAnalysis, horizonIds: readonly string[], referenceElevation = analysis.referenceElevation): AreaDepthSeries {
   const zref = referenceElevation;

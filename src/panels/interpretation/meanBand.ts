@@ -2,7 +2,7 @@ import { studentTQuantile } from '../../core/stats/studentTQuantile';
 
 // The confidence band for the mean of a straight-line fit: ŷ(x) ± t(1 − α/2, n − 2) · s ·
 // √(1/n + (x − x̄)²/Sxx) (Draper & Smith 1998, §1.4; the same quantity as in Fieller's
-// inequality, METHOD.md), so the band meets A = 0 exactly at the ends of the Fieller interval.
+// inequality, docs/method.md §Fieller interval), so the band meets A = 0 exactly at the ends of the Fieller interval.
 
 export interface LineSummary { n: number; df: number; slope: number; intercept: number; s: number; xMean: number; sxx: number }
 

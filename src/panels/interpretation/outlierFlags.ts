@@ -3,7 +3,7 @@ import type { GraphPoint } from './areaDepthSeries';
 import { maxOf } from '../../core/stats/minMax';
 
 // Points far off the area–depth line, with the usual geological reasons (Epard & Groshong 1993;
-// Groshong 2006 ch. 11, as summarised in METHOD.md "Non-linear graphs"). "Far" is an internally
+// Groshong 2006 ch. 11, as summarised in docs/method.md §Non-linear graphs). "Far" is an internally
 // studentized residual of 2 or more (Draper & Smith 1998, §2.2; common practice), or a residual
 // of a tenth of the largest excess area in the fit (our choice, so that 3-point fits, whose
 // studentized residuals cannot exceed 1, still get flagged when a point is clearly off).

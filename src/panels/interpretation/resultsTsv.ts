@@ -4,7 +4,7 @@ import { formatNumber } from './formatValue';
 import { summaryRows } from './summaryRows';
 
 // The results table as tab-separated text for the clipboard (spreadsheets paste it into cells).
-// Areas in the section unit squared, lengths in the section unit; the caution travels with it (RULES.md).
+// Areas in the section unit squared, lengths in the section unit; the caution travels with it (DEVELOPERS.md §Project rules).
 
 function clean(text: string): string {
   return text.replace(/[\t\r\n]+/g, ' ');

@@ -3,7 +3,7 @@
 // regionals; a regional drag then only re-measures each regional's mean elevation r over the pins.
 // Moving a regional changes the horizon's loop area by exactly −W0·Δr, since the shoelace loop
 // splits into the horizon part and the regional part (−∫ regional dz over the pins = −W0·r;
-// METHOD.md, excess area and regional elevation), so evaluateShifted with per-horizon offsets Δr
+// docs/method.md §Pins, regional and excess area), so evaluateShifted with per-horizon offsets Δr
 // gives the same excess areas and area–depth line as a full analysis.
 import { imageToSection } from '../../core/calibration/mapPoints';
 import { prepareSection, type PreparedSection } from '../../core/analysis/prepareSection';

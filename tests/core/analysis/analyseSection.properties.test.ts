@@ -4,7 +4,7 @@ import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis
 import type { Section, XZ } from '../../../src/core/model/section';
 import { maxOf } from '../../../src/core/stats/minMax';
 
-// Invariants of the analysis (STYLE.md "Invariants over examples"; delaunator-style scaled runs).
+// Invariants of the analysis (DEVELOPERS.md §Code style, tests; delaunator-style scaled runs).
 // Random sections: monotone-in-x horizons (no self-crossing) over inclined regionals, pins [0, 1000].
 
 const horizonArb = fc.record({

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analysePrepared, analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
 import { prepareSection, prepareSectionScratch } from '../../../src/core/analysis/prepareSection';
 import type { Section, XZ } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 import { methodExample, pts, triangleHorizon } from './sections';
 
 function analysed(s: Section, options?: { referenceElevation?: number }): SectionAnalysis {
@@ -11,8 +11,8 @@ function analysed(s: Section, options?: { referenceElevation?: number }): Sectio
   return out.analysis;
 }
 
-describe('analyseSection(section) on the METHOD.md synthetic example', () => {
-  // Source: METHOD.md "Synthetic example (our own)": D = 1000 m, zd = 3000 m, h = 500…2000 m,
+describe('analyseSection(section) on the synthetic example of docs/method.md §Check values', () => {
+  // Source: the synthetic example of docs/method.md §Check values (our own): D = 1000 m, zd = 3000 m, h = 500…2000 m,
   // A = 2.5, 2.0, 1.5, 1.0 km²; slope −1000 m, intercept 3 km².
   const a = analysed(methodExample());
 
@@ -43,7 +43,7 @@ describe('analyseSection(section) on the METHOD.md synthetic example', () => {
   });
 
   it('gives Chamberlin depth A/(L − W) and layer-parallel strain L/(W + D) − 1 per horizon', () => {
-    // Source: Chamberlin (1910) H = A/(L − W); Groshong (2006) §11.4.3.2 e = L/(W + D) − 1 (METHOD.md).
+    // Source: Chamberlin (1910) H = A/(L − W); Groshong (2006) §11.4.3.2 e = L/(W + D) − 1 (docs/method.md §Chamberlin depth, §Layer-parallel strain).
     a.horizons.forEach((h, i) => {
       const A = [2.5e6, 2.0e6, 1.5e6, 1.0e6][i];
       const peak = (2 * A) / 10_000;
@@ -60,7 +60,7 @@ describe('analyseSection(section) on the METHOD.md synthetic example', () => {
     delete s.referenceElevation;
     const b = analysed(s);
     expect(b.referenceElevation).toBe(-500);
-    expectClose(b.horizons[0].depth, 0, 0, 1e-12);
+    expectClose(b.horizons[0].depth, 0, 0, { abs: 1e-12 });
     expectClose(b.areaDepth!.detachmentDepth!, 2500, 1e-10);
     expectClose(b.areaDepth!.detachmentElevation!, -3000, 1e-10);
   });
@@ -146,7 +146,7 @@ describe('analyseSection(section) notes and degenerate fits', () => {
     expect(a.areaDepth!.detachmentDepthCI95).toBeNull();
     // By hand (least squares on h = 500…2000, common practice): x̄ = 1250, Sxx = 1.25e6, b = −440,
     // SSE = 0.978e12, s² = SSE/2; t(0.975, 2) = 4.303 (NIST/SEMATECH e-Handbook §1.3.6.7.2);
-    // g = t² s² / (b² Sxx) (METHOD.md) = 37.4.
+    // g = t² s² / (b² Sxx) (docs/method.md §Fieller interval) = 37.4.
     const g = (4.303 ** 2 * (0.978e12 / 2)) / (440 ** 2 * 1.25e6);
     expect(g.toPrecision(3)).toBe('37.4');
     const note = a.notes.filter((n) => n.includes('unbounded'));
@@ -162,7 +162,7 @@ describe('analyseSection(section) notes and degenerate fits', () => {
   });
 
   it('measures the regional length along an inclined regional', () => {
-    // Source: METHOD.md after Groshong (2006) §11.4.3: W is measured parallel to the regional, W0/cos(dip).
+    // Source: Groshong (2006) §11.4.3 (docs/method.md §Lengths): W is measured parallel to the regional, W0/cos(dip).
     const s: Section = { units: 'm', pins: [0, 1000], horizons: [{ name: 'Dip', line: pts(-10, -1, 0, 0, 500, 150, 1000, 100, 1010, 101), regional: pts(-10, -1, 1010, 101) }] };
     const h = analysed(s).horizons[0];
     expectClose(h.regionalLength, 1000 * Math.hypot(1, 0.1), 1e-12);

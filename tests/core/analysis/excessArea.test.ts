@@ -3,7 +3,7 @@ import * as polygonClipping from 'polygon-clipping';
 import { describe, expect, it } from 'vitest';
 import { excessArea } from '../../../src/core/analysis/excessArea';
 import type { XZ } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 import { pts } from './sections';
 
 const flat = (z: number, a = -1e9, b = 1e9): XZ[] => [[a, z], [b, z]];
@@ -99,7 +99,7 @@ describe('excessArea(horizon, regional, pins)', () => {
       const uh = polygonClipping.intersection(under(line), box);
       const ur = polygonClipping.intersection(under(regional), box);
       const expected = mpArea(polygonClipping.difference(uh, ur)) - mpArea(polygonClipping.difference(ur, uh));
-      expectClose(excessArea(line, regional, [pL, pR]), expected, 1e-9, 1e-6);
+      expectClose(excessArea(line, regional, [pL, pR]), expected, 1e-9, { abs: 1e-6 });
     }));
   });
 });

@@ -7,9 +7,9 @@ import { prepareSection } from '../../../src/core/analysis/prepareSection';
 import { forwardSection } from '../../../src/core/forward/forwardSection';
 import { toCoordinateArrays } from '../../../src/core/geometry/toCoordinateArrays';
 import type { Section } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 
-// A forward-modelled section (METHOD.md "Forward models"): D = 800 m above a detachment 3000 m below
+// A forward-modelled section (docs/method.md §Forward models): D = 800 m above a detachment 3000 m below
 // the top regional, four horizons over rounded and box folds; pins away from the ends of the lines.
 function section(): Section {
   return forwardSection({
@@ -61,7 +61,7 @@ describe('monteCarlo(section, options)', () => {
     expectClose(sds[3] / sds[2], 0.5, 0.15);
   });
 
-  it('spreads the depth by σ·(1 + W0/D) for a common regional offset alone (METHOD.md amplification)', () => {
+  it('spreads the depth by σ·(1 + W0/D) for a common regional offset alone (docs/method.md §Sensitivity to the regional)', () => {
     const prep = prepareSection(section());
     if (!prep.ok) throw new Error('prepare failed');
     const D = evaluateShifted(prep.prepared)!.displacement;
@@ -71,7 +71,7 @@ describe('monteCarlo(section, options)', () => {
   });
 
   it('agrees in distribution between the analytic area noise and brute-force vertex noise', () => {
-    // METHOD.md: with independent vertical noise σ the area change is normal with variance σ² Σ cᵢ².
+    // docs/method.md §Area variance of a horizon: with independent vertical noise σ the area change is normal with variance σ² Σ cᵢ².
     const o: MonteCarloOptions = { runs: 1500, seed: 2024, sigmaVertex: 25 };
     const analytic = run({ ...o, method: 'analytic' });
     const brute = run({ ...o, seed: 4048, method: 'vertices' });
@@ -102,7 +102,7 @@ describe('monteCarlo(section, options)', () => {
 
 describe('areaVertexCoefficients(line, n, pins)', () => {
   it('predicts the exact change of excess area when one input vertex moves vertically', () => {
-    // The shoelace area is linear in z for fixed x (METHOD.md), so the prediction is exact.
+    // The shoelace area is linear in z for fixed x (docs/method.md §Area variance of a horizon), so the prediction is exact.
     const s = section();
     const h = s.horizons[1];
     const line = toCoordinateArrays(h.line);
@@ -116,7 +116,7 @@ describe('areaVertexCoefficients(line, n, pins)', () => {
       zs[i] += 3.5;
       const moved = prepareHorizon(h.name, line.xs, zs, reg.xs, reg.zs, s.pins);
       if (!moved.ok) throw new Error('moved prepare failed');
-      expectClose(moved.horizon.excessArea - base.horizon.excessArea, 3.5 * c[i], 1e-7, 1e-6);
+      expectClose(moved.horizon.excessArea - base.horizon.excessArea, 3.5 * c[i], 1e-7, { abs: 1e-6 });
     }
   });
 });

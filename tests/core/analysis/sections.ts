@@ -7,7 +7,7 @@ export function triangleHorizon(name: string, area: number, r: number, w: number
   return { name, line: [[0, r], [w / 2, r + peak], [w, r]], regional: [[0, r], [w, r]] };
 }
 
-/** The METHOD.md synthetic example (our own): D = 1000 m, zd = 3000 m, h = 500…2000 m, A = D (zd − h). */
+/** the synthetic example of docs/method.md §Check values (our own): D = 1000 m, zd = 3000 m, h = 500…2000 m, A = D (zd − h). */
 export function methodExample(): Section {
   const w = 10_000;
   return {

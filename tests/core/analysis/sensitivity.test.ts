@@ -3,7 +3,7 @@ import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { prepareSection, type PreparedSection } from '../../../src/core/analysis/prepareSection';
 import { regionalAmplification, regionalSensitivity } from '../../../src/core/analysis/sensitivity';
 import type { Section } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 import { methodExample, triangleHorizon } from './sections';
 
 function prepared(s: Section): PreparedSection {
@@ -12,7 +12,7 @@ function prepared(s: Section): PreparedSection {
   return p.prepared;
 }
 
-/** The METHOD.md synthetic example with the areas nudged off the line, so the check is not only for perfect data. */
+/** The synthetic example (docs/method.md §Check values) with the areas nudged off the line, so the check is not only for perfect data. */
 function noisyExample(): Section {
   const s = methodExample();
   const nudges = [40_000, -25_000, 30_000, -10_000];
@@ -21,7 +21,7 @@ function noisyExample(): Section {
 }
 
 describe('regionalSensitivity(prepared, sweeps) for flat regionals', () => {
-  // Source: METHOD.md "Sensitivity to the regional" (our derivation, exact for flat regionals):
+  // Source: docs/method.md §Sensitivity to the regional (our derivation, exact for flat regionals):
   // zd' = zd − δ(1 + W0/D).
   for (const [label, make] of [['on the line', methodExample], ['off the line', noisyExample]] as const) {
     it(`follows zd' = zd − δ(1 + W0/D) for a common offset (${label})`, () => {
@@ -30,11 +30,11 @@ describe('regionalSensitivity(prepared, sweeps) for flat regionals', () => {
       const sweep = regionalSensitivity(p, { offsets, tilts: [] });
       const zd = sweep.base!.detachmentDepth!;
       const D = sweep.base!.displacement;
-      sweep.offsets.forEach((pt, i) => expectClose(pt.depth!, zd - offsets[i] * (1 + p.pinWidth / D), 1e-10, 1e-9));
+      sweep.offsets.forEach((pt, i) => expectClose(pt.depth!, zd - offsets[i] * (1 + p.pinWidth / D), 1e-10, { abs: 1e-9 }));
     });
   }
 
-  it('gives the amplification 1 + W0/D = 11 for W0 = 10 km and D = 1000 m (METHOD.md example)', () => {
+  it('gives the amplification 1 + W0/D = 11 for W0 = 10 km and D = 1000 m (synthetic example, docs/method.md §Check values)', () => {
     const sweep = regionalSensitivity(prepared(methodExample()), { offsets: [0], tilts: [] });
     expectClose(sweep.amplification!, 11, 1e-10);
   });
@@ -55,12 +55,12 @@ describe('regionalSensitivity(prepared, sweeps) for flat regionals', () => {
     const p = prepared(noisyExample());
     const tilts = [-0.01, 0.004];
     const sweep = regionalSensitivity(p, { offsets: tilts.map((t) => (t * p.pinWidth) / 2), tilts });
-    sweep.tilts.forEach((pt, i) => expectClose(pt.depth!, sweep.offsets[i].depth!, 1e-10, 1e-9));
+    sweep.tilts.forEach((pt, i) => expectClose(pt.depth!, sweep.offsets[i].depth!, 1e-10, { abs: 1e-9 }));
     const right = regionalSensitivity(p, { offsets: [], tilts, tiltPivot: 'right' });
     expect(right.tiltPivotX).toBe(p.pins[1]);
     // About the right pin the same tilt lowers the mean by t·W0/2: the opposite shift.
     const opposite = regionalSensitivity(p, { offsets: tilts.map((t) => (-t * p.pinWidth) / 2), tilts: [] });
-    right.tilts.forEach((pt, i) => expectClose(pt.depth!, opposite.offsets[i].depth!, 1e-10, 1e-9));
+    right.tilts.forEach((pt, i) => expectClose(pt.depth!, opposite.offsets[i].depth!, 1e-10, { abs: 1e-9 }));
   });
 
   it('adds per-horizon offsets under every sweep point', () => {

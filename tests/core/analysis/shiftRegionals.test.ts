@@ -5,7 +5,7 @@ import { createEvaluationScratch, evaluateShifted } from '../../../src/core/anal
 import { prepareSection, type PreparedSection } from '../../../src/core/analysis/prepareSection';
 import { shiftRegionals } from '../../../src/core/analysis/shiftRegionals';
 import type { Section } from '../../../src/core/model/section';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 import { methodExample, pts } from './sections';
 
 function prepared(s: Section): PreparedSection {
@@ -45,8 +45,8 @@ describe('shiftRegionals(prepared, adjustment)', () => {
       const out = analyseSection(movedRegionals(s, (x, i) => offsets[i] + t * (x - xp)));
       if (!out.ok) throw new Error(out.problems[0].message);
       out.analysis.horizons.forEach((h, i) => {
-        expectClose(m.areas[i], h.excessArea, 1e-9, 1e-6);
-        expectClose(m.depths[i], h.depth, 1e-9, 1e-9);
+        expectClose(m.areas[i], h.excessArea, 1e-9, { abs: 1e-6 });
+        expectClose(m.depths[i], h.depth, 1e-9, { abs: 1e-9 });
         expectClose(m.regionalLengths[i], h.regionalLength, 1e-12);
       });
     }));
@@ -63,8 +63,8 @@ describe('shiftRegionals(prepared, adjustment)', () => {
 });
 
 describe('evaluateShifted(prepared, adjustment)', () => {
-  it('returns the METHOD.md synthetic answer with no adjustment', () => {
-    // Source: METHOD.md synthetic example, D = 1000 m, zd = 3000 m.
+  it('returns the synthetic answer (docs/method.md §Check values) with no adjustment', () => {
+    // Source: the synthetic example of docs/method.md §Check values, D = 1000 m, zd = 3000 m.
     const q = evaluateShifted(prepared(methodExample()))!;
     expectClose(q.displacement, 1000, 1e-10);
     expectClose(q.detachmentDepth!, 3000, 1e-10);
@@ -72,7 +72,7 @@ describe('evaluateShifted(prepared, adjustment)', () => {
   });
 
   it('follows the closed form zd − δ(1 + W0/D) for a common regional offset δ', () => {
-    // Source: METHOD.md "Sensitivity to the regional (our derivation, exact for flat regionals)".
+    // Source: docs/method.md §Sensitivity to the regional (our derivation, exact for flat regionals).
     const p = prepared(methodExample());
     const scratch = createEvaluationScratch(p);
     for (const delta of [-150, -20, 35, 200]) {

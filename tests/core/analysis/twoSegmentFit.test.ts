@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { twoSegmentFit } from '../../../src/core/analysis/twoSegmentFit';
-import { expectClose } from '../geometry/close';
+import { expectClose } from '../../expectClose';
 
-// Synthetic two-detachment section (our own, from A = Σ Dₖ (zₖ − h), METHOD.md "Non-linear graphs"):
+// Synthetic two-detachment section (our own, from A = Σ Dₖ (zₖ − h), docs/method.md §Non-linear graphs):
 // an upper detachment at 1500 m with D₁ = 500 m and a lower one at 3000 m with D₂ = 1000 m.
 const depths = [250, 500, 750, 1000, 2000, 2250, 2500];
 const areas = depths.map((h) => (h < 1500 ? 500 * (1500 - h) : 0) + 1000 * (3000 - h));
@@ -32,7 +32,7 @@ describe('twoSegmentFit(depths, areas, splitDepth, zref)', () => {
   it('notes when the upper segment is not steeper', () => {
     const straight = depths.map((h) => 1000 * (3000 - h));
     const f = twoSegmentFit(depths, straight, 1500, 0);
-    expectClose(f.upperDisplacement!, 0, 0, 1e-9);
+    expectClose(f.upperDisplacement!, 0, 0, { abs: 1e-9 });
     expect(f.notes.some((n) => n.includes('no upper detachment'))).toBe(true);
   });
 });

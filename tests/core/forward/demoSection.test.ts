@@ -12,7 +12,7 @@ describe('public/demo', () => {
     expect(read('section.json')).toEqual(forwardSection(demoSpec).section);
   });
 
-  it('analyseSection(section.json) returns truth.json to ~1e-9 (forward-model round trip, METHOD.md)', () => {
+  it('analyseSection(section.json) returns truth.json to ~1e-9 (forward-model round trip, docs/method.md §Forward models)', () => {
     const truth = read('truth.json') as { units: string; displacement: number; detachmentElevation: number };
     const outcome = analyseSection(read('section.json') as ReturnType<typeof forwardSection>['section']);
     if (!outcome.ok) throw new Error(outcome.problems.map((p) => p.message).join('; '));

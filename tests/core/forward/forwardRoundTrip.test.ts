@@ -3,7 +3,7 @@ import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { forwardSection } from '../../../src/core/forward/forwardSection';
 import type { ForwardSpec } from '../../../src/core/forward/forwardSpec';
 
-// METHOD.md check values, "Forward models": a section built from a known D and zd (each excess area
+// docs/method.md §Forward models: a section built from a known D and zd (each excess area
 // D·(zd − h), Epard & Groshong 1993) must give them back from the area–depth fit, to rounding.
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 

@@ -33,7 +33,7 @@ function shoelace(ring: XZ[]): number {
   return s / 2;
 }
 
-/** Excess area as METHOD.md constructs it: horizon left pin → right pin, regional back; above positive. */
+/** Excess area as docs/method.md §Pins, regional and excess area constructs it: horizon left pin → right pin, regional back; above positive. */
 function excess(line: XZ[], regional: XZ[], pins: [number, number]): number {
   return -shoelace([...between(line, pins[0], pins[1]), ...between(regional, pins[0], pins[1]).reverse()]);
 }
@@ -49,7 +49,7 @@ function pinCrossings(line: XZ[], p: number): number {
   return n;
 }
 
-/** Mean of a polyline's z over [pL, pR] by trapezoids (METHOD.md regional elevation). */
+/** Mean of a polyline's z over [pL, pR] by trapezoids (regional elevation, docs/method.md §Pins, regional and excess area). */
 function meanOver(line: XZ[], pL: number, pR: number): number {
   const part = between(line, pL, pR);
   let s = 0;
@@ -109,7 +109,7 @@ describe('forwardSection', () => {
           // Epard & Groshong (1993): A = D · (zd − h), i.e. D times the height of the regional above the detachment.
           const target = 1000 * (r - -3000);
           expect(rel(excess(h.line, h.regional, section.pins), target)).toBeLessThan(1e-12);
-          // The regional elevation is the mean of the regional over the pins (METHOD.md).
+          // The regional elevation is the mean of the regional over the pins (docs/method.md §Pins, regional and excess area).
           expect(Math.abs(meanOver(h.regional, 0, 20000) - r)).toBeLessThan(1e-9);
           for (const line of [h.line, h.regional]) {
             expect(pinCrossings(line, 0)).toBe(1);
@@ -157,7 +157,7 @@ describe('forwardSection', () => {
   });
 
   it('forwardSection(rounded) has the sine-bump amplitude 2A / λ (area of a·sin²(πx/λ) is aλ/2)', () => {
-    // METHOD.md analytic shapes: a full bump a·sin²(πx/λ) over one wavelength has area aλ/2.
+    // docs/method.md §Check values, analytic shapes: a full bump a·sin²(πx/λ) over one wavelength has area aλ/2.
     const { truth } = forwardSection(baseSpec(shapes.rounded));
     truth.horizons.forEach((h) => expect(rel(h.maxUplift, (2 * h.targetExcessArea) / 8000)).toBeLessThan(1e-12));
   });

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { areaBetweenPolylines } from '../../../src/core/geometry/areaBetweenPolylines';
 import { shoelaceArea } from '../../../src/core/geometry/shoelaceArea';
-import { expectClose } from './close';
+import { expectClose } from '../../expectClose';
 
 describe('areaBetweenPolylines(a, b)', () => {
   it('is the trapezoid area of a box fold over a flat regional', () => {
@@ -21,7 +21,7 @@ describe('areaBetweenPolylines(a, b)', () => {
       const bx = bz.map((_, i) => (100 * i) / (bz.length - 1));
       const loopX = [...ax, ...[...bx].reverse()];
       const loopZ = [...az, ...[...bz].reverse()];
-      expectClose(areaBetweenPolylines(ax, az, bx, bz), -shoelaceArea(loopX, loopZ), 1e-9, 1e-7);
+      expectClose(areaBetweenPolylines(ax, az, bx, bz), -shoelaceArea(loopX, loopZ), 1e-9, { label: 'loop area', abs: 1e-7 });
     }));
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { pinContacts } from '../../../src/core/geometry/pinContacts';
 
-// Hand-worked lines against pins at x = 0 and x = 10 (the counting rule of METHOD.md: each line
+// Hand-worked lines against pins at x = 0 and x = 10 (the counting rule of docs/method.md §Pins, regional and excess area: each line
 // must cross each pin exactly once; touches and runs along a pin are contacts too).
 const at = (xs: number[]) => pinContacts(xs, xs.length, 0, 10);
 

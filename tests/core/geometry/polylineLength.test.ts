@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { polylineLength } from '../../../src/core/geometry/polylineLength';
-import { expectClose } from './close';
+import { expectClose } from '../../expectClose';
 
 describe('polylineLength(xs, zs)', () => {
   it('is 5 for a 3-4-5 segment and adds segments', () => {

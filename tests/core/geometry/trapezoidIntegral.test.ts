@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { meanElevation } from '../../../src/core/geometry/meanElevation';
 import { trapezoidIntegral } from '../../../src/core/geometry/trapezoidIntegral';
-import { expectClose } from './close';
+import { expectClose } from '../../expectClose';
 
 describe('trapezoidIntegral(xs, zs, zOrigin)', () => {
   it('integrates z = x exactly over [0, 2]', () => {

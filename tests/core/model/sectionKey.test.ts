@@ -1,5 +1,5 @@
 // The key of a section: a result is kept with the key of the section it was run on, and is stale as soon as
-// anything the analysis reads has changed (journey P2 #1).
+// anything the analysis reads has changed.
 import { describe, expect, it } from 'vitest';
 import type { Section } from '../../../src/core/model/section';
 import { sectionKey } from '../../../src/core/model/sectionKey';

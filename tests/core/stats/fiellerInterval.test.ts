@@ -3,9 +3,9 @@ import fc from 'fast-check';
 import { fiellerInterval } from '../../../src/core/stats/fiellerInterval';
 import { leastSquares, type LineFit } from '../../../src/core/stats/leastSquares';
 import { studentTQuantile } from '../../../src/core/stats/studentTQuantile';
-import { expectClose } from './expectClose';
+import { expectClose } from '../../expectClose';
 
-// Graybill & Iyer, Regression Analysis (1994), reaction-chamber calibration example (METHOD.md).
+// Graybill & Iyer, Regression Analysis (1994), reaction-chamber calibration example (docs/method.md §Check values).
 const chamberX = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100];
 const chamberY = [206.36, 225.52, 252.18, 289.33, 318.11, 349.49, 383.03, 410.7, 444.4, 469.14, 501.16];
 
@@ -18,7 +18,7 @@ function fitOf(x: number[], y: number[]): LineFit {
 describe('fiellerInterval(fit, y0, level)', () => {
   it('reproduces the Graybill & Iyer reaction-chamber example', () => {
     const fit = fitOf(chamberX, chamberY);
-    // Source: Graybill & Iyer (1994) as quoted in METHOD.md: a = 198.45636, b = 3.0298182, s = 4.045006.
+    // Source: Graybill & Iyer (1994) as listed in docs/method.md §Check values: a = 198.45636, b = 3.0298182, s = 4.045006.
     expectClose(fit.intercept, 198.45636, 1e-7);
     expectClose(fit.slope, 3.0298182, 1e-7);
     expectClose(fit.s, 4.045006, 1e-6);
@@ -32,7 +32,7 @@ describe('fiellerInterval(fit, y0, level)', () => {
   });
 
   it('has bounded endpoints that solve (a + b x − y0)² = t² s² (1/n + (x − x̄)²/Sxx)', () => {
-    // Property of the definition (Fieller 1954; METHOD.md): the endpoints are the roots of the quadratic.
+    // Property of the definition (Fieller 1954; docs/method.md §Fieller interval): the endpoints are the roots of the quadratic.
     const noise = fc.array(fc.double({ min: -1, max: 1, noNaN: true }), { minLength: 12, maxLength: 12 });
     fc.assert(
       fc.property(
@@ -66,7 +66,7 @@ describe('fiellerInterval(fit, y0, level)', () => {
   });
 
   it('reports unbounded when g ≥ 1 (slope not distinguishable from zero)', () => {
-    // Noisy data around a nearly flat line: g = t² s² / (b² Sxx) ≫ 1 (METHOD.md).
+    // Noisy data around a nearly flat line: g = t² s² / (b² Sxx) ≫ 1 (docs/method.md §Fieller interval).
     const fit = fitOf([0, 1, 2, 3, 4, 5], [0, 3, -2, 2.5, -1, 0.6]);
     const t = studentTQuantile(0.975, fit.df);
     expect((t * t * fit.s * fit.s) / (fit.slope * fit.slope * fit.sxx)).toBeGreaterThanOrEqual(1);

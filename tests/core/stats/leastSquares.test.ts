@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import jStat from 'jstat';
 import { leastSquares } from '../../../src/core/stats/leastSquares';
 import { leastSquaresThroughOrigin } from '../../../src/core/stats/leastSquaresThroughOrigin';
-import { expectClose } from './expectClose';
+import { expectClose } from '../../expectClose';
 import { certified, certifiedSD, readStrd } from './nistStrd';
 import { maxOf } from '../../../src/core/stats/minMax';
 
@@ -19,15 +19,15 @@ describe('leastSquares(x, y) on NIST StRD Norris', () => {
     expect(fit).not.toBeNull();
     if (!fit) return;
     // Source: NIST StRD linear regression "Norris", certified values (fixture header).
-    expectClose(fit.slope, certified(header, 'B1'), 1e-12, 'B1');
-    expectClose(fit.intercept, certified(header, 'B0'), 1e-10, 'B0');
-    expectClose(fit.slopeSE, certifiedSD(header, 'B1'), 1e-10, 'SD(B1)');
-    expectClose(fit.interceptSE, certifiedSD(header, 'B0'), 1e-10, 'SD(B0)');
-    expectClose(fit.s, certified(header, 'residual SD'), 1e-10, 'residual SD');
-    expectClose(fit.r2, certified(header, 'R-squared'), 1e-12, 'R²');
+    expectClose(fit.slope, certified(header, 'B1'), 1e-12, { label: 'B1' });
+    expectClose(fit.intercept, certified(header, 'B0'), 1e-10, { label: 'B0' });
+    expectClose(fit.slopeSE, certifiedSD(header, 'B1'), 1e-10, { label: 'SD(B1)' });
+    expectClose(fit.interceptSE, certifiedSD(header, 'B0'), 1e-10, { label: 'SD(B0)' });
+    expectClose(fit.s, certified(header, 'residual SD'), 1e-10, { label: 'residual SD' });
+    expectClose(fit.r2, certified(header, 'R-squared'), 1e-12, { label: 'R²' });
     // NIST StRD Norris ANOVA: residual SS and df.
     const sse = fit.residuals.reduce((acc, r) => acc + r * r, 0);
-    expectClose(sse, certified(header, 'residual SS'), 1e-9, 'residual SS');
+    expectClose(sse, certified(header, 'residual SS'), 1e-9, { label: 'residual SS' });
     expect(fit.df).toBe(34);
     expect(fit.n).toBe(36);
   });
@@ -41,10 +41,10 @@ describe('leastSquaresThroughOrigin(x, y) on NIST StRD NoInt1', () => {
     expect(fit).not.toBeNull();
     if (!fit) return;
     // Source: NIST StRD linear regression "NoInt1", certified values (fixture header).
-    expectClose(fit.slope, certified(header, 'B1'), 1e-12, 'B1');
-    expectClose(fit.slopeSE, certifiedSD(header, 'B1'), 1e-10, 'SD(B1)');
-    expectClose(fit.s, certified(header, 'residual SD'), 1e-10, 'residual SD');
-    expectClose(fit.r2, certified(header, 'R-squared'), 1e-12, 'R²');
+    expectClose(fit.slope, certified(header, 'B1'), 1e-12, { label: 'B1' });
+    expectClose(fit.slopeSE, certifiedSD(header, 'B1'), 1e-10, { label: 'SD(B1)' });
+    expectClose(fit.s, certified(header, 'residual SD'), 1e-10, { label: 'residual SD' });
+    expectClose(fit.r2, certified(header, 'R-squared'), 1e-12, { label: 'R²' });
     expect(fit.df).toBe(10); // NIST NoInt1: 11 observations, 1 parameter
   });
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { leastSquares } from '../../../src/core/stats/leastSquares';
 import { slopeInterval } from '../../../src/core/stats/slopeInterval';
-import { expectClose } from './expectClose';
+import { expectClose } from '../../expectClose';
 
 describe('slopeInterval(fit, level)', () => {
   const x = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100];
@@ -13,7 +13,7 @@ describe('slopeInterval(fit, level)', () => {
     const interval = slopeInterval(fit);
     expect(interval).not.toBeNull();
     if (!interval) return;
-    // t(0.975, 9) = 2.262: NIST/SEMATECH e-Handbook §1.3.6.7.2 (METHOD.md), 3 decimals.
+    // t(0.975, 9) = 2.262: NIST/SEMATECH e-Handbook §1.3.6.7.2 (docs/method.md §Check values), 3 decimals.
     expect(Math.abs((interval[1] - fit.slope) / fit.slopeSE - 2.262)).toBeLessThanOrEqual(0.0005);
     expectClose(interval[0] + interval[1], 2 * fit.slope, 1e-14);
   });

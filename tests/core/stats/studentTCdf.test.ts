@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
 import { studentTCdf } from '../../../src/core/stats/studentTCdf';
-import { expectClose } from './expectClose';
+import { expectClose } from '../../expectClose';
 
 describe('studentTCdf(t, df)', () => {
   it('equals the closed forms for df = 1, 2, 3', () => {
@@ -21,12 +21,12 @@ describe('studentTCdf(t, df)', () => {
     // Analytic, rearranged to avoid cancellation: F₁(−u) = atan(1/u)/π;
     // F₂(−u) = 1/(b(b + u)) with b = √(2 + u²); F₃(−u) = (2φ − sin 2φ)/(2π) with φ = atan(√3/u).
     for (const u of [3, 10, 100, 1e4, 1e8]) {
-      expectClose(studentTCdf(-u, 1), Math.atan(1 / u) / Math.PI, 1e-13, `df 1 u ${u}`);
+      expectClose(studentTCdf(-u, 1), Math.atan(1 / u) / Math.PI, 1e-13, { label: `df 1 u ${u}` });
       const b = Math.sqrt(2 + u * u);
-      expectClose(studentTCdf(-u, 2), 1 / (b * (b + u)), 1e-13, `df 2 u ${u}`);
+      expectClose(studentTCdf(-u, 2), 1 / (b * (b + u)), 1e-13, { label: `df 2 u ${u}` });
       if (u <= 100) {
         const phi = Math.atan(Math.sqrt(3) / u); // 2φ − sin 2φ cancels for small φ: stop at u = 100
-        expectClose(studentTCdf(-u, 3), (2 * phi - Math.sin(2 * phi)) / (2 * Math.PI), 1e-11, `df 3 u ${u}`);
+        expectClose(studentTCdf(-u, 3), (2 * phi - Math.sin(2 * phi)) / (2 * Math.PI), 1e-11, { label: `df 3 u ${u}` });
       }
     }
   });
@@ -39,7 +39,7 @@ describe('studentTCdf(t, df)', () => {
     for (const df of [0.5, 1, 1.3, 2, 3.7, 5, 9, 17.2, 30, 120, 1000, 1e4]) {
       for (const t of [-8, -3, -1.5, -0.4, 0.1, 0.9, 2, 2.5, 4.2]) {
         const reference = jStat.studentt.cdf(t, df);
-        expectClose(studentTCdf(t, df), reference, df >= 1000 ? 2e-7 : 1e-7, `df ${df} t ${t}`);
+        expectClose(studentTCdf(t, df), reference, df >= 1000 ? 2e-7 : 1e-7, { label: `df ${df} t ${t}` });
       }
     }
   });
@@ -51,7 +51,7 @@ describe('studentTCdf(t, df)', () => {
       for (const t of [-4, -1.96, -0.5, 1]) {
         const phi = Math.exp(-t * t / 2) / Math.sqrt(2 * Math.PI);
         const expected = jStat.normal.cdf(t, 0, 1) - (phi * (t ** 3 + t)) / (4 * df);
-        expectClose(studentTCdf(t, df), expected, 1e-9, `df ${df} t ${t}`);
+        expectClose(studentTCdf(t, df), expected, 1e-9, { label: `df ${df} t ${t}` });
       }
     }
   });

@@ -3,11 +3,11 @@ import fc from 'fast-check';
 import jStat from 'jstat';
 import { studentTQuantile } from '../../../src/core/stats/studentTQuantile';
 import { studentTCdf } from '../../../src/core/stats/studentTCdf';
-import { expectClose } from './expectClose';
+import { expectClose } from '../../expectClose';
 
 describe('studentTQuantile(p, df)', () => {
   it('matches the NIST/SEMATECH table of two-sided 95% points, df 1–10', () => {
-    // Source: NIST/SEMATECH e-Handbook of Statistical Methods §1.3.6.7.2 (values in METHOD.md), 3 decimals.
+    // Source: NIST/SEMATECH e-Handbook of Statistical Methods §1.3.6.7.2 (values in docs/method.md §Check values), 3 decimals.
     const table = [12.706, 4.303, 3.182, 2.776, 2.571, 2.447, 2.365, 2.306, 2.262, 2.228];
     table.forEach((value, i) => {
       expect(Math.abs(studentTQuantile(0.975, i + 1) - value)).toBeLessThanOrEqual(0.0005 + 1e-12);
@@ -20,8 +20,8 @@ describe('studentTQuantile(p, df)', () => {
     // from memory): with α = 4p(1 − p), q = cos(arccos(√α)/3)/√α, t = sign(p − ½)·2√(q − 1).
     for (const p of [1e-12, 1e-6, 0.001, 0.025, 0.1, 0.3, 0.45, 0.4999, 0.55, 0.8, 0.975, 0.995, 0.999999]) {
       const cauchy = p < 0.5 ? -1 / Math.tan(Math.PI * p) : 1 / Math.tan(Math.PI * (1 - p)); // tan(π(p − ½)) without rounding p − ½
-      expectClose(studentTQuantile(p, 1), cauchy, 1e-12, `df 1 p ${p}`);
-      expectClose(studentTQuantile(p, 2), (2 * p - 1) / Math.sqrt(2 * p * (1 - p)), 1e-12, `df 2 p ${p}`);
+      expectClose(studentTQuantile(p, 1), cauchy, 1e-12, { label: `df 1 p ${p}` });
+      expectClose(studentTQuantile(p, 2), (2 * p - 1) / Math.sqrt(2 * p * (1 - p)), 1e-12, { label: `df 2 p ${p}` });
       const alpha = 4 * p * (1 - p);
       const q = Math.cos(Math.acos(Math.sqrt(alpha)) / 3) / Math.sqrt(alpha);
       // The closed form itself loses digits near p = ½ (q − 1 cancels), so compare with an absolute floor.
@@ -45,7 +45,7 @@ describe('studentTQuantile(p, df)', () => {
     for (const df of dfs) {
       for (const p of [0.001, 0.01, 0.05, 0.2, 0.75, 0.9, 0.95, 0.975, 0.995]) {
         const t = studentTQuantile(p, df);
-        expectClose(jStat.studentt.cdf(t, df), p, 1e-7, `df ${df} p ${p}`);
+        expectClose(jStat.studentt.cdf(t, df), p, 1e-7, { label: `df ${df} p ${p}` });
       }
     }
   });
@@ -54,7 +54,7 @@ describe('studentTQuantile(p, df)', () => {
     // Independent check: registry package jstat 1.9.6 (its inverse is a Halley iteration stopped near 1e-8).
     for (const df of [1, 2.5, 4, 7, 15.5, 60, 500, 1e4]) {
       for (const p of [0.005, 0.05, 0.1, 0.9, 0.975, 0.999]) {
-        expectClose(studentTQuantile(p, df), jStat.studentt.inv(p, df), 1e-7, `df ${df} p ${p}`);
+        expectClose(studentTQuantile(p, df), jStat.studentt.inv(p, df), 1e-7, { label: `df ${df} p ${p}` });
       }
     }
   });
@@ -64,7 +64,7 @@ describe('studentTQuantile(p, df)', () => {
     // (normal quantile, as given by jStat.normal.inv, registry package jstat 1.9.6).
     const z = jStat.normal.inv(0.975, 0, 1);
     for (const df of [1e7, 1e9, 1e12, 1e15]) {
-      expectClose(studentTQuantile(0.975, df), z + (z ** 3 + z) / (4 * df), 1e-12, `df ${df}`);
+      expectClose(studentTQuantile(0.975, df), z + (z ** 3 + z) / (4 * df), 1e-12, { label: `df ${df}` });
     }
   });
 

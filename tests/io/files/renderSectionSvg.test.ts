@@ -117,7 +117,7 @@ describe('renderSectionSvg', () => {
   it('writes negative numbers in the figure\'s text with the minus sign U+2212, and attributes in SVG number syntax', () => {
     // The sample's bumps are triangles 1000 wide and 400, 350, 300 high: excess areas 200 000, 175 000 and
     // 150 000 m² at depths 0, 250, 500 below the highest regional (z = 500): A = 100 (2000 − h), so the
-    // detachment is 2000 m down, at elevation −1500 m (METHOD.md area–depth; analytic).
+    // detachment is 2000 m down, at elevation −1500 m (docs/method.md §Area-depth line; analytic).
     const doc = sampleDoc();
     const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: '2024-05-01' });
     expect(svg).toContain('Detachment at elevation \u22121,500 m: 2,000 m below the reference at elevation 500 m');
@@ -212,7 +212,7 @@ describe('the inset area–depth graph', () => {
   });
 
   it('writes "unbounded" instead of a bar when the Fieller interval is unbounded', () => {
-    // Raised by 20 m the scatter makes g ≥ 1 with one degree of freedom (METHOD.md, Fieller).
+    // Raised by 20 m the scatter makes g ≥ 1 with one degree of freedom (docs/method.md §Fieller interval).
     const a = selectAnalysis(scatteredDoc(320));
     const r = a.outcome!.ok ? a.outcome!.analysis : null;
     expect(r!.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');

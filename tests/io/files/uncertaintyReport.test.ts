@@ -63,10 +63,10 @@ describe('uncertaintyReport', () => {
     expect(r.rows[0]).toEqual(['monte_carlo_status', 'out of date (earlier state of the section)']);
   });
 
-  it('amplification 1 + W0/D is what raising every flat regional does to the detachment elevation (METHOD.md closed form)', () => {
+  it('amplification 1 + W0/D is what raising every flat regional does to the detachment elevation (closed form of docs/method.md §Sensitivity to the regional)', () => {
     const amp = amplificationOf(analysis);
     expect(amp).not.toBeNull();
-    // Raise every regional by δ with the reference held (METHOD.md: zd' = zd − δ(1 + W0/D)).
+    // Raise every regional by δ with the reference held (docs/method.md §Sensitivity to the regional: zd' = zd − δ(1 + W0/D)).
     const delta = 3;
     const raised: Section = structuredClone(section);
     for (const h of raised.horizons) h.regional = h.regional.map(([x, z]) => [x, z + delta]);

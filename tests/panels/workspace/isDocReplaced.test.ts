@@ -1,4 +1,4 @@
-// After Project ▸ New or opening a file the workspace returns to the Select tool (journey P3 #16); it
+// After Project ▸ New or opening a file the workspace returns to the Select tool; it
 // recognises the replace from the store's change alone, and must not mistake an edit, gesture or undo for one.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { emptyProjectDoc } from '../../../src/core/model/projectDoc';

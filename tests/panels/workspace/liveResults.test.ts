@@ -1,7 +1,7 @@
 // The strip's fast path must give the engine's full answer: excess areas, detachment depth and
 // displacement equal to analyseSection on the same document, before and after regionals move;
-// and raising every flat regional by δ moves the detachment up by δ(1 + W0/D) (METHOD.md,
-// "Sensitivity to the regional", our derivation, exact for flat regionals).
+// and raising every flat regional by δ moves the detachment up by δ(1 + W0/D) (docs/method.md
+// §Sensitivity to the regional, our derivation, exact for flat regionals).
 import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { offsetRegionals } from '../../../src/core/model/commands/offsetRegionals';

@@ -1,5 +1,5 @@
-// Typed pins are refused when they would cross the other pin or lie far beyond the scan (journey P2 #2:
-// 1e99 typed as the left pin swapped the pins and lost the old one; review #13).
+// Typed pins are refused when they would cross the other pin or lie far beyond the scan (1e99
+// typed as the left pin once swapped the pins and lost the old one).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { pinAllowedRange, pinValueProblem, PIN_EXTENT_FACTOR } from '../../../src/panels/workspace/pinValueProblem';

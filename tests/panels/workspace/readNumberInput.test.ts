@@ -1,5 +1,5 @@
 // What a typed number field commits or keeps: every refusal says what was typed and what was kept
-// (review #13, journey P3 #4), and the shown value carries no float noise or "−0" (journey P3 #3, #1).
+// and the shown value carries no float noise or "−0".
 import { describe, expect, it } from 'vitest';
 import { parseNumber, readNumberInput, roundForField } from '../../../src/panels/workspace/readNumberInput';
 

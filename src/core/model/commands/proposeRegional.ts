@@ -10,7 +10,7 @@ export const PROPOSE_WINDOW = 0.15;
 
 /**
  * Returns the document with a straight regional proposed for the horizon through its lowest vertex within
- * ±15% of the pin width around each pin (beds are back at regional near the pins, METHOD.md), extended
+ * ±15% of the pin width around each pin (beds are back at regional near the pins, docs/method.md §Pins, regional and excess area), extended
  * 5% beyond each pin so it crosses both; unchanged without pins or without vertices near both pins.
  */
 export function proposeRegional(doc: ProjectDoc, horizonId: string, scenarioId?: string): ProjectDoc {

@@ -18,7 +18,7 @@ export function canvasCalibration(points: XZ[]): Calibration {
   if (!(xmin <= xmax)) { xmin = 0; xmax = 1; zmin = 0; zmax = 1; }
   if (xmax - xmin <= 0) xmax = xmin + 1;
   if (zmax - zmin <= 0) zmax = zmin + 1;
-  // One scale for both axes keeps the canvas a true-scale drawing (METHOD.md: never measure with VE ≠ 1 in pixels).
+  // One scale for both axes keeps the canvas a true-scale drawing (docs/method.md §Frame and units: never measure with VE ≠ 1 in pixels).
   const s = (CANVAS_WIDTH_PX - 2 * MARGIN_PX) / Math.max(xmax - xmin, zmax - zmin);
   const u = (x: number) => MARGIN_PX + (x - xmin) * s;
   const v = (z: number) => MARGIN_PX + (zmax - z) * s;

@@ -1,4 +1,4 @@
-// Brings a parsed project file up to the current version, one step at a time (STYLE.md: files
+// Brings a parsed project file up to the current version, one step at a time (DEVELOPERS.md §Code style: files
 // carry a version; an unknown or newer version fails with a clear message).
 import { checkProjectDoc } from '../projectSchema';
 import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFileV1 } from './projectFileFormat';

@@ -12,7 +12,7 @@ export interface ProjectFileV1 {
   format: typeof PROJECT_FORMAT;
   version: 1;
   savedAt?: string;
-  /** The caution of METHOD.md (written on every save, not checked on open; files without it open). */
+  /** The caution of docs/method.md §Cautions (written on every save, not checked on open; files without it open). */
   caution?: string;
   /** contentCheck(checkedText(doc, scan base64)); optional, verified when present. */
   check?: string;
