@@ -53,5 +53,8 @@ export default defineConfig({
     environment: 'node',
     setupFiles: ['tests/setup/fastCheck.ts'],
     reporters: ['default'],
+    // A guard against a hung test, not a speed check: property tests run hundreds of cases and a shared
+    // two-core machine can run them several times slower than a quiet one.
+    testTimeout: 60_000,
   },
 });

@@ -5,7 +5,7 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { validateSection } from '../core/model/validateSection';
 import { migrateProjectFile } from '../core/model/migrations/migrateProjectFile';
 import { sectionToProjectDoc } from '../core/model/migrations/sectionToProjectDoc';
-import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type ProjectFileV1 } from '../core/model/migrations/projectFileFormat';
+import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type ProjectFile } from '../core/model/migrations/projectFileFormat';
 import { base64ToBytes, bytesToBase64 } from './base64';
 import { checkedText, contentCheck } from '../core/model/migrations/contentCheck';
 
@@ -24,7 +24,7 @@ export type OpenedProject =
 /** Returns the project file text (JSON, with the caution in a "caution" field) for the document and the scan's original bytes. */
 export function serializeProject(doc: ProjectDoc, scan: ScanBytes | null, savedAt = new Date().toISOString()): string {
   const embedded = scan ? { type: scan.type, name: scan.name, dataBase64: bytesToBase64(scan.bytes) } : null;
-  const file: ProjectFileV1 = {
+  const file: ProjectFile = {
     format: PROJECT_FORMAT,
     version: PROJECT_FILE_VERSION,
     savedAt,

@@ -4,7 +4,6 @@
 // vertical exaggeration, title block, an inset area–depth graph and the caution. Pure: the same input always gives the same string; every
 // user string is escaped (escapeXml), so a hostile name stays text.
 import { SECTION_CAUTION } from '../core/analysis/caution';
-import { sectionToImage } from '../core/calibration/mapPoints';
 import { imageToSection } from '../core/calibration/mapPoints';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { clipPolylineToPins } from '../core/geometry/clipPolylineToPins';
@@ -18,6 +17,7 @@ import { areaDepthGroup } from './renderAreaDepthSvg';
 import { escapeXml } from './escapeXml';
 import { formatNumber, niceStep } from './formatNumber';
 import { halo, sectionAxes } from './sectionFigureAxes';
+import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
 import { minOf, maxOf } from '../core/stats/minMax';
 
 export const FIGURE_WIDTH = 1400;
@@ -36,23 +36,46 @@ export interface SectionFigureInput {
   scanDataUrl: string | null;
   /** The date printed in the title block (e.g. 2024-05-01). */
   date: string;
+  /** Vertical exaggeration to draw (1 = true scale); absent or null: as on the scan (the calibration's). */
+  verticalExaggeration?: number | null;
 }
 
-type Fig = (p: ImagePx) => [number, number];
 const pts = (list: [number, number][]) => list.map(([x, y]) => `${x.toFixed(2)},${y.toFixed(2)}`).join(' ');
 
-function extentPx(doc: ProjectDoc, extra: ImagePx[]): [number, number, number, number] {
-  if (doc.scan) return [0, 0, doc.scan.widthPx, doc.scan.heightPx];
-  const all: ImagePx[] = [...extra, ...doc.horizons.flatMap((h) => h.pointsPx), ...doc.scenarios.flatMap((s) => [...Object.values(s.regionals).flat(), ...(s.pinsPx ?? [])])];
-  if (all.length === 0) return [0, 0, 1000, 700];
-  const us = all.map((p) => p[0]), vs = all.map((p) => p[1]);
-  const [u0, u1, v0, v1] = [minOf(us), maxOf(us), minOf(vs), maxOf(vs)];
-  const m = 0.06 * Math.max(u1 - u0, v1 - v0, 1);
-  return [u0 - m, v0 - m, u1 + m, v1 + m];
+/** Without a calibration the drawing stays in image pixels (z = −v), with no scales. */
+const PIXEL_FIT: FittedCalibration = { kind: 'axes', a: [0, 1, 0], b: [0, 0, -1], unitsPerPxX: 1, unitsPerPxZ: 1, verticalExaggeration: 1, residuals: [], worstRelativeResidual: 0 };
+
+/** Returns the section window the figure shows: the scan's corners, or (without a scan) everything drawn with a margin. */
+function sectionWindow(doc: ProjectDoc, fit: FittedCalibration, extra: XZ[]): { x: [number, number]; z: [number, number] } {
+  const all: XZ[] = [];
+  if (doc.scan) {
+    const { widthPx: w, heightPx: h } = doc.scan;
+    for (const p of [[0, 0], [w, 0], [0, h], [w, h]] as ImagePx[]) all.push(imageToSection(fit, p));
+  } else {
+    for (const hz of doc.horizons) for (const p of hz.pointsPx) all.push(imageToSection(fit, p));
+    for (const sc of doc.scenarios) {
+      for (const r of Object.values(sc.regionals)) for (const p of r) all.push(imageToSection(fit, p));
+      for (const p of sc.pinsPx ?? []) all.push(imageToSection(fit, p));
+    }
+    for (const q of extra) all.push(q);
+  }
+  if (all.length === 0) return { x: [0, 1000], z: [-700, 0] };
+  let [x0, x1, z0, z1] = [Infinity, -Infinity, Infinity, -Infinity];
+  for (const [x, z] of all) {
+    if (!Number.isFinite(x) || !Number.isFinite(z)) continue;
+    if (x < x0) x0 = x;
+    if (x > x1) x1 = x;
+    if (z < z0) z0 = z;
+    if (z > z1) z1 = z;
+  }
+  if (!(x1 >= x0)) return { x: [0, 1000], z: [-700, 0] };
+  if (doc.scan) return { x: [x0, x1], z: [z0, z1] };
+  const mx = 0.06 * Math.max(x1 - x0, 1), mz = 0.06 * Math.max(z1 - z0, 1);
+  return { x: [x0 - mx, x1 + mx], z: [z0 - mz, z1 + mz] };
 }
 
-function sectionLine(fit: FittedCalibration, fig: Fig, a: XZ, b: XZ): string {
-  const [p, q] = [fig(sectionToImage(fit, a)), fig(sectionToImage(fit, b))];
+function hline(f: SectionFrame, z: number): string {
+  const [p, q] = [sectionToFigure(f, [f.xRange[0], z]), sectionToFigure(f, [f.xRange[1], z])];
   return `x1="${p[0].toFixed(2)}" y1="${p[1].toFixed(2)}" x2="${q[0].toFixed(2)}" y2="${q[1].toFixed(2)}"`;
 }
 
@@ -122,16 +145,20 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   const ad = result?.areaDepth ?? null;
   const hasDetachment = Boolean(fit && ds.ok && ad && !ad.noDetachment && ad.detachmentElevation !== null && result);
   // Without a scan the drawing is framed to show the detachment and its band as well.
-  const extra: ImagePx[] = [];
+  const extra: XZ[] = [];
   if (fit && ds.ok && ad && hasDetachment && result) {
     const els = [ad.detachmentElevation as number, ...(ad.detachmentDepthCI95 ?? []).map((d) => result.referenceElevation - d)];
-    for (const e of els) extra.push(sectionToImage(fit, [ds.section.pins[0], e]), sectionToImage(fit, [ds.section.pins[1], e]));
+    for (const e of els) extra.push([ds.section.pins[0], e], [ds.section.pins[1], e]);
   }
-  const [u0, v0, u1, v1] = extentPx(doc, extra.filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])));
-  const k = Math.min(PANEL.w / (u1 - u0), PANEL.h / (v1 - v0));
-  const ox = PANEL.x + (PANEL.w - (u1 - u0) * k) / 2 - u0 * k;
-  const oy = PANEL.y + (PANEL.h - (v1 - v0) * k) / 2 - v0 * k;
-  const fig: Fig = (p) => [ox + p[0] * k, oy + p[1] * k];
+  // Drawn in section coordinates (x right, z up) at the chosen vertical exaggeration, or the scan's own.
+  const mapFit = fit ?? PIXEL_FIT;
+  const chosenVe = input.verticalExaggeration ?? null;
+  const ve = fit ? (chosenVe && chosenVe > 0 ? chosenVe : fit.verticalExaggeration) : 1;
+  const frame = fitSectionFrame(sectionWindow(doc, mapFit, extra), ve, PANEL);
+  const [xLo, xHi] = frame.xRange;
+  const [zLo, zHi] = frame.zRange;
+  const toFig = (q: XZ) => sectionToFigure(frame, q);
+  const fig = (p: ImagePx) => toFig(imageToSection(mapFit, p));
   const drawn: Drawn = { regionals: false, pins: false, above: false, below: false, projected: false, detachment: false, band: false, reference: false };
   const out: string[] = [];
   const defs: string[] = [`<clipPath id="panel-clip"><rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}"/></clipPath>`];
@@ -154,13 +181,10 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   out.push(`<rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}" fill="#fbfbfa" stroke="#9aa5ad"/>`);
   out.push('<g clip-path="url(#panel-clip)">');
   if (scanDataUrl && doc.scan) {
-    const [a, b] = [fig([0, 0]), fig([doc.scan.widthPx, doc.scan.heightPx])];
-    out.push(`<image x="${a[0]}" y="${a[1]}" width="${b[0] - a[0]}" height="${b[1] - a[1]}" preserveAspectRatio="none" opacity="0.85" href="${escapeXml(scanDataUrl)}" xlink:href="${escapeXml(scanDataUrl)}"/>`);
+    // The scan resampled through the calibration: one affine matrix from its pixels to the figure.
+    const m = imageToFigureMatrix(mapFit, frame).map((v) => Number(v.toPrecision(10)));
+    out.push(`<image class="scan" x="0" y="0" width="${doc.scan.widthPx}" height="${doc.scan.heightPx}" transform="matrix(${m.join(' ')})" preserveAspectRatio="none" opacity="0.85" href="${escapeXml(scanDataUrl)}" xlink:href="${escapeXml(scanDataUrl)}"/>`);
   }
-  const corners = fit ? [[u0, v0], [u1, v0], [u0, v1], [u1, v1]].map((p) => imageToSection(fit, p as ImagePx)) : [];
-  const xs = corners.map((c) => c[0]), zs = corners.map((c) => c[1]);
-  const [xLo, xHi, zLo, zHi] = [minOf(xs), maxOf(xs), minOf(zs), maxOf(zs)];
-  const toFig = (q: XZ) => fig(sectionToImage(fit!, q));
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
     ds.section.horizons.forEach((h, i) => {
@@ -216,7 +240,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   if (fit && ds.ok && result) {
     // The reference level of the depths (docs/method.md §Area-depth line: h = zref − r), labelled at the right end.
     const zr = result.referenceElevation;
-    out.push(`<line class="reference-level" ${sectionLine(fit, fig, [xLo, zr], [xHi, zr])} stroke="#1d2731" stroke-width="1.3" stroke-dasharray="10 3 2 3"/>`);
+    out.push(`<line class="reference-level" ${hline(frame, zr)} stroke="#1d2731" stroke-width="1.3" stroke-dasharray="10 3 2 3"/>`);
     const at = toFig([xHi, zr]);
     const y = Math.min(PANEL.y + PANEL.h - 6, Math.max(PANEL.y + 14, at[1] - 5));
     out.push(`<text x="${Math.min(at[0], PANEL.x + PANEL.w) - 6}" y="${y.toFixed(2)}" font-size="11.5" text-anchor="end" ${halo()}>reference level, elevation ${formatNumber(zr)} ${u}: depths below this line</text>`);
@@ -224,7 +248,7 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   }
   if (fit && ad && hasDetachment && result) {
     const e = ad.detachmentElevation as number;
-    out.push(`<line ${sectionLine(fit, fig, [xLo, e], [xHi, e])} stroke="${RED}" stroke-width="3"/>`);
+    out.push(`<line class="detachment" ${hline(frame, e)} stroke="${RED}" stroke-width="3"/>`);
     drawn.detachment = true;
     const at = toFig([xLo, e]);
     if (e >= zLo && e <= zHi) {
@@ -236,7 +260,8 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   if (fit && scenario.pinsPx) {
     for (const [i, p] of scenario.pinsPx.entries()) {
       const x = imageToSection(fit, p)[0];
-      out.push(`<line ${sectionLine(fit, fig, [x, zLo], [x, zHi])} stroke="#20323f" stroke-width="2"/>`);
+      const [lo, hi] = [toFig([x, zLo]), toFig([x, zHi])];
+      out.push(`<line class="pin" x1="${lo[0].toFixed(2)}" y1="${lo[1].toFixed(2)}" x2="${hi[0].toFixed(2)}" y2="${hi[1].toFixed(2)}" stroke="#20323f" stroke-width="2"/>`);
       const top = toFig([x, zHi]);
       out.push(`<text x="${top[0] + 4}" y="${Math.max(PANEL.y + 14, top[1] + 14)}" font-size="11" fill="#20323f" ${halo()}>${i === 0 ? 'left pin' : 'right pin'}</text>`);
       drawn.pins = true;
@@ -244,15 +269,18 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   }
   out.push('</g>');
   // Elevation and distance scales on the panel's edges, then the scale bar and vertical exaggeration.
-  if (fit) out.push(sectionAxes(fit, { k, ox, oy }, PANEL, doc.units, [xLo, xHi]));
+  if (fit) out.push(sectionAxes(frame, PANEL, doc.units));
   const by = PANEL.y + PANEL.h + 30;
   if (fit) {
-    const unitsPerFig = fit.unitsPerPxX / k;
+    const unitsPerFig = 1 / frame.s;
     const len = niceStep(PANEL.w * 0.25 * unitsPerFig);
     const w = len / unitsPerFig;
     out.push(`<g class="scale-bar"><rect x="${PANEL.x}" y="${by}" width="${w / 2}" height="6" fill="#1d2731"/><rect x="${PANEL.x + w / 2}" y="${by}" width="${w / 2}" height="6" fill="#ffffff" stroke="#1d2731"/>`);
     out.push(`<text x="${PANEL.x}" y="${by + 20}" font-size="11">0</text><text x="${PANEL.x + w}" y="${by + 20}" font-size="11" text-anchor="middle">${formatNumber(len)} ${u}</text></g>`);
-    out.push(`<text x="${PANEL.x + w + 60}" y="${by + 8}" font-size="12">Vertical exaggeration ${formatNumber(fit.verticalExaggeration, 3)}× (as drawn)${doc.scan ? '' : ' · drawn without a scan'}</text>`);
+    const veText = chosenVe && chosenVe > 0
+      ? (Math.abs(ve - 1) < 1e-12 ? 'True scale: vertical exaggeration 1×' : `Vertical exaggeration ${formatNumber(ve, 3)}× (chosen)`)
+      : `Vertical exaggeration ${formatNumber(ve, 3)}× (as on the scan)`;
+    out.push(`<text class="vertical-exaggeration" x="${PANEL.x + w + 60}" y="${by + 8}" font-size="12">${veText}${doc.scan ? '' : ' · drawn without a scan'}</text>`);
     out.push(`<text x="${PANEL.x + PANEL.w}" y="${by + 8}" font-size="12" text-anchor="end">Distance along the section x (${u})</text>`);
   } else out.push(`<text x="${PANEL.x}" y="${by + 8}" font-size="12">Not calibrated: no scale, no vertical exaggeration.</text>`);
   const legend = legendRows(doc, drawn, 1030, PANEL.y);

@@ -57,6 +57,7 @@ export function FileMenu() {
   const [report, setReport] = useState(false);
   const [info, setInfo] = useState(false);
   const [pngSize, setPngSize] = useState<string>('a4-150');
+  const figureVe = useSessionStore((s) => s.figureVerticalExaggeration);
   const lastSaved = useAutosaveStatus((s) => s.lastSavedAt);
   const dirty = useDocStore((s) => s.revision !== s.savedRevision);
   const revision = useDocStore((s) => s.revision);
@@ -125,6 +126,15 @@ export function FileMenu() {
           <div className="menu-list" role="menu">
             <button type="button" role="menuitem" data-testid="export-project-info" onClick={choose(() => setInfo(true))}>Title and author… <span className="hint">for the figure and report</span></button>
             <hr />
+            <label className="menu-field">
+              Figure scale
+              <select data-testid="figure-ve" value={figureVe === null ? 'scan' : String(figureVe)}
+                onChange={(e) => { const v = e.currentTarget.value; useSessionStore.getState().setFigureVerticalExaggeration(v === 'scan' ? null : Number(v)); }}>
+                <option value="scan">as on the scan</option>
+                <option value="1">true scale (VE 1×)</option>
+                {[2, 3, 5, 10].map((v) => <option key={v} value={String(v)}>vertical exaggeration {v}×</option>)}
+              </select>
+            </label>
             <button type="button" role="menuitem" data-testid="export-svg" onClick={choose(() => void currentFigureSvg().then((svg) => exportText(svg, 'image/svg+xml', '.svg', '')))}>Section figure as SVG</button>
             <label className="menu-field">
               PNG size

@@ -1,5 +1,5 @@
 // The compact live results beside the section (section workspace): each horizon's excess area and the
-// detachment depth and displacement of the area–depth line, following every drag (liveResults). The full
+// detachment depth and displacement of the area–depth line, following every drag (liveResults: a reading of the one live analysis the pane and exports read). The full
 // caution (docs/method.md §Cautions) stands beside them in small type: the strip may be the only result on screen.
 import { useEffect, useRef } from 'react';
 import { SECTION_CAUTION } from '../core/analysis/caution';
@@ -11,6 +11,7 @@ import './workspace/workspace.css';
 
 export function ResultsStrip() {
   const doc = useDocStore((s) => s.doc);
+  const gestureStart = useDocStore((s) => s.gestureStart);
   const selectHorizon = useSessionStore((s) => s.selectHorizon);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
   const ref = useRef<HTMLDivElement>(null);
@@ -29,7 +30,7 @@ export function ResultsStrip() {
     };
   }, [shown]);
   if (!shown) return null;
-  const live = liveResults(doc);
+  const live = liveResults(doc, gestureStart);
   return (
     <div ref={ref} className="results-strip" data-testid="results-strip" aria-label="Live results">
       <div className="strip-main">
@@ -55,7 +56,7 @@ export function ResultsStrip() {
       {live.horizons.length > 0 && (
         <div className="strip-areas" aria-label="Excess area per horizon">
           {live.horizons.map((h) => (
-            <button type="button" key={h.id} className={`strip-area${h.id === selectedId ? ' selected' : ''}${h.included ? '' : ' excluded'}`} onClick={() => selectHorizon(h.id)} title={`Excess area of ${h.name}${h.included ? '' : ' (left out of the fit)'}`}>
+            <button type="button" key={h.id} className={`strip-area${h.id === selectedId ? ' selected' : ''}${h.included ? '' : ' excluded'}`} onClick={() => selectHorizon(h.id)} title={h.leftOutReason ? `${h.name} is left out of the analysis: ${h.leftOutReason}` : `Excess area of ${h.name}${h.included ? '' : ' (left out of the fit)'}`}>
               <span className="swatch" style={{ background: h.colour }} />
               <span className="strip-area-name">{h.name}</span>
               <span data-testid={`strip-area-${h.id}`}>{h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units) : '—'}</span>

@@ -2,7 +2,7 @@
 // scan's bytes go to IndexedDB; on the next visit the last state comes back (with "Start fresh").
 // Closing the tab with changes not saved to a file asks first (beforeunload).
 import { emptyProjectDoc } from '../core/model/projectDoc';
-import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot, type StoredScan } from './autosaveDb';
+import { unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type StoredScan } from './autosaveDb';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
 import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
@@ -45,13 +45,24 @@ export async function autosaveNow(): Promise<void> {
 
 /** Brings back the last autosaved state if there is one worth restoring; returns true when it did. */
 export async function restoreAutosave(): Promise<boolean> {
-  let snap;
+  let kept;
   try {
-    snap = await readSnapshot(await db());
+    kept = await readKept(await db());
   } catch {
     return false;
   }
-  if (!snap) return false;
+  if (kept.kind === 'unreadable') {
+    // Not replaced by the demo's autosave: moved aside, and the user is told why it did not come back.
+    try {
+      await setAsideKept(await db());
+    } catch {
+      // Could not move it; the message still says why it was not restored.
+    }
+    useSessionStore.getState().showMessage('error', `${kept.message} It is kept aside in this browser, not deleted; the demo opened instead.`);
+    return false;
+  }
+  if (kept.kind === 'none') return false;
+  const snap = kept.snap;
   const empty = emptyProjectDoc();
   const { doc } = snap;
   if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
@@ -78,7 +89,16 @@ export async function restoreAutosave(): Promise<boolean> {
   // A restored session that had not been saved to a file is still unsaved.
   if (snap.dirty) useDocStore.setState({ savedRevision: useDocStore.getState().revision - 1 });
   useAutosaveStatus.setState({ restoredFrom: snap.savedAt || new Date().toISOString() });
-  if (notShown) useSessionStore.getState().showMessage('error', notShown);
+  if (snap.fromSetAside) {
+    try {
+      await unsetAsideKept(await db());
+    } catch {
+      // Left aside: restored again next time while nothing current is kept.
+    }
+  }
+  const migrated = snap.migratedFrom === null ? null : `The work kept in this browser was kept at version ${snap.migratedFrom} and has been brought up to this version.`;
+  if (notShown) useSessionStore.getState().showMessage('error', migrated ? `${migrated} ${notShown}` : notShown);
+  else if (migrated) useSessionStore.getState().showMessage('info', migrated);
   return true;
 }
 

@@ -1,7 +1,8 @@
 // The autosave store in IndexedDB: the latest document (and whether it was saved to a file) under
 // one key, and the scan's original bytes under its scan id, written only when the scan changes.
-// The factory is a parameter so tests run against fake-indexeddb.
-import { checkProjectDoc } from '../core/model/projectSchema';
+// The factory is a parameter so tests run against fake-indexeddb. A kept document comes back through
+// the project files' migration (migrateKeptDoc), so work kept by an older version is not lost.
+import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import type { ProjectDoc } from '../core/model/projectDoc';
 
 const DB_NAME = 'foldroot-autosave';
@@ -9,9 +10,22 @@ const DB_VERSION = 1;
 const STATE = 'state';
 const SCANS = 'scans';
 const CURRENT = 'current';
+/** Where kept work that this build cannot read (e.g. kept by a newer build) is moved instead of being overwritten. */
+const SET_ASIDE = 'set-aside';
 
 export interface StoredScan { id: string; type: string; name: string; bytes: ArrayBuffer }
-export interface AutosaveSnapshot { savedAt: string; doc: ProjectDoc; dirty: boolean; scan: StoredScan | null }
+export interface AutosaveSnapshot {
+  savedAt: string; doc: ProjectDoc; dirty: boolean; scan: StoredScan | null;
+  /** The schema version the document was kept at when it was older than this build's (it was migrated), else null. */
+  migratedFrom: number | null;
+  /** True when it came from the set-aside record (kept by a build that could read it, moved aside by one that could not). */
+  fromSetAside: boolean;
+}
+
+/** What the browser holds: nothing, kept work this build can restore, or kept work it cannot read (with why). */
+export type KeptRead = { kind: 'none' } | { kind: 'kept'; snap: AutosaveSnapshot } | { kind: 'unreadable'; message: string };
+
+type StateRecord = { savedAt?: unknown; doc?: unknown; dirty?: unknown; scanId?: unknown };
 
 /** True when the error means the browser's storage quota is used up. */
 export function isQuotaError(e: unknown): boolean {
@@ -48,32 +62,74 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
   });
 }
 
-/** Writes the snapshot in one transaction; the scan's bytes are written only when `writeScanBytes` (other scans are dropped). Rejects with the browser's error (see isQuotaError). */
+/** Writes the snapshot in one transaction; the scan's bytes are written only when `writeScanBytes` (other scans are dropped, but a set-aside record's). Rejects with the browser's error (see isQuotaError). */
 export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   const tx = db.transaction([STATE, SCANS], 'readwrite');
   const finished = done(tx);
   tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: snap.doc, dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
+    // Other scans are dropped, except the one of a set-aside record (setAsideKept).
     const scans = tx.objectStore(SCANS);
-    scans.clear();
+    const aside = (await request(tx.objectStore(STATE).get(SET_ASIDE))) as StateRecord | undefined;
+    const keep = typeof aside?.scanId === 'string' ? aside.scanId : null;
+    for (const key of await request(scans.getAllKeys())) if (key !== keep) scans.delete(key);
     if (scan) scans.put(scan, scan.id);
   }
   await finished;
 }
 
-/** Returns the last snapshot, or null when there is none or it no longer passes the schema. */
-export async function readSnapshot(db: IDBDatabase): Promise<AutosaveSnapshot | null> {
+/** Reads the kept work (the current record, else a set-aside one this build can read), migrated to the current version. */
+export async function readKept(db: IDBDatabase): Promise<KeptRead> {
   const tx = db.transaction([STATE, SCANS], 'readonly');
-  const state = (await request(tx.objectStore(STATE).get(CURRENT))) as { savedAt?: unknown; doc?: unknown; dirty?: unknown; scanId?: unknown } | undefined;
-  if (!state) return null;
-  const checked = checkProjectDoc(state.doc);
-  if (!checked.ok) return null;
-  let scan: StoredScan | null = null;
-  if (typeof state.scanId === 'string') {
-    const s = (await request(tx.objectStore(SCANS).get(state.scanId))) as StoredScan | undefined;
-    if (s && s.bytes instanceof ArrayBuffer) scan = s;
+  const current = (await request(tx.objectStore(STATE).get(CURRENT))) as StateRecord | undefined;
+  const aside = (await request(tx.objectStore(STATE).get(SET_ASIDE))) as StateRecord | undefined;
+  const record = async (state: StateRecord, fromSetAside: boolean): Promise<KeptRead> => {
+    const checked = migrateKeptDoc(state.doc);
+    if (!checked.ok) return { kind: 'unreadable', message: checked.message };
+    let scan: StoredScan | null = null;
+    if (typeof state.scanId === 'string') {
+      const s = (await request(tx.objectStore(SCANS).get(state.scanId))) as StoredScan | undefined;
+      if (s && s.bytes instanceof ArrayBuffer) scan = s;
+    }
+    const savedAt = typeof state.savedAt === 'string' ? state.savedAt : '';
+    return { kind: 'kept', snap: { savedAt, doc: checked.doc, dirty: state.dirty === true, scan, migratedFrom: checked.migratedFrom, fromSetAside } };
+  };
+  const first = current ? await record(current, false) : ({ kind: 'none' } as const);
+  if (first.kind === 'kept' || !aside) return first;
+  const second = await record(aside, true);
+  return second.kind === 'kept' ? second : first;
+}
+
+/** Returns the kept snapshot this build can restore, or null when there is none or it cannot be read. */
+export async function readSnapshot(db: IDBDatabase): Promise<AutosaveSnapshot | null> {
+  const r = await readKept(db);
+  return r.kind === 'kept' ? r.snap : null;
+}
+
+/** Moves the current record (which this build cannot read) to the set-aside key, so that new work does not overwrite it. */
+export async function setAsideKept(db: IDBDatabase): Promise<void> {
+  const tx = db.transaction([STATE], 'readwrite');
+  const finished = done(tx);
+  const store = tx.objectStore(STATE);
+  const current = await request(store.get(CURRENT));
+  if (current !== undefined) {
+    store.put(current, SET_ASIDE);
+    store.delete(CURRENT);
   }
-  return { savedAt: typeof state.savedAt === 'string' ? state.savedAt : '', doc: checked.doc, dirty: state.dirty === true, scan };
+  await finished;
+}
+
+/** Moves a set-aside record back to be the current one, once this build has restored its work. */
+export async function unsetAsideKept(db: IDBDatabase): Promise<void> {
+  const tx = db.transaction([STATE], 'readwrite');
+  const finished = done(tx);
+  const store = tx.objectStore(STATE);
+  const aside = await request(store.get(SET_ASIDE));
+  if (aside !== undefined) {
+    store.put(aside, CURRENT);
+    store.delete(SET_ASIDE);
+  }
+  await finished;
 }
 
 /** Deletes the snapshot and stored scans ("Start fresh"). */

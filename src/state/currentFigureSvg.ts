@@ -3,6 +3,7 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { scanDataUrl } from '../io/exportFigure';
 import { renderSectionSvg } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
+import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
 import { selectAnalysis } from './selectors';
 
@@ -13,8 +14,9 @@ export async function docScanDataUrl(doc: ProjectDoc): Promise<string | null> {
   return scanDataUrl(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes });
 }
 
-/** Returns the figure of the open project as an SVG string (today's date in the title block). */
+/** Returns the figure of the open project as an SVG string (today's date in the title block), at the vertical exaggeration chosen for figures. */
 export async function currentFigureSvg(): Promise<string> {
   const doc = useDocStore.getState().doc;
-  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10) });
+  const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
+  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
 }

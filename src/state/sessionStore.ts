@@ -29,6 +29,8 @@ export interface SessionState {
   busy: string | null;
   /** False until start-up (restore or demo) has finished. */
   started: boolean;
+  /** Vertical exaggeration of the exported figure (1 = true scale); null: as on the scan. */
+  figureVerticalExaggeration: number | null;
   /** A zoom or pan of the user's: the view is no longer kept fitted. */
   setCamera: (camera: Camera) => void;
   /** Fits the view to the target, and keeps it fitted when the view changes size until the user zooms or pans. */
@@ -42,6 +44,7 @@ export interface SessionState {
   clearMessage: () => void;
   setBusy: (text: string | null) => void;
   setStarted: () => void;
+  setFigureVerticalExaggeration: (ve: number | null) => void;
 }
 
 let messageId = 0;
@@ -56,6 +59,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
   message: null,
   busy: null,
   started: false,
+  figureVerticalExaggeration: null,
   setCamera: (camera) => set({ camera, fitted: null }),
   fitTo: (target) => set((s) => ({ camera: fitTargetCamera(target, s.viewport.width, s.viewport.height), fitted: target })),
   setViewport: (width, height) => set((s) => {
@@ -70,4 +74,5 @@ export const useSessionStore = create<SessionState>()((set) => ({
   clearMessage: () => set({ message: null }),
   setBusy: (busy) => set({ busy }),
   setStarted: () => set({ started: true }),
+  setFigureVerticalExaggeration: (figureVerticalExaggeration) => set({ figureVerticalExaggeration }),
 }));

@@ -4,7 +4,9 @@ import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { setProjectInfo } from '../../src/core/model/commands/setProjectInfo';
 import type { DecodeResult } from '../../src/io/decodeScan';
-import { openAutosaveDb, readSnapshot, writeSnapshot } from '../../src/state/autosaveDb';
+import { clearSnapshot, openAutosaveDb, readKept, readSnapshot, writeSnapshot } from '../../src/state/autosaveDb';
+import { readFileSync } from 'node:fs';
+import { SCHEMA_VERSION } from '../../src/core/model/projectDoc';
 import { useDocStore } from '../../src/state/docStore';
 import { sampleDoc } from '../io/files/sampleDoc';
 
@@ -77,5 +79,77 @@ describe('restoreAutosave with a kept scan', () => {
     useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited after the restore' }));
     await autosaveNow();
     expect(await keptScanBytes()).toEqual(bytes);
+  });
+});
+
+/** Puts a state record into the kept-work store as an earlier build would have left it. */
+async function keepRecord(doc: unknown, key = 'current'): Promise<void> {
+  const db = await openAutosaveDb(factory);
+  await new Promise<void>((resolve, reject) => {
+    const tx = db.transaction(['state'], 'readwrite');
+    tx.objectStore('state').put({ savedAt: '2025-06-01T00:00:00.000Z', doc, dirty: true, scanId: null }, key);
+    tx.oncomplete = () => resolve();
+    tx.onerror = () => reject(tx.error);
+  });
+}
+
+const fixture = (name: string) => JSON.parse(readFileSync(new URL(`../fixtures/projects/${name}`, import.meta.url), 'utf8'));
+
+describe('restoreAutosave of work kept by an earlier or a newer version', () => {
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    useSessionStore.getState().clearMessage();
+    await clearSnapshot(await openAutosaveDb(factory));
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('brings back a version-0 kept document through the project files\' migration, and says so', async () => {
+    const { format: _f, version: _v, ...content } = fixture('v0-two-horizons.json');
+    await keepRecord(content);
+    expect(await restoreAutosave()).toBe(true);
+    const doc = useDocStore.getState().doc;
+    expect(doc.schemaVersion).toBe(SCHEMA_VERSION);
+    expect(doc.title).toBe('Version-0 sample (invented)');
+    expect(doc.horizons.map((h) => h.name)).toEqual(['Upper marker', 'Lower marker']);
+    expect(useSessionStore.getState().message?.text).toContain('kept at version 0 and has been brought up to this version');
+  });
+
+  it('brings back a version-1 kept document unchanged', async () => {
+    const file = fixture('v1-two-horizons.json');
+    await keepRecord(file.doc);
+    expect(await restoreAutosave()).toBe(true);
+    if (SCHEMA_VERSION === 1) expect(useDocStore.getState().doc).toEqual(file.doc);
+    expect(useDocStore.getState().doc.title).toBe('Version-1 sample (invented)');
+  });
+
+  it('sets aside work kept by a newer build instead of letting new work overwrite it, and says why', async () => {
+    const newer = { ...fixture('v1-two-horizons.json').doc, schemaVersion: SCHEMA_VERSION + 1 };
+    await keepRecord(newer);
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Work of this session' }));
+    expect(await restoreAutosave()).toBe(false);
+    const message = useSessionStore.getState().message!;
+    expect(message.kind).toBe('error');
+    expect(message.text).toContain(`version ${SCHEMA_VERSION + 1}, made by a newer Foldroot`);
+    expect(message.text).toContain('kept aside in this browser, not deleted');
+    // This session's work is kept as usual; the newer record is still there, aside.
+    await autosaveNow();
+    const db = await openAutosaveDb(factory);
+    const aside = await new Promise<unknown>((resolve) => {
+      const r = db.transaction(['state']).objectStore('state').get('set-aside');
+      r.onsuccess = () => resolve(r.result);
+    });
+    expect((aside as { doc: { schemaVersion: number } }).doc.schemaVersion).toBe(SCHEMA_VERSION + 1);
+    expect((await readSnapshot(db))?.doc.title).toBe('Work of this session');
+  });
+
+  it('falls back to a set-aside record this build can read when nothing current is kept', async () => {
+    await keepRecord(fixture('v1-two-horizons.json').doc, 'set-aside');
+    const read = await readKept(await openAutosaveDb(factory));
+    expect(read.kind === 'kept' && read.snap.fromSetAside).toBe(true);
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Version-1 sample (invented)');
+    // It is the current record again, so it is not lost if the page closes before the next write.
+    const again = await readKept(await openAutosaveDb(factory));
+    expect(again.kind === 'kept' && !again.snap.fromSetAside && again.snap.doc.title).toBe('Version-1 sample (invented)');
   });
 });

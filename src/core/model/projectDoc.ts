@@ -58,8 +58,14 @@ export interface ProjectSettings {
   showFills: boolean;
 }
 
+/**
+ * The version of the document this build writes, in the document (`schemaVersion`) and in the project
+ * file (`version`): one number. To add a version, see src/core/model/migrations/README.md.
+ */
+export const SCHEMA_VERSION = 1;
+
 export interface ProjectDoc {
-  schemaVersion: 1;
+  schemaVersion: typeof SCHEMA_VERSION;
   title: string;
   author: string;
   units: LengthUnit;
@@ -77,7 +83,7 @@ export type { XZ };
 /** Returns a new empty project document with one scenario. */
 export function emptyProjectDoc(): ProjectDoc {
   return {
-    schemaVersion: 1,
+    schemaVersion: SCHEMA_VERSION,
     title: 'Untitled section',
     author: '',
     units: 'm',

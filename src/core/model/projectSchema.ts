@@ -1,8 +1,10 @@
-// The schema of the project document (schemaVersion 1), checked on every open and restore.
-// Written with zod (a registry schema library) so the shape is declared once and the messages
-// name the exact path of each problem. Limits keep hostile files from exhausting memory.
+// The schema of the project document at SCHEMA_VERSION, checked on every open and restore.
+// Written with zod (a registry schema library) so that the messages name the exact path of each
+// problem. The type ProjectDoc (projectDoc.ts, with a doc line per field) and this schema are the
+// same shape: the compile-time check at the end of this file fails when one changes without the
+// other. Limits keep hostile files from exhausting memory.
 import { z } from 'zod';
-import type { ProjectDoc } from './projectDoc';
+import { SCHEMA_VERSION, type ProjectDoc } from './projectDoc';
 
 /** Largest counts accepted in a project file: generous for real work, finite for hostile input. */
 export const PROJECT_LIMITS = { horizons: 2000, pointsPerLine: 200_000, scenarios: 200, nameLength: 500, calibrationPoints: 1000 };
@@ -46,9 +48,10 @@ const scenario = z.object({
   referenceElevation: num.optional(),
 });
 
-/** The zod schema of a schemaVersion-1 project document; unknown keys are kept (loose) so newer optional fields survive. */
-export const projectDocSchema = z.looseObject({
-  schemaVersion: z.literal(1),
+const settingsShape = { showDetachment: z.boolean(), showGrid: z.boolean(), showFills: z.boolean() };
+
+const docShape = {
+  schemaVersion: z.literal(SCHEMA_VERSION),
   title: name,
   author: name,
   units: z.enum(['m', 'ft']),
@@ -57,8 +60,18 @@ export const projectDocSchema = z.looseObject({
   horizons: z.array(horizon).max(PROJECT_LIMITS.horizons),
   scenarios: z.array(scenario).min(1).max(PROJECT_LIMITS.scenarios),
   activeScenarioId: id,
-  settings: z.looseObject({ showDetachment: z.boolean(), showGrid: z.boolean(), showFills: z.boolean() }),
-});
+  settings: z.looseObject(settingsShape),
+};
+
+/** The zod schema of a current project document; unknown keys are kept (loose) so newer optional fields survive. */
+export const projectDocSchema = z.looseObject(docShape);
+
+// Compile-time check that the schema (without the kept unknown keys) and ProjectDoc are one shape,
+// optional fields included: the type check fails on SCHEMA_MATCHES_TYPE when they differ.
+type SchemaDoc = Omit<z.infer<z.ZodObject<typeof docShape>>, 'settings'> & { settings: z.infer<z.ZodObject<typeof settingsShape>> };
+type Flat<T> = { [K in keyof T]: T[K] };
+type Identical<A, B> = (<T>() => T extends A ? 1 : 2) extends (<T>() => T extends B ? 1 : 2) ? true : false;
+export const SCHEMA_MATCHES_TYPE: Identical<Flat<SchemaDoc>, Flat<ProjectDoc>> = true;
 
 export type ProjectDocCheck = { ok: true; doc: ProjectDoc } | { ok: false; message: string };
 
@@ -70,7 +83,7 @@ export function checkProjectDoc(value: unknown): ProjectDocCheck {
     const more = r.error.issues.length > 3 ? ` (and ${r.error.issues.length - 3} more)` : '';
     return { ok: false, message: `The project document is not valid — ${issues.join('; ')}${more}.` };
   }
-  const doc = r.data as unknown as ProjectDoc;
+  const doc: ProjectDoc = r.data;
   const ids = new Set<string>();
   for (const h of doc.horizons) {
     if (ids.has(h.id)) return { ok: false, message: `The project document is not valid — two horizons share the id "${h.id}".` };

@@ -52,7 +52,7 @@ describe('liveResults', () => {
     expectSame(bigDoc());
   });
 
-  it('liveResults(doc) still equals analyseSection after regionals are raised, tilted and bent (no re-preparation)', () => {
+  it('liveResults(doc) still equals analyseSection after regionals are raised, tilted and bent', () => {
     const doc = bigDoc();
     liveResults(doc);
     let moved = offsetRegionals(doc, null, 37.5);

@@ -1,7 +1,7 @@
-// Brings a parsed project file up to the current version, one step at a time (DEVELOPERS.md §Code style: files
-// carry a version; an unknown or newer version fails with a clear message).
+// Brings a parsed project file up to the current version, one step at a time (DEVELOPERS.md §File versions:
+// files carry a version; an unknown or newer version fails with a clear message).
 import { checkProjectDoc } from '../projectSchema';
-import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFileV1 } from './projectFileFormat';
+import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFile } from './projectFileFormat';
 import { v0ToV1 } from './v0ToV1';
 import { checkedText, contentCheck } from './contentCheck';
 
@@ -9,10 +9,10 @@ export type MigrationResult = { ok: true; file: Record<string, unknown> } | { ok
 /** One step: a file of version n (already known to be that version) to version n + 1. */
 export type MigrationStep = (file: Record<string, unknown>) => MigrationResult;
 
-/** steps[n] migrates version n to n + 1. */
+/** steps[n] migrates version n to n + 1; adding a version appends its step here (README.md in this folder). */
 export const MIGRATION_STEPS: MigrationStep[] = [v0ToV1];
 
-export type ProjectFileCheck = { ok: true; file: ProjectFileV1; migratedFrom: number | null } | { ok: false; message: string };
+export type ProjectFileCheck = { ok: true; file: ProjectFile; migratedFrom: number | null } | { ok: false; message: string };
 
 function isObject(v: unknown): v is Record<string, unknown> {
   return typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -73,5 +73,5 @@ function migrate(raw: unknown): ProjectFileCheck {
   const scan = checkScan(file.scan);
   if (typeof scan === 'string') return { ok: false, message: `The project file is not valid — ${scan}.` };
   const savedAt = typeof file.savedAt === 'string' ? { savedAt: file.savedAt } : {};
-  return { ok: true, file: { format: PROJECT_FORMAT, version: 1, ...savedAt, doc: doc.doc, scan }, migratedFrom: version === PROJECT_FILE_VERSION ? null : version };
+  return { ok: true, file: { format: PROJECT_FORMAT, version: PROJECT_FILE_VERSION, ...savedAt, doc: doc.doc, scan }, migratedFrom: version === PROJECT_FILE_VERSION ? null : version };
 }

@@ -1,16 +1,17 @@
 // The project file's envelope: a format name and a version, around the document and the scan bytes.
-import type { ProjectDoc } from '../projectDoc';
+import { SCHEMA_VERSION, type ProjectDoc } from '../projectDoc';
 
 export const PROJECT_FORMAT = 'foldroot-project';
-/** The version this build writes; older ones are migrated one step at a time, newer ones refused. */
-export const PROJECT_FILE_VERSION = 1;
+/** The version this build writes (the document's SCHEMA_VERSION); older ones are migrated one step at a time, newer ones refused. */
+export const PROJECT_FILE_VERSION = SCHEMA_VERSION;
 
 /** The scan embedded in a project file: MIME type, file name and the original bytes in base64. */
 export interface EmbeddedScan { type: string; name: string; dataBase64: string }
 
-export interface ProjectFileV1 {
+/** A project file at the current version. */
+export interface ProjectFile {
   format: typeof PROJECT_FORMAT;
-  version: 1;
+  version: typeof SCHEMA_VERSION;
   savedAt?: string;
   /** The caution of docs/method.md §Cautions (written on every save, not checked on open; files without it open). */
   caution?: string;

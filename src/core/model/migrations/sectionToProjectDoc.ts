@@ -5,7 +5,6 @@ import { sectionToImage } from '../../calibration/mapPoints';
 import { emptyProjectDoc, type DocHorizon, type ImagePx, type ProjectDoc } from '../projectDoc';
 import type { Section, XZ } from '../section';
 import { canvasCalibration } from './canvasCalibration';
-import { minOf, maxOf } from '../../stats/minMax';
 
 /** Colours given to horizons in order (our own palette, readable on white and on a grey scan). */
 export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d35400', '#16a085', '#7f6000', '#b03a78'];
@@ -13,8 +12,14 @@ export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d3
 /** Returns a project document holding the section, calibrated onto a true-scale canvas; title is the given name. */
 export function sectionToProjectDoc(section: Section, title = 'Section'): ProjectDoc {
   const all: XZ[] = section.horizons.flatMap((h) => [...h.line, ...h.regional]);
-  const zs = all.map((p) => p[1]);
-  const zMid = zs.length ? (minOf(zs) + maxOf(zs)) / 2 : 0;
+  // In a loop: spreading a long traced line's elevations into Math.min overflows the call stack.
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  for (const p of all) {
+    if (p[1] < zMin) zMin = p[1];
+    if (p[1] > zMax) zMax = p[1];
+  }
+  const zMid = all.length ? (zMin + zMax) / 2 : 0;
   all.push([section.pins[0], zMid], [section.pins[1], zMid]);
   const calibration = canvasCalibration(all);
   const fitted = fitCalibration(calibration);

@@ -2,7 +2,7 @@
 // scan and no calibration. Version 1 stores the document in image pixels; the step draws the
 // section on a true-scale stand-in canvas (sectionToProjectDoc).
 import { validateSection } from '../validateSection';
-import { PROJECT_FORMAT, type ProjectFileV1 } from './projectFileFormat';
+import { PROJECT_FORMAT } from './projectFileFormat';
 import { sectionToProjectDoc } from './sectionToProjectDoc';
 import type { MigrationStep } from './migrateProjectFile';
 
@@ -14,6 +14,5 @@ export const v0ToV1: MigrationStep = (file) => {
     return { ok: false, message: `The section in this version-0 file is not valid: ${first}` };
   }
   const title = typeof file.title === 'string' && file.title.length <= 500 ? file.title : 'Section';
-  const next: ProjectFileV1 = { format: PROJECT_FORMAT, version: 1, doc: sectionToProjectDoc(checked.section, title), scan: null };
-  return { ok: true, file: next as unknown as Record<string, unknown> };
+  return { ok: true, file: { format: PROJECT_FORMAT, version: 1, doc: sectionToProjectDoc(checked.section, title), scan: null } };
 };
