@@ -215,6 +215,59 @@ function eventOrder(px: Float64Array, pz: Float64Array): Int32Array {
   return order;
 }
 
+/**
+ * Which kept segments can take part in a crossing: those whose x-range meets an x covered by two or more
+ * x-monotone chains. Within one chain (x strictly increasing or decreasing) segments that are not
+ * neighbours have disjoint x-ranges, so two segments that cross lie, at the crossing, over an x where two
+ * chains overlap; the rest need not enter the sweep. A horizon that folds back in a few places sends only
+ * the segments around those places; a line that is all fold-backs (a steep zigzag) sends all of them.
+ */
+function segmentsInOverlaps(L: Line): Uint8Array {
+  const segs = L.n - 1;
+  const { x } = L;
+  const take = new Uint8Array(segs);
+  // Chains: maximal runs of segments along which x strictly increases or strictly decreases (a vertical segment alone).
+  const lo: number[] = [], hi: number[] = [];
+  let dir = 2;
+  for (let k = 0; k < segs; k++) {
+    const d = x[k + 1] > x[k] ? 1 : x[k + 1] < x[k] ? -1 : 0;
+    const a = x[k] < x[k + 1] ? x[k] : x[k + 1], b = x[k] < x[k + 1] ? x[k + 1] : x[k];
+    if (d === dir && d !== 0) {
+      if (a < lo[lo.length - 1]) lo[lo.length - 1] = a;
+      if (b > hi[hi.length - 1]) hi[hi.length - 1] = b;
+    } else {
+      lo.push(a); hi.push(b);
+      dir = d;
+    }
+  }
+  if (lo.length < 2) return take;
+  // x covered by two or more chains (closed intervals): a count over the sorted ends, starts before ends.
+  const ends: [number, number][] = [];
+  for (let c = 0; c < lo.length; c++) ends.push([lo[c], 1], [hi[c], -1]);
+  ends.sort((p, q) => p[0] - q[0] || q[1] - p[1]);
+  const zoneLo: number[] = [], zoneHi: number[] = [];
+  let depth = 0;
+  for (const [v, step] of ends) {
+    const before = depth;
+    depth += step;
+    if (before < 2 && depth >= 2) zoneLo.push(v);
+    else if (before >= 2 && depth < 2) zoneHi.push(v);
+  }
+  if (zoneLo.length === 0) return take;
+  for (let k = 0; k < segs; k++) {
+    const a = x[k] < x[k + 1] ? x[k] : x[k + 1], b = x[k] < x[k + 1] ? x[k + 1] : x[k];
+    // The first zone that does not end left of the segment.
+    let l = 0, h = zoneLo.length;
+    while (l < h) {
+      const mid = (l + h) >> 1;
+      if (zoneHi[mid] < a) l = mid + 1;
+      else h = mid;
+    }
+    if (l < zoneLo.length && zoneLo[l] <= b) take[k] = 1;
+  }
+  return take;
+}
+
 /** An ordered list of segments (a treap, arrays indexed by kept segment), ordered bottom to top at the sweep. */
 class SweepList {
   readonly left: Int32Array;
@@ -330,16 +383,25 @@ export function sweepSelfCrossing(xs: ArrayLike<number>, zs: ArrayLike<number>):
   const { x, z } = L;
   // Events: 2k = segment k enters at its left end, 2k + 1 = it leaves at its right end; sorted by
   // point (x, then z), entries before exits at one point so that segments meeting there are compared.
-  const px = new Float64Array(2 * segs);
-  const pz = new Float64Array(2 * segs);
+  const take = segmentsInOverlaps(L);
+  let m = 0;
+  for (let k = 0; k < segs; k++) m += take[k];
+  if (m < 2) return null;
+  // Events of the segments that take part: event 2i / 2i + 1 is the entry / exit of segment ids[i].
+  const ids = new Int32Array(m);
+  const px = new Float64Array(2 * m);
+  const pz = new Float64Array(2 * m);
   // Each segment's left and right end (kept vertex indices), found once.
   const segL = new Int32Array(segs);
   const segR = new Int32Array(segs);
-  for (let k = 0; k < segs; k++) {
+  for (let k = 0, i = 0; k < segs; k++) {
+    if (take[k] === 0) continue;
     const lo = leftEnd(L, k), hi = lo === k ? k + 1 : k;
     segL[k] = lo; segR[k] = hi;
-    px[2 * k] = x[lo]; pz[2 * k] = z[lo];
-    px[2 * k + 1] = x[hi]; pz[2 * k + 1] = z[hi];
+    ids[i] = k;
+    px[2 * i] = x[lo]; pz[2 * i] = z[lo];
+    px[2 * i + 1] = x[hi]; pz[2 * i + 1] = z[hi];
+    i++;
   }
   const order = eventOrder(px, pz);
   const list = new SweepList(segs);
@@ -370,7 +432,7 @@ export function sweepSelfCrossing(xs: ArrayLike<number>, zs: ArrayLike<number>):
     return [L.source[lo], L.source[hi]];
   };
   for (const e of order) {
-    const k = e >> 1;
+    const k = ids[e >> 1];
     if ((e & 1) === 0) {
       list.insert(k, goesBelow);
       const hit = test(k, list.below(k)) ?? test(k, list.above(k));
