@@ -3,6 +3,7 @@
 // so that the restore itself is not mistaken for new work.
 import { openDemo } from '../state/openDemo';
 import { restoreAutosave, startAutosave } from '../state/autosave';
+import { startGesturePreparation } from '../state/gesturePreparation';
 import { useSessionStore } from '../state/sessionStore';
 
 let started = false;
@@ -15,6 +16,7 @@ export function startApp(): void {
     const restored = await restoreAutosave();
     if (!restored) await openDemo();
     startAutosave();
+    startGesturePreparation();
     useSessionStore.getState().setStarted();
   })();
 }

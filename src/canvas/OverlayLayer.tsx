@@ -1,7 +1,7 @@
 // Handles, previews and calibration marks drawn above the shapes (section workspace). Handles are one
 // custom shape each (thousands of vertices stay cheap), for the vertices in view only (handlesInView); the tool preview is drawn from the ephemeral
 // preview outside React and redrawn with batchDraw when it changes.
-import { memo, useEffect, useRef } from 'react';
+import { memo, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { Label, Layer, Shape, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
 import { calibrationPoints } from '../core/model/commands/calibrationPointRef';
@@ -10,7 +10,7 @@ import { activeScenario } from '../core/model/docToSection';
 import type { ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { handlesInView } from './handlesInView';
+import { handlesInView, type HandlesInView } from './handlesInView';
 import { getToolPreview, subscribeToolPreview } from './toolDispatch';
 import { pinLinePx } from './pinLinePx';
 
@@ -24,31 +24,60 @@ function squares(ctx: Ctx, points: readonly ImagePx[], half: number): void {
 /** Most vertex handles drawn at once; past it the user is asked to zoom in (handlesInView). */
 const HANDLE_CAP = 3000;
 
-const VertexHandles = memo(function VertexHandles({ scale }: { scale: number }) {
+// The handles in view change with every pan frame: they are found when the camera changes (a store
+// subscription) and drawn from a ref, and React re-renders only when the note replaces the handles or
+// the handles come back; the note's place and count are set on its Konva nodes directly.
+const VertexHandles = memo(function VertexHandles() {
   const tool = useSessionStore((s) => s.activeTool);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
-  const camera = useSessionStore((s) => s.camera);
-  const viewport = useSessionStore((s) => s.viewport);
-  const inset = useSessionStore((s) => s.viewInsetBottom);
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === selectedId));
-  if (!h || !h.visible || (tool !== 'edit' && tool !== 'projected')) return null;
-  const half = 3.5 / scale;
-  const seen = handlesInView(h.pointsPx, { ...camera, ...viewport }, HANDLE_CAP);
-  if (!seen.points) {
-    // At the view's bottom left above the results strip (messages float at its top), in image px, drawn at screen size.
+  const shown = h && h.visible && (tool === 'edit' || tool === 'projected') ? h : null;
+  const seen = useRef<HandlesInView | null>(null);
+  const [tooMany, setTooMany] = useState(false);
+  const shapeRef = useRef<Konva.Shape>(null);
+  const labelRef = useRef<Konva.Label>(null);
+  const textRef = useRef<Konva.Text>(null);
+  const noteText = (count: number, name: string) => `${count.toLocaleString('en')} vertices of “${name}” in view: zoom in to see and drag single vertices`;
+
+  useLayoutEffect(() => {
+    if (!shown) {
+      seen.current = null;
+      return;
+    }
+    const update = () => {
+      const { camera, viewport, viewInsetBottom } = useSessionStore.getState();
+      const found = handlesInView(shown.pointsPx, { ...camera, ...viewport }, HANDLE_CAP);
+      seen.current = found;
+      setTooMany(found.points === null);
+      // At the view's bottom left above the results strip (messages float at its top), in image px, drawn at screen size.
+      const label = labelRef.current;
+      if (label) {
+        label.setAttrs({ x: (12 - camera.x) / camera.scale, y: (viewport.height - viewInsetBottom - 40 - camera.y) / camera.scale, scaleX: 1 / camera.scale, scaleY: 1 / camera.scale });
+        textRef.current?.text(noteText(found.count, shown.name));
+      }
+      (label ?? shapeRef.current)?.getLayer()?.batchDraw();
+    };
+    update();
+    return useSessionStore.subscribe((s, prev) => {
+      if (s.camera !== prev.camera || s.viewport !== prev.viewport || s.viewInsetBottom !== prev.viewInsetBottom) update();
+    });
+  }, [shown, tooMany]);
+
+  if (!shown) return null;
+  if (tooMany) {
     return (
-      <Label x={(12 - camera.x) / scale} y={(viewport.height - inset - 40 - camera.y) / scale} scaleX={1 / scale} scaleY={1 / scale} listening={false}>
+      <Label ref={labelRef} listening={false}>
         <Tag fill="#ffffff" opacity={0.92} stroke="#90a4ae" strokeWidth={1} cornerRadius={3} />
-        <Text text={`${seen.count.toLocaleString('en')} vertices of “${h.name}” in view: zoom in to see and drag single vertices`}
-          fontSize={13} fill="#1d2a33" padding={6} />
+        <Text ref={textRef} text={noteText(seen.current?.count ?? 0, shown.name)} fontSize={13} fill="#1d2a33" padding={6} />
       </Label>
     );
   }
-  const points = seen.points;
   return (
-    <Shape listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={h.colour} strokeWidth={1.5} strokeScaleEnabled={false}
+    <Shape ref={shapeRef} listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={shown.colour} strokeWidth={1.5} strokeScaleEnabled={false}
       sceneFunc={(ctx, shape) => {
-        squares(ctx, points, half);
+        const points = seen.current?.points;
+        if (!points) return;
+        squares(ctx, points, 3.5 / useSessionStore.getState().camera.scale);
         ctx.fillStrokeShape(shape);
       }} />
   );
@@ -160,7 +189,7 @@ export function OverlayLayer() {
   const scale = useSessionStore((s) => s.camera.scale);
   return (
     <Layer listening={false}>
-      <VertexHandles scale={scale} />
+      <VertexHandles />
       <RegionalHandles scale={scale} />
       <CalibrationMarks scale={scale} />
       <ToolPreviewShape />

@@ -2,6 +2,10 @@
 // space bar held or the middle button pans. The camera is the Stage's own scale and position. The box
 // takes the keyboard focus when pressed (and by Tab), so that Enter and Space go to the tools from here
 // while a focused button or field elsewhere keeps its own (keyForTools).
+// Per-frame work stays out of React: the camera is set on the Stage from a store subscription (a pan
+// frame re-renders nothing), and the Stage's place on the page, which Konva would otherwise read with
+// getBoundingClientRect (a forced layout) on every pointer move, is read when the box changes size, the
+// page scrolls or resizes, or the pointer enters or presses in the box (viewBoxRect.ts).
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { Stage } from 'react-konva';
 import type Konva from 'konva';
@@ -15,6 +19,7 @@ import { GridLayer } from './GridLayer';
 import { CursorReadout } from './CursorReadout';
 import { usePinchZoom } from './usePinchZoom';
 import { toolMidGesture, toolPointerDown, useToolDispatch } from './toolDispatch';
+import { cachedClientRect, invalidateViewRects } from './viewBoxRect';
 import { keyForTools } from './keyForTools';
 
 const WHEEL_ZOOM_STEP = 1.0015;
@@ -23,8 +28,8 @@ const PINCH_ZOOM_STEP = 1.01;
 
 export function SectionView() {
   const boxRef = useRef<HTMLDivElement>(null);
+  const stageRef = useRef<Konva.Stage>(null);
   useToolDispatch(boxRef);
-  const camera = useSessionStore((s) => s.camera);
   const viewport = useSessionStore((s) => s.viewport);
   const [spaceHeld, setSpaceHeld] = useState(false);
   const [panning, setPanning] = useState(false);
@@ -34,10 +39,46 @@ export function SectionView() {
   useEffect(() => {
     const box = boxRef.current;
     if (!box) return;
-    const ro = new ResizeObserver(() => useSessionStore.getState().setViewport(box.clientWidth, box.clientHeight));
+    const refresh = invalidateViewRects;
+    const ro = new ResizeObserver(() => {
+      refresh();
+      useSessionStore.getState().setViewport(box.clientWidth, box.clientHeight);
+    });
     ro.observe(box);
+    refresh();
     useSessionStore.getState().setViewport(box.clientWidth, box.clientHeight);
-    return () => ro.disconnect();
+    window.addEventListener('resize', refresh);
+    window.addEventListener('scroll', refresh, { capture: true, passive: true });
+    box.addEventListener('pointerenter', refresh);
+    // Before Konva's own listener on the content below: a press measures afresh (one read per gesture).
+    box.addEventListener('pointerdown', refresh, { capture: true });
+    return () => {
+      box.removeEventListener('pointerdown', refresh, { capture: true });
+      ro.disconnect();
+      window.removeEventListener('resize', refresh);
+      window.removeEventListener('scroll', refresh, { capture: true });
+      box.removeEventListener('pointerenter', refresh);
+    };
+  }, []);
+
+  useEffect(() => {
+    const stage = stageRef.current;
+    if (!stage) return;
+    // Konva reads the content's client rect on every pointer event; the cached one is the same rect.
+    const withRect = stage as unknown as { _getContentPosition: () => { top: number; left: number; scaleX: number; scaleY: number } };
+    const content = stage.content;
+    withRect._getContentPosition = () => {
+      const r = cachedClientRect(content);
+      return { top: r.top, left: r.left, scaleX: 1, scaleY: 1 };
+    };
+    const place = (c: { scale: number; x: number; y: number }) => {
+      stage.setAttrs({ x: c.x, y: c.y, scaleX: c.scale, scaleY: c.scale });
+      stage.batchDraw();
+    };
+    place(useSessionStore.getState().camera);
+    return useSessionStore.subscribe((s, prev) => {
+      if (s.camera !== prev.camera) place(s.camera);
+    });
   }, []);
 
   useEffect(() => {
@@ -107,12 +148,9 @@ export function SectionView() {
   return (
     <div ref={boxRef} className="section-view" data-testid="section-view" tabIndex={0} role="application" aria-label="Section view" style={{ cursor }} onContextMenu={(e) => e.preventDefault()} onAuxClick={(e) => e.preventDefault()}>
       <Stage
+        ref={stageRef}
         width={viewport.width}
         height={viewport.height}
-        scaleX={camera.scale}
-        scaleY={camera.scale}
-        x={camera.x}
-        y={camera.y}
         onWheel={onWheel}
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}

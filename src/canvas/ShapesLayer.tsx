@@ -11,8 +11,8 @@ import { activeScenario } from '../core/model/docToSection';
 import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { DECIMATE_ABOVE_VERTICES, decimatePolyline } from './decimatePolyline';
-import { clippedHorizonPx, excessFillGeometry } from './excessFillGeometry';
+import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix } from './decimatePolyline';
+import { clippedHorizonPx, excessFillSides } from './excessFillGeometry';
 import { pinLinePx } from './pinLinePx';
 
 export const FILL_ABOVE = 'rgba(232, 121, 30, 0.30)';
@@ -96,13 +96,19 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
   const frame = useDocStore((s) => sectionFrame(s.doc));
   const pinsPx = useDocStore((s) => activeScenario(s.doc).pinsPx);
-  // The horizon's clipped line is kept while only its regional moves (a regional drag).
+  // The horizon's side of the loop is kept, and decimated once, while only its regional moves (a regional drag):
+  // each move rebuilds and decimates only the regional's side (decimateAfterPrefix: the same points as the whole).
   const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
   const head = useMemo(() => (h && pins ? clippedHorizonPx(h.pointsPx, pins, frame) : null), [h, pins, frame]);
-  const geometry = useMemo(() => (h && regional && pins ? excessFillGeometry(h.pointsPx, regional, pins, frame, head) : null), [h, regional, pins, frame, head]);
+  const geometry = useMemo(() => (head && regional && pins ? excessFillSides(regional, pins, frame, head) : null), [regional, pins, frame, head]);
   // The loop follows the horizon between the pins: as long, and decimated the same way.
-  const decimation = useDecimation(geometry ? geometry.loop.length / 2 : 0);
-  const loop = useMemo(() => (geometry ? drawnPoints(geometry.loop, decimation) : []), [geometry, decimation]);
+  const decimation = useDecimation(head && geometry ? (head.loopHead.length + geometry.loopTail.length) / 2 : 0);
+  const prefix = useMemo(() => (head && decimation ? decimatePrefix(head.loopHead, decimation.scale, decimation.columns) : null), [head, decimation]);
+  const loop = useMemo(() => {
+    if (!head || !geometry) return [];
+    if (prefix && decimation) return decimateAfterPrefix(prefix, geometry.loopTail, decimation.scale, decimation.columns);
+    return head.loopHead.concat(geometry.loopTail);
+  }, [head, geometry, prefix, decimation]);
   if (!geometry || !h?.visible) return null;
   return (
     <Group listening={false}>

@@ -1,6 +1,8 @@
 // Polygons for the translucent excess-area fills, in image pixels: the loop between a horizon and its
-// regional across the pins (the construction of docs/method.md §Pins, regional and excess area), and the half-planes above and below the
-// regional used as clip regions, so lobes above the regional and below it get different fills.
+// regional across the pins (the construction of docs/method.md §Pins, regional and excess area), and the
+// half-planes above and below the regional used as clip regions, so lobes above the regional and below it get different fills.
+// The loop is the horizon's part (clippedHorizonPx, kept while only the regional moves) followed by the
+// regional's part (excessFillSides), so a regional drag rebuilds only the regional's side.
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
 import { clipPolylineToPins } from '../core/geometry/clipPolylineToPins';
@@ -47,12 +49,14 @@ export function clippedHorizonPx(linePx: ImagePx[], pins: [number, number], fram
   return { loopHead, zMin, zMax };
 }
 
-/** Returns the fill polygons for one horizon, or null when the horizon or regional does not cross both pins once. */
-export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration,
-  horizon: ClippedHorizonPx | null = clippedHorizonPx(linePx, pins, frame)): ExcessFillGeometry | null {
+/** The regional's part of the fill: the loop's tail (the regional, right pin → left pin) and the two clip regions. */
+export interface ExcessFillSides { loopTail: number[]; above: number[]; below: number[] }
+
+/** Returns the regional's side of the fill for the clipped horizon, or null when the regional does not cross both pins once. */
+export function excessFillSides(regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration, horizon: ClippedHorizonPx): ExcessFillSides | null {
   const reg = regionalPx.map((p) => imageToSection(frame, p));
   const rc = clipPolylineToPins(reg.map((q) => q[0]), reg.map((q) => q[1]), pins[0], pins[1]).clipped;
-  if (!horizon || !rc) return null;
+  if (!rc) return null;
   let zMin = horizon.zMin;
   let zMax = horizon.zMax;
   for (const z of rc.zs) {
@@ -60,13 +64,23 @@ export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pin
     zMax = Math.max(zMax, z);
   }
   const margin = (zMax - zMin) + (pins[1] - pins[0]);
-  const loop = horizon.loopHead.slice();
-  flatPx(frame, rc.xs, rc.zs, true, loop);
+  const loopTail: number[] = [];
+  flatPx(frame, rc.xs, rc.zs, true, loopTail);
   const above: number[] = [];
   flatPx(frame, rc.xs, rc.zs, false, above);
   flatPx(frame, [pins[1], pins[0]], [zMax + margin, zMax + margin], false, above);
   const below: number[] = [];
   flatPx(frame, rc.xs, rc.zs, false, below);
   flatPx(frame, [pins[1], pins[0]], [zMin - margin, zMin - margin], false, below);
-  return { loop, above, below };
+  return { loopTail, above, below };
+}
+
+/** Returns the fill polygons for one horizon, or null when the horizon or regional does not cross both pins once. */
+export function excessFillGeometry(linePx: ImagePx[], regionalPx: ImagePx[], pins: [number, number], frame: FittedCalibration,
+  horizon: ClippedHorizonPx | null = clippedHorizonPx(linePx, pins, frame)): ExcessFillGeometry | null {
+  const sides = horizon ? excessFillSides(regionalPx, pins, frame, horizon) : null;
+  if (!horizon || !sides) return null;
+  const loop = horizon.loopHead.slice();
+  for (const c of sides.loopTail) loop.push(c);
+  return { loop, above: sides.above, below: sides.below };
 }

@@ -10,6 +10,7 @@ import { useToolSession } from '../state/toolSessionStore';
 import { toolEntry, TOOLS } from '../tools/toolRegistry';
 import { runTool, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
 import { keyForTools } from './keyForTools';
+import { cachedClientRect } from './viewBoxRect';
 
 /** Pointer tolerance for picking, in screen pixels. */
 const PICK_TOLERANCE_SCREEN_PX = 7;
@@ -116,7 +117,7 @@ useSessionStore.subscribe((s) => {
 });
 
 function imagePoint(box: HTMLElement, clientX: number, clientY: number): [number, number] {
-  const r = box.getBoundingClientRect();
+  const r = cachedClientRect(box);
   return screenToImage(useSessionStore.getState().camera, clientX - r.left, clientY - r.top);
 }
 

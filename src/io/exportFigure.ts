@@ -1,7 +1,9 @@
-// The annotated section as SVG or PNG, drawn from renderSectionSvg. The PNG is the SVG drawn onto
-// a canvas at the chosen size; the scan is inlined as a data: URL so the canvas stays readable.
+// The annotated section as SVG or PNG, drawn from renderSectionSvg. The SVG inlines the scan once as a
+// data: URL. The PNG is drawn on a canvas at the chosen size in three layers: the figure below the scan,
+// the decoded scan itself through the calibration's matrix (clipped to the panel, sampled at the PNG's
+// resolution: the scan's file never passes through a string), and the figure above it.
 // The figure of the open project is put together in state/currentFigureSvg.
-import { FIGURE_HEIGHT, FIGURE_WIDTH } from './renderSectionSvg';
+import { FIGURE_HEIGHT, FIGURE_WIDTH, type SectionSvgParts } from './renderSectionSvg';
 
 /** PNG sizes offered; the last is A3 landscape at 300 dpi (420 × 297 mm). */
 export const PNG_SIZES = [
@@ -42,19 +44,59 @@ function loadImage(url: string): Promise<HTMLImageElement> {
   });
 }
 
-/** Returns a PNG of the SVG at width × height pixels, or a message (e.g. when the browser marks the canvas unreadable). */
-export async function svgToPng(svg: string, width: number, height: number): Promise<{ ok: true; blob: Blob } | { ok: false; message: string }> {
+/** The steps of a PNG export, for its progress message. */
+export type PngStep = 'figure' | 'scan' | 'labels' | 'encoding';
+
+/** Draws a standalone SVG document over the whole canvas (an SVG drawn as an image loads nothing else). */
+async function drawSvg(ctx: CanvasRenderingContext2D, svg: string, width: number, height: number): Promise<void> {
   const url = URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }));
   try {
-    const img = await loadImage(url);
+    ctx.drawImage(await loadImage(url), 0, 0, width, height);
+  } finally {
+    URL.revokeObjectURL(url);
+  }
+}
+
+/** Lets the page draw a frame (the progress message) between the export's steps. */
+const nextFrame = () => new Promise<void>((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+
+/**
+ * Returns a PNG of the figure at width × height pixels: its part below the scan, the decoded scan through the
+ * figure's matrix (clipped to the panel) when there is one, and its part above; or a message (e.g. when the
+ * browser cannot make a canvas that large). `onStep` hears each step as it starts.
+ */
+export async function figureToPng(parts: SectionSvgParts, scan: ImageBitmap | null, width: number, height: number,
+  onStep: (step: PngStep) => void = () => undefined): Promise<{ ok: true; blob: Blob } | { ok: false; message: string }> {
+  try {
     const canvas = document.createElement('canvas');
     canvas.width = width;
     canvas.height = height;
     const ctx = canvas.getContext('2d');
     if (!ctx) return { ok: false, message: 'This browser cannot draw a canvas of that size; choose a smaller PNG size.' };
+    onStep('figure');
     ctx.fillStyle = '#ffffff';
     ctx.fillRect(0, 0, width, height);
-    ctx.drawImage(img, 0, 0, width, height);
+    await drawSvg(ctx, `${parts.head}${parts.under}</svg>`, width, height);
+    if (scan && parts.scan) {
+      onStep('scan');
+      await nextFrame();
+      const { panel, scan: place } = parts;
+      ctx.save();
+      ctx.scale(width / FIGURE_WIDTH, height / FIGURE_HEIGHT);
+      ctx.beginPath();
+      ctx.rect(panel.x, panel.y, panel.w, panel.h);
+      ctx.clip();
+      ctx.transform(...place.matrix);
+      ctx.globalAlpha = place.opacity;
+      ctx.imageSmoothingEnabled = true;
+      ctx.drawImage(scan, 0, 0, place.widthPx, place.heightPx);
+      ctx.restore();
+    }
+    onStep('labels');
+    await nextFrame();
+    await drawSvg(ctx, `${parts.head}${parts.panelOpen}${parts.over}</svg>`, width, height);
+    onStep('encoding');
+    await nextFrame();
     const blob = await new Promise<Blob | null>((resolve, reject) => {
       try {
         canvas.toBlob(resolve, 'image/png');
@@ -69,8 +111,6 @@ export async function svgToPng(svg: string, width: number, height: number): Prom
       return { ok: false, message: 'The browser refused to read back the drawn figure (a cross-origin image made the canvas unreadable). Export as SVG instead.' };
     }
     return { ok: false, message: e instanceof Error ? e.message : String(e) };
-  } finally {
-    URL.revokeObjectURL(url);
   }
 }
 

@@ -135,9 +135,38 @@ function zAt(xs: ArrayLike<number>, zs: ArrayLike<number>, x: number): number {
   return zs[0];
 }
 
-/** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. */
+/**
+ * The figure in the two parts drawn below and above the scan, with where the scan goes: so that a PNG can draw
+ * the decoded scan itself between them (exportFigure.figureToPng) instead of passing it through an SVG string.
+ */
+export interface SectionSvgParts {
+  /** `<svg …>` and its `<defs>`: opens both parts. */
+  head: string;
+  /** Everything drawn before the scan (background, title block, the panel's box). */
+  under: string;
+  /** The opening of the panel's clipped group: the scan is drawn first inside it. */
+  panelOpen: string;
+  /** Everything drawn after the scan, closing the panel's group; ends before `</svg>`. */
+  over: string;
+  /** The panel's box (figure units): the scan is clipped to it. */
+  panel: { x: number; y: number; w: number; h: number };
+  /** The scan's place: scan pixels (0, 0)–(widthPx, heightPx) mapped to figure units by the affine `matrix` (SVG order a b c d e f), at `opacity`; null without a scan. */
+  scan: { widthPx: number; heightPx: number; matrix: [number, number, number, number, number, number]; opacity: number } | null;
+}
+
+/** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. The scan, when given, is embedded once. */
 export function renderSectionSvg(input: SectionFigureInput): string {
-  const { doc, analysis, scanDataUrl, date } = input;
+  const parts = renderSectionSvgParts(input);
+  const { scan } = parts;
+  const image = scan && input.scanDataUrl
+    ? `<image class="scan" x="0" y="0" width="${scan.widthPx}" height="${scan.heightPx}" transform="matrix(${scan.matrix.join(' ')})" preserveAspectRatio="none" opacity="${scan.opacity}" href="${escapeXml(input.scanDataUrl)}"/>`
+    : '';
+  return `${parts.head}${parts.under}${parts.panelOpen}${image}${parts.over}</svg>`;
+}
+
+/** Returns the figure's parts below and above the scan and the scan's place (SectionSvgParts); the scan's data URL is not read. */
+export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataUrl'>): SectionSvgParts {
+  const { doc, analysis, date } = input;
   const scenario = activeScenario(doc);
   const ds = analysis.docSection;
   const fit = ds.fit;
@@ -179,12 +208,12 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   out.push(`<text x="42" y="70" font-size="13.5">${escapeXml(headline.slice(0, 200))}</text></g>`);
   // The section panel.
   out.push(`<rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}" fill="#fbfbfa" stroke="#9aa5ad"/>`);
+  const slot = out.length;
   out.push('<g clip-path="url(#panel-clip)">');
-  if (scanDataUrl && doc.scan) {
-    // The scan resampled through the calibration: one affine matrix from its pixels to the figure.
-    const m = imageToFigureMatrix(mapFit, frame).map((v) => Number(v.toPrecision(10)));
-    out.push(`<image class="scan" x="0" y="0" width="${doc.scan.widthPx}" height="${doc.scan.heightPx}" transform="matrix(${m.join(' ')})" preserveAspectRatio="none" opacity="0.85" href="${escapeXml(scanDataUrl)}" xlink:href="${escapeXml(scanDataUrl)}"/>`);
-  }
+  // The scan resampled through the calibration: one affine matrix from its pixels to the figure (drawn by the caller).
+  const scan = doc.scan
+    ? { widthPx: doc.scan.widthPx, heightPx: doc.scan.heightPx, matrix: imageToFigureMatrix(mapFit, frame).map((v) => Number(v.toPrecision(10))) as [number, number, number, number, number, number], opacity: 0.85 }
+    : null;
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
     ds.section.horizons.forEach((h, i) => {
@@ -293,5 +322,8 @@ export function renderSectionSvg(input: SectionFigureInput): string {
   wrap(`Caution: ${SECTION_CAUTION}`, 190).forEach((line, i) => out.push(`<text x="42" y="${cy + 22 + i * 17}" font-size="12" fill="#6b3f00">${escapeXml(line)}</text>`));
   out.push('</g>');
   const head = `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" viewBox="0 0 ${FIGURE_WIDTH} ${FIGURE_HEIGHT}" font-family="DejaVu Sans, sans-serif" fill="#1d2731">`;
-  return `${head}<defs>${defs.join('')}</defs>${out.join('')}</svg>`;
+  return {
+    head: `${head}<defs>${defs.join('')}</defs>`, under: out.slice(0, slot).join(''), panelOpen: out[slot], over: out.slice(slot + 1).join(''),
+    panel: { ...PANEL }, scan,
+  };
 }

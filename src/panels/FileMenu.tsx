@@ -5,8 +5,8 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
-import { PNG_SIZES, svgToPng } from '../io/exportFigure';
-import { currentFigureSvg } from '../state/currentFigureSvg';
+import { figureToPng, PNG_SIZES, type PngStep } from '../io/exportFigure';
+import { currentFigureParts, currentFigureSvg } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
 import { docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
@@ -34,9 +34,12 @@ function exportText(text: string | null, type: string, ext: string, empty: strin
 async function exportPng(sizeId: string): Promise<void> {
   const size = PNG_SIZES.find((s) => s.id === sizeId) ?? PNG_SIZES[0];
   const session = useSessionStore.getState();
-  session.setBusy(`Drawing the figure at ${size.width} × ${size.height} px …`);
+  const steps: Record<PngStep, string> = { figure: 'drawing the figure', scan: 'drawing the scan', labels: 'drawing the lines and labels', encoding: 'encoding the PNG' };
+  const say = (step: PngStep) => session.setBusy(`PNG ${size.width} × ${size.height} px: ${steps[step]} …`);
+  say('figure');
   try {
-    const png = await svgToPng(await currentFigureSvg(), size.width, size.height);
+    const { parts, scan } = currentFigureParts();
+    const png = await figureToPng(parts, scan, size.width, size.height, say);
     if (!png.ok) session.showMessage('error', png.message);
     else downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
   } finally {

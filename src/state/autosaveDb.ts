@@ -4,6 +4,7 @@
 // the project files' migration (migrateKeptDoc), so work kept by an older version is not lost.
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import type { ProjectDoc } from '../core/model/projectDoc';
+import { packDoc, unpackDoc } from './autosavePack';
 
 const DB_NAME = 'foldroot-autosave';
 const DB_VERSION = 1;
@@ -66,7 +67,8 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
 export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   const tx = db.transaction([STATE, SCANS], 'readwrite');
   const finished = done(tx);
-  tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: snap.doc, dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
+  // Lines packed into typed arrays (autosavePack): the browser copies each as one block.
+  tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
     // Other scans are dropped, except the one of a set-aside record (setAsideKept).
     const scans = tx.objectStore(SCANS);
@@ -84,7 +86,7 @@ export async function readKept(db: IDBDatabase): Promise<KeptRead> {
   const current = (await request(tx.objectStore(STATE).get(CURRENT))) as StateRecord | undefined;
   const aside = (await request(tx.objectStore(STATE).get(SET_ASIDE))) as StateRecord | undefined;
   const record = async (state: StateRecord, fromSetAside: boolean): Promise<KeptRead> => {
-    const checked = migrateKeptDoc(state.doc);
+    const checked = migrateKeptDoc(unpackDoc(state.doc));
     if (!checked.ok) return { kind: 'unreadable', message: checked.message };
     let scan: StoredScan | null = null;
     if (typeof state.scanId === 'string') {

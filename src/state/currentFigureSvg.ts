@@ -1,7 +1,8 @@
-// The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg.
+// The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg
+// (whole, as SVG; or in parts, for a PNG that draws the decoded scan itself).
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { scanDataUrl } from '../io/exportFigure';
-import { renderSectionSvg } from '../io/renderSectionSvg';
+import { renderSectionSvg, renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
@@ -19,4 +20,12 @@ export async function currentFigureSvg(): Promise<string> {
   const doc = useDocStore.getState().doc;
   const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
   return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
+}
+
+/** Returns the figure of the open project in its parts below and above the scan, with the decoded scan to draw between them (null when none is shown). */
+export function currentFigureParts(): { parts: SectionSvgParts; scan: ImageBitmap | null } {
+  const doc = useDocStore.getState().doc;
+  const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
+  const parts = renderSectionSvgParts({ doc, analysis: selectAnalysis(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
+  return { parts, scan: (doc.scan && getScan(doc.scan.id)?.bitmap) || null };
 }

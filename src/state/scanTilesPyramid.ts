@@ -12,6 +12,17 @@ export interface TilePyramid {
 }
 
 const KEEP = 3;
+
+/** Longest stretch of tile drawing before the page gets a turn (ms): opening a big scan keeps the page and its progress live. */
+const SLICE_MS = 40;
+let sliceStart = 0;
+
+/** Yields to the page when the current stretch of work has run SLICE_MS. */
+async function yieldSometimes(): Promise<void> {
+  if (performance.now() - sliceStart < SLICE_MS) return;
+  await new Promise((resolve) => setTimeout(resolve, 0));
+  sliceStart = performance.now();
+}
 const pyramids = new Map<string, TilePyramid>();
 const pending = new Map<string, Promise<TilePyramid>>();
 
@@ -21,9 +32,11 @@ async function halveLevel(prev: ImageBitmap[], pl: TileLevel, lv: TileLevel): Pr
     for (let col = 0; col < lv.cols; col++) {
       const w = Math.min(TILE_PX, lv.widthPx - col * TILE_PX);
       const h = Math.min(TILE_PX, lv.heightPx - row * TILE_PX);
+      await yieldSometimes();
       const canvas = new OffscreenCanvas(w, h);
       const ctx = canvas.getContext('2d')!;
-      ctx.imageSmoothingQuality = 'medium';
+      // Exactly half size: bilinear sampling at the centre of each 2 × 2 block is their average (a box filter).
+      ctx.imageSmoothingQuality = 'low';
       // Each tile of this level is made of up to 2 × 2 tiles of the level above, drawn at half size.
       for (let dr = 0; dr < 2; dr++) {
         for (let dc = 0; dc < 2; dc++) {
@@ -45,6 +58,7 @@ export async function buildTilePyramid(bitmap: ImageBitmap, onProgress?: (done: 
   const levels = tileLevels(bitmap.width, bitmap.height);
   const total = levels.reduce((n, l) => n + l.cols * l.rows, 0);
   let done = 0;
+  sliceStart = performance.now();
   const base: ImageBitmap[] = [];
   const l0 = levels[0];
   for (let row = 0; row < l0.rows; row++) {

@@ -36,6 +36,19 @@ function gestureBase(start: ProjectDoc): DocGestureBase | null {
 }
 
 /**
+ * Prepares the document as the start of a future gesture (analysis and preparation, memoised), so that the
+ * first move of the next drag finds it ready instead of preparing a big document then.
+ */
+export function prepareForGesture(doc: ProjectDoc): void {
+  gestureBase(doc);
+}
+
+/** True once the document has been prepared as a gesture's start (prepareForGesture, or a gesture from it). */
+export function preparedForGesture(doc: ProjectDoc): boolean {
+  return bases.has(doc);
+}
+
+/**
  * Returns the analysis of the active (or given) scenario as selectAnalysis does; while a gesture that
  * started from `gestureStart` moves only regionals, from the prepared start instead (same numbers, to
  * rounding). Pass null outside gestures.

@@ -45,3 +45,37 @@ describe('autosave database (fake-indexeddb)', () => {
     expect(isQuotaError(new Error('other'))).toBe(false);
   });
 });
+
+describe('autosave database: lines kept packed', () => {
+  it('stores every line as one Float64Array and reads back the same document, vertex for vertex', async () => {
+    const factory = new IDBFactory();
+    const db = await openAutosaveDb(factory);
+    const base = sampleDoc();
+    // A long traced line (an invented wave of 50,000 vertices) beside the sample's own.
+    const long: [number, number][] = Array.from({ length: 50_000 }, (_, i) => [i * 0.1, 200 + 30 * Math.sin(i / 700) + 1e-9 * i]);
+    const doc = { ...base, horizons: [...base.horizons, { ...base.horizons[0], id: 'long', name: 'Long', pointsPx: long }] };
+    await writeSnapshot(db, { savedAt: 't', doc, dirty: true }, null, false);
+    expect((await readSnapshot(db))?.doc).toEqual(doc);
+    // What is stored: flat typed arrays, u then v for each vertex.
+    const stored = await new Promise<{ doc: { horizons: { pointsPx: unknown }[] } }>((resolve, reject) => {
+      const r = db.transaction('state', 'readonly').objectStore('state').get('current');
+      r.onsuccess = () => resolve(r.result);
+      r.onerror = () => reject(r.error);
+    });
+    const flat = stored.doc.horizons[stored.doc.horizons.length - 1].pointsPx as Float64Array;
+    expect(flat).toBeInstanceOf(Float64Array);
+    expect([flat.length, flat[2 * 12345], flat[2 * 12345 + 1]]).toEqual([100_000, long[12345][0], long[12345][1]]);
+  });
+
+  it('still reads a document kept before lines were packed', async () => {
+    const db = await openAutosaveDb(new IDBFactory());
+    const doc = sampleDoc();
+    await new Promise<void>((resolve, reject) => {
+      const tx = db.transaction(['state', 'scans'], 'readwrite');
+      tx.objectStore('state').put({ savedAt: 'then', doc, dirty: true, scanId: null }, 'current');
+      tx.oncomplete = () => resolve();
+      tx.onerror = () => reject(tx.error);
+    });
+    expect((await readSnapshot(db))?.doc).toEqual(doc);
+  });
+});

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
-import { renderSectionSvg } from '../../../src/io/renderSectionSvg';
+import { renderSectionSvg, renderSectionSvgParts } from '../../../src/io/renderSectionSvg';
 import { escapeXml } from '../../../src/io/escapeXml';
 import { selectAnalysis } from '../../../src/state/selectors';
 import { emptyProjectDoc } from '../../../src/core/model/projectDoc';
@@ -243,5 +243,33 @@ describe('the inset area–depth graph', () => {
     expect(balanced(svg)).toBe(true);
     expect(svg).toContain('Upper marker');
     expect(svg).toContain('class="area-depth"');
+  });
+});
+
+describe('renderSectionSvg with a scan', () => {
+  const withScan = () => ({ ...sampleDoc(), scan: { id: 's', name: 'scan.png', widthPx: 4000, heightPx: 2000, type: 'image/png' } });
+
+  it('embeds the scan once (href; xlink:href is not repeated), through the figure’s matrix', () => {
+    const doc = withScan();
+    const url = 'data:image/png;base64,QUJDRA==';
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: url, date: 'd' });
+    expect(svg.split(url).length - 1).toBe(1);
+    expect(svg).not.toContain('xlink:href');
+    const m = renderSectionSvgParts({ doc, analysis: selectAnalysis(doc), date: 'd' }).scan!.matrix;
+    expect(svg).toContain(`transform="matrix(${m.join(' ')})"`);
+    expect(balanced(svg)).toBe(true);
+  });
+
+  it('splits the figure into standalone parts below and above the scan, each a whole SVG document', () => {
+    const doc = withScan();
+    const parts = renderSectionSvgParts({ doc, analysis: selectAnalysis(doc), date: 'd' });
+    const below = `${parts.head}${parts.under}</svg>`;
+    const above = `${parts.head}${parts.panelOpen}${parts.over}</svg>`;
+    expect(balanced(below) && balanced(above)).toBe(true);
+    // The caution (an export's duty) and the lines are above the scan; the title block below it.
+    expect(above).toContain(escapeXml(SECTION_CAUTION.slice(0, 40)));
+    expect(below).toContain('title-block');
+    expect(above).not.toContain('title-block');
+    expect(renderSectionSvgParts({ doc: sampleDoc(), analysis: selectAnalysis(sampleDoc()), date: 'd' }).scan).toBeNull();
   });
 });
