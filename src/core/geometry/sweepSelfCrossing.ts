@@ -1,4 +1,5 @@
 import { orient2d } from 'robust-predicates';
+import { xMonotoneChains, type XMonotoneChains } from './xMonotoneChains';
 
 // Does an open polyline cross itself? A sweep line in the manner of Shamos & Hoey (1976, "Geometric
 // intersection problems", 17th IEEE Symposium on Foundations of Computer Science): segments enter
@@ -268,6 +269,66 @@ function segmentsInOverlaps(L: Line): Uint8Array {
   return take;
 }
 
+/**
+ * The quick path for lines that fold back in a few places: split the kept line into x-monotone chains and
+ * test, for each pair of chains whose x-ranges overlap, the pairs of segments that overlap in x, by a
+ * merge-like walk over the common range (every such pair is tested, so this is as complete as the all-pairs
+ * search). Returns the first crossing pair (kept indices), null when there is none, or undefined once more
+ * than `budget` pairs have been tested — a steep limb traced densely has many overlapping chains, and the
+ * sweep is then the faster way.
+ */
+function chainWalk(L: Line, budget: number): [number, number] | null | undefined {
+  const chains = xMonotoneChains(L.x, L.z, L.n);
+  if (chains.count < 2) return null;
+  const order = Array.from({ length: chains.count }, (_, c) => c).sort((a, b) => chains.minX[a] - chains.minX[b] || a - b);
+  let tested = 0;
+  for (let i = 0; i < order.length; i++) {
+    const a = order[i];
+    for (let j = i + 1; j < order.length; j++) {
+      const b = order[j];
+      if (chains.minX[b] > chains.maxX[a]) break;
+      const r = walkPair(L, chains, a, b, budget - tested);
+      if (r === undefined) return undefined;
+      if (r.hit) return r.hit;
+      tested += r.tested;
+    }
+  }
+  return null;
+}
+
+/** Segments of chain c in increasing x: from its first (x increasing) or last segment. */
+function chainStart(ch: XMonotoneChains, c: number): number {
+  return ch.direction[c] >= 0 ? ch.firstSegment[c] : ch.lastSegment[c];
+}
+
+function chainNext(ch: XMonotoneChains, c: number, s: number): number {
+  const n = ch.direction[c] >= 0 ? s + 1 : s - 1;
+  return n < ch.firstSegment[c] || n > ch.lastSegment[c] ? -1 : n;
+}
+
+function walkPair(L: Line, ch: XMonotoneChains, a: number, b: number, budget: number): { hit: [number, number] | null; tested: number } | undefined {
+  const { x } = L;
+  const x0 = x[0];
+  const lo = Math.max(ch.minX[a], ch.minX[b]) + x0;
+  const hi = Math.min(ch.maxX[a], ch.maxX[b]) + x0;
+  const left = (s: number) => (x[s] < x[s + 1] ? x[s] : x[s + 1]);
+  const right = (s: number) => (x[s] < x[s + 1] ? x[s + 1] : x[s]);
+  let tested = 0;
+  let j = chainStart(ch, b);
+  while (j !== -1 && right(j) < lo) j = chainNext(ch, b, j);
+  for (let s = chainStart(ch, a); s !== -1; s = chainNext(ch, a, s)) {
+    if (right(s) < lo) continue;
+    if (left(s) > hi) break;
+    while (j !== -1 && right(j) < left(s)) j = chainNext(ch, b, j);
+    for (let t = j; t !== -1 && left(t) <= right(s); t = chainNext(ch, b, t)) {
+      if (++tested > budget) return undefined;
+      const p = s < t ? s : t, q = s < t ? t : s;
+      if (q !== p + 1 && segmentsCross(L, p, q)) return { hit: [p, q], tested };
+    }
+  }
+  return { hit: null, tested };
+}
+
 /** An ordered list of segments (a treap, arrays indexed by kept segment), ordered bottom to top at the sweep. */
 class SweepList {
   readonly left: Int32Array;
@@ -374,15 +435,20 @@ class SweepList {
 /**
  * Returns the first pair [i, j] (i < j, input segment indices: segment i joins vertices i and i + 1) found
  * where the line crosses itself, or null when it does not (touches and retraced stretches are not crossings,
- * see above). Fewer than three vertices: null.
+ * see above). Fewer than three vertices: null. With `quick` (the default) a chain walk answers first when the
+ * line folds back in few places; `false` runs the sweep alone (the same answer, checked by the tests).
  */
-export function sweepSelfCrossing(xs: ArrayLike<number>, zs: ArrayLike<number>): [number, number] | null {
+export function sweepSelfCrossing(xs: ArrayLike<number>, zs: ArrayLike<number>, quick = true): [number, number] | null {
   const L = compact(xs, zs);
   const segs = L.n - 1;
   if (segs < 2) return null;
   const { x, z } = L;
   // Events: 2k = segment k enters at its left end, 2k + 1 = it leaves at its right end; sorted by
   // point (x, then z), entries before exits at one point so that segments meeting there are compared.
+  // Few fold-backs: the chain walk settles it in about linear time; past a budget, the sweep takes over.
+  // (`quick` false: the sweep alone, as the tests check it.)
+  const walked = quick ? chainWalk(L, 4 * segs + 10_000) : undefined;
+  if (walked !== undefined) return walked && [L.source[walked[0]], L.source[walked[1]]];
   const take = segmentsInOverlaps(L);
   let m = 0;
   for (let k = 0; k < segs; k++) m += take[k];

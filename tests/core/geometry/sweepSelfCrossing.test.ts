@@ -4,7 +4,14 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { selfCrossingsAllPairs, sweepSelfCrossing } from '../../../src/core/geometry/sweepSelfCrossing';
 
-const cross = (pts: [number, number][]) => sweepSelfCrossing(pts.map((p) => p[0]), pts.map((p) => p[1]));
+/** The answer of the default path (chain walk, then sweep), checked to be the sweep's alone. */
+const cross = (pts: [number, number][]) => {
+  const xs = pts.map((p) => p[0]), zs = pts.map((p) => p[1]);
+  const quick = sweepSelfCrossing(xs, zs);
+  const swept = sweepSelfCrossing(xs, zs, false);
+  expect(swept !== null).toBe(quick !== null);
+  return quick;
+};
 
 describe('sweepSelfCrossing: what counts as a crossing (hand-drawn cases)', () => {
   it('finds the crossing of a line that loops over itself', () => {
@@ -67,6 +74,7 @@ describe('sweepSelfCrossing on long lines', () => {
     const zs = new Float64Array(n + 2);
     for (let i = 0; i < n; i++) { xs[i] = i % 2; zs[i] = -i; }
     expect(sweepSelfCrossing(xs.subarray(0, n), zs.subarray(0, n))).toBeNull();
+    expect(sweepSelfCrossing(xs.subarray(0, n), zs.subarray(0, n), false)).toBeNull();
     // A hook back up across the first segment: (1, −n) → (2, −n) → (0.25, 0.5) crosses (0,0)–(1,−1).
     xs[n] = 2; zs[n] = -n;
     xs[n + 1] = -0.5; zs[n + 1] = -0.25;
@@ -85,6 +93,8 @@ describe('sweepSelfCrossing against independent checks (properties)', () => {
       const one = cross(pts);
       expect(one !== null).toBe(all.length > 0);
       if (one) expect(all).toContainEqual(one);
+      const swept = sweepSelfCrossing(pts.map((p) => p[0]), pts.map((p) => p[1]), false);
+      if (swept) expect(all).toContainEqual(swept);
     }), { numRuns: 3000 });
   }, 60_000);
 
