@@ -24,7 +24,7 @@ import type { FoldSpec } from '../src/core/forward/forwardSpec';
 import { sweepSelfCrossing } from '../src/core/geometry/sweepSelfCrossing';
 import { clipAndMeasure } from '../src/core/geometry/clipAndMeasure';
 import { shoelaceArea } from '../src/core/geometry/shoelaceArea';
-import type { Section } from '../src/core/model/section';
+import type { LineSection as Section } from '../src/core/model/section';
 import { validateSectionArrays } from '../src/core/model/validateSectionArrays';
 import { minOf, maxOf } from '../src/core/stats/minMax';
 

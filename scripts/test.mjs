@@ -4,6 +4,9 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { findChromium } from './findChromium.mjs';
+import { checkNode } from './nodeRange.mjs';
+
+checkNode();
 
 const reports = 'reports';
 rmSync(reports, { recursive: true, force: true });

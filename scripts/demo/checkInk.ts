@@ -1,6 +1,6 @@
 // Self-check of the demo: the horizons of section.json, mapped through the calibration, fall on drawn ink.
 import { PNG } from 'pngjs';
-import type { Section } from '../../src/core/model/section';
+import type { LineSection as Section } from '../../src/core/model/section';
 import { apply, type Affine } from './layout';
 
 /** Returns the share of sample points (every `step` m along each horizon) that have dark ink within 1.5 px. */

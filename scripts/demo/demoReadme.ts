@@ -1,8 +1,12 @@
 // The README written beside the demo files.
 import type { ForwardTruth } from '../../src/core/forward/forwardSpec';
+import type { AreaDepthResult } from '../../src/core/analysis/fitAreaDepth';
+import { DEMO_HAND } from './digitiseByHand';
 
-/** Returns public/demo/README.md for the given truth. */
-export function demoReadme(truth: ForwardTruth): string {
+/** Returns public/demo/README.md for the given truth and the area–depth answer of the digitised lines. */
+export function demoReadme(truth: ForwardTruth, answer: AreaDepthResult): string {
+  const f = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? '—' : v.toFixed(d));
+  const ci = answer.detachmentDepthCI95;
   return `# Demo section (invented)
 
 Everything here is invented for Foldroot: the Corrowan Fold Belt, Section F–F′, the ridge and valley
@@ -14,10 +18,23 @@ each with excess area exactly D · (regional elevation − detachment elevation)
 folded as a box anticline, a syncline below the regional, an east-verging overturned anticline and a
 small rounded anticline, over a gently curved regional. The detachment is not drawn.
 
+The scan is drawn from those exact lines, but section.json holds them as a person digitises the scan
+(scripts/demo/digitiseByHand.ts): a click every ${DEMO_HAND.spacingPx} scan pixels along each line (about 250 m)
+and at every bend sharper than ${DEMO_HAND.bendDeg}°, each off the ink by seeded Gaussian jitter of
+${DEMO_HAND.jitterPx} px in both directions, read back through the calibration. The regionals and pins are
+the model's. So the demo shows what real digitising gives: r² = ${f(answer.r2, 5)}, a detachment at
+${f(answer.detachmentElevation)} m (${f(answer.detachmentDepth)} m below the reference; 95% interval
+${ci ? `${f(ci[0])}–${f(ci[1])} m` : 'none'}) and a displacement of ${f(answer.displacement)} m, against the
+truth of ${truth.detachmentElevation} m and ${truth.displacement} m. The answer is ${f(Math.abs((answer.detachmentElevation ?? 0) - truth.detachmentElevation))} m off in
+depth and ${f(Math.abs(answer.displacement - truth.displacement))} m in displacement, for two reasons: the jitter scatters each
+excess area a little, and straight segments between clicks cut across the curved crests and troughs, so every
+fold loses a sliver of area (more in the tight overturned fold); both are the digitising error of any hand-made
+section, and the truth lies inside the 95% interval.
+
 | file | what it holds |
 | --- | --- |
 | section.png | the drawing, ${'2400 × 1200'} px, styled as a scanned hand-drafted section: vertical exaggeration 2:1, turned ${'0.4°'} clockwise, with paper tone and scan noise |
-| section.json | the digitised answer in section units (metres), plain section format (units, pins, horizons with line and regional) |
+| section.json | the scan digitised by hand (seeded) in section units (metres), plain section format (units, pins, horizons with line and regional) |
 | truth.json | \`{ units, displacement, detachmentElevation }\`: D = ${truth.displacement} m, detachment at ${truth.detachmentElevation} m (${truth.detachmentDepth} m below the highest regional, ${truth.referenceElevation} m) |
 | calibration.json | the mapping between image pixels and section coordinates, both directions, and control points |
 

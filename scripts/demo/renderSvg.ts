@@ -1,5 +1,5 @@
 // The demo drawing as an SVG string (drawing pixels, before the "scan" rotation and noise).
-import type { Section, XZ } from '../../src/core/model/section';
+import type { LineSection as Section, XZ } from '../../src/core/model/section';
 import { drawingPx, image, pxPerMetre, verticalExaggeration, window } from './layout';
 import { highestZAt } from './topography';
 

@@ -1,5 +1,6 @@
 // Keyboard shortcuts of the whole page; ignored while typing in a field.
 import { useEffect } from 'react';
+import { undoInTool } from '../canvas/toolDispatch';
 import { zoomByStep, zoomToFit } from '../panels/ScanControls';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
@@ -19,7 +20,8 @@ export function useKeyboardShortcuts(): void {
       if (mod && e.key.toLowerCase() === 'z') {
         e.preventDefault();
         if (e.shiftKey) doc.redo();
-        else doc.undo();
+        // While a line is being drawn by anchors, undo takes back its last stretch first.
+        else if (!undoInTool()) doc.undo();
         return;
       }
       if (mod && e.key.toLowerCase() === 'y') {

@@ -65,12 +65,21 @@ const HorizonShape = memo(function HorizonShape({ id }: { id: string }) {
   return (
     <Group>
       {drawn.map((r, i) => (
+        <Line key={`halo-${i}`} points={r.points} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={(selected ? 3.5 : 2.2) + HALO_WIDTH} strokeScaleEnabled={false} lineJoin="round" lineCap="round"
+          dash={r.projected ? PROJECTED_DASH : undefined} perfectDrawEnabled={false} listening={false} />
+      ))}
+      {drawn.map((r, i) => (
         <Line key={i} points={r.points} stroke={h.colour} strokeWidth={selected ? 3.5 : 2.2} strokeScaleEnabled={false} lineJoin="round" lineCap="round"
           dash={r.projected ? PROJECTED_DASH : undefined} perfectDrawEnabled={false} listening={false} />
       ))}
     </Group>
   );
 });
+
+/** The outline drawn under regionals, horizons and pins so they stand out on the fills and the scan. */
+const HALO = '#ffffff';
+const HALO_OPACITY = 0.85;
+const HALO_WIDTH = 3;
 
 const RegionalShape = memo(function RegionalShape({ id }: { id: string }) {
   const regional = useDocStore((s) => activeScenario(s.doc).regionals[id]);
@@ -79,7 +88,14 @@ const RegionalShape = memo(function RegionalShape({ id }: { id: string }) {
   const decimation = useDecimation(regional?.length ?? 0);
   const points = useMemo(() => drawnPoints(regional ? regional.flat() : [], decimation), [regional, decimation]);
   if (!regional || !h || !h.visible) return null;
-  return <Line points={points} stroke={h.colour} opacity={0.9} strokeWidth={selected ? 2.5 : 1.6} dash={REGIONAL_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} />;
+  const width = selected ? 2.5 : 1.6;
+  // A pale outline under the dashes keeps a regional visible over a fill of its own colour.
+  return (
+    <Group listening={false}>
+      <Line points={points} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={width + HALO_WIDTH} dash={REGIONAL_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} />
+      <Line points={points} stroke={h.colour} opacity={0.9} strokeWidth={width} dash={REGIONAL_DASH} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} />
+    </Group>
+  );
 });
 
 function clipTo(poly: number[]) {
@@ -131,7 +147,13 @@ const PinLines = memo(function PinLines() {
     <>
       {pinsPx.map((p: ImagePx, i) => {
         const x = frame.a[0] + frame.a[1] * p[0] + frame.a[2] * p[1];
-        return <Line key={i} points={pinLinePx(frame, x, scan)} stroke="#263238" strokeWidth={1.8} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />;
+        const line = pinLinePx(frame, x, scan);
+        return (
+          <Group key={i} listening={false}>
+            <Line points={line} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={1.8 + HALO_WIDTH} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />
+            <Line points={line} stroke="#263238" strokeWidth={1.8} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />
+          </Group>
+        );
       })}
     </>
   );

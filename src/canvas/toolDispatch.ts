@@ -3,7 +3,9 @@
 // pointer positions into image pixels for the tools.
 import { useEffect, type RefObject } from 'react';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
+import { ScanLineTracer } from '../io/lineTracer';
 import { useDocStore } from '../state/docStore';
+import { getScan } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { useToolSession } from '../state/toolSessionStore';
@@ -39,15 +41,48 @@ let toolId = useSessionStore.getState().activeTool;
 let toolState: { name: string } = toolEntry(toolId).tool.initial;
 let dragging = false;
 
+// One line tracer for the scan shown, made when a tool first asks and replaced when the scan changes.
+let tracer: { bitmap: ImageBitmap; tracer: ScanLineTracer } | null = null;
+let tracedPending = false;
+
+/** Tells the active tool, once per burst of answers, that traced stretches have arrived. */
+function announceTraced(): void {
+  if (tracedPending) return;
+  tracedPending = true;
+  queueMicrotask(() => {
+    tracedPending = false;
+    dispatchToolEvent({ type: 'traced' });
+  });
+}
+
+function scanTracer(doc: ToolContext['doc']): ScanLineTracer | null {
+  const bitmap = getScan(doc.scan?.id)?.bitmap ?? null;
+  if (tracer && tracer.bitmap !== bitmap) {
+    tracer.tracer.close();
+    tracer = null;
+  }
+  if (!bitmap || typeof Worker === 'undefined' || typeof OffscreenCanvas === 'undefined') return null;
+  if (!tracer) tracer = { bitmap, tracer: new ScanLineTracer(bitmap, announceTraced) };
+  return tracer.tracer;
+}
+
+/** Returns the bytes the scan's line tracer holds in its worker (for the benchmark), or 0. */
+export function tracerBytesHeld(): number {
+  return tracer?.tracer.bytesHeld ?? 0;
+}
+
 function context(): ToolContext {
   const doc = useDocStore.getState().doc;
   const session = useSessionStore.getState();
+  const toolSession = useToolSession.getState();
   return {
     doc,
     frame: sectionFrame(doc),
     tolerancePx: PICK_TOLERANCE_SCREEN_PX / session.camera.scale,
     selectedHorizonId: session.selectedHorizonId,
-    calibrationPick: useToolSession.getState().calibrationPick,
+    calibrationPick: toolSession.calibrationPick,
+    tracer: scanTracer(doc),
+    followLine: toolSession.followLine,
   };
 }
 
@@ -84,6 +119,9 @@ function execute(commands: ToolCommand[]): void {
       case 'message':
         useSessionStore.getState().showMessage(c.kind, c.text);
         break;
+      case 'clearMessage':
+        useSessionStore.getState().clearMessage();
+        break;
     }
   }
 }
@@ -101,6 +139,14 @@ export function dispatchToolEvent(event: ToolEvent): void {
 export function cancelTool(): void {
   dragging = false;
   dispatchToolEvent({ type: 'cancel' });
+}
+
+/** Undo while a line is being drawn by anchors removes its last stretch; returns true when the active tool took it. */
+export function undoInTool(): boolean {
+  const entry = toolEntry(toolId);
+  if (!entry.tracesLines || dragging || toolState.name === entry.tool.initial.name) return false;
+  dispatchToolEvent({ type: 'key', key: 'Undo' });
+  return true;
 }
 
 /** Returns true while the active tool is mid-gesture (a pointer held, or a line, pin pair or regional begun). */
@@ -123,16 +169,21 @@ function imagePoint(box: HTMLElement, clientX: number, clientY: number): [number
 
 let boxElement: HTMLElement | null = null;
 
-/** A second press within this time and distance counts as a double-click (pointer events carry no click count). */
+/**
+ * A second press within this time and distance counts as a double-click (pointer events carry no click count).
+ * The distance is measured between the two presses' scan positions (in screen pixels at the current zoom), so a
+ * press after the view panned or zoomed is a new click wherever it lands on the screen.
+ */
 const DOUBLE_CLICK_MS = 450;
 const DOUBLE_CLICK_SCREEN_PX = 6;
-let lastPress = { t: -Infinity, x: 0, y: 0, clicks: 0 };
+let lastPress = { t: -Infinity, p: [0, 0] as [number, number], clicks: 0 };
 
-function clickCount(evt: PointerEvent): number {
+function clickCount(evt: PointerEvent, p: [number, number]): number {
   const t = evt.timeStamp;
-  const near = Math.hypot(evt.clientX - lastPress.x, evt.clientY - lastPress.y) <= DOUBLE_CLICK_SCREEN_PX;
+  const scale = useSessionStore.getState().camera.scale;
+  const near = Math.hypot(p[0] - lastPress.p[0], p[1] - lastPress.p[1]) * scale <= DOUBLE_CLICK_SCREEN_PX;
   const clicks = near && t - lastPress.t <= DOUBLE_CLICK_MS ? lastPress.clicks + 1 : 1;
-  lastPress = { t, x: evt.clientX, y: evt.clientY, clicks };
+  lastPress = { t, p, clicks };
   return clicks;
 }
 
@@ -140,7 +191,8 @@ function clickCount(evt: PointerEvent): number {
 export function toolPointerDown(evt: PointerEvent): void {
   if (!boxElement) return;
   dragging = true;
-  dispatchToolEvent({ type: 'pointerDown', p: imagePoint(boxElement, evt.clientX, evt.clientY), button: evt.button, clicks: clickCount(evt), shift: evt.shiftKey, alt: evt.altKey });
+  const p = imagePoint(boxElement, evt.clientX, evt.clientY);
+  dispatchToolEvent({ type: 'pointerDown', p, button: evt.button, clicks: clickCount(evt, p), shift: evt.shiftKey, alt: evt.altKey });
 }
 
 /** True when a key belongs to a text field or select that has focus. */
@@ -185,7 +237,7 @@ export function useToolDispatch(boxRef: RefObject<HTMLElement | null>): void {
       if (!boxElement) return;
       const inside = e.target instanceof Node && boxElement.contains(e.target);
       if (!dragging && !inside) return;
-      dispatchToolEvent({ type: 'pointerMove', p: imagePoint(boxElement, e.clientX, e.clientY), shift: e.shiftKey });
+      dispatchToolEvent({ type: 'pointerMove', p: imagePoint(boxElement, e.clientX, e.clientY), shift: e.shiftKey, alt: e.altKey });
     };
     const up = (e: PointerEvent) => {
       if (!dragging || !boxElement) return;

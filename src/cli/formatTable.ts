@@ -38,10 +38,11 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   const d = a.areaDepth;
   if (d) {
     out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${d.r2.toFixed(4)}`);
-    // D = −slope is only a displacement when the slope is negative (docs/method.md §Area-depth line); the JSON keeps the number.
+    // D = −slope is a displacement only when the line reaches zero below the horizons (docs/method.md
+    // §Area-depth line): D > 0 shortening, D < 0 extension; the JSON keeps the number either way.
     out.push(d.noDetachment
-      ? '  slope ≥ 0: no displacement estimate'
-      : `  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95, d.n)})`);
+      ? '  no zero crossing below the horizons: no displacement estimate'
+      : `  Displacement D = ${num(d.displacement)} ${u} (95%: ${range(d.displacementCI95, d.n)}), ${d.regime === 'extension' ? `extension (${num(-d.displacement)} ${u})` : 'shortening'}`);
     out.push(d.detachmentDepth === null
       ? '  Detachment: none below these horizons'
       : `  Detachment depth ${num(d.detachmentDepth)} ${u} below the reference, elevation ${num(d.detachmentElevation)} ${u} (95% Fieller: ${fiellerRange(d)})`);

@@ -26,7 +26,13 @@ export function cleanSection(section: Section): Section {
     ...section,
     pins: [cleanCoordinate(section.pins[0]), cleanCoordinate(section.pins[1])],
     ...(section.referenceElevation !== undefined ? { referenceElevation: cleanCoordinate(section.referenceElevation) } : {}),
-    horizons: section.horizons.map((h) => ({ ...h, line: h.line.map(cleanPoint), regional: h.regional.map(cleanPoint) })),
+    horizons: section.horizons.map((h) => ({
+      ...h,
+      ...(h.line ? { line: h.line.map(cleanPoint) } : {}),
+      ...(h.pieces ? { pieces: h.pieces.map((p) => p.map(cleanPoint)) } : {}),
+      regional: h.regional.map(cleanPoint),
+    })),
+    ...(section.faults ? { faults: section.faults.map((f) => ({ ...f, line: f.line.map(cleanPoint) })) } : {}),
   };
 }
 

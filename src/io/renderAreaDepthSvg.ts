@@ -101,7 +101,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
     parts.push(`<text x="${cx + 9}" y="${py(zd) - 4}" font-size="10" font-weight="bold" fill="${RED}">detachment ${formatNumber(zd)} ${u}</text>`);
     parts.push(`<text x="${cx + 9}" y="${py(zd) + 9}" font-size="9.5" fill="${RED}">${escapeXml(words)}</text>`);
   } else if (ad && ad.noDetachment) {
-    parts.push(`<text x="${L + 6}" y="${B - 8}" font-size="10" fill="${RED}">no detachment: area does not decrease with depth</text>`);
+    parts.push(`<text x="${L + 6}" y="${B - 8}" font-size="10" fill="${RED}">no detachment: the line does not reach zero below the horizons</text>`);
   }
   parts.push('</g>');
   return parts.join('');

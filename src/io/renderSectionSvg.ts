@@ -203,7 +203,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     : ad && ad.detachmentDepthInterval.kind === 'unbounded' ? ' (95% interval unbounded)' : '';
   const headline = ad && !ad.noDetachment && ad.detachmentDepth !== null
     ? `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}: ${formatNumber(ad.detachmentDepth)} ${u} below ${ref}${ciText}; displacement ${formatNumber(ad.displacement)} ${u}; r² = ${ad.r2.toFixed(4)} over ${ad.n} horizons`
-    : ad && ad.noDetachment ? 'No detachment below these horizons (area does not decrease with depth).'
+    : ad && ad.noDetachment ? 'No detachment below these horizons (the area–depth line does not reach zero below them).'
     : `No area–depth result: ${ds.ok ? (analysis.outcome && !analysis.outcome.ok ? analysis.outcome.problems[0]?.message ?? 'input problems' : 'fewer than two horizons with regionals') : ds.message}`;
   out.push(`<text x="42" y="70" font-size="13.5">${escapeXml(headline.slice(0, 200))}</text></g>`);
   // The section panel.
@@ -217,6 +217,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
     ds.section.horizons.forEach((h, i) => {
+      if (!h.line) return;
       const line = toCoordinateArrays(h.line), reg = toCoordinateArrays(h.regional);
       const cl = clipPolylineToPins(line.xs, line.zs, pL, pR).clipped;
       const cr = clipPolylineToPins(reg.xs, reg.zs, pL, pR).clipped;
@@ -254,10 +255,17 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     const reg = scenario.regionals[h.id];
     const c = escapeXml(h.colour);
     if (reg && reg.length >= 2) {
-      out.push(`<polyline points="${pts(reg.map(fig))}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
+      const line = pts(reg.map(fig));
+      // A white outline under the dashes keeps the regional visible over a fill of its own colour.
+      out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="4.5" stroke-dasharray="7 4"/>`);
+      out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
       drawn.regionals = true;
     }
-    if (h.pointsPx.length >= 2) out.push(`<polyline points="${pts(h.pointsPx.map(fig))}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
+    if (h.pointsPx.length >= 2) {
+      const line = pts(h.pointsPx.map(fig));
+      out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="5" stroke-linejoin="round"/>`);
+      out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
+    }
     for (const [a, b] of h.projected) {
       const run = h.pointsPx.slice(a, b + 1);
       if (run.length >= 2) {

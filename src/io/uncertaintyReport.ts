@@ -25,10 +25,10 @@ export interface UncertaintyReport {
 
 const spread = (p: Percentiles | null, u: string) => (p ? `P10 ${formatNumber(p.p10)} · P50 ${formatNumber(p.p50)} · P90 ${formatNumber(p.p90)} ${u}` : 'no run gave a detachment');
 
-/** Returns 1 + W0/D for the analysis (null when there is no detachment or D ≤ 0). */
+/** Returns 1 + W0/D for the analysis, for either sign of D (null when there is no detachment). */
 export function amplificationOf(analysis: SectionAnalysis | null): number | null {
   const ad = analysis?.areaDepth;
-  if (!analysis || !ad || ad.noDetachment || !(ad.displacement > 0)) return null;
+  if (!analysis || !ad || ad.noDetachment || ad.displacement === 0) return null;
   return 1 + analysis.pinWidth / ad.displacement;
 }
 
@@ -36,7 +36,7 @@ export function amplificationOf(analysis: SectionAnalysis | null): number | null
 export function uncertaintyReport(record: MonteCarloRecord | null, section: Section | null, analysis: SectionAnalysis | null): UncertaintyReport {
   const amplification = amplificationOf(analysis);
   const u = analysis?.units ?? section?.units ?? record?.units ?? 'm';
-  const amplificationText = amplification === null ? '' : `Sensitivity amplification 1 + W₀/D = ${formatNumber(amplification, 3)} (W₀ = ${formatNumber(analysis!.pinWidth)} ${u}, D = ${formatNumber(analysis!.areaDepth!.displacement)} ${u}): raising every regional by 10 ${u} moves the detachment about ${formatNumber(10 * amplification, 3)} ${u} up, so an error in the regionals reaches the depth ${formatNumber(amplification, 3)} times larger.`;
+  const amplificationText = amplification === null ? '' : `Sensitivity amplification 1 + W₀/D = ${formatNumber(amplification, 3)} (W₀ = ${formatNumber(analysis!.pinWidth)} ${u}, D = ${formatNumber(analysis!.areaDepth!.displacement)} ${u}): raising every regional by 10 ${u} moves the detachment about ${formatNumber(10 * Math.abs(amplification), 3)} ${u} ${amplification > 0 ? 'up' : 'down'}, so an error in the regionals reaches the depth ${formatNumber(Math.abs(amplification), 3)} times larger.`;
   if (!record) return { status: 'none', lines: [NO_MONTE_CARLO_TEXT], rows: [], amplification, amplificationText };
   const stale = !section || isStale(record, section);
   const ru = record.units;

@@ -1,7 +1,6 @@
 // The compact live results beside the section (section workspace): each horizon's excess area and the
 // detachment depth and displacement of the area–depth line, following every drag (liveResults: a reading of the one live analysis the pane and exports read). The full
 // caution (docs/method.md §Cautions) stands beside them in small type: the strip may be the only result on screen.
-import { useEffect, useRef } from 'react';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
@@ -14,25 +13,20 @@ export function ResultsStrip() {
   const gestureStart = useDocStore((s) => s.gestureStart);
   const selectHorizon = useSessionStore((s) => s.selectHorizon);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
-  const ref = useRef<HTMLDivElement>(null);
   const shown = !(doc.horizons.length === 0 && !doc.calibration);
-  // The strip floats over the bottom of the view: its height is kept so that notes drawn on the view stay above it.
-  useEffect(() => {
-    const el = ref.current;
-    if (!el) return;
-    const setInset = useSessionStore.getState().setViewInsetBottom;
-    const ro = new ResizeObserver(() => setInset(el.offsetHeight));
-    ro.observe(el);
-    setInset(el.offsetHeight);
-    return () => {
-      ro.disconnect();
-      setInset(0);
-    };
-  }, [shown]);
-  if (!shown) return null;
+  // The strip keeps its place and height below the view even before there is anything to show, so the view's
+  // size never changes while the user calibrates or draws.
+  if (!shown) {
+    return (
+      <div className="results-strip" data-testid="results-strip" aria-label="Live results">
+        <span className="strip-note" data-testid="strip-note">Results appear here once the scan is calibrated and horizons, pins and regionals are drawn.</span>
+        <p className="strip-caution" data-testid="strip-caution">{SECTION_CAUTION}</p>
+      </div>
+    );
+  }
   const live = liveResults(doc, gestureStart);
   return (
-    <div ref={ref} className="results-strip" data-testid="results-strip" aria-label="Live results">
+    <div className="results-strip" data-testid="results-strip" aria-label="Live results">
       <div className="strip-main">
         {live.ready ? (
           <>

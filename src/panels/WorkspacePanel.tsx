@@ -18,6 +18,7 @@ function ToolBar() {
   const setTool = useSessionStore((s) => s.setTool);
   const stateName = useToolSession((s) => s.stateName);
   const showFills = useDocStore((s) => s.doc.settings.showFills);
+  const followLine = useToolSession((s) => s.followLine);
   return (
     <section className="panel-section" aria-label="Tools">
       <h2 className="with-action">Tools
@@ -30,6 +31,12 @@ function ToolBar() {
         ))}
       </div>
       <p className="hint tool-hint" data-testid="tool-hint" data-state={stateName}>{toolEntry(active).hint}</p>
+      {toolEntry(active).tracesLines && (
+        <label className="check" title="On: each stretch between two clicks follows the drawn line and clicks snap to its centre. Alt-click does the other for one click.">
+          <input type="checkbox" data-testid="follow-line" checked={followLine} onChange={(e) => useToolSession.getState().setFollowLine(e.currentTarget.checked)} />
+          follow the drawn line <span className="hint">(Alt-click: {followLine ? 'straight' : 'follow'})</span>
+        </label>
+      )}
       <label className="check">
         <input type="checkbox" checked={showFills} onChange={(e) => useDocStore.getState().apply((d) => setSettings(d, { showFills: e.currentTarget.checked }))} />
         excess-area fills <span className="fill-key above" /> above <span className="fill-key below" /> below regional
@@ -47,8 +54,9 @@ export function WorkspacePanel() {
     <>
       <ToolBar />
       <CalibrationPanel />
-      <HorizonList />
+      {/* The pins before the horizon list: two fields that stay in reach however many horizons there are. */}
       <PinsPanel />
+      <HorizonList />
       <HelpOverlay />
     </>
   );

@@ -27,7 +27,7 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number): Proj
     colour: DEMO_COLOURS[i % DEMO_COLOURS.length],
     visible: true,
     locked: false,
-    pointsPx: h.line.map(toPx),
+    pointsPx: (h.line ?? []).map(toPx),
     projected: h.projected ?? [],
   }));
   const regionals: Record<string, [number, number][]> = {};

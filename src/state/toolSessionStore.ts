@@ -12,6 +12,9 @@ export interface ToolSession {
   /** Name of the active tool's state (idle, placing, dragging …), for hints and tests. */
   stateName: string;
   helpOpen: boolean;
+  /** Whether drawing clicks follow the drawn line on the scan (Alt-click does the opposite for one click). */
+  followLine: boolean;
+  setFollowLine: (follow: boolean) => void;
   setCalibrationPick: (pick: CalibrationPick) => void;
   setHelpOpen: (open: boolean) => void;
 }
@@ -21,6 +24,8 @@ export const useToolSession = create<ToolSession>()((set) => ({
   focusRef: null,
   stateName: 'idle',
   helpOpen: false,
+  followLine: true,
+  setFollowLine: (followLine) => set({ followLine }),
   setCalibrationPick: (calibrationPick) => set({ calibrationPick }),
   setHelpOpen: (helpOpen) => set({ helpOpen }),
 }));

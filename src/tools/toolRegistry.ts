@@ -12,12 +12,19 @@ import type { Tool } from './toolTypes';
 type AnyTool = Tool<{ name: string }>;
 const any = (t: unknown) => t as AnyTool;
 
-export interface ToolEntry { tool: AnyTool; label: string; key: string; hint: string }
+export interface ToolEntry {
+  tool: AnyTool;
+  label: string;
+  key: string;
+  hint: string;
+  /** Draws by anchor clicks that can follow the drawn line: the tool bar shows the follow toggle, and undo mid-line removes the last stretch. */
+  tracesLines?: boolean;
+}
 
 export const TOOLS: ToolEntry[] = [
   { tool: any(selectTool), label: 'Select', key: 'v', hint: 'Click a line to select its horizon.' },
-  { tool: any(calibrateTool), label: 'Calibrate', key: 'c', hint: 'Click a point of known position, then type its value; drag points to adjust.' },
-  { tool: any(drawHorizonTool), label: 'Draw horizon', key: 'd', hint: 'Click vertices; double-click or Enter finishes, Backspace removes the last, Esc cancels.' },
+  { tool: any(calibrateTool), label: 'Calibrate', key: 'c', hint: 'Click a point of known position (a click near a drawn cross or tick snaps to its centre; Alt-click does not), then type its value; drag points to adjust.' },
+  { tool: any(drawHorizonTool), label: 'Draw horizon', key: 'd', tracesLines: true, hint: 'Click points along the line: between them the line follows the drawing on the scan (Alt-click: straight); double-click or Enter finishes, Backspace removes the last stretch, Esc cancels.' },
   { tool: any(editHorizonTool), label: 'Edit', key: 'e', hint: 'Drag a vertex; press a line to add a vertex; Shift-drag moves the line; Alt-click or Delete removes a vertex.' },
   { tool: any(markProjectedTool), label: 'Projected', key: 'j', hint: 'Click the first and last vertex of an eroded run to mark it projected (click again to unmark).' },
   { tool: any(pinsTool), label: 'Pins', key: 'p', hint: 'Click twice to place the two pins; drag a pin to move it.' },

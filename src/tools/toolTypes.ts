@@ -8,16 +8,32 @@ export type DocEdit = (doc: ProjectDoc) => ProjectDoc;
 
 export type ToolEvent =
   | { type: 'pointerDown'; p: ImagePx; button: number; clicks: number; shift: boolean; alt: boolean }
-  | { type: 'pointerMove'; p: ImagePx; shift: boolean }
+  | { type: 'pointerMove'; p: ImagePx; shift: boolean; alt?: boolean }
   | { type: 'pointerUp'; p: ImagePx }
   | { type: 'key'; key: string }
   /** Esc, window blur or a tool switch. */
-  | { type: 'cancel' };
+  | { type: 'cancel' }
+  /** A stretch asked of the line tracer is ready (ask again to get it). */
+  | { type: 'traced' };
 
 export type ToolEventType = ToolEvent['type'];
 
 /** Which kind of calibration point a click adds. */
 export type CalibrationPick = 'points' | 'xPoints' | 'zPoints';
+
+/**
+ * Follows the drawn line on the scan (supplied by the section view while a scan is shown). Synchronous answers
+ * only: what is not ready yet is computed off the main thread and announced by a 'traced' event.
+ */
+export interface LineTracer {
+  /** Returns the line centre within `radiusPx` image px of `p` (sub-pixel), or null where no line is drawn. */
+  snap(p: ImagePx, radiusPx: number): ImagePx | null;
+  /**
+   * Returns the traced stretch from `from` to `to` (first point `from`, last `to`, image px) when ready, else null and
+   * starts it; `placed` for a stretch whose anchor is placed (computed first), not a preview to the pointer.
+   */
+  stretch(from: ImagePx, to: ImagePx, placed?: boolean): ImagePx[] | null;
+}
 
 export interface ToolContext {
   doc: ProjectDoc;
@@ -27,6 +43,10 @@ export interface ToolContext {
   tolerancePx: number;
   selectedHorizonId: string | null;
   calibrationPick: CalibrationPick;
+  /** The scan's line tracer, when a scan is shown. */
+  tracer?: LineTracer | null;
+  /** Whether clicks follow the drawn line (the tool hint's toggle; Alt-click does the opposite for one click). */
+  followLine?: boolean;
 }
 
 /** Drawn above the shapes while a tool works; never stored in the document. */
@@ -50,7 +70,9 @@ export type ToolCommand =
   | { type: 'select'; horizonId: string | null }
   | { type: 'focusCalibrationPoint'; ref: CalibrationPointRef }
   | { type: 'preview'; preview: ToolPreview | null }
-  | { type: 'message'; kind: 'error' | 'info'; text: string };
+  | { type: 'message'; kind: 'error' | 'info'; text: string }
+  /** Takes down the message shown (one the tool showed while waiting). */
+  | { type: 'clearMessage' };
 
 export interface ToolResult<S> { next?: S; commands?: ToolCommand[] }
 

@@ -30,7 +30,7 @@ describe('detachmentTrace(section, analysis)', () => {
     // Tilt every regional (and its horizon) by 0.01 about the pins' middle: areas and mean elevations are unchanged.
     const s = methodExample();
     const tilt = (x: number) => 0.01 * (x - 5000);
-    s.horizons = s.horizons.map((h) => ({ ...h, line: h.line.map(([x, z]) => [x, z + tilt(x)]), regional: h.regional.map(([x, z]) => [x, z + tilt(x)]) }));
+    s.horizons = s.horizons.map((h) => ({ ...h, line: h.line!.map(([x, z]) => [x, z + tilt(x)]), regional: h.regional.map(([x, z]) => [x, z + tilt(x)]) }));
     const t = trace(s)!;
     expectClose(t.trend, 0.01, 1e-12);
     const [[x0, z0], [x1, z1]] = t.line;

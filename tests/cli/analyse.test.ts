@@ -34,8 +34,11 @@ describe('analyse FILE --json', () => {
     const r = analyse(join(fixtures, 'method-example.json'), '--json');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
-    expect(Object.keys(j)).toEqual(['pinWidth', 'referenceElevation', 'horizons', 'areaDepth', 'notes']);
-    expect(Object.keys(j.horizons[0])).toEqual(['name', 'excessArea', 'bedLength', 'regionalLength', 'regionalElevation', 'depth', 'chamberlinDepth', 'lpsStrain', 'included']);
+    expect(Object.keys(j)).toEqual(['pinWidth', 'referenceElevation', 'horizons', 'areaDepth', 'regime', 'notes']);
+    expect(Object.keys(j.horizons[0])).toEqual(['name', 'excessArea', 'bedLength', 'regionalLength', 'regionalElevation', 'depth', 'chamberlinDepth', 'lpsStrain', 'included', 'pieces', 'cutoffs']);
+    expect(j.regime).toBe('shortening');
+    expect(j.horizons[0].pieces).toBe(1);
+    expect(j.horizons[0].cutoffs).toEqual([]);
     expect(Object.keys(j.areaDepth)).toEqual(['n', 'slope', 'intercept', 'displacement', 'detachmentDepth', 'detachmentElevation', 'r2', 'detachmentDepthCI95', 'displacementCI95']);
     expect(j.horizons.map((h: { name: string }) => h.name)).toEqual(['H1', 'H2', 'H3', 'H4']);
     expect(j.areaDepth.slope).toBeCloseTo(-1000, 6);

@@ -38,11 +38,11 @@ describe('formatTable(analysis)', () => {
     expect(t).toContain('(95% Fieller: none (n = 2))');
   });
 
-  it('prints no displacement for a slope ≥ 0, while the JSON keeps the number', () => {
+  it('prints no displacement when the line does not reach zero below the horizons, while the JSON keeps the number', () => {
     // Areas grow with depth: slope +1000 m, D = −slope = −1000 m is no displacement (docs/method.md §Area-depth line: no zero crossing below the horizons, no detachment).
     const a = analysed(folds([1.0e6, 1.5e6, 2.0e6, 2.5e6]));
     const t = formatTable(a);
-    expect(t).toContain('  slope ≥ 0: no displacement estimate\n  Detachment: none below these horizons');
+    expect(t).toContain('  no zero crossing below the horizons: no displacement estimate\n  Detachment: none below these horizons');
     expect(t).not.toContain('Displacement D');
     expect(toJsonReport(a).areaDepth!.displacement).toBeCloseTo(-1000, 6);
   });

@@ -53,7 +53,7 @@ function rotatedProject(): string {
     ...base,
     scan: { id: 'turned-scan', name: 'turned.png', widthPx: W, heightPx: H, type: 'image/png' },
     calibration: { kind: 'affine', points: corners.map((q) => { const [u, v] = toPx(q); return { u, v, x: q[0], z: q[1] }; }) },
-    horizons: base.horizons.map((h, i) => ({ ...h, pointsPx: SECTION.horizons[i].line.map(toPx) })),
+    horizons: base.horizons.map((h, i) => ({ ...h, pointsPx: SECTION.horizons[i].line!.map(toPx) })),
     scenarios: [{ ...base.scenarios[0], pinsPx: [toPx([0, 300]), toPx([1000, 450])], regionals: Object.fromEntries(base.horizons.map((h, i) => [h.id, SECTION.horizons[i].regional.map(toPx)])) }],
   };
   return serializeProject(doc, { type: 'image/png', name: 'turned.png', bytes: new Uint8Array(rotatedScan()) });

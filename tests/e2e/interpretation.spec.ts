@@ -1,6 +1,6 @@
 // The interpretation pane on the demo the app opens at start: the numbers shown equal the engine's
-// for public/demo/section.json (to display rounding), which match public/demo/truth.json (the forward
-// model it was built from); toggling a horizon, switching scenarios, and a repeatable Monte Carlo run
+// for public/demo/section.json (to display rounding), which lie close to public/demo/truth.json (the forward
+// model its scan was drawn from, digitised by hand with jitter); toggling a horizon, switching scenarios, and a repeatable Monte Carlo run
 // that leaves the page responsive; and a Shift-drag of the regionals with the mouse, during and after
 // which the strip, the pane, the graph and the detachment drawn on the section agree with the engine
 // run here on the document the app then saves.
@@ -55,7 +55,7 @@ async function openDemo(page: Page): Promise<void> {
   await expect(page.getByTestId('result-detachment-elevation')).toContainText(' m', { timeout: 20_000 });
 }
 
-test('the pane shows the engine’s detachment for the demo, which matches the truth it was built from', async ({ page }) => {
+test('the pane shows the engine’s detachment for the demo, with an interval that holds the truth it was built from', async ({ page }) => {
   await openDemo(page);
   const a = engine(demo);
   await expectPaneMatches(page, a);
@@ -63,14 +63,21 @@ test('the pane shows the engine’s detachment for the demo, which matches the t
   await expect(page.getByTestId('result-detachment-elevation')).toHaveText(/^−?\d+ m$/);
   await expect(page.getByTestId('result-displacement')).toHaveText(/^\d+ m$/);
   await expect(page.getByTestId('result-detachment-depth')).toHaveText((await page.getByTestId('strip-detachment-depth').textContent()) ?? '');
-  // The demo is a forward model with no scatter: the pane says so rather than showing a zero-width interval.
-  await expect(page.getByTestId('interval-r2')).toHaveText('exact fit (no scatter): no interval');
-  await expect(page.getByTestId('interval-detachment-depth')).toHaveCount(0);
+  // The demo is digitised by hand from its scan (jittered clicks): the points scatter, so the pane gives a
+  // real 95% interval on the depth, and the section shows its band.
+  await expect(page.getByTestId('interval-detachment-depth')).toHaveText(/^95%: \d+ to \d+ m$/);
+  await expect(page.getByTestId('interval-r2')).toHaveCount(0);
+  const band = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.closed() && Math.abs(l.opacity() - 0.14) < 1e-9).length)()`);
+  await expect.poll(band).toBe(1);
   await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');
-  // The demo is a forward model (docs/method.md §Forward models): the analysis returns its D and detachment to rounding.
-  expect(Math.abs(a.areaDepth!.displacement - truth.displacement)).toBeLessThan(0.5);
-  expect(Math.abs(a.areaDepth!.detachmentElevation! - truth.detachmentElevation)).toBeLessThan(0.5);
-  expectRounded(await shown(page.getByTestId('result-detachment-elevation')), truth.detachmentElevation);
+  // Against the forward model it was built from (truth.json): within 1 % of D and of the depth, and the
+  // truth inside the engine's interval (the digitising error the demo's README states).
+  const ad = a.areaDepth!;
+  expect(Math.abs(ad.displacement / truth.displacement - 1)).toBeLessThan(0.01);
+  expect(Math.abs(ad.detachmentElevation! - truth.detachmentElevation)).toBeLessThan(0.01 * ad.detachmentDepth!);
+  const truthDepth = a.referenceElevation - truth.detachmentElevation;
+  expect(ad.detachmentDepthCI95![0]).toBeLessThan(truthDepth);
+  expect(ad.detachmentDepthCI95![1]).toBeGreaterThan(truthDepth);
   // One point per horizon, the caution visible, the detachment marked on the graph.
   await expect(page.locator('[data-testid^="graph-point-"]')).toHaveCount(demo.horizons.length);
   await expect(page.getByTestId('graph-detachment')).toBeVisible();

@@ -23,6 +23,8 @@ test('opening a generated PNG shows it fitted in the view', async ({ page }) => 
   await expect(page.getByTestId('scan-name')).toContainText('gradient.png — 400 × 200 px');
   const box = (await page.getByTestId('section-view').boundingBox())!;
   // Fitted: the image centre is at the view centre; its colour is mid-red, mid-green (the generator's encoding).
+  // The scan may be drawn a frame or more after its name shows: wait for the picture, then check it.
+  await expect.poll(async () => (await viewPixel(page, box.width / 2, box.height / 2))[2]).toBe(90);
   const [r, g, b] = await viewPixel(page, box.width / 2, box.height / 2);
   expect(Math.abs(r - 128)).toBeLessThan(8);
   expect(Math.abs(g - 128)).toBeLessThan(8);

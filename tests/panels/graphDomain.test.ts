@@ -41,7 +41,7 @@ describe('graphDomain(series, dataOnly, units)', () => {
     expect(m.depth[0]).toBeLessThanOrEqual(3000);
     expect(m.depth[1]).toBeGreaterThanOrEqual(3000);
     expect(m.depth[1] - m.depth[0]).toBeGreaterThanOrEqual(300);
-    const ft = graphDomain([series({ ...at('ft'), horizons: at('ft').horizons.map((h) => ({ ...h, line: h.line.map(([x, z]) => [x, z / 100]), regional: h.regional.map(([x, z]) => [x, z / 100]) })) })], true, 'ft')!;
+    const ft = graphDomain([series({ ...at('ft'), horizons: at('ft').horizons.map((h) => ({ ...h, line: h.line!.map(([x, z]) => [x, z / 100]), regional: h.regional.map(([x, z]) => [x, z / 100]) })) })], true, 'ft')!;
     expect(ft.depth[1] - ft.depth[0]).toBeGreaterThanOrEqual(500);
   });
 

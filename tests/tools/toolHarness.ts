@@ -2,7 +2,7 @@
 // the store's gesture rules (one history entry per edit or per gesture) and records the state path.
 import { sectionFrame } from '../../src/core/model/commands/sectionFrame';
 import type { ImagePx, ProjectDoc } from '../../src/core/model/projectDoc';
-import { runTool, type CalibrationPick, type Tool, type ToolEvent, type ToolPreview } from '../../src/tools/toolTypes';
+import { runTool, type CalibrationPick, type LineTracer, type Tool, type ToolEvent, type ToolPreview } from '../../src/tools/toolTypes';
 
 export class ToolHarness<S extends { name: string }> {
   state: S;
@@ -16,6 +16,8 @@ export class ToolHarness<S extends { name: string }> {
   focused: unknown = null;
   tolerancePx = 5;
   calibrationPick: CalibrationPick = 'points';
+  tracer: LineTracer | null = null;
+  followLine = true;
 
   constructor(readonly tool: Tool<S>, doc: ProjectDoc) {
     this.state = tool.initial;
@@ -24,7 +26,7 @@ export class ToolHarness<S extends { name: string }> {
   }
 
   send(event: ToolEvent): this {
-    const ctx = { doc: this.doc, frame: sectionFrame(this.doc), tolerancePx: this.tolerancePx, selectedHorizonId: this.selected, calibrationPick: this.calibrationPick };
+    const ctx = { doc: this.doc, frame: sectionFrame(this.doc), tolerancePx: this.tolerancePx, selectedHorizonId: this.selected, calibrationPick: this.calibrationPick, tracer: this.tracer, followLine: this.followLine };
     const { state, commands } = runTool(this.tool, this.state, event, ctx);
     if (state.name !== this.state.name) this.path.push(state.name);
     this.state = state;
@@ -44,6 +46,7 @@ export class ToolHarness<S extends { name: string }> {
       } else if (c.type === 'select') this.selected = c.horizonId;
       else if (c.type === 'preview') this.preview = c.preview;
       else if (c.type === 'message') this.messages.push(c.text);
+      else if (c.type === 'clearMessage') this.messages.push('');
       else if (c.type === 'focusCalibrationPoint') this.focused = c.ref;
     }
     return this;
@@ -53,8 +56,8 @@ export class ToolHarness<S extends { name: string }> {
     return this.send({ type: 'pointerDown', p, button: opts.button ?? 0, clicks: opts.clicks ?? 1, shift: opts.shift ?? false, alt: opts.alt ?? false });
   }
 
-  move(p: ImagePx): this {
-    return this.send({ type: 'pointerMove', p, shift: false });
+  move(p: ImagePx, opts: { alt?: boolean } = {}): this {
+    return this.send({ type: 'pointerMove', p, shift: false, alt: opts.alt ?? false });
   }
 
   up(p: ImagePx): this {

@@ -1,4 +1,6 @@
+import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit, Section } from '../model/section';
+import type { Regime } from './detachmentOfLine';
 import type { SectionProblem } from '../model/validateSection';
 import { chamberlinDepth } from './chamberlinDepth';
 import { fitAreaDepth, type AreaDepthResult } from './fitAreaDepth';
@@ -7,16 +9,22 @@ import { prepareSectionScratch, type PreparedSection } from './prepareSection';
 
 export type { SectionProblem, SectionProblemCode } from '../model/validateSection';
 export type { AreaDepthResult } from './fitAreaDepth';
+export type { Cutoff } from '../model/joinPieces';
+export type { Regime } from './detachmentOfLine';
 
 export interface HorizonResult {
   name: string; included: boolean; excessArea: number; bedLength: number; regionalLength: number;
   regionalElevation: number; depth: number; chamberlinDepth: number | null; lpsStrain: number | null;
   projectedAreaShare: number; projectedLength: number; residual: number | null;
+  /** Number of pieces (1 for an unbroken line) and the cutoff pairs between them (empty for one piece). */
+  pieces: number; cutoffs: Cutoff[];
 }
 
 export interface SectionAnalysis {
   units: LengthUnit; pinWidth: number; referenceElevation: number;
   horizons: HorizonResult[]; areaDepth: AreaDepthResult | null; notes: string[];
+  /** Shortening or extension from the area–depth line; null when there is no detachment below the horizons. */
+  regime: Regime | null;
 }
 
 export type AnalysisOutcome = { ok: true; analysis: SectionAnalysis; warnings: SectionProblem[] }
@@ -51,13 +59,14 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
       lpsStrain: useD ? layerParallelStrain(h.bedLength, h.regionalLength, ad.displacement) : null,
       projectedAreaShare: h.projectedAreaShare, projectedLength: h.projectedLength,
       residual: residuals.get(i) ?? null,
+      pieces: h.pieces, cutoffs: h.cutoffs,
     };
   });
   const noChamberlin = horizons.filter((h) => h.chamberlinDepth === null).map((h) => `"${h.name}"`);
   if (noChamberlin.length > 0) {
     notes.push(`No Chamberlin depth for ${noChamberlin.join(', ')}: bed length does not exceed regional length.`);
   }
-  return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes };
+  return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes, regime: ad ? ad.regime : null };
 }
 
 function round(v: number): string {

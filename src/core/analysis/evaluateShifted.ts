@@ -1,4 +1,5 @@
 import { leastSquares } from '../stats/leastSquares';
+import { detachmentOfLine } from './detachmentOfLine';
 import type { PreparedSection } from './prepareSection';
 import { shiftRegionals, type AdjustedMeasures, type SectionAdjustment } from './shiftRegionals';
 
@@ -12,7 +13,7 @@ export interface QuickDetachment {
   intercept: number;
   /** D = −slope. */
   displacement: number;
-  /** slope ≥ 0: no detachment below these horizons. */
+  /** No zero crossing below the deepest included horizon (or slope 0): no detachment below these horizons (detachmentOfLine). */
   noDetachment: boolean;
   /** zd = −intercept/slope below the reference, and zref·k − zd; null when noDetachment. */
   detachmentDepth: number | null;
@@ -35,16 +36,18 @@ export function createEvaluationScratch(prepared: PreparedSection): EvaluationSc
 export function evaluateShifted(prepared: PreparedSection, adj: SectionAdjustment = {}, scratch = createEvaluationScratch(prepared)): QuickDetachment | null {
   const m = shiftRegionals(prepared, adj, scratch.measures);
   let n = 0;
+  let deepest = -Infinity;
   for (let i = 0; i < prepared.horizons.length; i++) {
     if (!prepared.included[i]) continue;
+    if (m.depths[i] > deepest) deepest = m.depths[i];
     scratch.x[n] = m.depths[i];
     scratch.y[n] = m.areas[i];
     n++;
   }
   const fit = leastSquares(scratch.x.subarray(0, n), scratch.y.subarray(0, n));
   if (!fit) return null;
-  const noDetachment = !(fit.slope < 0);
-  const depth = noDetachment ? null : -fit.intercept / fit.slope;
+  const depth = detachmentOfLine(fit.slope, fit.intercept, deepest).depth;
+  const noDetachment = depth === null;
   const zref = prepared.referenceElevation * (adj.scale ?? 1);
   return {
     n, slope: fit.slope, intercept: fit.intercept, displacement: -fit.slope, noDetachment,

@@ -3,15 +3,20 @@ import { leastSquares, type LineFit } from '../stats/leastSquares';
 import { slopeInterval } from '../stats/slopeInterval';
 import { studentTQuantile } from '../stats/studentTQuantile';
 import type { LengthUnit } from '../model/section';
+import { detachmentOfLine, type Regime } from './detachmentOfLine';
 
 // The area–depth line of Epard & Groshong (1993): least squares A = a + b·h over the included
 // horizons; D = −b, zd = −a/b, detachment elevation zref − zd; 95% interval on D from the
-// slope's t interval and on zd by Fieller's theorem (docs/method.md §Area-depth line, §Fieller interval). b ≥ 0 is reported as
-// "no detachment below these horizons", never as a depth.
+// slope's t interval and on zd by Fieller's theorem (docs/method.md §Area-depth line, §Fieller interval). Shortening
+// (D > 0) and extension (D < 0, Groshong 1994) alike: the zero crossing is the detachment when it
+// lies below the deepest horizon in the fit (detachmentOfLine); otherwise, or for a zero slope,
+// "no detachment below these horizons", never a depth.
 
 export interface AreaDepthResult {
   n: number; df: number; slope: number; intercept: number; slopeSE: number; interceptSE: number;
   r2: number; s: number; displacement: number; noDetachment: boolean;
+  /** Shortening (D > 0) or extension (D < 0) when there is a detachment; null when there is none. */
+  regime: Regime | null;
   detachmentDepth: number | null; detachmentElevation: number | null;
   displacementCI95: [number, number] | null; detachmentDepthCI95: [number, number] | null;
   detachmentDepthInterval: FiellerResult;
@@ -25,8 +30,8 @@ export interface AreaDepthFit {
   notes: string[];
 }
 
-/** The note (and Fieller reason) given when the area–depth slope is ≥ 0. */
-export const NO_DETACHMENT_NOTE = 'no detachment below these horizons: excess area does not decrease with depth (slope ≥ 0).';
+/** The note (and Fieller reason) given when the area–depth line has no zero crossing below the deepest horizon in the fit. */
+export const NO_DETACHMENT_NOTE = 'no detachment below these horizons: the area–depth line does not reach zero area below the deepest horizon in the fit (or its slope is 0).';
 
 /** Area–depth line through (depth h, area A) pairs (units, units²) with intervals and notes (depths labelled with `units` when given); result null with the reason when no line is possible. */
 export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>, referenceElevation: number, label = 'the fit', units?: LengthUnit): AreaDepthFit {
@@ -41,7 +46,8 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
     }
     return { result: null, fit: null, notes };
   }
-  const noDetachment = !(fit.slope < 0);
+  const found = detachmentOfLine(fit.slope, fit.intercept, maxOf(depths));
+  const noDetachment = found.depth === null;
   const slopeCI = slopeInterval(fit, 0.95);
   const displacementCI95: [number, number] | null = slopeCI ? [-slopeCI[1], -slopeCI[0]] : null;
   let interval: FiellerResult;
@@ -51,7 +57,7 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
   } else {
     interval = fiellerInterval(fit, 0, 0.95);
   }
-  const zd = noDetachment ? null : -fit.intercept / fit.slope;
+  const zd = found.depth;
   if (fit.n === 2) {
     notes.push('Only two horizons in the fit: the line passes through both exactly, so there are no intervals (0 degrees of freedom).');
   } else if (!noDetachment && interval.kind === 'unbounded') {
@@ -59,15 +65,15 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
   } else if (!noDetachment && interval.kind === 'none') {
     notes.push(`No interval on the detachment depth: ${interval.reason}`);
   }
-  if (zd !== null && zd < maxOf(depths)) {
-    notes.push('The detachment estimate lies above the deepest horizon in the fit, which is not physically consistent; check the regionals, pins and included horizons.');
+  if (found.regime === 'extension') {
+    notes.push('Extension: the excess areas lie below the regionals (lost area) and the displacement D is negative (extension −D).');
   }
   return {
     fit,
     notes,
     result: {
       n: fit.n, df: fit.df, slope: fit.slope, intercept: fit.intercept, slopeSE: fit.slopeSE, interceptSE: fit.interceptSE,
-      r2: fit.r2, s: fit.s, displacement: -fit.slope, noDetachment,
+      r2: fit.r2, s: fit.s, displacement: -fit.slope, noDetachment, regime: found.regime,
       detachmentDepth: zd, detachmentElevation: zd === null ? null : referenceElevation - zd,
       displacementCI95,
       detachmentDepthCI95: interval.kind === 'bounded' ? [interval.lo, interval.hi] : null,

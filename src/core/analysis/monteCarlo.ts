@@ -8,7 +8,7 @@ import { prepareHorizon } from './prepareHorizon';
 import { prepareSection, type PreparedSection } from './prepareSection';
 import type { SectionAdjustment } from './shiftRegionals';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
-import { toCoordinateArrays } from '../geometry/toCoordinateArrays';
+import { validateSectionArrays } from '../model/validateSectionArrays';
 
 // Monte Carlo of the detachment (docs/method.md §Sensitivity to the regional: propagate digitising and regional error,
 // report P10/P50/P90). Each run draws, in this fixed order: a common regional offset, a common
@@ -106,18 +106,20 @@ type NoiseDraw = (normal: () => number, out: Float64Array) => boolean;
 
 /** One normal area change per horizon, σ·√(Σ cᵢ²) (docs/method.md §Area variance of a horizon). */
 function analyticNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
-  const sds = p.horizons.map((h, i) => sigma * Math.sqrt(areaNoiseFactor(h.line, section.horizons[i].line.length, p.pins)));
+  const sds = p.horizons.map((h) => sigma * Math.sqrt(areaNoiseFactor(h.line, h.inputVertexCount, p.pins)));
   return (normal, out) => {
     for (let i = 0; i < sds.length; i++) out[i] = sds[i] === 0 ? 0 : sds[i] * normal();
     return true;
   };
 }
 
-/** σ on every input vertex's z, each horizon re-clipped; false when a perturbed line no longer crosses the pins once. */
+/** σ on every input vertex's z (for a horizon in pieces: every vertex of its joined line), each horizon re-clipped; false when a perturbed line no longer crosses the pins once. */
 function vertexNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
-  const inputs = section.horizons.map((h) => ({
-    line: toCoordinateArrays(h.line), reg: toCoordinateArrays(h.regional), flags: projectedSegmentFlags(h.projected, h.line.length),
-  }));
+  // The section was validated by prepareSection above, so this reads it again without problems (fresh arrays, kept).
+  const v = validateSectionArrays(section);
+  const inputs = v.ok ? v.section.horizons.map((h) => ({
+    line: { xs: h.lineX, zs: h.lineZ }, reg: { xs: h.regionalX, zs: h.regionalZ }, flags: projectedSegmentFlags(h.projected, h.lineX.length),
+  })) : [];
   return (normal, out) => {
     let ok = true;
     inputs.forEach((h, i) => {

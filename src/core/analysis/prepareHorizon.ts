@@ -1,6 +1,7 @@
 import { clipAndMeasure, type ClipAllocate } from '../geometry/clipAndMeasure';
 import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
 import { sweepSelfCrossing } from '../geometry/sweepSelfCrossing';
+import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
 import { projectedContribution } from './projectedContribution';
@@ -24,7 +25,15 @@ export interface PreparedHorizon {
   projectedLength: number;
   /** |P| / (|P| + |A − P|): the share of the absolute area carried by projected runs (0 when both are 0). */
   projectedAreaShare: number;
+  /** Number of pieces (1 for an unbroken line) and the cutoff pairs between them (empty for one piece). */
+  pieces: number;
+  cutoffs: Cutoff[];
+  /** Vertices of the measured input line (for a horizon in pieces: the joined line). */
+  inputVertexCount: number;
 }
+
+/** What a horizon in pieces adds: which segments of the joined line run along a fault, and the cutoffs. */
+export interface HorizonJoin { faultSegments: Uint8Array; pieces: number; cutoffs: Cutoff[] }
 
 export type HorizonPreparation = { ok: true; horizon: PreparedHorizon } | { ok: false; problems: SectionProblem[] };
 
@@ -86,14 +95,16 @@ export function prepareHorizon(
   segmentProjected?: ArrayLike<number>,
   units?: LengthUnit,
   allocate?: ClipAllocate,
+  join?: HorizonJoin,
 ): HorizonPreparation {
   const who = `Horizon "${name}"`;
+  const lineWhat = join ? 'joined line (its pieces and the fault between them)' : 'line';
   // The regional first: its first clipped z is the loop's z origin (as areaBetweenPolylines takes it).
   const reg = clipAndMeasure(regionalX, regionalZ, pins[0], pins[1], undefined, undefined, allocate);
   const lin = clipAndMeasure(lineX, lineZ, pins[0], pins[1], segmentProjected, reg.zOrigin, allocate);
-  const problems = [...pinProblems(lin.clip, who, 'line', name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
-  for (const [m, what] of [[lin, 'line'], [reg, 'regional']] as const) {
-    // A line along which x only increases is one monotone chain and cannot cross itself (selfIntersections).
+  const problems = [...pinProblems(lin.clip, who, lineWhat, name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
+  for (const [m, what] of [[lin, lineWhat], [reg, 'regional']] as const) {
+    // A line along which x only increases is one monotone chain and cannot cross itself (sweepSelfCrossing).
     const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, who, what, name, units) : null;
     if (p) problems.push(p);
   }
@@ -111,12 +122,35 @@ export function prepareHorizon(
     ok: true,
     horizon: {
       name, included, line, regional, excessArea,
-      bedLength: lin.length,
+      // Bed length counts the pieces only: the stretches along faults are not bed (docs/method.md §Faults and horizons in pieces).
+      bedLength: join ? lin.length - faultLengthWithin(lineX, lineZ, join.faultSegments, pins) : lin.length,
       regionalLength: reg.length,
       regionalElevation,
       projectedArea: proj.area,
       projectedLength: proj.length,
       projectedAreaShare: share,
+      pieces: join ? join.pieces : 1,
+      cutoffs: join ? join.cutoffs : [],
+      inputVertexCount: Math.min(lineX.length, lineZ.length),
     },
   };
+}
+
+/** Length (units) of the flagged segments' parts with pL ≤ x ≤ pR: a segment's length times the share of its x-range inside (all or nothing for a vertical one). */
+function faultLengthWithin(xs: ArrayLike<number>, zs: ArrayLike<number>, flags: Uint8Array, pins: [number, number]): number {
+  const [pL, pR] = pins;
+  let sum = 0;
+  for (let s = 0; s < flags.length; s++) {
+    if (!flags[s]) continue;
+    const ax = xs[s], bx = xs[s + 1];
+    const len = Math.hypot(bx - ax, zs[s + 1] - zs[s]);
+    const lo = Math.min(ax, bx), hi = Math.max(ax, bx);
+    if (hi === lo) {
+      if (lo >= pL && lo <= pR) sum += len;
+      continue;
+    }
+    const inside = Math.max(0, Math.min(hi, pR) - Math.max(lo, pL));
+    sum += (len * inside) / (hi - lo);
+  }
+  return sum;
 }

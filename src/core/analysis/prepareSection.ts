@@ -72,7 +72,8 @@ function prepare(section: Section, options: { referenceElevation?: number }, cli
   for (const h of s.horizons) {
     // No flags at all when nothing is projected: the same result, without a pass over empty flags.
     const flags = h.projected && h.projected.length > 0 ? projectedSegmentFlags(h.projected, h.lineX.length) : undefined;
-    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units, clipAllocate);
+    const join = h.faultSegments ? { faultSegments: h.faultSegments, pieces: h.pieceCount, cutoffs: h.cutoffs } : undefined;
+    const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units, clipAllocate, join);
     if (p.ok) horizons.push(p.horizon);
     else for (const q of p.problems) problems.push(q);
   }

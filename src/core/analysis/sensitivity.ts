@@ -61,8 +61,8 @@ export function regionalSensitivity(prepared: PreparedSection, options: Sensitiv
   };
 }
 
-/** The amplification 1 + W0/D of a regional error (dimensionless); null when there is no detachment (D ≤ 0). */
+/** The amplification 1 + W0/D of a regional error (dimensionless, either sign of D); null when there is no detachment. */
 export function regionalAmplification(pinWidth: number, quick: QuickDetachment | null): number | null {
-  if (!quick || quick.noDetachment || !(quick.displacement > 0)) return null;
+  if (!quick || quick.noDetachment || quick.displacement === 0) return null;
   return 1 + pinWidth / quick.displacement;
 }

@@ -1,5 +1,5 @@
 // Forward model: a synthetic, area-balanced section from a chosen displacement and detachment.
-import type { SectionHorizon, XZ } from '../model/section';
+import type { LineHorizon, XZ } from '../model/section';
 import type { FoldSpec, ForwardHorizonTruth, ForwardResult, ForwardSpec } from './forwardSpec';
 import { foldProfile, type FoldProfile } from './foldProfile';
 import { regionalProfile } from './regionalProfile';
@@ -46,7 +46,7 @@ export function forwardSection(spec: ForwardSpec): ForwardResult {
       shears.set(f, f.shape === 'overturned' ? overturnShear(f, profiles.get(f)!, scales[i]) : f.shape === 'asymmetric' ? (f.shear ?? 0) : 0);
     }
   }
-  const horizons: SectionHorizon[] = [];
+  const horizons: LineHorizon[] = [];
   const truths: ForwardHorizonTruth[] = [];
   spec.horizons.forEach((h, i) => {
     const prof = regionalProfile(h.regional ?? spec.regional ?? { kind: 'horizontal' }, spec.pins, extent);

@@ -1,5 +1,5 @@
 // The input and output shapes of the forward model (plain data).
-import type { LengthUnit, Section, XZ } from '../model/section';
+import type { LengthUnit, LineSection, XZ } from '../model/section';
 
 /**
  * One fold on a horizon. `from`/`to` bound the fold in x at the anchor elevation (section units);
@@ -89,6 +89,6 @@ export interface ForwardTruth {
 }
 
 export interface ForwardResult {
-  section: Section;
+  section: LineSection;
   truth: ForwardTruth;
 }

@@ -1,10 +1,10 @@
 // A short key of everything in a section that the analysis reads, so that a result computed earlier
 // (a Monte Carlo run, a sensitivity sweep) can be told apart from the current state: equal keys, same
 // analysis; a different key, a stale result.
-import type { Section } from './section';
+import { horizonPieces, type Section } from './section';
 
 // The key hashes every number and name the analysis reads (units, pins, reference, each horizon's
-// name, include flag, line, regional and projected runs), so two sections with the same key give the
+// name, include flag, line or pieces, regional and projected runs, and every fault), so two sections with the same key give the
 // same analysis; a hash of the float bits rather than of JSON text so that a drag frame costs one
 // pass over the vertices. Memoised per section object (the selectors hand out the same object until
 // the document changes).
@@ -41,7 +41,11 @@ export function sectionKey(section: Section): string {
   for (const h of section.horizons) {
     text(h.name);
     word(h.include === false ? 0 : 1);
-    for (const pts of [h.line, h.regional]) {
+    const pieces = horizonPieces(h);
+    word(pieces.length);
+    word(h.joinFaults?.length ?? 0);
+    for (const f of h.joinFaults ?? []) text(f);
+    for (const pts of [...pieces, h.regional]) {
       word(pts.length);
       for (const p of pts) {
         num(p[0]);
@@ -52,6 +56,14 @@ export function sectionKey(section: Section): string {
     for (const [from, to] of h.projected ?? []) {
       word(from);
       word(to);
+    }
+  }
+  for (const f of section.faults ?? []) {
+    text(f.name);
+    word(f.line.length);
+    for (const p of f.line) {
+      num(p[0]);
+      num(p[1]);
     }
   }
   const key = `${(a >>> 0).toString(16)}${(b >>> 0).toString(16).padStart(8, '0')}-${count}`;

@@ -1,4 +1,4 @@
-import type { Section, SectionHorizon, XZ } from './section';
+import type { Section, SectionFault, SectionHorizon, XZ } from './section';
 import type { SectionProblem } from './sectionProblem';
 import { validateSectionArrays } from './validateSectionArrays';
 
@@ -11,7 +11,7 @@ import { validateSectionArrays } from './validateSectionArrays';
 export type { SectionProblem, SectionProblemCode } from './sectionProblem';
 export type { Allocate } from './readPoints';
 export type { HorizonArrays } from './readHorizon';
-export { validateSectionArrays, type SectionArrays, type SectionArraysValidation } from './validateSectionArrays';
+export { validateSectionArrays, ON_FAULT_TOLERANCE, type SectionArrays, type SectionArraysValidation } from './validateSectionArrays';
 
 export type SectionValidation = { ok: true; section: Section } | { ok: false; problems: SectionProblem[] };
 
@@ -21,12 +21,17 @@ export function validateSection(input: unknown): SectionValidation {
   if (!v.ok) return v;
   const s = v.section;
   const horizons = s.horizons.map((a): SectionHorizon => {
-    const h: SectionHorizon = { name: a.name, line: toPoints(a.lineX, a.lineZ), regional: toPoints(a.regionalX, a.regionalZ) };
+    const h: SectionHorizon = a.pieces
+      ? { name: a.name, pieces: a.pieces.map((p) => toPoints(p.xs, p.zs)), regional: toPoints(a.regionalX, a.regionalZ) }
+      : { name: a.name, line: toPoints(a.lineX, a.lineZ), regional: toPoints(a.regionalX, a.regionalZ) };
+    if (a.joinFaults) h.joinFaults = a.joinFaults;
     if (a.include !== undefined) h.include = a.include;
-    if (a.projected) h.projected = a.projected;
+    const runs = a.pieces ? a.pieceProjected : a.projected;
+    if (runs) h.projected = runs;
     return h;
   });
   const section: Section = { units: s.units, pins: s.pins, horizons };
+  if (s.faults.length > 0) section.faults = s.faults.map((f): SectionFault => ({ name: f.name, line: toPoints(f.xs, f.zs) }));
   if (s.referenceElevation !== undefined) section.referenceElevation = s.referenceElevation;
   return { ok: true, section };
 }

@@ -1,5 +1,6 @@
 import type { LengthUnit } from './section';
-import { readHorizon, type HorizonArrays } from './readHorizon';
+import { readFault, type FaultArrays } from './readFault';
+import { readHorizon, type HorizonArrays, type JoinContext } from './readHorizon';
 import type { Allocate } from './readPoints';
 import type { SectionProblem } from './sectionProblem';
 
@@ -13,7 +14,12 @@ export interface SectionArrays {
   pins: [number, number];
   referenceElevation?: number;
   horizons: HorizonArrays[];
+  /** The faults as given (empty when the file has none). */
+  faults: FaultArrays[];
 }
+
+/** How near a piece end must be to a fault to lie on it, as a fraction of the pin width (the app snaps ends onto faults, so its files are exact). */
+export const ON_FAULT_TOLERANCE = 1e-6;
 
 export type SectionArraysValidation = { ok: true; section: SectionArrays } | { ok: false; problems: SectionProblem[] };
 
@@ -57,10 +63,12 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
     out.push({ code: 'bad-shape', message: 'Section: "horizons" must be an array of horizons; add it (it may be empty).' });
     return { ok: false, problems: out };
   }
+  const faults = readFaults(input.faults, out, allocate);
+  const join: JoinContext | null = pins && faults ? { faults, tolerance: ON_FAULT_TOLERANCE * (pins[1] - pins[0]) } : null;
   const horizons: HorizonArrays[] = [];
   const seen = new Set<string>();
   input.horizons.forEach((v, i) => {
-    const h = readHorizon(v, i, out, allocate);
+    const h = readHorizon(v, i, out, allocate, join);
     const name = isObject(v) && typeof v.name === 'string' ? v.name : undefined;
     if (name !== undefined && name.trim() !== '') {
       if (seen.has(name)) out.push({ code: 'duplicate-name', horizon: name, message: `Horizon "${name}" appears more than once; rename one of them.` });
@@ -68,8 +76,30 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
     }
     if (h) horizons.push(h);
   });
-  if (out.length > 0 || !pins) return { ok: false, problems: out };
-  const section: SectionArrays = { units: units as LengthUnit, pins, horizons };
+  if (out.length > 0 || !pins || !faults) return { ok: false, problems: out };
+  const section: SectionArrays = { units: units as LengthUnit, pins, horizons, faults };
   if (typeof ref === 'number') section.referenceElevation = ref;
   return { ok: true, section };
+}
+
+/** The faults list (absent: none), or null with every problem pushed (bad faults, duplicate names). */
+function readFaults(v: unknown, out: SectionProblem[], allocate: Allocate): FaultArrays[] | null {
+  if (v === undefined) return [];
+  if (!Array.isArray(v)) {
+    out.push({ code: 'bad-shape', message: 'Section: "faults" must be an array of faults, each { "name", "line" }; fix it or leave it out.' });
+    return null;
+  }
+  const before = out.length;
+  const faults: FaultArrays[] = [];
+  const seen = new Set<string>();
+  v.forEach((f, i) => {
+    const got = readFault(f, i, out, allocate);
+    const name = isObject(f) && typeof f.name === 'string' ? f.name : undefined;
+    if (name !== undefined && name.trim() !== '') {
+      if (seen.has(name)) out.push({ code: 'duplicate-name', fault: name, message: `Fault "${name}" appears more than once; rename one of them.` });
+      seen.add(name);
+    }
+    if (got) faults.push(got);
+  });
+  return out.length > before ? null : faults;
 }

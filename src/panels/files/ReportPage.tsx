@@ -5,6 +5,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { currentFigureSvg } from '../../state/currentFigureSvg';
+import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
 import { formatNumber, typographicMinus } from '../../io/formatNumber';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
@@ -80,7 +81,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
         <h2>Results ({u}, {area.label})</h2>
         {result ? (
           <table className="files-table" data-testid="report-table">
-            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area ({area.label})</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain</th></tr></thead>
+            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area ({area.label})</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain (negative = shortened along the layer)</th></tr></thead>
             <tbody>
               {result.horizons.map((h, i) => (
                 <tr key={i}>
@@ -94,11 +95,12 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
         ) : (
           <p data-testid="report-no-results">No results yet: {analysis.docSection.ok ? 'the section has input problems or fewer than two horizons with regionals.' : analysis.docSection.message}</p>
         )}
+        {result && chamberlinNote(result) && <p data-testid="report-chamberlin-note">{chamberlinNote(result)!.text} Layer-parallel strain: {STRAIN_SIGN_TEXT}.</p>}
         {result && <p data-testid="report-reference">Depths are measured below the reference level at elevation {refText}.</p>}
         {ad && (
           <p data-testid="report-summary">
             {ad.noDetachment
-              ? 'Excess area does not decrease with depth: there is no detachment below these horizons.'
+              ? 'The area–depth line does not reach zero area below the deepest horizon: there is no detachment below these horizons.'
               : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? `${formatNumber(ad.detachmentDepthCI95[0])} to ${formatNumber(ad.detachmentDepthCI95[1])} ${u}` : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatNumber(ad.r2, 4)} over ${ad.n} horizons.`}
           </p>
         )}

@@ -8,6 +8,7 @@ import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { SCREEN_FORMAT, withMinus } from './screenQuantity';
 import { summaryRows } from './summaryRows';
 import { maxOf } from '../../core/stats/minMax';
+import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
 
 interface Props {
   analysis: SectionAnalysis;
@@ -20,6 +21,7 @@ interface Props {
 export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle }: Props) {
   const [all, setAll] = useState(false);
   const u = analysis.units;
+  const note = chamberlinNote(analysis);
   const unit = areaUnit(u, maxOf(analysis.horizons.map((h) => Math.abs(h.excessArea)), 0));
   const copy = () => {
     const text = resultsTsv(analysis, scenarioName);
@@ -49,7 +51,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
               <th>Regional elev. ({u})</th>
               <th title={`Depth of the regional below the reference, ${withMinus(formatNumber(analysis.referenceElevation))} ${u}`}>Depth ({u})</th>
               <th>Chamberlin depth ({u})</th>
-              <th title="Layer-parallel strain e = L / (W + D) − 1; negative = shortened along the layer">Layer strain (%)</th>
+              <th title={`Layer-parallel strain e = L / (W + D) − 1; ${STRAIN_SIGN_TEXT}`}>Layer strain (%)<span className="th-note" data-testid="strain-sign">− = shortened</span></th>
               {all && <>
                 <th>Bed length ({u})</th>
                 <th>Regional length ({u})</th>
@@ -84,6 +86,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
           </tbody>
         </table>
       </div>
+      {note && <p className={`chamberlin-note${note.large ? ' large' : ''}`} data-testid="chamberlin-note">{note.text} Layer strain: {STRAIN_SIGN_TEXT}.</p>}
       <label className="check table-more"><input type="checkbox" checked={all} onChange={(e) => setAll(e.target.checked)} data-testid="horizon-table-all" />
         All columns (bed and regional length, projected share, distance off the line); hover a row for them</label>
       <table className="summary-table" data-testid="summary-table">

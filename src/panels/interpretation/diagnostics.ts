@@ -23,7 +23,7 @@ export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | n
   if (!ad) {
     out.push({ level: 'error', text: `Too few horizons: ${n} in the fit. Include at least two horizons at different depths (three or more for intervals).` });
   } else if (ad.noDetachment) {
-    out.push({ level: 'error', text: 'The slope is not negative: excess area does not decrease with depth, so there is no detachment below these horizons. Check the regionals and the included horizons.' });
+    out.push({ level: 'error', text: 'The area–depth line does not reach zero area below the deepest horizon in the fit (or it is flat), so there is no detachment below these horizons. Check the regionals and the included horizons.' });
   } else {
     if (ad.n === 2) out.push({ level: 'warning', text: 'Too few horizons for intervals: with two, the line passes through both exactly. Include a third horizon.' });
     if (ad.n >= 3 && ad.r2 < POOR_FIT_R2) out.push({ level: 'warning', text: `Poor fit: r² = ${ad.r2.toFixed(3)}. The points scatter about one straight line; look at the flagged horizons, or fit a subset or a second segment.` });

@@ -3,7 +3,7 @@ import { useToolSession } from '../../state/toolSessionStore';
 import { TOOLS } from '../../tools/toolRegistry';
 
 const GENERAL: [string, string][] = [
-  ['Ctrl/Cmd + Z', 'Undo'],
+  ['Ctrl/Cmd + Z', 'Undo (while drawing a line: remove its last stretch)'],
   ['Shift + Ctrl/Cmd + Z', 'Redo'],
   ['Wheel', 'Zoom about the cursor'],
   ['+ / −', 'Zoom in / out'],
@@ -11,10 +11,10 @@ const GENERAL: [string, string][] = [
   ['Space + drag, middle drag', 'Pan (Space on a focused button presses the button)'],
   ['Arrow keys', 'Pan'],
   ['Enter / double-click', 'Finish the line being drawn (Enter on a focused button presses the button)'],
-  ['Backspace', 'Remove the last point drawn; in Edit, delete the chosen vertex'],
+  ['Backspace', 'Remove the last point drawn (and the stretch traced to it); in Edit, delete the chosen vertex'],
   ['Esc', 'Cancel what the tool is doing'],
   ['Shift + drag', 'Edit: move a whole line · Regional: move every regional'],
-  ['Alt + click', 'Edit: delete a vertex'],
+  ['Alt + click', 'Draw horizon: a straight stretch (or a followed one, with following off) · Calibrate: no snapping · Edit: delete a vertex'],
   ['?', 'Show or hide this list'],
 ];
 

@@ -21,6 +21,7 @@ import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
 import { HORIZON_PALETTE, paletteColour } from '../../tools/horizonPalette';
 import { parseXZTable } from './parseXZTable';
+import { RegionalFields } from './RegionalFields';
 
 function NameField({ h }: { h: DocHorizon }) {
   const [text, setText] = useState(h.name);
@@ -113,7 +114,7 @@ function SelectedHorizon({ h }: { h: DocHorizon }) {
       </div>
       <div className="button-row">
         <button type="button" data-testid="propose-regional" disabled={!hasPins}
-          title="A straight regional through the horizon's lowest points near each pin; adjust it with the Regional tool"
+          title="A straight regional through the horizon's level at each pin: a robust (Theil–Sen) line through its vertices within 15 % of the pin width of that pin; adjust it with the Regional tool"
           onClick={() => {
             const before = useDocStore.getState().doc;
             apply((d) => proposeRegional(d, h.id));
@@ -124,6 +125,7 @@ function SelectedHorizon({ h }: { h: DocHorizon }) {
           onClick={() => apply((d) => parallelRegionals(d, h.id))}>Parallel set</button>
         <button type="button" disabled={!hasRegional} onClick={() => apply((d) => setRegional(d, h.id, null))}>Clear regional</button>
       </div>
+      <RegionalFields key={h.id} horizonId={h.id} />
       <div className="button-row">
         <button type="button" className="danger" onClick={() => {
           apply((d) => deleteHorizon(d, h.id));

@@ -46,7 +46,7 @@ export function liveResultsOf(doc: ProjectDoc, d: DocAnalysis): LiveResults {
   const leftOut = d.leftOut.length === 0 ? null
     : `Left out: ${d.leftOut.map((h) => `${h.name} (${h.reason})`).join('; ')}.`;
   const fitNote = !ad ? 'Include at least two horizons at different depths for an area–depth line.'
-    : ad.noDetachment ? 'No detachment below these horizons: excess area does not decrease with depth.' : null;
+    : ad.noDetachment ? 'No detachment below these horizons: the area–depth line does not reach zero area below the deepest one.' : null;
   return {
     ready: true, units: a.units, horizons,
     detachmentElevation: ad?.detachmentElevation ?? null,

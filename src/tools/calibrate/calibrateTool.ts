@@ -38,13 +38,15 @@ export const calibrateTool: Tool<CalibrateState> = {
           const q = points[i];
           return { next: { name: 'dragging', ref: q.ref, start: e.p, origin: [q.u, q.v] }, commands: [{ type: 'beginGesture' }, { type: 'focusCalibrationPoint', ref: q.ref }] };
         }
+        // A click near a drawn cross or tick lands on its centre (Alt-click: exactly where clicked).
+        const p: ImagePx = e.alt ? e.p : (ctx.tracer?.snap(e.p, ctx.tolerancePx) ?? e.p);
         // Suggest the value the current fit predicts, so a point added to a good fit starts close.
         const fit = documentFit(ctx.doc);
-        const [x, z] = fit ? imageToSection(fit, e.p) : [0, 0];
+        const [x, z] = fit ? imageToSection(fit, p) : [0, 0];
         const pick = ctx.calibrationPick;
         const known = { x: round3(x), z: round3(z), value: round3(pick === 'zPoints' ? z : x) };
         const ref = newRef(ctx.doc, pick);
-        return { commands: [{ type: 'edit', edit: (d) => addCalibrationPoint(d, pick, e.p[0], e.p[1], known) }, { type: 'focusCalibrationPoint', ref }] };
+        return { commands: [{ type: 'edit', edit: (d) => addCalibrationPoint(d, pick, p[0], p[1], known) }, { type: 'focusCalibrationPoint', ref }] };
       },
       cancel: () => ({}),
     },

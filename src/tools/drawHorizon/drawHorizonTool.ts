@@ -1,16 +1,54 @@
-// Draw a horizon by clicking its vertices: double-click or Enter finishes, Backspace removes the last
-// vertex, Esc cancels. Nothing reaches the document until the line is finished (one undo entry).
+// Draw a horizon by clicking anchors. While following the line (the default when a scan is shown) each
+// anchor snaps to the line centre and the stretch from the previous anchor follows the drawn line (live
+// preview to the pointer); Alt-click, or the hint's toggle, places a straight stretch. Double-click or
+// Enter finishes, Backspace (or undo) removes the last stretch, Esc cancels. Nothing reaches the document
+// until the line is finished (one undo entry).
 import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
 import type { ImagePx, ProjectDoc } from '../../core/model/projectDoc';
 import { paletteColour } from '../horizonPalette';
-import type { Tool, ToolCommand, ToolResult } from '../toolTypes';
+import type { Tool, ToolCommand, ToolContext, ToolResult } from '../toolTypes';
+import { addAnchor, computing, hoverStretch, lineVertices, removeLastStretch, resolveStretches, startLine, type Stretch, type TracedLine } from '../tracedLine';
 
-export type DrawHorizonState = { name: 'idle' } | { name: 'placing'; points: ImagePx[]; hover: ImagePx | null };
+export type DrawHorizonState =
+  | { name: 'idle' }
+  | {
+    name: 'placing';
+    /** The anchors clicked (snapped to the line centre when following). */
+    points: ImagePx[];
+    stretches: Stretch[];
+    hover: ImagePx | null;
+    hoverAlt: boolean;
+    /** The last ready traced preview to the pointer, shown while the next computes. */
+    hoverPath: ImagePx[] | null;
+    /** Finish asked while a stretch was still computing: finish when it is ready. */
+    finishing: boolean;
+  };
+
+type Placing = Extract<DrawHorizonState, { name: 'placing' }>;
 
 const idle: DrawHorizonState = { name: 'idle' };
 
-function preview(points: ImagePx[], hover: ImagePx | null, doc: ProjectDoc): ToolCommand {
-  return { type: 'preview', preview: { line: hover ? [...points, hover] : points, marks: points, colour: paletteColour(doc.horizons.length) } };
+const lineOf = (s: Placing): TracedLine => ({ anchors: s.points, stretches: s.stretches });
+
+function withLine(s: Placing, line: TracedLine): Placing {
+  return { ...s, points: line.anchors, stretches: line.stretches };
+}
+
+function preview(s: Placing, ctx: ToolContext): { state: Placing; command: ToolCommand } {
+  const line = lineOf(s);
+  const vertices = lineVertices(line);
+  let hoverPath = s.hoverPath;
+  if (s.hover && !s.finishing) {
+    const h = hoverStretch(line, s.hover, ctx, s.hoverAlt, s.hoverPath);
+    hoverPath = h.exact;
+    for (let k = 1; k < h.preview.length; k++) vertices.push(h.preview[k]);
+  }
+  return { state: { ...s, hoverPath }, command: { type: 'preview', preview: { line: vertices, marks: s.points, colour: paletteColour(ctx.doc.horizons.length) } } };
+}
+
+function show(s: Placing, ctx: ToolContext, extra: ToolCommand[] = []): ToolResult<DrawHorizonState> {
+  const p = preview(s, ctx);
+  return { next: p.state, commands: [p.command, ...extra] };
 }
 
 function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState> {
@@ -23,6 +61,17 @@ function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState
   return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'edit', edit: (d) => addHorizon(d, horizon) }, { type: 'select', horizonId: id }] };
 }
 
+/** Finishes now, or once the traced stretches still computing are ready. */
+function finishWhenReady(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
+  const line = resolveStretches(lineOf(s), ctx);
+  if (!computing(line)) {
+    const done = finish(lineVertices(line), ctx.doc);
+    // Take down the note shown while waiting.
+    return s.finishing ? { ...done, commands: [...(done.commands ?? []), { type: 'clearMessage' }] } : done;
+  }
+  return show({ ...withLine(s, line), finishing: true }, ctx, [{ type: 'message', kind: 'info', text: 'Tracing the last stretch…' }]);
+}
+
 export const drawHorizonTool: Tool<DrawHorizonState> = {
   id: 'draw',
   initial: idle,
@@ -30,27 +79,31 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
     idle: {
       pointerDown: (_s, e, ctx) => {
         if (e.button !== 0) return {};
-        return { next: { name: 'placing', points: [e.p], hover: null }, commands: [preview([e.p], null, ctx.doc)] };
+        const line = startLine(e.p, ctx, e.alt);
+        return show({ name: 'placing', points: line.anchors, stretches: [], hover: null, hoverAlt: false, hoverPath: null, finishing: false }, ctx);
       },
       cancel: () => ({ commands: [{ type: 'preview', preview: null }] }),
     },
     placing: {
       pointerDown: (s, e, ctx) => {
-        if (e.button !== 0) return {};
+        if (e.button !== 0 || s.finishing) return {};
         // The second press of a double-click lands on the vertex the first press placed: finish instead.
-        if (e.clicks >= 2) return finish(s.points, ctx.doc);
-        const last = s.points[s.points.length - 1];
-        if (Math.hypot(last[0] - e.p[0], last[1] - e.p[1]) < 1e-9) return {};
-        const points = [...s.points, e.p];
-        return { next: { ...s, points }, commands: [preview(points, null, ctx.doc)] };
+        if (e.clicks >= 2) return finishWhenReady(s, ctx);
+        const line = addAnchor(resolveStretches(lineOf(s), ctx), e.p, ctx, e.alt);
+        if (!line) return {};
+        return show({ ...withLine(s, line), hover: null, hoverPath: null }, ctx);
       },
-      pointerMove: (s, e, ctx) => ({ next: { ...s, hover: e.p }, commands: [preview(s.points, e.p, ctx.doc)] }),
+      pointerMove: (s, e, ctx) => show({ ...withLine(s, resolveStretches(lineOf(s), ctx)), hover: e.p, hoverAlt: e.alt ?? false }, ctx),
+      traced: (s, _e, ctx) => {
+        if (s.finishing) return finishWhenReady(s, ctx);
+        return show(withLine(s, resolveStretches(lineOf(s), ctx)), ctx);
+      },
       key: (s, e, ctx) => {
-        if (e.key === 'Enter') return finish(s.points, ctx.doc);
-        if (e.key === 'Backspace' || e.key === 'Delete') {
-          const points = s.points.slice(0, -1);
-          if (points.length === 0) return { next: idle, commands: [{ type: 'preview', preview: null }] };
-          return { next: { ...s, points }, commands: [preview(points, s.hover, ctx.doc)] };
+        if (e.key === 'Enter') return finishWhenReady(s, ctx);
+        if (e.key === 'Backspace' || e.key === 'Delete' || e.key === 'Undo') {
+          const line = removeLastStretch(lineOf(s));
+          if (!line) return { next: idle, commands: [{ type: 'preview', preview: null }] };
+          return show({ ...withLine(s, line), hoverPath: null, finishing: false }, ctx);
         }
         return {};
       },

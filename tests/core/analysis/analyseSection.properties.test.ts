@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
-import type { Section, XZ } from '../../../src/core/model/section';
+import type { LineSection, Section, XZ } from '../../../src/core/model/section';
 import { maxOf } from '../../../src/core/stats/minMax';
 
 // Invariants of the analysis (DEVELOPERS.md §Code style, tests; delaunator-style scaled runs).
@@ -13,7 +13,7 @@ const horizonArb = fc.record({
   tilt: fc.double({ min: -0.05, max: 0.05, noNaN: true }),
 });
 
-const sectionArb = fc.array(horizonArb, { minLength: 3, maxLength: 5 }).map((hs): Section => ({
+const sectionArb = fc.array(horizonArb, { minLength: 3, maxLength: 5 }).map((hs): LineSection => ({
   units: 'm',
   pins: [0, 1000],
   horizons: hs.map((h, k) => {
@@ -32,7 +32,7 @@ function run(s: Section): SectionAnalysis {
   return out.analysis;
 }
 
-function map(s: Section, f: (p: XZ) => XZ, pins: (p: [number, number]) => [number, number] = (p) => p): Section {
+function map(s: LineSection, f: (p: XZ) => XZ, pins: (p: [number, number]) => [number, number] = (p) => p): LineSection {
   return { ...s, pins: pins(s.pins), horizons: s.horizons.map((h) => ({ ...h, line: h.line.map(f), regional: h.regional.map(f) })) };
 }
 
@@ -75,7 +75,7 @@ describe('analyseSection(section) invariants (fast-check)', () => {
 
   it('is unchanged by reversing every horizon and regional', () => {
     fc.assert(fc.property(sectionArb, (s) => {
-      const r: Section = { ...s, horizons: s.horizons.map((h) => ({ ...h, line: [...h.line].reverse(), regional: [...h.regional].reverse() })) };
+      const r: LineSection = { ...s, horizons: s.horizons.map((h) => ({ ...h, line: [...h.line].reverse(), regional: [...h.regional].reverse() })) };
       const a = run(s);
       const b = run(r);
       a.horizons.forEach((h, i) => {
@@ -88,7 +88,7 @@ describe('analyseSection(section) invariants (fast-check)', () => {
   it('is unchanged by inserting collinear vertices', () => {
     fc.assert(fc.property(sectionArb, fc.double({ min: 0.05, max: 0.95, noNaN: true }), (s, t) => {
       const densify = (l: XZ[]): XZ[] => l.flatMap((p, i) => (i === 0 ? [p] : [[l[i - 1][0] + t * (p[0] - l[i - 1][0]), l[i - 1][1] + t * (p[1] - l[i - 1][1])] as XZ, p]));
-      const d: Section = { ...s, horizons: s.horizons.map((h) => ({ ...h, line: densify(h.line), regional: densify(h.regional) })) };
+      const d: LineSection = { ...s, horizons: s.horizons.map((h) => ({ ...h, line: densify(h.line), regional: densify(h.regional) })) };
       const a = run(s);
       const b = run(d);
       a.horizons.forEach((h, i) => {

@@ -185,7 +185,7 @@ describe('analyseSection(section) projected runs', () => {
 
   it('keeps the projected share when the horizon is given right to left', () => {
     const r = structuredClone(s);
-    r.horizons[0].line.reverse();
+    r.horizons[0].line!.reverse();
     r.horizons[0].projected = [[2, 3]];
     const a = analysed(r);
     expect(a.horizons[0].projectedLength).toBe(40);

@@ -105,13 +105,13 @@ describe('areaVertexCoefficients(line, n, pins)', () => {
     // The shoelace area is linear in z for fixed x (docs/method.md §Area variance of a horizon), so the prediction is exact.
     const s = section();
     const h = s.horizons[1];
-    const line = toCoordinateArrays(h.line);
+    const line = toCoordinateArrays(h.line!);
     const reg = toCoordinateArrays(h.regional);
     const base = prepareHorizon(h.name, line.xs, line.zs, reg.xs, reg.zs, s.pins);
     if (!base.ok) throw new Error('prepare failed');
-    const c = areaVertexCoefficients(base.horizon.line, h.line.length, s.pins);
-    const crossing = h.line.findIndex(([x]) => x > s.pins[0]);
-    for (const i of [0, crossing - 1, crossing, crossing + 1, 17, 30, h.line.length - 2, h.line.length - 1]) {
+    const c = areaVertexCoefficients(base.horizon.line, h.line!.length, s.pins);
+    const crossing = h.line!.findIndex(([x]) => x > s.pins[0]);
+    for (const i of [0, crossing - 1, crossing, crossing + 1, 17, 30, h.line!.length - 2, h.line!.length - 1]) {
       const zs = Float64Array.from(line.zs);
       zs[i] += 3.5;
       const moved = prepareHorizon(h.name, line.xs, zs, reg.xs, reg.zs, s.pins);

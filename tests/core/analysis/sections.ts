@@ -1,14 +1,14 @@
-import type { Section, SectionHorizon, XZ } from '../../../src/core/model/section';
+import type { LineHorizon, LineSection, XZ } from '../../../src/core/model/section';
 
 /** A triangular fold with the given excess area over a flat regional at elevation r, pins [0, w]. */
-export function triangleHorizon(name: string, area: number, r: number, w: number): SectionHorizon {
+export function triangleHorizon(name: string, area: number, r: number, w: number): LineHorizon {
   // Analytic: a triangle of base w and height 2A/w has area A.
   const peak = (2 * area) / w;
   return { name, line: [[0, r], [w / 2, r + peak], [w, r]], regional: [[0, r], [w, r]] };
 }
 
 /** the synthetic example of docs/method.md §Check values (our own): D = 1000 m, zd = 3000 m, h = 500…2000 m, A = D (zd − h). */
-export function methodExample(): Section {
+export function methodExample(): LineSection {
   const w = 10_000;
   return {
     units: 'm',

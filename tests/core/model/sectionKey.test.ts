@@ -13,7 +13,7 @@ describe('sectionKey(section)', () => {
     expect(sectionKey(clone(s))).toBe(sectionKey(s));
     const changes: ((c: Section) => void)[] = [
       (c) => { c.horizons[2].regional[1][1] += 1e-9; },
-      (c) => { c.horizons[0].line[1][0] += 0.5; },
+      (c) => { c.horizons[0].line![1][0] += 0.5; },
       (c) => { c.horizons[1].include = false; },
       (c) => { c.pins = [0, 9999]; },
       (c) => { c.referenceElevation = 10; },

@@ -19,7 +19,7 @@ const textsOf = (svg: string, group: string): string[] => {
 /** The sample with the lower horizon's crest moved so the points scatter about the line (no exact fit). */
 function scatteredDoc(peak = 301) {
   const section: Section = structuredClone(SAMPLE_SECTION);
-  section.horizons[2].line[2] = [500, peak];
+  section.horizons[2].line![2] = [500, peak];
   return { ...sectionToProjectDoc(section, 'Scattered'), author: 'T' };
 }
 
@@ -126,7 +126,7 @@ describe('renderSectionSvg', () => {
     expect(axis.filter((t) => /^\u2212[\d,]+$/.test(t)).length).toBeGreaterThan(0);
     // Shifted 3000 m down, every elevation is negative: the reference, its label and the inset's axis title.
     const low: Section = structuredClone(SAMPLE_SECTION);
-    for (const h of low.horizons) for (const pts of [h.line, h.regional]) for (const p of pts) p[1] -= 3000;
+    for (const h of low.horizons) for (const pts of [h.line!, h.regional]) for (const p of pts) p[1] -= 3000;
     const lowDoc = sectionToProjectDoc(low, 'Deep');
     const lowSvg = renderSectionSvg({ doc: lowDoc, analysis: selectAnalysis(lowDoc), scanDataUrl: null, date: '2024-05-01' });
     expect(lowSvg).toContain('reference level, elevation \u22122,500 m: depths below this line');
@@ -158,7 +158,7 @@ describe('renderSectionSvg', () => {
 
   it('fills a syncline below its regional in the blue of the canvas, clipped to the half-plane below the regional', () => {
     const section: Section = structuredClone(SAMPLE_SECTION);
-    section.horizons[1].line[2] = [500, 100]; // the middle horizon sags 150 below its regional
+    section.horizons[1].line![2] = [500, 100]; // the middle horizon sags 150 below its regional
     const doc = sectionToProjectDoc(section, 'Syncline');
     const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' });
     const below = /<polygon class="fill-below"[^>]*fill="rgb\(38, 104, 199\)"[^>]*clip-path="url\(#(below-\d+)\)"/.exec(svg);
@@ -201,7 +201,7 @@ describe('the inset area–depth graph', () => {
   it('labels negative excess areas (a syncline below its regional) with the minus sign U+2212', () => {
     // The middle horizon sags to −150, 400 below its regional at 250: a triangle of −200 000 m² (analytic).
     const section: Section = structuredClone(SAMPLE_SECTION);
-    section.horizons[1].line[2] = [500, -150];
+    section.horizons[1].line![2] = [500, -150];
     const a = selectAnalysis(sectionToProjectDoc(section, 'Syncline'));
     const r = a.outcome!.ok ? a.outcome!.analysis : null;
     expect(r!.horizons[1].excessArea).toBeCloseTo(-200_000, 6);

@@ -27,7 +27,7 @@ function rotatedDoc(deg: number): ProjectDoc {
   const corners: XZ[] = [[-200, 1000], [1300, 1000], [-200, -300], [1300, -300]];
   doc.calibration = { kind: 'affine', points: corners.map((q) => { const [u, v] = toPx(q); return { u, v, x: q[0], z: q[1] }; }) };
   doc.scan = { id: 'scan-1', name: 'rotated.png', widthPx: 2000, heightPx: 1800, type: 'image/png' };
-  doc.horizons.forEach((h, i) => { h.pointsPx = SAMPLE_SECTION.horizons[i].line.map(toPx); });
+  doc.horizons.forEach((h, i) => { h.pointsPx = SAMPLE_SECTION.horizons[i].line!.map(toPx); });
   const sc = doc.scenarios[0];
   sc.pinsPx = [toPx([SAMPLE_SECTION.pins[0], 300]), toPx([SAMPLE_SECTION.pins[1], 450])];
   sc.regionals = Object.fromEntries(doc.horizons.map((h, i) => [h.id, SAMPLE_SECTION.horizons[i].regional.map(toPx)]));
@@ -90,8 +90,8 @@ describe('the section figure of a rotated scan', () => {
       // Every vertex of the upper horizon reads back its section coordinate off the axes.
       const upper = /<polyline points="([^"]+)" fill="none" stroke="#c0392b" stroke-width="2.5"/.exec(svg)![1].split(' ').map((s) => s.split(',').map(Number));
       upper.forEach(([fx, fy], i) => {
-        expect(ax.x(fx)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line[i][0], 0);
-        expect(ax.z(fy)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line[i][1], 0);
+        expect(ax.x(fx)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line![i][0], 0);
+        expect(ax.z(fy)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line![i][1], 0);
       });
       expect(svg).toContain('True scale: vertical exaggeration 1×');
     });

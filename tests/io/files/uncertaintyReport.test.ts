@@ -14,7 +14,7 @@ import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
 /** The sample with the lower crest raised 1 m: the points scatter a little about the line. */
 function scattered(): Section {
   const s: Section = structuredClone(SAMPLE_SECTION);
-  s.horizons[2].line[2] = [500, 301];
+  s.horizons[2].line![2] = [500, 301];
   return s;
 }
 

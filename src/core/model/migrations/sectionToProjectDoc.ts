@@ -3,7 +3,7 @@
 import { fitCalibration } from '../../calibration/fitCalibration';
 import { sectionToImage } from '../../calibration/mapPoints';
 import { emptyProjectDoc, type DocHorizon, type ImagePx, type ProjectDoc } from '../projectDoc';
-import type { Section, XZ } from '../section';
+import { horizonPieces, type Section, type XZ } from '../section';
 import { canvasCalibration } from './canvasCalibration';
 
 /** Colours given to horizons in order (our own palette, readable on white and on a grey scan). */
@@ -11,7 +11,7 @@ export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d3
 
 /** Returns a project document holding the section, calibrated onto a true-scale canvas; title is the given name. */
 export function sectionToProjectDoc(section: Section, title = 'Section'): ProjectDoc {
-  const all: XZ[] = section.horizons.flatMap((h) => [...h.line, ...h.regional]);
+  const all: XZ[] = section.horizons.flatMap((h) => [...horizonPieces(h).flat(), ...h.regional]);
   // In a loop: spreading a long traced line's elevations into Math.min overflows the call stack.
   let zMin = Infinity;
   let zMax = -Infinity;
@@ -32,7 +32,8 @@ export function sectionToProjectDoc(section: Section, title = 'Section'): Projec
     colour: HORIZON_COLOURS[i % HORIZON_COLOURS.length],
     visible: true,
     locked: false,
-    pointsPx: h.line.map(toPx),
+    // A horizon in pieces is opened through its own path (the caller refuses it until then): only a line here.
+    pointsPx: (h.line ?? []).map(toPx),
     projected: (h.projected ?? []).map(([a, b]) => [a, b] as [number, number]),
   }));
   const scenario = {

@@ -23,8 +23,8 @@ describe('sectionToProjectDoc', () => {
     if (!fit.ok) throw new Error(fit.message);
     for (const i of [0, 12345, n - 1]) {
       const [x, z] = imageToSection(fit.fit, doc.horizons[11].pointsPx[i]);
-      expect(x).toBeCloseTo(section.horizons[11].line[i][0], 6);
-      expect(z).toBeCloseTo(section.horizons[11].line[i][1], 6);
+      expect(x).toBeCloseTo(section.horizons[11].line![i][0], 6);
+      expect(z).toBeCloseTo(section.horizons[11].line![i][1], 6);
     }
     // The pins sit at mid-height of everything drawn: halfway between the lowest and highest elevation.
     const [, zPin] = imageToSection(fit.fit, doc.scenarios[0].pinsPx![0]);

@@ -1,0 +1,64 @@
+// Moves each pixel of a traced path onto the centre of the line it follows, across the path's local
+// direction, so the vertices sit at sub-pixel precision on the ink (or on a colour boundary) rather than on
+// the pixel grid the search works on.
+import { centreAcross } from './centreAcross';
+import type { PixelFeatures } from './pixelFeatures';
+import { rasterCentre, type Raster } from './raster';
+
+/** Pixels either side along the path that set its local direction. */
+const DIRECTION_SPAN = 3;
+
+/**
+ * Centres already found, by path pixel and the pixel DIRECTION_SPAN ahead of it (the one behind is fixed by the
+ * tree): paths to nearby pointer positions share all but their last pixels, so a preview re-centres only those.
+ */
+export type CentreCache = Map<number, [number, number] | null>;
+
+/**
+ * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
+ * normal of the path's local direction to the line centre found in `f` (centreAcross), and the fraction of them that
+ * found a line there (the others keep their pixel centre). A path of one pixel comes back as that pixel's centre
+ * (fraction 1); an empty path as no points (fraction 0).
+ */
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number } {
+  const pts = path.map((k) => rasterCentre(r, k));
+  const n = pts.length;
+  if (n < 2) return { points: pts, onLine: n };
+  let found = 0;
+  const out: [number, number][] = [];
+  const size = r.w * r.h;
+  for (let i = 0; i < n; i++) {
+    const ahead = Math.min(n - 1, i + DIRECTION_SPAN);
+    const key = path[i] * size + path[ahead];
+    const known = cache?.get(key);
+    if (known !== undefined) {
+      if (known) {
+        found++;
+        out.push(known);
+      } else out.push(pts[i]);
+      continue;
+    }
+    const a = pts[Math.max(0, i - DIRECTION_SPAN)];
+    const b = pts[ahead];
+    const tx = b[0] - a[0];
+    const ty = b[1] - a[1];
+    const len = Math.hypot(tx, ty);
+    if (!(len > 0)) {
+      out.push(pts[i]);
+      continue;
+    }
+    const nx = -ty / len;
+    const ny = tx / len;
+    const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny);
+    if (Number.isNaN(o)) {
+      cache?.set(key, null);
+      out.push(pts[i]);
+      continue;
+    }
+    found++;
+    const q: [number, number] = [pts[i][0] + o * nx, pts[i][1] + o * ny];
+    cache?.set(key, q);
+    out.push(q);
+  }
+  return { points: out, onLine: found / n };
+}

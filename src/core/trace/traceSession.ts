@@ -1,0 +1,70 @@
+// The tracer's working memory, without the messaging around it: feature tiles computed once and kept
+// (least recently used go first past a cap), and the shortest-path trees of the latest anchors. The app
+// runs one in a worker; the benchmark runs one directly.
+import { assembleFeatures } from './assembleFeatures';
+import { pixelFeatures, type PixelFeatures } from './pixelFeatures';
+import type { Raster } from './raster';
+import { shortestPathTree, type PathTree } from './shortestPathTree';
+import { traceCost } from './traceCost';
+import type { CentreCache } from './refineToCentre';
+import { pixelIndexAt, traceStretch, TRACE_TOLERANCE_PX } from './traceStretch';
+
+/** Trees kept (the latest anchors): enough for the stretch being previewed and the ones still being filled in. */
+export const TREES_KEPT = 4;
+
+interface KeptTree { id: number; from: [number, number]; win: Raster; tree: PathTree; features: PixelFeatures; centres: CentreCache }
+
+export class TraceSession {
+  private tiles = new Map<string, PixelFeatures>();
+  private trees: KeptTree[] = [];
+
+  /** Stores the features of a tile from its RGBA pixels (`crop`: where the buffer lies in the image, one pixel wider than the tile where the image allows). */
+  putTile(key: string, tile: Raster, rgba: ArrayLike<number>, crop: Raster): void {
+    this.tiles.delete(key);
+    this.tiles.set(key, pixelFeatures(rgba, crop.w, crop.h, crop.x0, crop.y0, tile));
+  }
+
+  /** Forgets tiles (the caller keeps the least-recently-used order and the cap). */
+  dropTiles(keys: readonly string[]): void {
+    for (const k of keys) this.tiles.delete(k);
+  }
+
+  /** Builds the tree of anchor `from` over window `win` from the tiles held (pixels no tile covers read as paper). */
+  buildTree(id: number, from: [number, number], win: Raster, tileKeys: readonly string[]): void {
+    const features = this.windowFeatures(win, tileKeys);
+    const tree = shortestPathTree(traceCost(features), win.w, win.h, pixelIndexAt(features, from[0], from[1]));
+    this.trees.push({ id, from, win, tree, features, centres: new Map() });
+    while (this.trees.length > TREES_KEPT) this.trees.shift();
+  }
+
+  /** Returns the traced stretch from `from` to `to` over window `win` by a search that stops at `to` (no tree kept): for a stretch already placed. */
+  traceOnce(from: [number, number], to: [number, number], win: Raster, tileKeys: readonly string[]): [number, number][] {
+    const features = this.windowFeatures(win, tileKeys);
+    const tree = shortestPathTree(traceCost(features), win.w, win.h, pixelIndexAt(features, from[0], from[1]), pixelIndexAt(features, to[0], to[1]));
+    return traceStretch(tree, features, from, to) ?? [from, to];
+  }
+
+  private windowFeatures(win: Raster, tileKeys: readonly string[]): PixelFeatures {
+    const held: PixelFeatures[] = [];
+    for (const k of tileKeys) {
+      const t = this.tiles.get(k);
+      if (t) held.push(t);
+    }
+    return assembleFeatures(win, held);
+  }
+
+  /** Returns the traced stretch from tree `id`'s anchor to `to`; a straight one when `to` is out of reach; null when the tree is no longer kept. */
+  path(id: number, to: [number, number]): [number, number][] | null {
+    const t = this.trees.find((k) => k.id === id);
+    if (!t) return null;
+    return traceStretch(t.tree, t.features, t.from, to, TRACE_TOLERANCE_PX, t.centres) ?? [t.from, to];
+  }
+
+  /** Returns the bytes held by tiles and trees. */
+  bytesHeld(): number {
+    let b = 0;
+    for (const t of this.tiles.values()) b += t.dark.byteLength + t.edge.byteLength;
+    for (const t of this.trees) b += t.tree.dist.byteLength + t.tree.pred.byteLength + t.features.dark.byteLength + t.features.edge.byteLength + t.centres.size * 48;
+    return b;
+  }
+}
