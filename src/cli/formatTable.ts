@@ -1,5 +1,6 @@
 import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../core/analysis/caution';
+import { maxOf } from '../core/stats/minMax';
 
 function num(v: number | null, digits = 4): string {
   if (v === null || !Number.isFinite(v)) return '—';
@@ -23,7 +24,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
     h.name, h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
     num(h.regionalElevation), num(h.depth), num(h.chamberlinDepth), h.lpsStrain === null ? '—' : h.lpsStrain.toFixed(4),
   ]);
-  const widths = head.map((t, c) => Math.max(t.length, ...rows.map((r) => r[c].length)));
+  const widths = head.map((t, c) => maxOf(rows.map((r) => r[c].length), t.length));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   const out = [
     ...(source ? [source] : []),
@@ -48,6 +49,8 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   } else {
     out.push('Area–depth line: none (see notes).');
   }
-  out.push('', 'Notes:', ...[...a.notes, SECTION_CAUTION].map((n) => `  - ${n}`), '');
+  out.push('', 'Notes:');
+  for (const n of [...a.notes, SECTION_CAUTION]) out.push(`  - ${n}`);
+  out.push('');
   return out.join('\n');
 }

@@ -1,5 +1,6 @@
 // Axis ticks for exported figures: 1-2-5 steps, widened until the labels fit side by side.
 import { niceStep } from './formatNumber';
+import { maxOf } from '../core/stats/minMax';
 
 const nextStep = (s: number): number => {
   const p = 10 ** Math.floor(Math.log10(s) + 1e-9);
@@ -18,7 +19,7 @@ export function axisTicks(lo: number, hi: number, lengthPx: number, label: (v: n
     const out: number[] = [];
     // Multiples of the step (not running sums), trimmed to 12 digits: 3 × 0.1 is 0.3, not 0.30000000000000004.
     for (let k = Math.ceil(lo / step - 1e-9); k * step <= hi + step * 1e-9; k++) out.push(Number((k * step).toPrecision(12)) || 0);
-    const widest = Math.max(0, ...out.map((v) => label(v).length)) * charPx + 2 * charPx;
+    const widest = maxOf(out.map((v) => label(v).length), 0) * charPx + 2 * charPx;
     if (out.length <= target && out.length * widest <= lengthPx) return out;
     step = nextStep(step);
   }

@@ -23,6 +23,7 @@ import { outlierFlags } from './interpretation/outlierFlags';
 import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
 import { scenarioColour } from './interpretation/scenarioColour';
 import './interpretation/interpretation.css';
+import { maxOf } from '../core/stats/minMax';
 
 /** Whether the open project is the built-in invented demo (src/state/openDemo.ts). */
 function isDemo(doc: ProjectDoc): boolean {
@@ -78,7 +79,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
   const { analysis, series, docSection, outcome } = sa;
   const diag = useMemo(() => diagnostics(docSection, outcome, sa.leftOut), [docSection, outcome, sa.leftOut]);
   const flags = useMemo(() => (series ? outlierFlags(series.points, series.fit.fit) : []), [series]);
-  const unit = analysis ? areaUnit(analysis.units, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea)))) : null;
+  const unit = analysis ? areaUnit(analysis.units, maxOf(analysis.horizons.map((h) => Math.abs(h.excessArea)), 0)) : null;
   const toggle = useCallback((id: string, included: boolean) => apply((d) => scenarioSetIncluded(d, id, included)), [apply]);
 
   // Split choices for the second segment: between consecutive included depths.

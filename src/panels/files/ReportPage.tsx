@@ -16,6 +16,7 @@ import { activeScenario } from '../../core/model/docToSection';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { uncertaintyReport } from '../../io/uncertaintyReport';
 import { reportScenarioRows } from './reportScenarioRows';
+import { maxOf } from '../../core/stats/minMax';
 
 function useSvgUrl(svg: string | null): string | null {
   const url = useMemo(() => (svg ? URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' })) : null), [svg]);
@@ -53,7 +54,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
     ? `${formatNumber(result.referenceElevation)} ${u} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional, by default'})`
     : '—';
   const range = (p: [number, number] | null, exact: boolean) => (exact ? 'exact fit: none' : p ? `${formatNumber(p[0])} to ${formatNumber(p[1])}` : '—');
-  const area = figureAreaUnit(u, Math.max(0, ...(result?.horizons ?? []).map((h) => Math.abs(h.excessArea))));
+  const area = figureAreaUnit(u, maxOf((result?.horizons ?? []).map((h) => Math.abs(h.excessArea)), 0));
   return createPortal(
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">

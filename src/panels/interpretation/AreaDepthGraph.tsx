@@ -11,6 +11,7 @@ import { linspace, meanBand } from './meanBand';
 import { niceTicks } from './niceTicks';
 import { screenLength, screenNumber, withMinus } from './screenQuantity';
 import { isExactFit } from '../../core/analysis/isExactFit';
+import { maxOf } from '../../core/stats/minMax';
 
 export interface GraphSeriesSpec {
   key: string;
@@ -42,7 +43,7 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
   const [hoverPoint, setHoverPoint] = useState<GraphPoint | null>(null);
   const H = height;
   const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly, units), [series, dataOnly, units]);
-  const unit = useMemo(() => areaUnit(units, Math.max(0, ...series.flatMap((s) => s.series.points.map((p) => Math.abs(p.area))))), [series, units]);
+  const unit = useMemo(() => areaUnit(units, maxOf(series.flatMap((s) => s.series.points.map((p) => Math.abs(p.area))), 0)), [series, units]);
   if (!domain) return <p className="hint">No horizons with a regional yet.</p>;
   const xs = linearScale(domain.area, [M.left, W - M.right]);
   const ys = linearScale(domain.depth, [M.top, H - M.bottom]);

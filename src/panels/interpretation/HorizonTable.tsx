@@ -7,6 +7,7 @@ import { resultsTsv } from './resultsTsv';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { SCREEN_FORMAT, withMinus } from './screenQuantity';
 import { summaryRows } from './summaryRows';
+import { maxOf } from '../../core/stats/minMax';
 import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
 
 interface Props {
@@ -21,7 +22,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
   const [all, setAll] = useState(false);
   const u = analysis.units;
   const note = chamberlinNote(analysis);
-  const unit = areaUnit(u, Math.max(0, ...analysis.horizons.map((h) => Math.abs(h.excessArea))));
+  const unit = areaUnit(u, maxOf(analysis.horizons.map((h) => Math.abs(h.excessArea)), 0));
   const copy = () => {
     const text = resultsTsv(analysis, scenarioName);
     const { showMessage } = useSessionStore.getState();
