@@ -21,6 +21,15 @@ const MAY_IMPORT = {
 const NO_UI_PACKAGES = ['core', 'format', 'tools', 'io', 'cli'];
 const UI_PACKAGES = ['react', 'react-dom', 'react-konva', 'konva', 'zustand'];
 
+// No spread of a list into a call's arguments where the list can be data-sized: every element goes on
+// the call stack, and past roughly 100,000 (V8) the call throws RangeError — one densely traced line
+// blanked the page that way. Use minMax/minOf/maxOf (src/core/stats/minMax.ts) or a loop.
+const NO_ARGUMENT_SPREAD = [
+  { selector: "CallExpression[callee.object.name='Math'][callee.property.name=/^(min|max|hypot)$/] > SpreadElement", message: 'Math.min/max(...list) overflows the call stack on long lists: use minOf/maxOf (src/core/stats/minMax.ts) or a loop.' },
+  { selector: "CallExpression[callee.property.name=/^(push|unshift)$/] > SpreadElement", message: 'push(...list) overflows the call stack on long lists: push in a loop.' },
+  { selector: "CallExpression[callee.property.name='apply'][callee.object.property.name=/^(min|max|push|unshift)$/]", message: 'min/max/push.apply(null, list) overflows the call stack on long lists: use a loop.' },
+];
+
 function importDirection(folder) {
   const allowed = MAY_IMPORT[folder];
   const banned = Object.keys(MAY_IMPORT).filter((f) => f !== folder && !allowed.includes(f));
@@ -35,7 +44,7 @@ function importDirection(folder) {
     rules: {
       'no-restricted-imports': ['error', { patterns }],
       // import('…') is not seen by no-restricted-imports.
-      'no-restricted-syntax': ['error', { selector: `ImportExpression[source.value=/${regex.replaceAll('/', '\\/')}/]`, message }],
+      'no-restricted-syntax': ['error', { selector: `ImportExpression[source.value=/${regex.replaceAll('/', '\\/')}/]`, message }, ...NO_ARGUMENT_SPREAD],
     },
   };
 }
@@ -49,6 +58,7 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.browser, ...globals.node } },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      'no-restricted-syntax': ['error', ...NO_ARGUMENT_SPREAD],
     },
   },
   {

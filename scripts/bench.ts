@@ -6,7 +6,10 @@
 //   input     – a bare shoelace pass over the section's own [x, z] point arrays, the form the
 //               analysis is given: what reading the input costs, before any checking or clipping;
 //   validation, self-crossing – two parts of the analysis timed alone (validateSectionArrays into a
-//               reused buffer, and chainCrossings on the clipped lines), to show where the time goes;
+//               reused buffer, and sweepSelfCrossing on the clipped lines), to show where the time goes;
+//   sweep     – the self-crossing test alone on long steep lines, where many segments overlap in x:
+//               a 1,000,000-vertex steep zigzag and a 20,000-vertex densely traced steep limb (wall
+//               time and CPU time, since a shared machine inflates the first);
 //   clipping  – the same excess areas the general-purpose way: each horizon + regional loop
 //               as a polygon, clipped to the pin rectangle with polygon-clipping (npm), planar area;
 // and 10,000 Monte Carlo realisations of 6 horizons × ~2,000 vertices (monteCarlo).
@@ -18,11 +21,12 @@ import { analyseSection } from '../src/core/analysis/analyseSection';
 import { monteCarlo, type MonteCarloOptions } from '../src/core/analysis/monteCarlo';
 import { forwardSection } from '../src/core/forward/forwardSection';
 import type { FoldSpec } from '../src/core/forward/forwardSpec';
-import { chainCrossings } from '../src/core/geometry/chainCrossings';
+import { sweepSelfCrossing } from '../src/core/geometry/sweepSelfCrossing';
 import { clipAndMeasure } from '../src/core/geometry/clipAndMeasure';
 import { shoelaceArea } from '../src/core/geometry/shoelaceArea';
 import type { LineSection as Section } from '../src/core/model/section';
 import { validateSectionArrays } from '../src/core/model/validateSectionArrays';
+import { minOf, maxOf } from '../src/core/stats/minMax';
 
 const json = process.argv.includes('--json');
 
@@ -125,7 +129,7 @@ function inputShoelace(section: Section): number {
   return total;
 }
 
-/** The self-crossing test alone: chainCrossings on every clipped line that is not x-monotone (as prepareHorizon runs it). */
+/** The self-crossing test alone: sweepSelfCrossing on every clipped line that is not x-monotone (as prepareHorizon runs it). */
 function crossingTest(section: Section): () => number {
   const [pL, pR] = section.pins;
   const measured = section.horizons.map((h) => clipAndMeasure(
@@ -133,9 +137,37 @@ function crossingTest(section: Section): () => number {
   )).filter((m) => m.clip.clipped && !m.xMonotone);
   return () => {
     let found = 0;
-    for (const m of measured) found += chainCrossings(m.clip.clipped!.xs, m.clip.clipped!.zs, m.chains, 1).length;
+    for (const m of measured) found += sweepSelfCrossing(m.clip.clipped!.xs, m.clip.clipped!.zs) ? 1 : 0;
     return found;
   };
+}
+
+/** A steep zigzag (x back and forth between 0 and 1 while z falls by 1 per vertex): every segment overlaps every other in x; it does not cross itself. */
+function steepZigzag(n: number): { xs: Float64Array; zs: Float64Array } {
+  const xs = new Float64Array(n), zs = new Float64Array(n);
+  for (let i = 0; i < n; i++) { xs[i] = i % 2; zs[i] = -i; }
+  return { xs, zs };
+}
+
+/** A densely traced steep limb: z falls steadily while x wavers by hand-like jitter; it does not cross itself. */
+function steepLimb(n: number): { xs: Float64Array; zs: Float64Array } {
+  const xs = new Float64Array(n), zs = new Float64Array(n);
+  for (let i = 0; i < n; i++) { xs[i] = 0.3 * Math.sin(i * 0.7) + 0.2 * Math.sin(i * 1.9); zs[i] = -i * 0.5; }
+  return { xs, zs };
+}
+
+/** Median wall and CPU milliseconds of the sweep on the line over `runs` runs; throws if it finds a crossing (there is none). */
+function timeSweep(line: { xs: Float64Array; zs: Float64Array }, runs: number): { wallMs: number; cpuMs: number } {
+  const wall: number[] = [], cpu: number[] = [];
+  for (let r = 0; r < runs + 1; r++) {
+    const c0 = process.cpuUsage();
+    const t0 = performance.now();
+    if (sweepSelfCrossing(line.xs, line.zs) !== null) throw new Error('the benchmark line crosses itself');
+    const t1 = performance.now();
+    const c = process.cpuUsage(c0);
+    if (r > 0) { wall.push(t1 - t0); cpu.push((c.user + c.system) / 1000); }
+  }
+  return { wallMs: median(wall), cpuMs: median(cpu) };
 }
 
 function main(): void {
@@ -184,7 +216,7 @@ function main(): void {
   const ours = analyseSection(section);
   if (!ours.ok) throw new Error('bench section rejected');
   const theirs = clippedAreas(section);
-  const worst = Math.max(...ours.analysis.horizons.map((h, i) => Math.abs(h.excessArea - theirs[i]) / Math.abs(theirs[i])));
+  const worst = maxOf(ours.analysis.horizons.map((h, i) => Math.abs(h.excessArea - theirs[i]) / Math.abs(theirs[i])));
 
   const mcSection = benchSection(6, 100);
   const mcOptions: MonteCarloOptions = {
@@ -197,8 +229,10 @@ function main(): void {
   };
   const monteCarloMs = timeIt(mc, 7, 2);
 
+  const zigzag = timeSweep(steepZigzag(1_000_000), 5);
+  const limb = timeSweep(steepLimb(20_000), 9);
   if (json) {
-    process.stdout.write(`${JSON.stringify({ analysisMs, floorMs, clippingMs, monteCarloMs })}\n`);
+    process.stdout.write(`${JSON.stringify({ analysisMs, floorMs, clippingMs, monteCarloMs, zigzagSweepMs: zigzag.wallMs, zigzagSweepCpuMs: zigzag.cpuMs, limbSweepMs: limb.wallMs })}\n`);
     return;
   }
   const mcVertices = mcSection.horizons.map((h) => h.line.length);
@@ -211,10 +245,12 @@ function main(): void {
     ['  part: self-crossing test', crossingMs.toFixed(3), x(crossingMs)],
     ['polygon-clipping loop ∩ pin rectangle', clippingMs.toFixed(1), `${(clippingMs / analysisMs).toFixed(0)}× analysis`],
     ['Monte Carlo, 10,000 runs', monteCarloMs.toFixed(1), `${(monteCarloMs / 10_000 * 1000).toFixed(1)} µs/run`],
+    ['self-crossing: 1,000,000-vertex zigzag', zigzag.wallMs.toFixed(0), `CPU ${zigzag.cpuMs.toFixed(0)} ms`],
+    ['self-crossing: 20,000-vertex steep limb', limb.wallMs.toFixed(1), `CPU ${limb.cpuMs.toFixed(1)} ms`],
   ];
   const line = (a: string, b: string, c: string) => `${a.padEnd(40)} ${b.padStart(10)}  ${c}`;
   const yes = (ok: boolean) => (ok ? 'met' : 'NOT met');
-  console.log(`Section: ${vertices.length} horizons × ${Math.min(...vertices)}–${Math.max(...vertices)} vertices (forward model); Monte Carlo: ${mcVertices.length} × ${Math.min(...mcVertices)}–${Math.max(...mcVertices)}.`);
+  console.log(`Section: ${vertices.length} horizons × ${minOf(vertices)}–${maxOf(vertices)} vertices (forward model); Monte Carlo: ${mcVertices.length} × ${minOf(mcVertices)}–${maxOf(mcVertices)}.`);
   console.log(`Node ${process.version}; medians in ms.\n`);
   console.log(line('measure', 'median ms', 'relative'));
   for (const r of rows) console.log(line(...r));
@@ -225,6 +261,7 @@ function main(): void {
   console.log(`    (reading the input plus the self-crossing test alone: ${((inputMs + crossingMs) / floorMs).toFixed(2)}× the floor)`);
   console.log(`  analysis ≥ 20× faster than clipping  ${(clippingMs / analysisMs).toFixed(0)}×   ${yes(clippingMs >= 20 * analysisMs)}`);
   console.log(`  Monte Carlo ≤ 1 s                ${monteCarloMs.toFixed(0)} ms   ${yes(monteCarloMs <= 1000)}`);
+  console.log(`  zigzag self-crossing < 1 s       ${zigzag.wallMs.toFixed(0)} ms (CPU ${zigzag.cpuMs.toFixed(0)} ms)   ${yes(zigzag.wallMs < 1000)}`);
 }
 
 main();

@@ -3,7 +3,7 @@
 // Gaussian jitter in scan pixels, then read back into section units through the calibration. The scan
 // itself is drawn from the exact lines; only what is "clicked" carries the digitising error.
 import { seededRandom } from '../../src/core/stats/seededRandom';
-import type { Section, XZ } from '../../src/core/model/section';
+import type { LineSection as Section, XZ } from '../../src/core/model/section';
 import { apply, type Affine } from './layout';
 
 export interface HandOptions {

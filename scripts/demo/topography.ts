@@ -1,5 +1,6 @@
 // An invented land surface that stays above every horizon (so no part of the demo is eroded).
 import type { XZ } from '../../src/core/model/section';
+import { maxOf } from '../../src/core/stats/minMax';
 
 /** Returns the highest z of the polyline at x (any segment spanning x), or −Infinity. */
 export function highestZAt(line: XZ[], x: number): number {
@@ -20,7 +21,7 @@ export function topography(line: XZ[], x0: number, x1: number, step = 50): XZ[] 
   const env = xs.map((x) => highestZAt(line, x));
   // Max filter of radius R, then a smoothing kernel no wider than R: the result stays >= the envelope.
   const R = Math.round(600 / step);
-  const maxed = env.map((_, i) => Math.max(...env.slice(Math.max(0, i - R), i + R + 1)));
+  const maxed = env.map((_, i) => maxOf(env.slice(Math.max(0, i - R), i + R + 1)));
   const smooth = maxed.map((_, i) => {
     let s = 0;
     let w = 0;

@@ -10,6 +10,7 @@ import { openScanFile, scanFileFromClipboard } from '../state/openScanFile';
 import { MessageBar } from './MessageBar';
 import { useKeyboardShortcuts } from './useKeyboardShortcuts';
 import { startApp } from './startApp';
+import { KeepWorkBoundary } from './KeepWorkBoundary';
 import { useSessionStore } from '../state/sessionStore';
 
 export function App() {
@@ -41,13 +42,15 @@ export function App() {
       <header className="top-bar">
         <span className="app-name">Foldroot</span>
         <span className="app-tagline">depth to detachment by area balance</span>
-        <FileMenu />
+        <KeepWorkBoundary part="The file menu"><FileMenu /></KeepWorkBoundary>
         <MessageBar />
       </header>
       <div className="workspace">
         <aside className="side-panel" aria-label="Controls">
-          <ScanControls />
-          <WorkspacePanel />
+          <KeepWorkBoundary part="The side panel">
+            <ScanControls />
+            <WorkspacePanel />
+          </KeepWorkBoundary>
         </aside>
         <main
           className={`view-box${dropping ? ' dropping' : ''}`}
@@ -58,10 +61,10 @@ export function App() {
           onDragLeave={() => setDropping(false)}
           onDrop={onDrop}
         >
-          <SectionView />
-          <ResultsStrip />
+          <KeepWorkBoundary part="The section view"><SectionView /></KeepWorkBoundary>
+          <KeepWorkBoundary part="The results strip"><ResultsStrip /></KeepWorkBoundary>
         </main>
-        <InterpretationPane />
+        <KeepWorkBoundary part="The interpretation pane"><InterpretationPane /></KeepWorkBoundary>
       </div>
     </div>
   );

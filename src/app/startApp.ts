@@ -5,6 +5,7 @@ import { openDemo } from '../state/openDemo';
 import { restoreAutosave, startAutosave } from '../state/autosave';
 import { startGesturePreparation } from '../state/gesturePreparation';
 import { useSessionStore } from '../state/sessionStore';
+import { startScanLifetime } from '../state/scanLifetime';
 
 let started = false;
 
@@ -12,6 +13,7 @@ let started = false;
 export function startApp(): void {
   if (started) return;
   started = true;
+  startScanLifetime();
   void (async () => {
     const restored = await restoreAutosave();
     if (!restored) await openDemo();

@@ -5,6 +5,7 @@ import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
 import type { ImagePx } from '../core/model/projectDoc';
 import type { CameraLike } from '../state/scanTiles';
 import { niceStep, stepDecimals } from '../format/niceTicks';
+import { minOf, maxOf } from '../core/stats/minMax';
 
 export interface GridLine {
   value: number;
@@ -46,8 +47,8 @@ export function gridLines(fit: FittedCalibration | null, camera: CameraLike, vie
     return [p[0] * camera.scale + camera.x, p[1] * camera.scale + camera.y];
   };
   const corners = [toSection(toImage(0, 0)), toSection(toImage(viewW, 0)), toSection(toImage(0, viewH)), toSection(toImage(viewW, viewH))];
-  const xr: [number, number] = [Math.min(...corners.map((c) => c[0])), Math.max(...corners.map((c) => c[0]))];
-  const zr: [number, number] = [Math.min(...corners.map((c) => c[1])), Math.max(...corners.map((c) => c[1]))];
+  const xr: [number, number] = [minOf(corners.map((c) => c[0])), maxOf(corners.map((c) => c[0]))];
+  const zr: [number, number] = [minOf(corners.map((c) => c[1])), maxOf(corners.map((c) => c[1]))];
   const stepX = niceStep((targetPx * (fit ? fit.unitsPerPxX : 1)) / camera.scale, 1, 'up');
   const stepZ = niceStep((targetPx * (fit ? fit.unitsPerPxZ : 1)) / camera.scale, 1, 'up');
   return {

@@ -3,6 +3,7 @@
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
 import type { ScanRef } from '../core/model/projectDoc';
+import { minOf, maxOf } from '../core/stats/minMax';
 
 /** Returns the flat [u0, v0, u1, v1] of the section line x across the scan (or ±5000 px about v = 0 without a scan). */
 export function pinLinePx(frame: FittedCalibration, x: number, scan: ScanRef | null): number[] {
@@ -10,7 +11,7 @@ export function pinLinePx(frame: FittedCalibration, x: number, scan: ScanRef | n
   const h = scan?.heightPx ?? 10000;
   const corners: [number, number][] = scan ? [[0, 0], [w, 0], [0, h], [w, h]] : [[0, -5000], [0, 5000]];
   const zs = corners.map((c) => imageToSection(frame, c)[1]);
-  const a = sectionToImage(frame, [x, Math.max(...zs)]);
-  const b = sectionToImage(frame, [x, Math.min(...zs)]);
+  const a = sectionToImage(frame, [x, maxOf(zs)]);
+  const b = sectionToImage(frame, [x, minOf(zs)]);
   return [a[0], a[1], b[0], b[1]];
 }

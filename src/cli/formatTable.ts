@@ -2,6 +2,7 @@ import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseS
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { isExactFit } from '../core/analysis/isExactFit';
 import { EXACT_FIT_TEXT, formatChamberlin, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
+import { maxOf } from '../core/stats/minMax';
 
 // The terminal writes numbers by the one rule of src/format (as the screen, the figure and the report do).
 
@@ -22,7 +23,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
     h.name, h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
     num(h.regionalElevation), num(h.depth), formatChamberlin(h), h.lpsStrain === null ? '—' : num(100 * h.lpsStrain),
   ]);
-  const widths = head.map((t, c) => Math.max(t.length, ...rows.map((r) => r[c].length)));
+  const widths = head.map((t, c) => maxOf(rows.map((r) => r[c].length), t.length));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   const out = [
     ...(source ? [source] : []),
@@ -47,6 +48,8 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   } else {
     out.push('Area–depth line: none (see notes).');
   }
-  out.push('', 'Notes:', ...[...a.notes, SECTION_CAUTION].map((n) => `  - ${n}`), '');
+  out.push('', 'Notes:');
+  for (const n of [...a.notes, SECTION_CAUTION]) out.push(`  - ${n}`);
+  out.push('');
   return out.join('\n');
 }

@@ -5,6 +5,7 @@ import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanCoordinate } from './cleanCoordinate';
 import { parseCsvRows, toCsv } from './csvText';
+import { countLines, lineCountProblem, LIMITS } from '../core/model/limits';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 const NAME_COLUMNS = ['horizon', 'name', 'horizon_name', 'horizon name', 'layer'];
@@ -56,7 +57,7 @@ export function parseHorizonsCsv(text: string): HorizonImport {
     const where = `line ${r + 1}`;
     const name = (row[nameCol] ?? '').trim();
     if (name === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
-    if (name.length > 500) { pushProblem(problems, { where, message: 'horizon name longer than 500 characters' }, counter); continue; }
+    if (name.length > LIMITS.nameLength) { pushProblem(problems, { where, message: `horizon name longer than ${LIMITS.nameLength} characters` }, counter); continue; }
     const x = parseNumber(row[xCol] ?? '');
     const z = parseNumber(row[zCol] ?? '');
     if (x === null || z === null) {
@@ -73,6 +74,8 @@ export function parseHorizonsCsv(text: string): HorizonImport {
     else horizons.push({ name, line: pts });
   }
   if (horizons.length === 0) return { ok: false, message: 'The CSV file holds no horizon with at least two valid vertices.', problems };
+  const tooMany = lineCountProblem({ horizons: horizons.length, ...countLines(horizons.map((h) => h.line.length)) });
+  if (tooMany) return { ok: false, message: `The CSV file holds ${tooMany}; thin the vertices or import the file in parts. Nothing was imported.`, problems };
   return { ok: true, horizons, units, problems };
 }
 

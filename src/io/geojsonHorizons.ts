@@ -5,6 +5,7 @@ import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanPoint } from './cleanCoordinate';
+import { countLines, lineCountProblem, LIMITS } from '../core/model/limits';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 function isObject(v: unknown): v is Record<string, unknown> {
@@ -50,7 +51,7 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
     if (!isObject(f) || !isObject(f.geometry)) { pushProblem(problems, { where, message: 'has no geometry' }, counter); return; }
     const props = isObject(f.properties) ? f.properties : {};
     const rawName = props.name ?? props.horizon ?? f.id;
-    const name = (typeof rawName === 'string' || typeof rawName === 'number' ? String(rawName) : `Horizon ${i + 1}`).trim().slice(0, 500) || `Horizon ${i + 1}`;
+    const name = (typeof rawName === 'string' || typeof rawName === 'number' ? String(rawName) : `Horizon ${i + 1}`).trim().slice(0, LIMITS.nameLength) || `Horizon ${i + 1}`;
     const fu = readUnit(props.units);
     if (fu && units && fu !== units) { pushProblem(problems, { where, message: `is in ${fu} while others are in ${units}; convert it` }, counter); return; }
     units = units ?? fu;
@@ -65,6 +66,8 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
     });
   });
   if (horizons.length === 0) return { ok: false, message: 'The GeoJSON file holds no usable LineString horizon.', problems };
+  const tooMany = lineCountProblem({ horizons: horizons.length, ...countLines(horizons.map((h) => h.line.length)) });
+  if (tooMany) return { ok: false, message: `The GeoJSON file holds ${tooMany}; thin the vertices or import the file in parts. Nothing was imported.`, problems };
   return { ok: true, horizons, units, problems };
 }
 

@@ -1,6 +1,7 @@
 // What every horizon importer (CSV, GeoJSON, SVG) returns: horizons in section units, per-row problems.
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit } from '../core/model/section';
+import { LIMITS } from '../core/model/limits';
 
 /** One problem, located by row (CSV line), feature or path, in words the user can act on. */
 export interface RowProblem { where: string; message: string }
@@ -10,7 +11,7 @@ export type HorizonImport =
   | { ok: false; message: string; problems: RowProblem[] };
 
 /** Largest text file an importer reads, in bytes. */
-export const MAX_IMPORT_BYTES = 64 * 1024 * 1024;
+export const MAX_IMPORT_BYTES = LIMITS.importBytes;
 /** Problems listed in full; beyond this only a count is given. */
 export const MAX_LISTED_PROBLEMS = 200;
 

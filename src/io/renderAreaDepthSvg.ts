@@ -6,6 +6,7 @@ import { isExactFit } from '../core/analysis/isExactFit';
 import { axisTicks } from './axisTicks';
 import { escapeXml } from './escapeXml';
 import { areaUnit, EXACT_FIT_TEXT, formatInterval, formatNumber, largestMagnitude } from '../format/formatQuantity';
+import { minOf, maxOf } from '../core/stats/minMax';
 
 const RED = '#b3261e';
 const BLUE = '#1f6f8b';
@@ -41,11 +42,11 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   const unit = areaUnit(analysis.units, largestMagnitude(analysis.horizons.map((r) => r.excessArea)));
   const areas = analysis.horizons.map((r) => r.excessArea * unit.factor);
   const depths = analysis.horizons.map((r) => r.depth);
-  const aLo = Math.min(0, ...areas);
-  const aMax = Math.max(...areas, 0);
+  const aLo = minOf(areas, 0);
+  const aMax = maxOf(areas, 0);
   const aHi = aMax > aLo ? aMax + 0.12 * (aMax - aLo) : aLo + 1;
-  const dLo = Math.min(0, ...depths);
-  const deepest = Math.max(...depths, zd ?? -Infinity, dLo + 1);
+  const dLo = minOf(depths, 0);
+  const deepest = maxOf(depths, zd ?? -Infinity, dLo + 1);
   // A long interval is drawn only to three times the deepest point (an arrow says it goes on).
   const ciHi = interval && typeof interval !== 'string' ? interval.hi : -Infinity;
   const bottom = Math.max(deepest, Math.min(ciHi, dLo + 3 * (deepest - dLo)));

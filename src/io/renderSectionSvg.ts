@@ -19,6 +19,7 @@ import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../forma
 import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
+import { minOf, maxOf } from '../core/stats/minMax';
 
 export const FIGURE_WIDTH = 1400;
 export const FIGURE_HEIGHT = 990;
@@ -228,9 +229,9 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
       // As on the canvas (excessFillGeometry): the loop is drawn twice, clipped to the half-planes above
       // and below the regional, so lobes above it (added) and below it (subtracted) differ in colour.
       const zsAll = [...cl.zs, ...cr.zs];
-      const margin = Math.max(...zsAll) - Math.min(...zsAll) + (pR - pL);
+      const margin = maxOf(zsAll) - minOf(zsAll) + (pR - pL);
       const half = (zFar: number) => pts([...Array.from(cr.xs, (x, j) => toFig([x, cr.zs[j]])), toFig([pR, zFar]), toFig([pL, zFar])]);
-      defs.push(`<clipPath id="above-${i}"><polygon points="${half(Math.max(...zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(Math.min(...zsAll) - margin)}"/></clipPath>`);
+      defs.push(`<clipPath id="above-${i}"><polygon points="${half(maxOf(zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(minOf(zsAll) - margin)}"/></clipPath>`);
       const diffs = Array.from(cl.xs, (x, j) => cl.zs[j] - zAt(cr.xs, cr.zs, x));
       const tol = 1e-9 * (Math.abs(zHi - zLo) + 1);
       const isAbove = diffs.some((d) => d > tol), isBelow = diffs.some((d) => d < -tol);

@@ -7,7 +7,8 @@
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { XZ } from '../core/model/section';
 import { MAX_IMPORT_BYTES, pushProblem, type RowProblem } from './importTypes';
-import { pathDataToPolylines, type Pt } from './svgPathData';
+import { pathDataToPolylines, TOO_MANY_POINTS, type Pt } from './svgPathData';
+import { LIMITS, tooManyMessage } from '../core/model/limits';
 import { applyMatrix, IDENTITY, multiply, parseTransform, type Matrix } from './svgTransform';
 import { nestedViewport, rootViewportSize, type ViewportSize } from './svgViewport';
 
@@ -42,8 +43,8 @@ function numberList(s: string | undefined): number[] {
   return (s ?? '').trim().split(/[\s,]+/).filter(Boolean).map(Number);
 }
 
-function shapeLines(tag: string, a: Record<string, string>): Pt[][] | null {
-  if (tag === 'path') return pathDataToPolylines(a.d ?? '');
+function shapeLines(tag: string, a: Record<string, string>, maxPoints: number): Pt[][] | null | typeof TOO_MANY_POINTS {
+  if (tag === 'path') return pathDataToPolylines(a.d ?? '', maxPoints);
   if (tag === 'polyline' || tag === 'polygon') {
     const v = numberList(a.points);
     if (v.length < 4 || v.some((x) => !Number.isFinite(x))) return null;
@@ -87,6 +88,7 @@ export function readSvgLines(text: string): SvgRead {
   const counter = { n: 0 };
   let count = 0;
   let notDrawn = 0;
+  let total = 0;
   const re = /<(\/?)([A-Za-z][\w:.-]*)((?:[^>"']|"[^"]*"|'[^']*')*?)(\/?)>/g;
   let m: RegExpExecArray | null;
   while ((m = re.exec(body)) !== null) {
@@ -126,21 +128,35 @@ export function readSvgLines(text: string): SvgRead {
     }
     if (!SHAPES.has(tag)) continue;
     count += 1;
-    const parts = shapeLines(tag, a);
+    const parts = shapeLines(tag, a, LIMITS.totalPoints - total);
+    if (parts === TOO_MANY_POINTS || lines.length > LIMITS.horizons) return tooMany(lines.length, problems);
     const label = (a['inkscape:label'] ?? a['data-name'] ?? a.id ?? `${tag} ${count}`).trim().slice(0, 500) || `${tag} ${count}`;
     if (!parts) { pushProblem(problems, { where, message: 'its geometry cannot be read' }, counter); continue; }
     parts.forEach((pts, k) => {
       const points = pts.map((p) => applyMatrix(ctm, p));
       if (points.length < 2 || points.some((p) => !Number.isFinite(p[0]) || !Number.isFinite(p[1]))) {
         pushProblem(problems, { where, message: 'has fewer than two usable points' }, counter);
-      } else lines.push({ name: parts.length > 1 ? `${label} ${k + 1}` : label, points });
+      } else {
+        lines.push({ name: parts.length > 1 ? `${label} ${k + 1}` : label, points });
+        total += points.length;
+      }
     });
+    if (total > LIMITS.totalPoints) return tooMany(lines.length, problems);
   }
+  let longest = 0;
+  for (const l of lines) longest = Math.max(longest, l.points.length);
+  if (lines.length > LIMITS.horizons) return tooMany(lines.length, problems);
+  if (longest > LIMITS.pointsPerLine) return { ok: false, message: `The SVG file holds ${tooManyMessage('vertices in one line', longest, LIMITS.pointsPerLine)}; simplify the drawing or split the line.`, problems };
   if (lines.length === 0) {
     const why = notDrawn > 0 ? ` (${notDrawn} ${notDrawn === 1 ? 'shape is' : 'shapes are'} only definitions (in <defs> or the like), hidden, or in an empty viewport, and not drawn)` : '';
     return { ok: false, message: `The SVG file holds no drawn path, polyline or line to import${why}.`, problems };
   }
   return { ok: true, lines, problems };
+}
+
+function tooMany(lines: number, problems: RowProblem[]): SvgRead {
+  const what = lines > LIMITS.horizons ? tooManyMessage('lines', lines, LIMITS.horizons) : `more than ${LIMITS.totalPoints.toLocaleString('en-US')} vertices, too many for the app (the limit is ${LIMITS.totalPoints.toLocaleString('en-US')})`;
+  return { ok: false, message: `The SVG file holds ${what}; simplify the drawing (fewer curves and arcs) or import it in parts. Nothing was imported.`, problems };
 }
 
 /** True when the element's 'display' is none, as an attribute or in its style (the style wins, as CSS over a presentation attribute). */

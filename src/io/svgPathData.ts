@@ -57,10 +57,18 @@ function segmentsFor(p0: Pt, ...ctrl: Pt[]): number {
   return 2 * Math.ceil(Math.max(4, Math.min(128, Math.ceil(len / 4))) / 2);
 }
 
-/** Returns the subpaths of the path data as polylines in the path's user units, or null when the data is malformed. */
-export function pathDataToPolylines(d: string): Pt[][] | null {
+/** What pathDataToPolylines returns when the path would make more than the points allowed. */
+export const TOO_MANY_POINTS = 'too-many-points';
+
+/**
+ * Returns the subpaths of the path data as polylines in the path's user units, null when the data is malformed,
+ * or TOO_MANY_POINTS as soon as they would hold more than `maxPoints` vertices (stopped early: a path of
+ * 300,000 arcs would otherwise make 150 million points before anything could refuse it).
+ */
+export function pathDataToPolylines(d: string, maxPoints = Infinity): Pt[][] | null | typeof TOO_MANY_POINTS {
   const read = pathReader(d);
   const lines: Pt[][] = [];
+  let made = 0;
   let cur: Pt[] = [];
   let p: Pt = [0, 0];
   let start: Pt = [0, 0];
@@ -81,12 +89,12 @@ export function pathDataToPolylines(d: string): Pt[][] | null {
     const abs = (x: number, y: number): Pt => (rel ? [p[0] + x, p[1] + y] : [x, y]);
     let ctrl: Pt | null = null;
     if (lower === 'm') {
-      if (cur.length > 1) lines.push(cur);
+      if (cur.length > 1) { lines.push(cur); made += cur.length; }
       p = abs(a[0], a[1]); start = p; cur = [p];
       cmd = rel ? 'l' : 'L';
     } else if (lower === 'z') {
       if (cur.length > 0 && (p[0] !== start[0] || p[1] !== start[1])) cur.push(start);
-      if (cur.length > 1) lines.push(cur);
+      if (cur.length > 1) { lines.push(cur); made += cur.length; }
       p = start; cur = [p];
     } else if (lower === 'l') {
       p = abs(a[0], a[1]); cur.push(p);
@@ -121,6 +129,7 @@ export function pathDataToPolylines(d: string): Pt[][] | null {
     }
     lastCtrl = ctrl;
     lastCmd = lower === 'm' ? 'M' : cmd;
+    if (made + cur.length > maxPoints) return TOO_MANY_POINTS;
   }
   if (cur.length > 1) lines.push(cur);
   return lines;

@@ -6,7 +6,11 @@
  * no longer decodes to the size its lines were digitised at), `notShown` saying why: its bytes still go into the
  * project file and the browser's copy, so nothing of the project is lost.
  */
-export interface CachedScan { bitmap: ImageBitmap | null; bytes: Blob; notShown?: string }
+export interface CachedScan {
+  bitmap: ImageBitmap | null; bytes: Blob; notShown?: string;
+  /** Set when the bitmap was closed because the open project no longer shows the scan (scanLifetime); decoded again from `bytes` when it does. */
+  released?: true;
+}
 
 const scans = new Map<string, CachedScan>();
 const listeners = new Set<() => void>();
@@ -28,6 +32,38 @@ export function getScan(id: string | undefined | null): CachedScan | undefined {
 export function subscribeScans(listener: () => void): () => void {
   listeners.add(listener);
   return () => listeners.delete(listener);
+}
+
+/**
+ * Keeps decoded only the scan `shownId`: every other scan the `keepIds` list holds (the undo history can bring
+ * it back) keeps its bytes with its bitmap closed (`released`); every other scan is dropped with its bitmap
+ * closed. Returns the ids whose bitmaps were closed.
+ */
+export function retainScans(shownId: string | null, keepIds: Set<string>): string[] {
+  const closed: string[] = [];
+  for (const [id, scan] of scans) {
+    if (id === shownId) continue;
+    if (scan.bitmap) {
+      scan.bitmap.close();
+      closed.push(id);
+    }
+    if (keepIds.has(id)) {
+      if (scan.bitmap || !scan.released) scans.set(id, { bytes: scan.bytes, bitmap: null, released: true });
+    } else {
+      scans.delete(id);
+      if (!closed.includes(id)) closed.push(id);
+    }
+  }
+  if (closed.length) {
+    version += 1;
+    listeners.forEach((l) => l());
+  }
+  return closed;
+}
+
+/** The ids of the scans held (decoded or not), for tests and the memory benchmark. */
+export function heldScanIds(): string[] {
+  return [...scans.keys()];
 }
 
 /** Returns a counter that changes whenever a scan is added (for useSyncExternalStore). */

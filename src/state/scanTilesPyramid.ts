@@ -88,6 +88,19 @@ function remember(id: string, p: TilePyramid): void {
   }
 }
 
+/** Closes every tile of the scan's pyramid and forgets it (a build under way is left to finish, then kept). */
+export function releaseTilePyramid(id: string): void {
+  const p = pyramids.get(id);
+  if (!p) return;
+  pyramids.delete(id);
+  p.tiles.forEach((lv) => lv.forEach((b) => b.close()));
+}
+
+/** The ids whose pyramids are held, for tests and the memory benchmark. */
+export function heldPyramidIds(): string[] {
+  return [...pyramids.keys()];
+}
+
 /** Returns the scan's pyramid if it is ready (and marks it recently used), else undefined. */
 export function getTilePyramid(id: string): TilePyramid | undefined {
   const p = pyramids.get(id);

@@ -14,7 +14,7 @@ function filesUnder(path: string): string[] {
   const out: string[] = [];
   for (const name of readdirSync(path)) {
     if (name === 'node_modules' || name === 'fixtures') continue;
-    out.push(...filesUnder(join(path, name)));
+    for (const f of filesUnder(join(path, name))) out.push(f);
   }
   return out;
 }

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { leastSquares } from '../../src/core/stats/leastSquares';
 import { fiellerInterval } from '../../src/core/stats/fiellerInterval';
 import { linspace, meanBand } from '../../src/panels/interpretation/meanBand';
+import { minOf } from '../../src/core/stats/minMax';
 
 // Graybill & Iyer, Regression Analysis (1994), reaction-chamber example (docs/method.md §Check values).
 const x = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100];
@@ -29,7 +30,7 @@ describe('meanBand(fit, xs, level)', () => {
   it('is narrowest at the mean of x and symmetric about the line', () => {
     const band = meanBand(fit, linspace(-50, 150, 41), 0.95)!;
     const widths = band.map((b) => b.hi - b.lo);
-    const narrowest = band[widths.indexOf(Math.min(...widths))].x;
+    const narrowest = band[widths.indexOf(minOf(widths))].x;
     expect(narrowest).toBe(50);
     for (const b of band) expect(Math.abs(b.hi - b.fit - (b.fit - b.lo))).toBeLessThan(1e-9);
   });

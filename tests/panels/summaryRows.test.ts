@@ -2,9 +2,10 @@
 // 95% interval reads like certainty); a scattered one shows the engine's intervals; the
 // pane writes lengths as the results strip does.
 import { describe, expect, it } from 'vitest';
+import jStat from 'jstat';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import type { Section } from '../../src/core/model/section';
-import { formatLength, formatNumber } from '../../src/format/formatQuantity';
+import { formatLength } from '../../src/format/formatQuantity';
 import { summaryRows } from '../../src/panels/interpretation/summaryRows';
 import { EXACT_FIT_TEXT, isExactFit } from '../../src/core/analysis/isExactFit';
 import { methodExample, triangleHorizon } from '../core/analysis/sections';
@@ -32,18 +33,39 @@ describe('summaryRows(analysis)', () => {
     for (const key of ['displacement', 'detachment-depth', 'detachment-elevation']) expect(row(a, key).interval).toBe('');
   });
 
-  it('a scattered line shows the engine’s Fieller and slope intervals, rounded as the strip rounds', () => {
+  it('a scattered line shows the Fieller and slope intervals of the data, rounded for the screen', () => {
     const a = analyse(scattered());
-    const ad = a.areaDepth!;
-    expect(isExactFit(ad)).toBe(false);
-    const f = ad.detachmentDepthInterval;
-    if (f.kind !== 'bounded') throw new Error(`expected a bounded interval, got ${f.kind}`);
-    expect(row(a, 'detachment-depth').interval).toBe(`${formatNumber(f.lo)} to ${formatNumber(f.hi)} m`);
-    expect(row(a, 'detachment-elevation').interval).toBe(`${formatNumber(a.referenceElevation - f.hi)} to ${formatNumber(a.referenceElevation - f.lo)} m`);
-    expect(row(a, 'displacement').interval).toBe(`${formatNumber(ad.displacementCI95![0])} to ${formatNumber(ad.displacementCI95![1])} m`);
-    // The interval brackets the estimate (Fieller's interval contains x̂0 when bounded).
-    expect(f.lo).toBeLessThan(ad.detachmentDepth!);
-    expect(f.hi).toBeGreaterThan(ad.detachmentDepth!);
+    expect(isExactFit(a.areaDepth)).toBe(false);
+    // Independent of the engine: the scattered data (analytic triangle areas, depths 500…2000 m), the least-
+    // squares line by its textbook sums, t from the registry package jstat 1.9.6, and the interval as the two
+    // roots of (a + b x)² = t² s² (1/n + (x − x̄)²/Sxx) (Fieller 1954; docs/method.md §Fieller interval) and
+    // D ± t s/√Sxx (docs/method.md §Slope interval).
+    const h = [500, 1000, 1500, 2000];
+    const A = [2.5e6, 2.1e6, 1.5e6, 1.0e6];
+    const n = h.length;
+    const hBar = h.reduce((s, v) => s + v, 0) / n;
+    const aBar = A.reduce((s, v) => s + v, 0) / n;
+    const sxx = h.reduce((s, v) => s + (v - hBar) ** 2, 0);
+    const b = h.reduce((s, v, i) => s + (v - hBar) * (A[i] - aBar), 0) / sxx;
+    const a0 = aBar - b * hBar;
+    const s2 = A.reduce((s, v, i) => s + (v - a0 - b * h[i]) ** 2, 0) / (n - 2);
+    const t = jStat.studentt.inv(0.975, n - 2);
+    // (a0 + b x)² − t² s² (1/n + (x − x̄)²/Sxx) = 0 as q2 x² + q1 x + q0 = 0.
+    const k = t * t * s2;
+    const q2 = b * b - k / sxx;
+    const q1 = 2 * a0 * b + (2 * k * hBar) / sxx;
+    const q0 = a0 * a0 - k / n - (k * hBar * hBar) / sxx;
+    const root = Math.sqrt(q1 * q1 - 4 * q2 * q0);
+    const lo = (-q1 - root) / (2 * q2);
+    const hi = (-q1 + root) / (2 * q2);
+    const numbers = (text: string) => (text.match(/[−-]?[\d,.]+/g) ?? []).map((x) => Number(x.replace('−', '-').replace(/,/g, '')));
+    const close = (shown: number[], expected: number[]) => expected.forEach((e, i) => expect(Math.abs(shown[i] - e)).toBeLessThanOrEqual(Math.abs(e) * 1e-3));
+    close(numbers(row(a, 'detachment-depth').interval), [lo, hi]);
+    close(numbers(row(a, 'detachment-elevation').interval), [-hi, -lo]);
+    const half = (t * Math.sqrt(s2)) / Math.sqrt(sxx);
+    close(numbers(row(a, 'displacement').interval), [-b - half, -b + half]);
+    expect(lo).toBeLessThan(-a0 / b);
+    expect(hi).toBeGreaterThan(-a0 / b);
   });
 
   it('two horizons: no interval (n = 2), which is not called an exact fit', () => {

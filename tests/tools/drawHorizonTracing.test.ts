@@ -52,6 +52,28 @@ describe('drawHorizonTool with a line tracer', () => {
     expect(t.messages.at(-1)).toBe('');
   });
 
+  it('keeps the line when the tool is switched while finishing waits: untraced stretches go straight', () => {
+    const { t } = harness();
+    t.click([0, 100]).click([300, 130]).click([600, 160]).key('Enter');
+    expect(t.doc.horizons).toHaveLength(1);
+    // A tool switch (or lost focus) arrives as cancel before the tracer has answered.
+    t.cancel();
+    expect(t.state.name).toBe('idle');
+    expect(t.doc.horizons).toHaveLength(2);
+    // Straight between the three snapped anchors, which lie on the drawn line.
+    expect(t.doc.horizons[1].pointsPx).toHaveLength(3);
+    expect(onTheLine(t.doc.horizons[1].pointsPx)).toBe(true);
+    expect(t.messages.at(-1)).toMatch(/straight/);
+    expect(t.history).toHaveLength(1);
+  });
+
+  it('cancel before finishing was asked still drops the line', () => {
+    const { t } = harness();
+    t.click([0, 100]).click([300, 130]).cancel();
+    expect(t.doc.horizons).toHaveLength(1);
+    expect(t.state.name).toBe('idle');
+  });
+
   it('places a straight stretch on Alt-click; Backspace and undo each remove the last stretch, traced or straight', () => {
     const { t, tracer } = harness();
     t.click([0, 100]).click([200, 120]);

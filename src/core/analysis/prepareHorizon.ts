@@ -1,7 +1,6 @@
 import { clipAndMeasure, type ClipAllocate } from '../geometry/clipAndMeasure';
 import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
-import { chainCrossings } from '../geometry/chainCrossings';
-import type { XMonotoneChains } from '../geometry/xMonotoneChains';
+import { sweepSelfCrossing } from '../geometry/sweepSelfCrossing';
 import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
@@ -54,11 +53,11 @@ function pinProblems(clip: PinClip, who: string, what: string, name: string, pin
   return out;
 }
 
-function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: string, what: string, name: string, units?: LengthUnit): SectionProblem | null {
-  // The monotone-chain test of selfIntersections, on the chains the clipping pass already found.
-  const pairs = chainCrossings(c.xs, c.zs, chains, 1);
-  if (pairs.length === 0) return null;
-  const [s, t] = pairs[0];
+function crossingProblem(c: ClippedPolyline, who: string, what: string, name: string, units?: LengthUnit): SectionProblem | null {
+  // The sweep-line test with exact orientation signs (sweepSelfCrossing): touches and retraced stretches are not crossings.
+  const pair = sweepSelfCrossing(c.xs, c.zs);
+  if (pair === null) return null;
+  const [s, t] = pair;
   // Name the input segments (vertex i to i + 1), not clipped ones, so the user can find the spot;
   // the smaller end of a clipped segment's source lies on its input segment, in either direction.
   const inputSegment = (k: number) => Math.floor(Math.min(c.source[k], c.source[k + 1]));
@@ -70,7 +69,7 @@ function crossingProblem(c: ClippedPolyline, chains: XMonotoneChains, who: strin
 
 /** x where segments s and t (vertex k to k + 1) of xs/zs meet: the line intersection, or for collinear overlap an end inside both. */
 function crossingX(xs: ArrayLike<number>, zs: ArrayLike<number>, s: number, t: number): number {
-  // Relative to segment s's start (docs/method.md §Numerics), as chainCrossings tests them.
+  // Relative to segment s's start (docs/method.md §Numerics).
   const x0 = xs[s], z0 = zs[s];
   const rx = xs[s + 1] - x0, rz = zs[s + 1] - z0;
   const cx = xs[t] - x0, cz = zs[t] - z0;
@@ -108,8 +107,8 @@ export function prepareHorizon(
   const lin = clipAndMeasure(lineX, lineZ, pins[0], pins[1], segmentProjected, reg.zOrigin, allocate);
   const problems = [...pinProblems(lin.clip, who, lineWhat, name, pins), ...pinProblems(reg.clip, who, 'regional', name, pins)];
   for (const [m, what] of [[lin, lineWhat], [reg, 'regional']] as const) {
-    // A line along which x only increases is one monotone chain and cannot cross itself (selfIntersections).
-    const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, m.chains, who, what, name, units) : null;
+    // A line along which x only increases is one monotone chain and cannot cross itself (sweepSelfCrossing).
+    const p = m.clip.clipped && !m.xMonotone ? crossingProblem(m.clip.clipped, who, what, name, units) : null;
     if (p) problems.push(p);
   }
   if (problems.length > 0 || !lin.clip.clipped || !reg.clip.clipped) return { ok: false, problems };

@@ -77,7 +77,7 @@ function prepare(section: Section, options: { referenceElevation?: number }, cli
     const join = h.faultSegments ? { faultSegments: h.faultSegments, pieces: h.pieceCount, cutoffs: h.cutoffs } : undefined;
     const p = prepareHorizon(h.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, s.pins, h.include !== false, flags, s.units, clipAllocate, join);
     if (p.ok) horizons.push(p.horizon);
-    else problems.push(...p.problems);
+    else for (const q of p.problems) problems.push(q);
   }
   if (problems.length > 0) return { ok: false, problems };
   const n = horizons.length;

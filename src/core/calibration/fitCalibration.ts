@@ -1,6 +1,7 @@
 // Fits the mapping from scan image pixels to section coordinates, per axis or as a least-squares affine.
 import type { Calibration } from '../model/projectDoc';
 import { solveAffine } from './solveAffine';
+import { minOf, maxOf } from '../stats/minMax';
 
 export interface CalibrationPointResidual {
   /** Index in the calibration's point list (x points first, then z points, for 'axes'). */
@@ -85,7 +86,7 @@ export function fitCalibration(cal: Calibration): CalibrationFit {
     ];
     const xs = cal.xPoints.map((p) => p.value);
     const zs = cal.zPoints.map((p) => p.value);
-    const extent = Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...zs) - Math.min(...zs));
+    const extent = Math.max(maxOf(xs) - minOf(xs), maxOf(zs) - minOf(zs));
     return finishFit('axes', [lx[0], lx[1], 0], [lz[0], 0, lz[1]], residuals, extent);
   }
   if (cal.points.length < 3) return { ok: false, message: 'Control points: give at least three points of known (x, z).' };
@@ -105,6 +106,6 @@ export function fitCalibration(cal: Calibration): CalibrationFit {
   });
   const xs = cal.points.map((p) => p.x);
   const zs = cal.points.map((p) => p.z);
-  const extent = Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...zs) - Math.min(...zs));
+  const extent = Math.max(maxOf(xs) - minOf(xs), maxOf(zs) - minOf(zs));
   return finishFit('affine', a, b, residuals, extent);
 }

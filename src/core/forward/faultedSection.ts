@@ -13,6 +13,7 @@
 // The hanging-wall piece is sampled wherever x or x + D passes a fault vertex, so the mapped line is
 // the exact image (the map is piecewise linear between those points).
 import type { Section, SectionHorizon, XZ } from '../model/section';
+import { maxOf } from '../stats/minMax';
 
 export interface FaultedSpec {
   units: 'm' | 'ft';
@@ -107,7 +108,7 @@ export function faultedSection(spec: FaultedSpec): { section: Section; truth: Fa
     horizons.push({ name: h.name, pieces, regional });
     truthHorizons.push({ name: h.name, regionalElevation: r, excessArea: D * (r - zd), footwallCutoff, hangingWallCutoff: hangingCutoff });
   }
-  const zref = Math.max(...spec.horizons.map((h) => h.regionalElevation));
+  const zref = maxOf(spec.horizons.map((h) => h.regionalElevation));
   return {
     section: { units: spec.units, pins: [pL, pR], horizons, faults: [{ name: spec.faultName ?? 'Fault 1', line: f.map((p) => [p[0], p[1]] as XZ) }] },
     truth: { displacement: D, detachmentElevation: zd, referenceElevation: zref, detachmentDepth: zref - zd, horizons: truthHorizons },

@@ -9,6 +9,7 @@ import { horizonLine, type PlacedFold } from './horizonLine';
 import { clipAtPins } from './clipAtPins';
 import { loopExcessArea } from './loopExcessArea';
 import { polylineLength } from './polylineLength';
+import { minOf, maxOf } from '../stats/minMax';
 
 /**
  * Returns a section whose horizons have excess area D · (regional elevation − detachment elevation)
@@ -24,7 +25,7 @@ export function forwardSection(spec: ForwardSpec): ForwardResult {
   if (!(extent[0] < pL && extent[1] > pR)) throw new Error('forward model: extent must reach beyond both pins');
   const levels = resolveLevels(spec);
   const { regionalElevations: rs, detachmentElevation: zd, referenceElevation: zref } = levels;
-  const anchor = spec.anchorElevation ?? Math.max(...rs);
+  const anchor = spec.anchorElevation ?? maxOf(rs);
   const foldsOf = spec.horizons.map((h) => h.folds ?? spec.folds);
   const profiles = new Map<FoldSpec, FoldProfile>();
   for (const f of foldsOf.flat()) {
@@ -62,7 +63,7 @@ export function forwardSection(spec: ForwardSpec): ForwardResult {
     truths.push({
       name: h.name, regionalElevation: rs[i], depth: zref - rs[i], targetExcessArea: D * (rs[i] - zd),
       excessArea: loopExcessArea(lineIn, regionalIn), bedLength: L, regionalLength: W, lpsStrain: L / (W + D) - 1,
-      maxUplift: Math.max(0, ...placed.flatMap((f) => f.uplift)),
+      maxUplift: maxOf(placed.flatMap((f) => f.uplift), 0),
     });
   });
   const section = { units: spec.units, pins: [pL, pR] as [number, number], ...(spec.referenceElevation === undefined ? {} : { referenceElevation: zref }), horizons };
@@ -74,10 +75,10 @@ function checkPlacement(name: string, folds: PlacedFold[], pins: [number, number
   let right = pins[0];
   folds.forEach((f, k) => {
     const xs = f.xs.map((x, j) => x + f.shear * f.uplift[j]);
-    const lo = Math.min(...xs);
+    const lo = minOf(xs);
     // Neighbouring folds may share an end point on the regional; the left pin must stay clear.
     if (!(k === 0 ? lo > right : lo >= right)) throw new Error(`forward model: on "${name}" a fold reaches the left pin or overlaps its neighbour at x = ${lo}`);
-    right = Math.max(...xs);
+    right = maxOf(xs);
   });
   if (!(right < pins[1])) throw new Error(`forward model: on "${name}" a fold reaches the right pin at x = ${right}`);
 }

@@ -1,5 +1,6 @@
 // Regional elevations, reference elevation and detachment elevation of a forward spec.
 import type { ForwardSpec } from './forwardSpec';
+import { maxOf } from '../stats/minMax';
 
 export interface ForwardLevels {
   regionalElevations: number[];
@@ -19,7 +20,7 @@ export function resolveLevels(spec: ForwardSpec): ForwardLevels {
     return r;
   });
   // The default reference is the highest regional elevation, as the analysis assumes (docs/method.md §Area-depth line).
-  const referenceElevation = spec.referenceElevation ?? Math.max(...regionalElevations);
+  const referenceElevation = spec.referenceElevation ?? maxOf(regionalElevations);
   const hasElevation = spec.detachmentElevation !== undefined;
   if (hasElevation === (spec.detachmentDepth !== undefined)) {
     throw new Error('forward model: give exactly one of detachmentElevation and detachmentDepth');

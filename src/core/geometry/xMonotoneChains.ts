@@ -1,8 +1,8 @@
 // Split a polyline into x-monotone chains: maximal runs of segments along which x strictly
 // increases (direction +1) or strictly decreases (−1); a vertical segment is a chain of its own
 // (direction 0). Zero-length segments (repeated vertices) join the chain they sit in. Within a
-// chain, segments that are not neighbours have disjoint x-ranges, which is what makes the
-// monotone-chain self-intersection test work (see selfIntersections). Coordinates are compared
+// chain, segments that are not neighbours have disjoint x-ranges, which is what makes
+// a line that is one chain safe to pass without the self-crossing test (sweepSelfCrossing). Coordinates are compared
 // relative to the first vertex, the local origin the intersection tests use (docs/method.md §Numerics).
 
 /** Chains in line order; segment indices are input segments (segment s joins vertices s and s+1). */

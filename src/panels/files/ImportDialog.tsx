@@ -10,13 +10,14 @@ import type { RowProblem } from '../../io/importTypes';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
 import type { PendingImport } from './readImport';
+import { minOf, maxOf } from '../../core/stats/minMax';
 
 type Ref = { sx: string; sy: string; x: string; z: string };
 
 function bbox(lines: [number, number][][]): [number, number, number, number] {
   const all = lines.flat();
   const xs = all.map((p) => p[0]), ys = all.map((p) => p[1]);
-  return [Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)];
+  return [minOf(xs), minOf(ys), maxOf(xs), maxOf(ys)];
 }
 
 function RefInputs({ n, value, onChange }: { n: 1 | 2; value: Ref; onChange: (r: Ref) => void }) {
@@ -115,8 +116,8 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
                   <tr key={i}>
                     <td>{h.name}</td>
                     <td>{h.line.length}</td>
-                    <td>{formatNumber(Math.min(...xs))} – {formatNumber(Math.max(...xs))}</td>
-                    <td>{formatNumber(Math.min(...zs))} – {formatNumber(Math.max(...zs))}</td>
+                    <td>{formatNumber(minOf(xs))} – {formatNumber(maxOf(xs))}</td>
+                    <td>{formatNumber(minOf(zs))} – {formatNumber(maxOf(zs))}</td>
                   </tr>
                 );
               })}

@@ -6,6 +6,7 @@ import { isExactFit } from '../../core/analysis/isExactFit';
 import { selectAnalysis } from '../../state/selectors';
 import { isStale } from '../../core/model/sectionKey';
 import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
+import { maxOf } from '../../core/stats/minMax';
 
 export interface ScenarioRow {
   id: string; name: string; shown: boolean; n: number | null; displacement: number | null; noDetachment: boolean;
@@ -25,7 +26,7 @@ export function reportScenarioRows(doc: ProjectDoc, runs: Record<string, MonteCa
   });
   const shown = all.find((x) => x.s.id === doc.activeScenarioId)?.r;
   const refs = all.flatMap((x) => (x.r ? [x.r.referenceElevation] : []));
-  const common = shown ? shown.referenceElevation : refs.length ? Math.max(...refs) : null;
+  const common = shown ? shown.referenceElevation : refs.length ? maxOf(refs) : null;
   const rows = all.map(({ s, a, r }): ScenarioRow => {
     const ad = r?.areaDepth ?? null;
     const ok = Boolean(ad && !ad.noDetachment && ad.detachmentElevation !== null);

@@ -3,6 +3,7 @@ import { histogramBins } from './histogramBins';
 import { linearScale } from './linearScale';
 import { niceTicks } from '../../format/niceTicks';
 import { formatNumber } from '../../format/formatQuantity';
+import { maxOf } from '../../core/stats/minMax';
 
 const W = 400;
 const H = 190;
@@ -22,7 +23,7 @@ export function Histogram({ values, spread, units, point, label }: Props) {
   const h = histogramBins(values, 28);
   if (h.counts.length === 0) return null;
   const sx = linearScale([h.edges[0], h.edges[h.edges.length - 1]], [M.left, W - M.right]);
-  const top = Math.max(...h.counts);
+  const top = maxOf(h.counts);
   const sy = linearScale([0, top], [H - M.bottom, M.top]);
   const marks: [string, number][] = [['P10', spread.p10], ['P50', spread.p50], ['P90', spread.p90]];
   return (

@@ -3,6 +3,7 @@
 import { linearScale } from './linearScale';
 import { niceDomain, niceTicks } from '../../format/niceTicks';
 import { formatNumber } from '../../format/formatQuantity';
+import { minOf, maxOf } from '../../core/stats/minMax';
 
 interface Props {
   xs: number[];
@@ -22,8 +23,8 @@ const M = { left: 58, right: 12, top: 22, bottom: 36 };
 export function SweepPlot({ xs, values, up, xLabel, yLabel, note, testId }: Props) {
   const ok = values.filter((d): d is number => d !== null);
   if (ok.length < 2) return <p className="hint" data-testid={testId}>No detachment over this range.</p>;
-  const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
-  const [d0, d1] = niceDomain(Math.min(...ok), Math.max(...ok), 4);
+  const [x0, x1] = [minOf(xs), maxOf(xs)];
+  const [d0, d1] = niceDomain(minOf(ok), maxOf(ok), 4);
   const sx = linearScale([x0, x1], [M.left, W - M.right]);
   const sy = linearScale([d0, d1], up ? [H - M.bottom, M.top] : [M.top, H - M.bottom]);
   const runs: string[] = [];

@@ -1,5 +1,6 @@
 import type { AreaDepthSeries } from './areaDepthSeries';
 import { niceDomain } from '../../format/niceTicks';
+import { minOf, maxOf } from '../../core/stats/minMax';
 
 // The part of the area–depth plane to show: the points only ("zoom to data"), or the points plus
 // zero area and the detachment with its bounded interval. Long intervals are cut at three data
@@ -32,8 +33,8 @@ export function graphDomain(series: readonly AreaDepthSeries[], dataOnly: boolea
     depths.push(p.depth);
   }
   if (areas.length === 0) return null;
-  const dMin = Math.min(...depths);
-  const dMax = Math.max(...depths);
+  const dMin = minOf(depths);
+  const dMax = maxOf(depths);
   const span = Math.max(dMax - dMin, 1);
   if (!dataOnly) {
     areas.push(0);
@@ -46,11 +47,11 @@ export function graphDomain(series: readonly AreaDepthSeries[], dataOnly: boolea
       if (f.kind === 'bounded') depths.push(Math.min(f.hi, cap), Math.max(f.lo, dMin - span));
     }
   }
-  const [aMin, aMax] = atLeast(Math.min(...areas), Math.max(...areas), 0, ZERO_AREA_SPAN[units] ?? ZERO_AREA_SPAN.m);
+  const [aMin, aMax] = atLeast(minOf(areas), maxOf(areas), 0, ZERO_AREA_SPAN[units] ?? ZERO_AREA_SPAN.m);
   const aPad = (aMax - aMin) * 0.06;
-  let [zMin, zMax] = atLeast(Math.min(...depths), Math.max(...depths), MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m, MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m);
+  let [zMin, zMax] = atLeast(minOf(depths), maxOf(depths), MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m, MIN_DEPTH_SPAN[units] ?? MIN_DEPTH_SPAN.m);
   // Depths below the reference are ≥ 0; do not open the axis above the reference for padding alone.
-  const dataTop = Math.min(...depths);
+  const dataTop = minOf(depths);
   if (dataTop >= 0 && zMin < 0) [zMin, zMax] = [0, zMax - zMin];
   const zPad = (zMax - zMin) * 0.06;
   const depth = niceDomain(zMin - zPad, zMax + zPad);

@@ -1,5 +1,6 @@
 import type { LineFit } from '../../core/stats/leastSquares';
 import type { GraphPoint } from './areaDepthSeries';
+import { maxOf } from '../../core/stats/minMax';
 
 // Points far off the area–depth line, with the usual geological reasons (Epard & Groshong 1993;
 // Groshong 2006 ch. 11, as summarised in docs/method.md §Non-linear graphs). "Far" is an internally
@@ -18,7 +19,7 @@ const THICKNESS = 'thickness change: a unit that thins or thickens across the fo
 export function outlierFlags(points: readonly GraphPoint[], fit: LineFit | null): OutlierFlag[] {
   if (!fit || fit.n < 3) return [];
   const inc = points.filter((p) => p.included);
-  const largest = Math.max(...inc.map((p) => Math.abs(p.area)));
+  const largest = maxOf(inc.map((p) => Math.abs(p.area)));
   const byDepth = [...inc].sort((a, b) => a.depth - b.depth);
   const out: OutlierFlag[] = [];
   inc.forEach((p, k) => {

@@ -14,6 +14,7 @@ import { useSessionStore } from '../../state/sessionStore';
 import { residualTooLarge, RESIDUAL_WARN_PX, RESIDUAL_WARN_SHARE } from './calibrationTolerance';
 import { formatNumber } from '../../format/formatQuantity';
 import { NumberField } from './NumberField';
+import { minOf, maxOf } from '../../core/stats/minMax';
 
 interface Row { ref: CalibrationPointRef; label: string; u: number; v: number; fields: { key: 'x' | 'z' | 'value'; label: string; value: number }[] }
 
@@ -31,7 +32,7 @@ function rowsOf(cal: Calibration | null): Row[] {
 function extentOf(cal: Calibration): number {
   const xs = cal.kind === 'affine' ? cal.points.map((p) => p.x) : cal.xPoints.map((p) => p.value);
   const zs = cal.kind === 'affine' ? cal.points.map((p) => p.z) : cal.zPoints.map((p) => p.value);
-  const span = (a: number[]) => (a.length ? Math.max(...a) - Math.min(...a) : 0);
+  const span = (a: number[]) => (a.length ? maxOf(a) - minOf(a) : 0);
   return Math.max(span(xs), span(zs));
 }
 

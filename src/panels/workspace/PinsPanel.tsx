@@ -12,6 +12,7 @@ import { formatNumber } from '../../format/formatQuantity';
 import { NumberField } from './NumberField';
 import { pinValueProblem } from './pinValueProblem';
 import { roundForField } from './readNumberInput';
+import { minOf, maxOf } from '../../core/stats/minMax';
 
 /** Decimals shown in the pin fields: 0.01 of the section unit (or of a pixel before calibration). */
 const PIN_DECIMALS = 2;
@@ -24,7 +25,7 @@ function sectionXExtent(doc: ProjectDoc): [number, number] | null {
     : doc.horizons.flatMap((h) => h.pointsPx);
   if (corners.length === 0) return null;
   const xs = corners.map((p) => imageToSection(frame, p)[0]);
-  return [Math.min(...xs), Math.max(...xs)];
+  return [minOf(xs), maxOf(xs)];
 }
 
 export function PinsPanel() {

@@ -1,7 +1,8 @@
 // Draw a horizon by clicking anchors. While following the line (the default when a scan is shown) each
 // anchor snaps to the line centre and the stretch from the previous anchor follows the drawn line (live
 // preview to the pointer); Alt-click, or the hint's toggle, places a straight stretch. Double-click or
-// Enter finishes, Backspace (or undo) removes the last stretch, Esc cancels. Nothing reaches the document
+// Enter finishes, Backspace (or undo) removes the last stretch, Esc cancels (after Enter it finishes with what is
+// traced). Nothing reaches the document
 // until the line is finished (one undo entry).
 import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
 import type { ImagePx, ProjectDoc } from '../../core/model/projectDoc';
@@ -107,7 +108,14 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
         }
         return {};
       },
-      cancel: () => ({ next: idle, commands: [{ type: 'preview', preview: null }] }),
+      // Once finishing was asked (Enter, double-click), a tool switch or lost focus keeps the line: the stretches
+      // still tracing are taken straight between their anchors, and the user is told. Before that, cancel drops it.
+      cancel: (s, _e, ctx) => {
+        if (!s.finishing) return { next: idle, commands: [{ type: 'preview', preview: null }] };
+        const done = finish(lineVertices(resolveStretches(lineOf(s), ctx)), ctx.doc);
+        const note: ToolCommand = { type: 'message', kind: 'info', text: 'Horizon finished: stretches still tracing were drawn straight between their clicks.' };
+        return { ...done, commands: [...(done.commands ?? []), note] };
+      },
     },
   },
 };

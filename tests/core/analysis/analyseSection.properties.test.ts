@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
 import type { LineSection, Section, XZ } from '../../../src/core/model/section';
+import { maxOf } from '../../../src/core/stats/minMax';
 
 // Invariants of the analysis (DEVELOPERS.md §Code style, tests; delaunator-style scaled runs).
 // Random sections: monotone-in-x horizons (no self-crossing) over inclined regionals, pins [0, 1000].
@@ -45,7 +46,7 @@ function expectScaled(a: SectionAnalysis, b: SectionAnalysis, k: number, rel: nu
   a.horizons.forEach((h, i) => {
     const g = b.horizons[i];
     // Absolute floors relative to the coordinate scale: pin width × vertical extent (areas), pin width (depths).
-    const extent = b.pinWidth + Math.max(...b.horizons.map((x) => Math.abs(x.depth)));
+    const extent = b.pinWidth + maxOf(b.horizons.map((x) => Math.abs(x.depth)));
     expect(near(h.excessArea * k * k, g.excessArea, rel, rel * b.pinWidth * extent), `area ${h.excessArea * k * k} vs ${g.excessArea}`).toBe(true);
     expect(near(h.bedLength * k, g.bedLength, rel, 0), 'bed length').toBe(true);
     expect(near(h.depth * k, g.depth, rel, rel * extent), `depth ${h.depth * k} vs ${g.depth}`).toBe(true);

@@ -5,6 +5,7 @@ import { leastSquares } from '../../../src/core/stats/leastSquares';
 import { leastSquaresThroughOrigin } from '../../../src/core/stats/leastSquaresThroughOrigin';
 import { expectClose } from '../../expectClose';
 import { certified, certifiedSD, readStrd } from './nistStrd';
+import { maxOf } from '../../../src/core/stats/minMax';
 
 describe('leastSquares(x, y) on NIST StRD Norris', () => {
   const { x, y, header } = readStrd('nist-strd-norris.csv');
@@ -72,7 +73,7 @@ describe('leastSquares(x, y) against jStat.models.ols', () => {
           if (!fit) return false;
           // Independent check: jStat.models.ols (registry package jstat 1.9.6), normal-equation solver.
           const ols = jStat.models.ols(y, x.map((v) => [1, v]));
-          const scaleY = Math.max(1, ...y.map(Math.abs));
+          const scaleY = maxOf(y.map(Math.abs), 1);
           expect(Math.abs(fit.intercept - ols.coef[0])).toBeLessThanOrEqual(1e-7 * scaleY);
           expect(Math.abs(fit.slope - ols.coef[1])).toBeLessThanOrEqual(1e-7 * scaleY);
           if (Number.isFinite(ols.R2) && fit.r2 > 1e-6) expect(Math.abs(fit.r2 - ols.R2)).toBeLessThanOrEqual(1e-7);
@@ -144,7 +145,7 @@ describe('leastSquares(x, y) properties', () => {
         const y = x.map((v) => a + b * v);
         const fit = leastSquares(x, y);
         if (!fit) return false;
-        const scale = Math.max(...y.map(Math.abs), 1);
+        const scale = maxOf(y.map(Math.abs), 1);
         for (const r of fit.residuals) expect(Math.abs(r)).toBeLessThanOrEqual(1e-12 * scale);
         expect(Math.abs(fit.slope - b)).toBeLessThanOrEqual(1e-12 * (Math.abs(b) + scale / 1e3));
         expect(fit.r2).toBeGreaterThan(1 - 1e-12);
@@ -163,7 +164,7 @@ describe('leastSquares(x, y) properties', () => {
           y.map((v) => v + shift),
         );
         if (!base || !moved) return false;
-        const scale = Math.max(...y.map(Math.abs), Math.abs(shift), 1);
+        const scale = maxOf(y.map(Math.abs), Math.abs(shift), 1);
         expect(Math.abs(moved.slope - base.slope)).toBeLessThanOrEqual(1e-10 * scale);
         expect(Math.abs(moved.intercept - base.intercept - shift)).toBeLessThanOrEqual(1e-9 * scale);
         expect(Math.abs(moved.s - base.s)).toBeLessThanOrEqual(1e-9 * scale);
@@ -183,7 +184,7 @@ describe('leastSquares(x, y) properties', () => {
             y.map((v) => v * k),
           );
           if (!base || !scaled) return false;
-          const scale = Math.max(...y.map(Math.abs), 1);
+          const scale = maxOf(y.map(Math.abs), 1);
           // Slope is unit-free; intercept, s and the intercept SE carry the unit; r² is unit-free.
           expect(Math.abs(scaled.slope - base.slope)).toBeLessThanOrEqual(1e-10 * (Math.abs(base.slope) + scale));
           expect(Math.abs(scaled.intercept / k - base.intercept)).toBeLessThanOrEqual(1e-9 * scale);

@@ -214,6 +214,25 @@ describe('the inset area–depth graph', () => {
     expect(shortName('Top Saltherne Limestone')).toBe('Top Salther…');
     expect(shortName('Top A')).toBe('Top A');
   });
+
+  it('draws a horizon of 150,000 vertices (past the engine\'s argument limit for a spread call)', () => {
+    // A densely traced copy of the upper marker: the same kinked line with 150,000 vertices along it.
+    const doc = sampleDoc();
+    const src = doc.horizons[0].pointsPx;
+    const n = 150_000;
+    const dense: [number, number][] = [];
+    for (let i = 0; i < n; i++) {
+      const t = (i / (n - 1)) * (src.length - 1);
+      const k = Math.min(src.length - 2, Math.floor(t));
+      const f = t - k;
+      dense.push([src[k][0] + f * (src[k + 1][0] - src[k][0]), src[k][1] + f * (src[k + 1][1] - src[k][1])]);
+    }
+    doc.horizons[0] = { ...doc.horizons[0], pointsPx: dense };
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' });
+    expect(balanced(svg)).toBe(true);
+    expect(svg).toContain('Upper marker');
+    expect(svg).toContain('class="area-depth"');
+  });
 });
 
 describe('renderSectionSvg with a scan', () => {

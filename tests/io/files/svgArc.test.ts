@@ -16,9 +16,9 @@ function shoelace(ring: Pt[]): number {
 
 const onePath = (d: string): Pt[] => {
   const lines = pathDataToPolylines(d);
-  expect(lines).not.toBeNull();
+  if (lines === null || typeof lines === 'string') throw new Error(`path data not read: ${d}`);
   expect(lines).toHaveLength(1);
-  return lines![0];
+  return lines[0];
 };
 
 describe('pathDataToPolylines: elliptical arcs (SVG 1.1 appendix F.6)', () => {

@@ -1,0 +1,47 @@
+// How long decoded scans live. A 100 MP scan holds about 0.4 GB as a bitmap and as much again as tiles, so
+// only the scan the open project shows stays decoded. A scan the undo history can bring back keeps its bytes
+// (closed bitmap, no tiles) and is decoded again from them when it returns; any other scan is dropped.
+// Releases wait one task after the change, so the scan layer has let go of the old tiles before they close.
+import type { ProjectDoc } from '../core/model/projectDoc';
+import { useDocStore, type DocState } from './docStore';
+import { reopenSavedScan } from './projectActions';
+import { getScan, putScan, retainScans } from './scanCache';
+import { releaseTilePyramid } from './scanTilesPyramid';
+
+function scanIdsOf(docs: (ProjectDoc | null)[], into: Set<string>): void {
+  for (const d of docs) if (d?.scan) into.add(d.scan.id);
+}
+
+/** Applies the lifetime rule to the store's state now: closes what is not shown, and decodes the shown scan again if it was released. */
+export function retainScansFor(state: Pick<DocState, 'doc' | 'past' | 'future' | 'gestureStart'>): void {
+  const shown = state.doc.scan;
+  const keep = new Set<string>();
+  scanIdsOf(state.past, keep);
+  scanIdsOf(state.future, keep);
+  scanIdsOf([state.gestureStart], keep);
+  for (const id of retainScans(shown?.id ?? null, keep)) releaseTilePyramid(id);
+  const cached = getScan(shown?.id);
+  if (!shown || !cached?.released) return;
+  void reopenSavedScan(cached.bytes, shown).then((r) => {
+    // Still the scan shown, and still released: nothing newer took its place meanwhile.
+    if (useDocStore.getState().doc.scan?.id !== shown.id || !getScan(shown.id)?.released) {
+      if (r.ok) r.cached.bitmap?.close();
+      return;
+    }
+    putScan(shown.id, r.ok ? r.cached : { bitmap: null, bytes: cached.bytes, notShown: r.message });
+  });
+}
+
+/** Starts applying the lifetime rule whenever the shown scan or the history changes; returns the stop function. */
+export function startScanLifetime(): () => void {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const unsubscribe = useDocStore.subscribe((s, prev) => {
+    if (s.doc.scan === prev.doc.scan && s.past === prev.past && s.future === prev.future) return;
+    clearTimeout(timer);
+    timer = setTimeout(() => retainScansFor(useDocStore.getState()), 0);
+  });
+  return () => {
+    clearTimeout(timer);
+    unsubscribe();
+  };
+}

@@ -1,0 +1,66 @@
+// Decoded scans live only while the open project shows them: a scan replaced by another is closed (bitmap
+// and tiles), kept as bytes while the undo history can bring it back, decoded again when it does, and
+// dropped once nothing can. Through the real document store; decoding is stubbed (it needs a browser).
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { setScan } from '../../src/core/model/commands/setScan';
+import { emptyProjectDoc, type ScanRef } from '../../src/core/model/projectDoc';
+
+const reopenScan = vi.hoisted(() => vi.fn());
+vi.mock('../../src/io/reopenScan', () => ({ reopenScan }));
+const { useDocStore } = await import('../../src/state/docStore');
+const { getScan, heldScanIds, putScan } = await import('../../src/state/scanCache');
+const { retainScansFor } = await import('../../src/state/scanLifetime');
+
+function fakeBitmap(width = 40, height = 20) {
+  return { width, height, close: vi.fn() } as unknown as ImageBitmap & { close: ReturnType<typeof vi.fn> };
+}
+const ref = (id: string): ScanRef => ({ id, name: `${id}.png`, widthPx: 40, heightPx: 20, type: 'image/png' });
+
+/** Opens a scan as the app does: into the cache, then an undoable edit of the document. */
+function openScan(id: string) {
+  const bitmap = fakeBitmap();
+  putScan(id, { bitmap, bytes: new Blob([id], { type: 'image/png' }) });
+  useDocStore.getState().apply((d) => setScan(d, ref(id)));
+  retainScansFor(useDocStore.getState());
+  return bitmap;
+}
+
+describe('retainScansFor(doc store state)', () => {
+  beforeEach(() => {
+    reopenScan.mockReset();
+    useDocStore.getState().replace(emptyProjectDoc());
+    retainScansFor(useDocStore.getState());
+  });
+
+  it('closes the bitmap of a replaced scan but keeps its bytes while undo can bring it back', () => {
+    const a = openScan('scan-a');
+    const b = openScan('scan-b');
+    expect(a.close).toHaveBeenCalledTimes(1);
+    expect(b.close).not.toHaveBeenCalled();
+    expect(getScan('scan-a')).toMatchObject({ bitmap: null, released: true });
+    expect(getScan('scan-a')?.bytes.size).toBe('scan-a'.length);
+    expect(getScan('scan-b')?.bitmap).toBe(b);
+  });
+
+  it('decodes a released scan again from its bytes when undo shows it', async () => {
+    openScan('scan-a');
+    const b = openScan('scan-b');
+    const again = fakeBitmap();
+    reopenScan.mockResolvedValue({ ok: true, bitmap: again });
+    useDocStore.getState().undo();
+    retainScansFor(useDocStore.getState());
+    expect(b.close).toHaveBeenCalledTimes(1);
+    await vi.waitFor(() => expect(getScan('scan-a')?.bitmap).toBe(again));
+    expect(reopenScan.mock.calls[0][1]).toEqual(ref('scan-a'));
+  });
+
+  it('drops every scan that neither the document nor its history holds', () => {
+    const a = openScan('scan-a');
+    const b = openScan('scan-b');
+    useDocStore.getState().replace({ ...emptyProjectDoc(), scan: null });
+    retainScansFor(useDocStore.getState());
+    expect(heldScanIds()).toEqual([]);
+    expect(a.close).toHaveBeenCalledTimes(1);
+    expect(b.close).toHaveBeenCalledTimes(1);
+  });
+});
