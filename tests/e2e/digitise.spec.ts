@@ -5,27 +5,15 @@
 import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
-import { gotoStarted } from './startup';
+import { freshProject, gotoStarted } from './startup';
+import { clickAt, fittedScan, screen, type Cam } from './fittedScan';
 import { gradientPng } from './pngFixture';
 import { viewPixel } from './canvasPixels';
 
 const W = 1000;
 const H = 500;
 
-/** The camera the app fits a W × H scan with (state/camera.ts fitCamera, margin 24). */
-async function fitted(page: Page) {
-  const box = (await page.getByTestId('section-view').boundingBox())!;
-  const scale = Math.min((box.width - 48) / W, (box.height - 48) / H);
-  return { box, scale, x: (box.width - W * scale) / 2, y: (box.height - H * scale) / 2 };
-}
-
-type Cam = Awaited<ReturnType<typeof fitted>>;
-const screen = (cam: Cam, u: number, v: number) => ({ x: cam.box.x + cam.x + u * cam.scale, y: cam.box.y + cam.y + v * cam.scale });
-
-async function clickAt(page: Page, cam: Cam, u: number, v: number) {
-  const p = screen(cam, u, v);
-  await page.mouse.click(p.x, p.y);
-}
+const fitted = (page: Page) => fittedScan(page, W, H);
 
 /** The known section coordinates of the generated scan: 10 m per pixel, z = 1000 m at the top. */
 const known = (u: number, v: number) => ({ x: 10 * u, z: 1000 - 10 * v });
@@ -43,16 +31,6 @@ function profile(level: number, bump: number): [number, number][] {
 async function depthOf(page: Page): Promise<number> {
   const text = (await page.getByTestId('strip-detachment-depth').textContent()) ?? '';
   return Number(text.replace('−', '-').split(' ')[0]);
-}
-
-/** Starts from an empty project: the page may open the demo section first, so wait for it, then choose New. */
-async function freshProject(page: Page) {
-  page.on('dialog', (d) => void d.accept());
-  await gotoStarted(page);
-  await expect(page.getByTestId('busy')).toHaveCount(0);
-  await page.getByTestId('menu-project').click();
-  await page.getByRole('menuitem', { name: 'New' }).click();
-  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(0);
 }
 
 async function openAndCalibrate(page: Page): Promise<Cam> {

@@ -4,18 +4,9 @@
 import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
-import { gotoStarted } from './startup';
+import { freshProject, gotoStarted } from './startup';
 import { gradientPng } from './pngFixture';
 import type { ProjectDoc } from '../../src/core/model/projectDoc';
-
-async function freshProject(page: Page) {
-  page.on('dialog', (d) => void d.accept());
-  await gotoStarted(page);
-  await expect(page.getByTestId('busy')).toHaveCount(0);
-  await page.getByTestId('menu-project').click();
-  await page.getByRole('menuitem', { name: 'New' }).click();
-  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(0);
-}
 
 async function savedDoc(page: Page): Promise<ProjectDoc> {
   const [dl] = await Promise.all([page.waitForEvent('download'), (async () => {

@@ -6,19 +6,13 @@
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { clickAt, fittedScan, screen, type Cam } from './fittedScan';
 import { gradientPng } from './pngFixture';
 
 const W = 1000;
 const H = 500;
 
-async function fitted(page: Page) {
-  const box = (await page.getByTestId('section-view').boundingBox())!;
-  const scale = Math.min((box.width - 48) / W, (box.height - 48) / H);
-  return { box, scale, x: (box.width - W * scale) / 2, y: (box.height - H * scale) / 2 };
-}
-type Cam = Awaited<ReturnType<typeof fitted>>;
-const screen = (cam: Cam, u: number, v: number) => ({ x: cam.box.x + cam.x + u * cam.scale, y: cam.box.y + cam.y + v * cam.scale });
-const clickAt = (page: Page, cam: Cam, u: number, v: number) => { const p = screen(cam, u, v); return page.mouse.click(p.x, p.y); };
+const fitted = (page: Page) => fittedScan(page, W, H);
 
 async function setUp(page: Page): Promise<Cam> {
   page.on('dialog', (d) => void d.accept());

@@ -1,4 +1,4 @@
-// Smallest and largest of a list by a loop. `Math.min(...values)` passes every value as an argument on
+// Smallest and largest of a list by a loop. Spreading a list into Math.min passes every value as an argument on
 // the call stack and throws RangeError past roughly 100,000 of them (V8), which blanked the page with one
 // densely traced line; a loop has no such limit. Lint forbids the spread form (eslint.config.js).
 
