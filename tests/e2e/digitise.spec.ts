@@ -217,6 +217,9 @@ test('edit a horizon: drag a vertex, mark a projected run, undo each as one step
   await page.screenshot({ path: test.info().outputPath('projected-run.png') });
   await page.keyboard.press('?');
   await expect(page.getByTestId('help-overlay')).toContainText('Draw horizon');
+  // Every key README's usage lists, among them 1 (actual size) and Ctrl/Cmd + Y (redo).
+  await expect(page.getByTestId('help-overlay')).toContainText('Actual size');
+  await expect(page.getByTestId('help-overlay')).toContainText('Ctrl/Cmd + Y');
   await page.screenshot({ path: test.info().outputPath('help.png') });
   await page.keyboard.press('Escape');
   await expect(page.getByTestId('help-overlay')).toHaveCount(0);

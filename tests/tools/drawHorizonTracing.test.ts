@@ -67,6 +67,21 @@ describe('drawHorizonTool with a line tracer', () => {
     expect(t.history).toHaveLength(1);
   });
 
+  it('a click for the next line while finishing waits keeps this line and starts the next at the click', () => {
+    const { t } = harness();
+    t.click([0, 100]).click([300, 130]).key('Enter');
+    expect(t.doc.horizons).toHaveLength(1);
+    t.click([500, 150]);
+    expect(t.doc.horizons).toHaveLength(2);
+    expect(t.doc.horizons[1].pointsPx).toHaveLength(2);
+    expect(t.state).toMatchObject({ name: 'placing', finishing: false });
+    if (t.state.name !== 'placing') return;
+    expect(t.state.points).toHaveLength(1);
+    expect(onTheLine(t.state.points)).toBe(true);
+    t.click([800, 180]).key('Enter').cancel();
+    expect(t.doc.horizons).toHaveLength(3);
+  });
+
   it('cancel before finishing was asked still drops the line', () => {
     const { t } = harness();
     t.click([0, 100]).click([300, 130]).cancel();

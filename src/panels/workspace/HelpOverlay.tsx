@@ -4,10 +4,11 @@ import { TOOLS } from '../../tools/toolRegistry';
 
 const GENERAL: [string, string][] = [
   ['Ctrl/Cmd + Z', 'Undo (while drawing a line: remove its last stretch)'],
-  ['Shift + Ctrl/Cmd + Z', 'Redo'],
+  ['Shift + Ctrl/Cmd + Z, Ctrl/Cmd + Y', 'Redo'],
   ['Wheel', 'Zoom about the cursor'],
   ['+ / −', 'Zoom in / out'],
   ['F', 'Zoom to fit'],
+  ['1', 'Actual size: one scan pixel per screen pixel'],
   ['Space + drag, middle drag', 'Pan (Space on a focused button presses the button)'],
   ['Arrow keys', 'Pan'],
   ['Enter / double-click', 'Finish the line being drawn (Enter on a focused button presses the button)'],

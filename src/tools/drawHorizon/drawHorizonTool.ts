@@ -62,6 +62,13 @@ function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState
   return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'edit', edit: (d) => addHorizon(d, horizon) }, { type: 'select', horizonId: id }] };
 }
 
+/** Finishes at once: stretches still tracing are taken straight between their anchors, and the user is told. */
+function finishNow(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
+  const done = finish(lineVertices(resolveStretches(lineOf(s), ctx)), ctx.doc);
+  const note: ToolCommand = { type: 'message', kind: 'info', text: 'Horizon finished: stretches still tracing were drawn straight between their clicks.' };
+  return { ...done, commands: [...(done.commands ?? []), note] };
+}
+
 /** Finishes now, or once the traced stretches still computing are ready. */
 function finishWhenReady(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
   const line = resolveStretches(lineOf(s), ctx);
@@ -87,7 +94,15 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
     },
     placing: {
       pointerDown: (s, e, ctx) => {
-        if (e.button !== 0 || s.finishing) return {};
+        if (e.button !== 0) return {};
+        if (s.finishing) {
+          // Finishing was asked and the user has moved on to the next line before the last stretch was traced:
+          // keep this line as far as it is traced, and start the next one at this click.
+          const done = finishNow(s, ctx);
+          const line = startLine(e.p, ctx, e.alt);
+          const started = show({ name: 'placing', points: line.anchors, stretches: [], hover: null, hoverAlt: false, hoverPath: null, finishing: false }, ctx);
+          return { next: started.next, commands: [...(done.commands ?? []), ...(started.commands ?? [])] };
+        }
         // The second press of a double-click lands on the vertex the first press placed: finish instead.
         if (e.clicks >= 2) return finishWhenReady(s, ctx);
         const line = addAnchor(resolveStretches(lineOf(s), ctx), e.p, ctx, e.alt);
@@ -110,12 +125,7 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
       },
       // Once finishing was asked (Enter, double-click), a tool switch or lost focus keeps the line: the stretches
       // still tracing are taken straight between their anchors, and the user is told. Before that, cancel drops it.
-      cancel: (s, _e, ctx) => {
-        if (!s.finishing) return { next: idle, commands: [{ type: 'preview', preview: null }] };
-        const done = finish(lineVertices(resolveStretches(lineOf(s), ctx)), ctx.doc);
-        const note: ToolCommand = { type: 'message', kind: 'info', text: 'Horizon finished: stretches still tracing were drawn straight between their clicks.' };
-        return { ...done, commands: [...(done.commands ?? []), note] };
-      },
+      cancel: (s, _e, ctx) => (s.finishing ? finishNow(s, ctx) : { next: idle, commands: [{ type: 'preview', preview: null }] }),
     },
   },
 };
