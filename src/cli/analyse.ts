@@ -2,17 +2,19 @@
 // section under "section", or the app's project file (its active scenario, or the one named),
 // and print a table, or the JSON report of src/cli/README.md §JSON report. Bad input: exit code 2 and one line on
 // stderr. A thin shell over src/core.
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
+import { LIMITS, fileTooLargeMessage } from '../core/model/limits';
 import { analyseSection } from '../core/analysis/analyseSection';
 import { validateSection } from '../core/model/validateSection';
 import { formatTable } from './formatTable';
+import { terminalText } from './terminalText';
 import { sectionOfFile } from './sectionOfFile';
 import { toJsonReport } from './toJsonReport';
 
 const USAGE = 'usage: analyse FILE [--json] [--scenario NAME]';
 
 function fail(message: string): never {
-  process.stderr.write(`analyse: ${message.replace(/\s+/g, ' ')}\n`);
+  process.stderr.write(`analyse: ${terminalText(message.replace(/\s+/g, ' '))}\n`);
   process.exit(2);
 }
 
@@ -35,6 +37,16 @@ function main(argv: string[]): void {
   }
   if (files.length !== 1) fail(`give exactly one section or project file; ${USAGE}`);
   const file = files[0];
+  // Size first, so that a huge file or a device such as /dev/zero is refused before anything is read.
+  let size: number;
+  try {
+    const st = statSync(file);
+    if (!st.isFile()) fail(`${file} is not a regular file; give a section or project file.`);
+    size = st.size;
+  } catch (e) {
+    fail(`cannot read ${file}: ${(e as NodeJS.ErrnoException).code ?? 'read error'}; check the path.`);
+  }
+  if (size > LIMITS.fileBytes) fail(`${file}: ${fileTooLargeMessage(size, LIMITS.fileBytes)}`);
   let text: string;
   try {
     text = readFileSync(file, 'utf8');
@@ -60,6 +72,12 @@ function main(argv: string[]): void {
   const analysis = { ...outcome.analysis, notes: [...found.notes, ...outcome.analysis.notes] };
   process.stdout.write(json ? `${JSON.stringify(toJsonReport(analysis), null, 2)}\n` : formatTable(analysis, found.source));
 }
+
+// Output piped into a reader that stops early (`| head`): end quietly, as command-line tools do.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(0);
+  throw e;
+});
 
 try {
   main(process.argv.slice(2));

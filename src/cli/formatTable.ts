@@ -1,4 +1,5 @@
 import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseSection';
+import { terminalText } from './terminalText';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { isExactFit } from '../core/analysis/isExactFit';
 import { EXACT_FIT_TEXT, formatChamberlin, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
@@ -20,13 +21,13 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   const u = a.units;
   const head = ['Horizon', 'Fit', `Excess area (${u}²)`, `Bed length (${u})`, `Regional length (${u})`, `Regional elev. (${u})`, `Depth (${u})`, `Chamberlin (${u})`, 'LPS strain (%)'];
   const rows = a.horizons.map((h) => [
-    h.name, h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
+    terminalText(h.name), h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
     num(h.regionalElevation), num(h.depth), formatChamberlin(h), h.lpsStrain === null ? '—' : num(100 * h.lpsStrain),
   ]);
   const widths = head.map((t, c) => maxOf(rows.map((r) => r[c].length), t.length));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   const out = [
-    ...(source ? [source] : []),
+    ...(source ? [terminalText(source)] : []),
     `Pin width ${num(a.pinWidth)} ${u}; reference elevation ${num(a.referenceElevation)} ${u} (depths below it).`,
     '',
     line(head),
@@ -49,7 +50,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
     out.push('Area–depth line: none (see notes).');
   }
   out.push('', 'Notes:');
-  for (const n of [...a.notes, SECTION_CAUTION]) out.push(`  - ${n}`);
+  for (const n of [...a.notes, SECTION_CAUTION]) out.push(`  - ${terminalText(n)}`);
   out.push('');
   return out.join('\n');
 }
