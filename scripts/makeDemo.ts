@@ -47,13 +47,13 @@ async function main(): Promise<void> {
   mkdirSync(outDir, { recursive: true });
   writeFileSync(join(outDir, 'section.png'), png);
   // What the user opens is the scan digitised as a person would, not the forward model's exact lines.
-  const digitised = digitiseByHand(section, toImage, toSection);
+  const digitised = digitiseByHand(section, toImage, toSection, surface);
   const result = analyseSection(digitised);
   if (!result.ok || !result.analysis.areaDepth) throw new Error('the digitised demo does not analyse');
   writeFileSync(join(outDir, 'section.json'), JSON.stringify(digitised, null, 1) + '\n');
   writeFileSync(join(outDir, 'truth.json'), JSON.stringify({ units: truth.units, displacement: truth.displacement, detachmentElevation: truth.detachmentElevation }, null, 2) + '\n');
   writeFileSync(join(outDir, 'calibration.json'), JSON.stringify(calibration, null, 2) + '\n');
-  writeFileSync(join(outDir, 'README.md'), demoReadme(truth, result.analysis.areaDepth));
+  writeFileSync(join(outDir, 'README.md'), demoReadme(truth, digitised, result.analysis.areaDepth));
   console.log(`demo written to ${outDir}: ${(png.length / 1e6).toFixed(2)} MB PNG, ${(share * 100).toFixed(1)}% of horizon points on ink`);
   const ad = result.analysis.areaDepth;
   console.log(`digitised: D = ${ad.displacement.toFixed(1)} m, detachment ${ad.detachmentElevation?.toFixed(1)} m, r² = ${ad.r2.toFixed(5)}, 95% ${JSON.stringify(ad.detachmentDepthCI95)}`);

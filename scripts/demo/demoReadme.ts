@@ -1,12 +1,23 @@
 // The README written beside the demo files.
 import type { ForwardTruth } from '../../src/core/forward/forwardSpec';
 import type { AreaDepthResult } from '../../src/core/analysis/fitAreaDepth';
+import type { LineSection as Section } from '../../src/core/model/section';
 import { DEMO_HAND } from './digitiseByHand';
+import { DEMO_EROSION } from './topography';
 
-/** Returns public/demo/README.md for the given truth and the area–depth answer of the digitised lines. */
-export function demoReadme(truth: ForwardTruth, answer: AreaDepthResult): string {
+/** Returns which horizons carry projected runs and how many vertices they hold, in words. */
+function projectedNote(digitised: Section): string {
+  const parts = digitised.horizons.flatMap((h) => (h.projected?.length
+    ? [`"${h.name}", vertices ${h.projected.map(([a, b]) => `${a}–${b}`).join(', ')}`]
+    : []));
+  return parts.length ? parts.join('; ') : 'no horizon';
+}
+
+/** Returns public/demo/README.md for the given truth, the digitised section and its area–depth answer. */
+export function demoReadme(truth: ForwardTruth, digitised: Section, answer: AreaDepthResult): string {
   const f = (v: number | null | undefined, d = 0) => (v === null || v === undefined ? '—' : v.toFixed(d));
   const ci = answer.detachmentDepthCI95;
+  const inside = (c: [number, number] | null, t: ForwardTruth): boolean => c !== null && c[0] < t.detachmentDepth && t.detachmentDepth < c[1];
   return `# Demo section (invented)
 
 Everything here is invented for Foldroot: the Corrowan Fold Belt, Section F–F′, the ridge and valley
@@ -16,7 +27,12 @@ published section is shown. Rebuild with \`npm run make-demo\` (scripts/makeDemo
 The section was built with the forward model (src/core/forward): six horizons above one detachment,
 each with excess area exactly D · (regional elevation − detachment elevation) (Epard & Groshong 1993),
 folded as a box anticline, a syncline below the regional, an east-verging overturned anticline and a
-small rounded anticline, over a gently curved regional. The detachment is not drawn.
+small rounded anticline, over a gently curved regional. The detachment is not drawn. Erosion has cut the
+land surface down through the crest of the overturned anticline (about ${f(DEMO_EROSION.centre - DEMO_EROSION.halfWidth)}–${f(DEMO_EROSION.centre + DEMO_EROSION.halfWidth)} m along
+the section, to about ${f(DEMO_EROSION.level)} m): there the top horizon is drawn as a dashed projected line in the air
+above the land surface, as geologists draw an eroded crest, and its digitised line marks that stretch
+projected (${projectedNote(digitised)}). The truth is the forward model's and is unchanged by erosion: the
+projected crest carries the same excess area as the model's line.
 
 The scan is drawn from those exact lines, but section.json holds them as a person digitises the scan
 (scripts/demo/digitiseByHand.ts): a click every ${DEMO_HAND.spacingPx} scan pixels along each line (about 250 m)
@@ -28,8 +44,8 @@ ${ci ? `${f(ci[0])}–${f(ci[1])} m` : 'none'}) and a displacement of ${f(answer
 truth of ${truth.detachmentElevation} m and ${truth.displacement} m. The answer is ${f(Math.abs((answer.detachmentElevation ?? 0) - truth.detachmentElevation))} m off in
 depth and ${f(Math.abs(answer.displacement - truth.displacement))} m in displacement, for two reasons: the jitter scatters each
 excess area a little, and straight segments between clicks cut across the curved crests and troughs, so every
-fold loses a sliver of area (more in the tight overturned fold); both are the digitising error of any hand-made
-section, and the truth lies inside the 95% interval.
+fold loses a sliver of area (more in the tight overturned fold and its projected crest); both are the digitising
+error of any hand-made section, and the truth lies ${inside(ci, truth) ? 'inside' : 'outside'} the 95% interval.
 
 | file | what it holds |
 | --- | --- |

@@ -16,7 +16,7 @@ export const demoUnits = [
 export const demoPlaces = [
   { name: 'VESKAR RIDGE', x: 5900 },
   { name: 'ULMOTH VALLEY', x: 10300 },
-  { name: 'EBRIN HEIGHTS', x: 18300 },
+  { name: 'EBRIN HEIGHTS', x: 17300 },
   { name: 'LISSEL KNOLL', x: 22600 },
 ];
 

@@ -55,13 +55,18 @@ export function renderSvg(d: DrawingInput): string {
   const lines = d.section.horizons.map((h) => h.line);
   const fills = [d.surface, ...lines].map((l, i) => `<polygon points="${below(l)}" fill="${d.units[i].colour}"/>`).join('');
   const ink = lines.map((l) => `<polyline points="${pts(l)}" fill="none" stroke="${INK}" stroke-width="2.3" stroke-linejoin="round"/>`).join('');
+  // Where erosion has cut a horizon, the eroded part is drawn in the air above the land surface as a dashed,
+  // projected line, as geologists draw it; below the surface the ink is solid and the units coloured.
+  const projected = lines.map((l) => `<polyline points="${pts(l)}" fill="none" stroke="${INK}" stroke-width="1.8" stroke-dasharray="14 7" stroke-linejoin="round"/>`).join('');
+  const above = pts([[window.xMin, window.zMax + 200], ...d.surface, [window.xMax, window.zMax + 200]]);
   const out: string[] = [];
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${image.width}" height="${image.height}" viewBox="0 0 ${image.width} ${image.height}">`);
   out.push(`<defs><clipPath id="frame"><rect x="${uL}" y="${vT}" width="${uR - uL}" height="${vB - vT}"/></clipPath>
 <filter id="wash" x="0" y="0" width="100%" height="100%"><feTurbulence type="fractalNoise" baseFrequency="0.011 0.02" numOctaves="4" seed="5" result="t"/>
-<feColorMatrix in="t" type="matrix" values="0 0 0 0 1  0 0 0 0 1  0 0 0 0 1  0 0 0 -1.6 1.05"/></filter></defs>`);
-  out.push(`<g clip-path="url(#frame)">${fills}<rect x="${uL}" y="${vT}" width="${uR - uL}" height="${vB - vT}" filter="url(#wash)" opacity="0.55"/>`);
-  out.push(`<g>${ink}<polyline points="${pts(d.surface)}" fill="none" stroke="${INK}" stroke-width="3"/></g></g>`);
+<feColorMatrix in="t" type="matrix" values="0 0 0 0 1  0 0 0 0 1  0 0 0 0 1  0 0 0 -1.6 1.05"/></filter>
+<clipPath id="ground"><polygon points="${below(d.surface)}"/></clipPath><clipPath id="air"><polygon points="${above}"/></clipPath></defs>`);
+  out.push(`<g clip-path="url(#frame)"><g clip-path="url(#ground)">${fills}<rect x="${uL}" y="${vT}" width="${uR - uL}" height="${vB - vT}" filter="url(#wash)" opacity="0.55"/>${ink}</g>`);
+  out.push(`<g clip-path="url(#air)">${projected}</g><polyline points="${pts(d.surface)}" fill="none" stroke="${INK}" stroke-width="3"/></g>`);
   out.push(`<rect x="${uL}" y="${vT}" width="${uR - uL}" height="${vB - vT}" fill="none" stroke="${INK}" stroke-width="2.2"/>`);
   out.push(axes(uL, uR, vB));
   out.push(unitLabels(d));

@@ -1,4 +1,5 @@
-// An invented land surface that stays above every horizon (so no part of the demo is eroded).
+// An invented land surface: above every horizon except over the crest of the overturned anticline, where
+// erosion has cut down through the top horizon (its crest there is projected, as a geologist draws it).
 import type { XZ } from '../../src/core/model/section';
 import { maxOf } from '../../src/core/stats/minMax';
 
@@ -35,5 +36,20 @@ export function topography(line: XZ[], x0: number, x1: number, step = 50): XZ[] 
   });
   // Hills: a few positive bumps of our own choosing so the surface is not a copy of the folds.
   const hills = (x: number): number => 170 + 60 * Math.sin(x / 1300) ** 2 + 45 * Math.sin(x / 610 + 1.3) ** 2;
-  return xs.map((x, i) => [x, smooth[i] + hills(x)]);
+  return xs.map((x, i) => [x, eroded(x, smooth[i] + hills(x))]);
+}
+
+/** Where the demo's land surface is cut down over the overturned anticline (m): the valley's middle, half-width and floor level. */
+export const DEMO_EROSION = { centre: 19400, halfWidth: 1500, level: 1740 };
+
+/** Returns the surface elevation z cut down to the valley floor near the erosion window (a smooth minimum; never raised). */
+function eroded(x: number, z: number): number {
+  const { centre, halfWidth, level } = DEMO_EROSION;
+  // The floor undulates a little and rises steeply outside the window, so the cut has valley sides, not a step.
+  const outside = Math.max(0, Math.abs(x - centre) - halfWidth) / 1000;
+  const floor = level + 35 * Math.sin(x / 380) ** 2 + 1200 * outside ** 2;
+  // Smooth minimum of width k: at most k·ln 2 below the lower of the two, and equal to it far from the other.
+  const k = 50;
+  const m = Math.min(z, floor);
+  return m - k * Math.log(Math.exp((m - z) / k) + Math.exp((m - floor) / k));
 }

@@ -70,6 +70,15 @@ test('the pane shows the engine’s detachment for the demo, with an interval th
   const band = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.closed() && Math.abs(l.opacity() - 0.14) < 1e-9).length)()`);
   await expect.poll(band).toBe(1);
   await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');
+  // Erosion cuts the top horizon at the overturned crest: section.json marks that stretch projected, the
+  // section draws it dashed (with its halo), and the pane says how much of that horizon's area is projected.
+  const projectedHorizons = demo.horizons.filter((h) => (h.projected ?? []).length > 0);
+  expect(projectedHorizons.map((h) => h.name)).toEqual([demo.horizons[0].name]);
+  // The demo draws its first horizon in #b5522b (state/openDemo.ts); the detachment is dashed in another colour.
+  const dashed = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.stroke() === '#b5522b' && (l.dash() ?? []).length > 0).length)()`);
+  await expect.poll(dashed).toBeGreaterThanOrEqual(1);
+  await expect(page.getByTestId('diagnostics')).toContainText(`Horizon "${demo.horizons[0].name}"`);
+  await expect(page.getByTestId('diagnostics')).toContainText('are projected (interpreted)');
   // Against the forward model it was built from (truth.json): within 1 % of D and of the depth, and the
   // truth inside the engine's interval (the digitising error the demo's README states).
   const ad = a.areaDepth!;

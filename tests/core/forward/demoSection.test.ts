@@ -5,6 +5,7 @@ import { forwardSection } from '../../../src/core/forward/forwardSection';
 import { demoSpec } from '../../../scripts/demo/demoSpec';
 import { apply, invert, sectionToImage } from '../../../scripts/demo/layout';
 import { digitiseByHand } from '../../../scripts/demo/digitiseByHand';
+import { highestZAt, topography } from '../../../scripts/demo/topography';
 
 const read = (name: string): unknown => JSON.parse(readFileSync(new URL(`../../../public/demo/${name}`, import.meta.url), 'utf8'));
 
@@ -12,7 +13,34 @@ describe('public/demo', () => {
   it('section.json is forwardSection(demoSpec) digitised by hand from the scan (run npm run make-demo after changing the demo)', () => {
     const exact = forwardSection(demoSpec).section;
     const t = sectionToImage();
-    expect(read('section.json')).toEqual(digitiseByHand(exact, t, invert(t)));
+    const surface = topography(exact.horizons[0].line, 0, 26000);
+    expect(read('section.json')).toEqual(digitiseByHand(exact, t, invert(t), surface));
+  });
+
+  it('the land surface cuts the top horizon at the crest; that stretch, and only that, is marked projected', () => {
+    const exact = forwardSection(demoSpec).section;
+    const surface = topography(exact.horizons[0].line, 0, 26000);
+    const demo = read('section.json') as ReturnType<typeof forwardSection>['section'];
+    const top = demo.horizons[0];
+    expect(top.projected?.length).toBe(1);
+    const [from, to] = top.projected![0];
+    expect(to - from).toBeGreaterThan(5);
+    // Jitter can put an end vertex a few metres past the surface's ends: read the surface at the nearest end there.
+    const surfaceZ = (x: number) => highestZAt(surface, Math.min(26000, Math.max(0, x)));
+    // Jitter is 0.7 px (about 4.4 m in z at 0.16 px/m): inside the run the clicks are above the land
+    // surface, outside it below, with the two outcrop clicks at the surface within a few jitters.
+    for (let i = 0; i < top.line.length; i++) {
+      const [x, z] = top.line[i];
+      const dz = z - surfaceZ(x);
+      if (i === from || i === to) expect(Math.abs(dz)).toBeLessThan(25);
+      else if (i > from && i < to) expect(dz).toBeGreaterThan(0);
+      else expect(dz).toBeLessThan(0);
+    }
+    // The lower horizons are nowhere eroded.
+    for (const h of demo.horizons.slice(1)) {
+      expect(h.projected).toBeUndefined();
+      for (const [x, z] of h.line) expect(z).toBeLessThan(surfaceZ(x));
+    }
   });
 
   it('the digitised demo scatters about the truth: a real interval that holds truth.json, close to it', () => {
