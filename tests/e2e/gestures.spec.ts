@@ -102,3 +102,74 @@ test('beside the Chamberlin column and in the report: bed length was not conserv
   await expect(page.getByTestId('report-chamberlin-note')).toContainText('assumes bed length is conserved');
   await expect(page.getByTestId('report-table')).toContainText('negative = shortened along the layer');
 });
+
+/** Returns the page y of the first and last rows, down the view's column at page x, where the scan is drawn (any opaque canvas pixel). */
+async function scanRowsAt(page: Page, x: number): Promise<{ top: number; bottom: number }> {
+  return page.evaluate((px) => {
+    const box = document.querySelector('[data-testid="section-view"]') as HTMLElement;
+    const r = box.getBoundingClientRect();
+    const ratio = window.devicePixelRatio || 1;
+    let top = Infinity;
+    let bottom = -Infinity;
+    for (const c of Array.from(box.querySelectorAll('canvas'))) {
+      const cr = c.getBoundingClientRect();
+      const col = c.getContext('2d')!.getImageData(Math.round((px - cr.left) * ratio), 0, 1, c.height).data;
+      for (let j = 0; j < c.height; j++) {
+        if (col[4 * j + 3] === 0) continue;
+        const y = cr.top + j / ratio;
+        top = Math.min(top, y);
+        bottom = Math.max(bottom, y);
+      }
+    }
+    // Rows the view's own box clips are not seen, whatever the canvas holds.
+    return { top: Math.max(top, r.top), bottom: Math.min(bottom, r.bottom) };
+  }, x);
+}
+
+test('a fitted scan ends above the results strip: its bottom edge is in view and a click there places a vertex', async ({ page }) => {
+  await freshProject(page);
+  // A tall scan, so that the fit is set by the view's height and the scan's lower edge sits at the view's bottom margin.
+  const [w, h] = [600, 2400];
+  await page.getByTestId('open-image').setInputFiles({ name: 'tall.png', mimeType: 'image/png', buffer: gradientPng(w, h) });
+  await expect(page.getByTestId('scan-name')).toContainText('tall.png');
+  // A first line brings the results strip (it shows once there is a horizon or a calibration); then fit the scan.
+  await page.getByTestId('tool-draw').click();
+  const first = (await page.getByTestId('section-view').boundingBox())!;
+  for (const dx of [-60, 60]) await page.mouse.click(first.x + first.width / 2 + dx, first.y + first.height / 3);
+  await page.keyboard.press('Enter');
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(1);
+  await expect(page.getByTestId('results-strip')).toBeVisible();
+  await page.getByTestId('zoom-fit').click();
+  const view = (await page.getByTestId('section-view').boundingBox())!;
+  const cx = view.x + view.width / 2;
+  // Where the scan is drawn, read from the canvas itself (not from the app's camera).
+  await expect.poll(async () => (await scanRowsAt(page, cx)).bottom).toBeGreaterThan(view.y);
+  const rows = await scanRowsAt(page, cx);
+  const scale = (rows.bottom + 1 - rows.top) / h;
+  // Two screen pixels above the scan's lowest drawn row: what the user sees there is the section view, not the strip.
+  const yLow = rows.bottom - 2;
+  const onTop = await page.evaluate(([x, y]) => {
+    const el = document.elementFromPoint(x, y);
+    return { inView: !!el?.closest('[data-testid="section-view"]'), inStrip: !!el?.closest('[data-testid="results-strip"]') };
+  }, [cx, yLow] as const);
+  expect(onTop).toEqual({ inView: true, inStrip: false });
+  // Draw a line along the scan's bottom rows with real clicks: each click lands on the scan and places a vertex there.
+  for (const x of [cx - 0.3 * w * scale, cx, cx + 0.3 * w * scale]) await page.mouse.click(x, yLow);
+  await expect(page.getByTestId('tool-hint')).toHaveAttribute('data-state', 'placing');
+  await page.keyboard.press('Enter');
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(2);
+  const doc = await savedDoc(page);
+  const pts = doc.horizons[1].pointsPx;
+  expect(pts).toHaveLength(3);
+  // Each vertex lies within the scan's lowest few screen pixels (a screen pixel is 1/scale scan rows).
+  for (const [, v] of pts) {
+    expect(v).toBeLessThan(h);
+    expect(v).toBeGreaterThan(h - 4 / scale);
+  }
+  // The whole fitted scan lies in the visible view, inside its margin, and the view ends where the strip begins.
+  const strip = (await page.getByTestId('results-strip').boundingBox())!;
+  expect(view.y + view.height).toBeLessThanOrEqual(strip.y + 0.5);
+  expect(rows.bottom).toBeLessThan(strip.y);
+  expect(rows.bottom).toBeLessThan(view.y + view.height - 8);
+  await page.screenshot({ path: test.info().outputPath('fitted-bottom-above-strip.png') });
+});
