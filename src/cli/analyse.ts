@@ -4,6 +4,7 @@
 // stderr. A thin shell over src/core.
 import { readFileSync, statSync } from 'node:fs';
 import { LIMITS, fileTooLargeMessage } from '../core/model/limits';
+import { jsonDepthProblem } from '../core/model/jsonDepthProblem';
 import { analyseSection } from '../core/analysis/analyseSection';
 import { validateSection } from '../core/model/validateSection';
 import { formatTable } from './formatTable';
@@ -53,6 +54,8 @@ function main(argv: string[]): void {
   } catch (e) {
     fail(`cannot read ${file}: ${(e as NodeJS.ErrnoException).code ?? 'read error'}; check the path.`);
   }
+  const deep = jsonDepthProblem(text);
+  if (deep) fail(`${file}: ${deep}; this is not a section or project file.`);
   let doc: unknown;
   try {
     // A byte-order mark is not JSON but some editors write one; the app's reader skips it too.

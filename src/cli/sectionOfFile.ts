@@ -3,7 +3,7 @@
 // is migrated with the core migrations and turned into the chosen scenario's section.
 import { activeScenario, docToSection } from '../core/model/docToSection';
 import { migrateProjectFile } from '../core/model/migrations/migrateProjectFile';
-import { PROJECT_FORMAT } from '../core/model/migrations/projectFileFormat';
+import { formatFieldProblem, PROJECT_FORMAT } from '../core/model/migrations/projectFileFormat';
 import type { ProjectDoc } from '../core/model/projectDoc';
 
 export type FileSection =
@@ -22,6 +22,8 @@ export function sectionOfFile(raw: unknown, scenarioName?: string): FileSection 
     if (!migrated.ok) return migrated;
     return projectSection(migrated.file.doc, scenarioName);
   }
+  // A "format" field marks a project file: a misspelt one is named, not taken for a section with no units.
+  if (isObject(raw) && 'format' in raw) return { ok: false, message: formatFieldProblem(raw.format) };
   if (scenarioName !== undefined) return { ok: false, message: '--scenario applies only to a project file (one with "format": "foldroot-project").' };
   // A section embedded under "section" (the shape version-0 project files had); else the file is the section.
   const section = isObject(raw) && !('horizons' in raw) && 'section' in raw ? raw.section : raw;

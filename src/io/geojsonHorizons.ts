@@ -5,7 +5,8 @@ import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanPoint } from './cleanCoordinate';
-import { countLines, lineCountProblem, LIMITS } from '../core/model/limits';
+import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
+import { jsonDepthProblem } from '../core/model/jsonDepthProblem';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 function isObject(v: unknown): v is Record<string, unknown> {
@@ -30,7 +31,9 @@ function readLine(v: unknown): XZ[] | string {
 /** Returns the horizons in a GeoJSON text (section units), each bad feature listed; never throws. */
 export function parseHorizonsGeoJson(text: string): HorizonImport {
   const problems: RowProblem[] = [];
-  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The GeoJSON file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The GeoJSON file cannot be imported: ${fileTooLargeMessage(text.length, MAX_IMPORT_BYTES)}.`, problems };
+  const deep = jsonDepthProblem(text);
+  if (deep) return { ok: false, message: `The GeoJSON file cannot be imported: ${deep}.`, problems };
   let raw: unknown;
   try {
     raw = JSON.parse(text);

@@ -3,6 +3,7 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { validateSection } from '../core/model/validateSection';
+import { jsonDepthProblem } from '../core/model/jsonDepthProblem';
 import { migrateProjectFile } from '../core/model/migrations/migrateProjectFile';
 import { sectionToProjectDoc } from '../core/model/migrations/sectionToProjectDoc';
 import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type ProjectFile } from '../core/model/migrations/projectFileFormat';
@@ -55,6 +56,8 @@ function parse(text: string, fileName: string): OpenedProject {
   const who = fileName;
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '') return { ok: false, message: `${who} is empty.` };
+  const deep = jsonDepthProblem(body);
+  if (deep) return { ok: false, message: `${who} cannot be opened: ${deep}; it is not a section or project file.` };
   let raw: unknown;
   try {
     raw = JSON.parse(body);

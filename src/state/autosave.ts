@@ -1,8 +1,12 @@
 // Keeps the open project in this browser: after every change (debounced) the document and the
 // scan's bytes go to IndexedDB; on the next visit the last state comes back (with "Start fresh").
 // Closing the tab with changes not saved to a file asks first (beforeunload).
+import { docLimitProblem } from '../core/model/docLimitProblem';
 import { emptyProjectDoc } from '../core/model/projectDoc';
-import { unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type StoredScan } from './autosaveDb';
+import { SECTION_CAUTION } from '../core/analysis/caution';
+import { PROJECT_FILE_VERSION, PROJECT_FORMAT } from '../core/model/migrations/projectFileFormat';
+import { downloadFile } from '../io/downloadFile';
+import { readSetAside, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type StoredScan } from './autosaveDb';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
 import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
@@ -26,6 +30,12 @@ let writtenScanId: string | null = null;
 /** Writes the current document now; reports quota problems through the status store. */
 export async function autosaveNow(): Promise<void> {
   const { doc, revision, savedRevision } = useDocStore.getState();
+  // Work the restore would refuse is not written over a copy it can restore (the same limits as the schema).
+  const over = docLimitProblem(doc);
+  if (over) {
+    useAutosaveStatus.setState({ failure: `The latest changes are not kept in this browser: ${over}. The copy kept before is left as it was.` });
+    return;
+  }
   try {
     const cached = getScan(doc.scan?.id);
     let scan: StoredScan | null = null;
@@ -58,7 +68,9 @@ export async function restoreAutosave(): Promise<boolean> {
     } catch {
       // Could not move it; the message still says why it was not restored.
     }
-    useSessionStore.getState().showMessage('error', `${kept.message} It is kept aside in this browser, not deleted; the demo opened instead.`);
+    const words = `${kept.message} It is kept aside in this browser, not deleted; the demo opened instead.`;
+    useSessionStore.getState().showMessage('error', words);
+    useAutosaveStatus.setState({ keptAside: words });
     return false;
   }
   if (kept.kind === 'none') return false;
@@ -99,6 +111,15 @@ export async function restoreAutosave(): Promise<boolean> {
   const migrated = snap.migratedFrom === null ? null : `The work kept in this browser was kept at version ${snap.migratedFrom} and has been brought up to this version.`;
   if (notShown) useSessionStore.getState().showMessage('error', migrated ? `${migrated} ${notShown}` : notShown);
   else if (migrated) useSessionStore.getState().showMessage('info', migrated);
+  return true;
+}
+
+/** Downloads the work set aside at start-up as a project file as it was kept (not checked: it may be opened after fixing by hand); false when none is set aside. */
+export async function downloadKeptAside(): Promise<boolean> {
+  const aside = await readSetAside(await db());
+  if (!aside) return false;
+  const text = JSON.stringify({ format: PROJECT_FORMAT, version: PROJECT_FILE_VERSION, savedAt: aside.savedAt, caution: SECTION_CAUTION, doc: aside.doc, scan: null });
+  downloadFile(new Blob([text], { type: 'application/json' }), 'kept-copy-set-aside.foldroot.json');
   return true;
 }
 

@@ -114,11 +114,22 @@ export async function setAsideKept(db: IDBDatabase): Promise<void> {
   const finished = done(tx);
   const store = tx.objectStore(STATE);
   const current = await request(store.get(CURRENT));
+  const earlier = (await request(store.get(SET_ASIDE))) as StateRecord | undefined;
   if (current !== undefined) {
+    // A copy already set aside is not overwritten either: it moves to a key of its own.
+    if (earlier !== undefined) store.put(earlier, `${SET_ASIDE}-${typeof earlier.savedAt === 'string' ? earlier.savedAt : Date.now()}`);
     store.put(current, SET_ASIDE);
     store.delete(CURRENT);
   }
   await finished;
+}
+
+/** Returns the document of the set-aside record as it was kept (unchecked, lines unpacked), with when it was kept, or null when nothing is set aside. */
+export async function readSetAside(db: IDBDatabase): Promise<{ savedAt: string; doc: unknown } | null> {
+  const tx = db.transaction([STATE], 'readonly');
+  const aside = (await request(tx.objectStore(STATE).get(SET_ASIDE))) as StateRecord | undefined;
+  if (aside === undefined) return null;
+  return { savedAt: typeof aside.savedAt === 'string' ? aside.savedAt : '', doc: unpackDoc(aside.doc) };
 }
 
 /** Moves a set-aside record back to be the current one, once this build has restored its work. */

@@ -12,6 +12,8 @@ export interface AutosaveStatus {
   quotaFull: boolean;
   /** Another write error (message), shown once. */
   failure: string | null;
+  /** Why the kept work could not be restored at start-up and was set aside (the banner offers it as a download), or null. */
+  keptAside: string | null;
 }
 
-export const useAutosaveStatus = create<AutosaveStatus>()(() => ({ lastSavedAt: null, keptRevision: null, restoredFrom: null, quotaFull: false, failure: null }));
+export const useAutosaveStatus = create<AutosaveStatus>()(() => ({ lastSavedAt: null, keptRevision: null, restoredFrom: null, quotaFull: false, failure: null, keptAside: null }));

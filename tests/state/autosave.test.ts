@@ -153,3 +153,55 @@ describe('restoreAutosave of work kept by an earlier or a newer version', () => 
     expect(again.kind === 'kept' && !again.snap.fromSetAside && again.snap.doc.title).toBe('Version-1 sample (invented)');
   });
 });
+
+describe('a kept copy is never overwritten by work the restore would refuse', () => {
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    useSessionStore.getState().clearMessage();
+    await clearSnapshot(await openAutosaveDb(factory));
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('a document over a limit (a 501-character name) is not written over the last good copy, and the status says why', async () => {
+    const { useAutosaveStatus } = await import('../../src/state/autosaveStatus');
+    useDocStore.getState().replace(sampleDoc());
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Good copy' }));
+    await autosaveNow();
+    useDocStore.getState().apply((d) => ({ ...d, horizons: d.horizons.map((h, i) => (i === 0 ? { ...h, name: 'N'.repeat(501) } : h)) }));
+    await autosaveNow();
+    expect(useAutosaveStatus.getState().failure).toContain('the horizon name is too long (501 characters; the limit is 500)');
+    const kept = await readSnapshot(await openAutosaveDb(factory));
+    expect(kept?.doc.title).toBe('Good copy');
+    expect(kept?.doc.horizons[0].name).toBe('Upper marker');
+    useAutosaveStatus.setState({ failure: null });
+  });
+
+  it('a second unreadable copy does not overwrite the first set aside; both are kept, and the banner offers the download', async () => {
+    const { useAutosaveStatus } = await import('../../src/state/autosaveStatus');
+    const { downloadKeptAside } = await import('../../src/state/autosave');
+    const newer = (title: string) => ({ ...fixture('v1-two-horizons.json').doc, title, schemaVersion: SCHEMA_VERSION + 1 });
+    await keepRecord(newer('First newer'));
+    expect(await restoreAutosave()).toBe(false);
+    await keepRecord(newer('Second newer'));
+    expect(await restoreAutosave()).toBe(false);
+    expect(useAutosaveStatus.getState().keptAside).toContain('kept aside in this browser, not deleted');
+    const db = await openAutosaveDb(factory);
+    const all = await new Promise<unknown[]>((resolve) => {
+      const r = db.transaction(['state']).objectStore('state').getAll();
+      r.onsuccess = () => resolve(r.result);
+    });
+    expect(all.map((r) => (r as { doc: { title: string } }).doc.title).sort()).toEqual(['First newer', 'Second newer']);
+    // The download is the set-aside document as it was kept, in a project file's frame.
+    const blobs: Blob[] = [];
+    const clicked: string[] = [];
+    vi.stubGlobal('URL', { createObjectURL: (b: Blob) => (blobs.push(b), 'blob:kept'), revokeObjectURL: () => undefined });
+    vi.stubGlobal('document', { createElement: () => ({ click() { clicked.push(this.download); }, remove() {}, download: '' }), body: { appendChild: () => undefined } });
+    vi.stubGlobal('window', { setTimeout: () => 0 });
+    expect(await downloadKeptAside()).toBe(true);
+    expect(clicked).toEqual(['kept-copy-set-aside.foldroot.json']);
+    const file = JSON.parse(await blobs[0].text());
+    expect(file.format).toBe('foldroot-project');
+    expect(file.doc.title).toBe('Second newer');
+    useAutosaveStatus.setState({ keptAside: null });
+  });
+});

@@ -85,3 +85,9 @@ export function lineCountProblem(c: { horizons: number; longest: number; total: 
   if (c.total > LIMITS.totalPoints) return tooManyMessage('vertices', c.total, LIMITS.totalPoints);
   return null;
 }
+
+/** Returns `base` followed by `suffix` (" (2)", " copy"), `base` cut short so that the whole fits the name length limit. */
+export function nameWithSuffix(base: string, suffix: string): string {
+  const room = LIMITS.nameLength - suffix.length;
+  return (base.length > room ? base.slice(0, Math.max(0, room)).trimEnd() : base) + suffix;
+}

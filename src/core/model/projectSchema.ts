@@ -5,9 +5,11 @@
 // other. Limits keep hostile files from exhausting memory.
 import { z } from 'zod';
 import { SCHEMA_VERSION, type ProjectDoc } from './projectDoc';
+import { LIMITS, nameLengthProblem, tooManyMessage } from './limits';
+import { docLimitProblem } from './docLimitProblem';
 
-/** Largest counts accepted in a project file: generous for real work, finite for hostile input. */
-export const PROJECT_LIMITS = { horizons: 2000, pointsPerLine: 200_000, scenarios: 200, nameLength: 500, calibrationPoints: 1000 };
+/** Largest counts accepted in a project file: the one set of limits (limits.ts), generous for real work, finite for hostile input. */
+export const PROJECT_LIMITS = LIMITS;
 
 const num = z.number().finite();
 const px = z.tuple([num, num]);
@@ -79,11 +81,13 @@ export type ProjectDocCheck = { ok: true; doc: ProjectDoc } | { ok: false; messa
 export function checkProjectDoc(value: unknown): ProjectDocCheck {
   const r = projectDocSchema.safeParse(value);
   if (!r.success) {
-    const issues = r.error.issues.slice(0, 3).map((i) => `${i.path.length ? i.path.join('.') : 'document'}: ${i.message}`);
+    const issues = r.error.issues.slice(0, 3).map((i) => `${i.path.length ? i.path.join('.') : 'document'}: ${limitWords(value, i) ?? i.message}`);
     const more = r.error.issues.length > 3 ? ` (and ${r.error.issues.length - 3} more)` : '';
     return { ok: false, message: `The project document is not valid — ${issues.join('; ')}${more}.` };
   }
   const doc: ProjectDoc = r.data;
+  const over = docLimitProblem(doc);
+  if (over) return { ok: false, message: `The project document is not valid — ${over}.` };
   const ids = new Set<string>();
   for (const h of doc.horizons) {
     if (ids.has(h.id)) return { ok: false, message: `The project document is not valid — two horizons share the id "${h.id}".` };
@@ -93,4 +97,22 @@ export function checkProjectDoc(value: unknown): ProjectDocCheck {
     return { ok: false, message: 'The project document is not valid — activeScenarioId names no scenario.' };
   }
   return { ok: true, doc };
+}
+
+/** What a path's array is a list of, for the shared words of a count over its limit. */
+function listWhat(key: PropertyKey | undefined): string {
+  if (key === 'horizons' || key === 'scenarios' || key === 'excluded') return key === 'excluded' ? 'left-out horizons' : key;
+  if (key === 'xPoints' || key === 'zPoints' || key === 'points') return 'calibration points';
+  if (key === 'projected') return 'projected runs';
+  return 'vertices in one line';
+}
+
+/** The shared words of limits.ts for a "too big" schema issue (the name or list measured from the value), or null for other issues. */
+function limitWords(value: unknown, issue: z.core.$ZodIssue): string | null {
+  if (issue.code !== 'too_big') return null;
+  let at: unknown = value;
+  for (const key of issue.path) at = typeof at === 'object' && at !== null ? (at as Record<PropertyKey, unknown>)[key] : undefined;
+  if (typeof at === 'string') return nameLengthProblem(at, issue.path.some((k) => k === 'horizons') ? 'horizon name' : issue.path.some((k) => k === 'scenarios') ? 'scenario name' : String(issue.path[issue.path.length - 1] ?? 'name'));
+  if (Array.isArray(at)) return tooManyMessage(listWhat(issue.path[issue.path.length - 1] === undefined ? undefined : issue.path[issue.path.length - 1]), at.length, Number(issue.maximum));
+  return null;
 }

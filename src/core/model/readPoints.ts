@@ -1,3 +1,4 @@
+import { coordinateProblem, LIMITS, tooManyMessage } from './limits';
 import type { SectionProblem } from './sectionProblem';
 
 // Reads one list of [x, z] points from unknown JSON straight into typed arrays (the form the
@@ -16,6 +17,11 @@ export function readPoints(v: unknown, who: string, what: string, horizon: strin
     return null;
   }
   const n = v.length;
+  if (n > LIMITS.pointsPerLine) {
+    out.push({ code: 'too-large', horizon, message: `${who}: ${what} has ${tooManyMessage('vertices', n, LIMITS.pointsPerLine)}; simplify the line or split it.` });
+    return null;
+  }
+  const range = LIMITS.coordinateMagnitude;
   // The comparison and the result object are made before the loop and used after it (a bad point is
   // named first): code first met after a long loop has no type feedback when the loop is optimised
   // mid-run (on-stack replacement), and V8 would deoptimise it there on every call.
@@ -36,7 +42,12 @@ export function readPoints(v: unknown, who: string, what: string, horizon: strin
       out.push({ code: 'not-finite', horizon, message: `${who}: ${what} point ${i} is not a finite number (NaN or Infinity); fix or delete that point.` });
       return null;
     }
-    // Step 3: copy into the typed arrays the analysis runs on.
+    // Step 3: within the range the engine computes in (squares and areas of larger values lose all precision).
+    if (x > range || x < -range || z > range || z < -range) {
+      out.push({ code: 'out-of-range', horizon, message: `${who}: ${what} point ${i}: ${coordinateProblem(x > range || x < -range ? x : z)}; convert the section to smaller units or move its origin.` });
+      return null;
+    }
+    // Step 4: copy into the typed arrays the analysis runs on.
     xs[i] = x;
     zs[i] = z;
   }

@@ -3,7 +3,7 @@
 
 export type SectionProblemCode = 'empty-section' | 'too-few-points' | 'not-finite' | 'pins-invalid' | 'misses-pin'
   | 'crosses-pin-twice' | 'self-intersecting' | 'duplicate-name' | 'bad-projected-run' | 'bad-units' | 'bad-shape'
-  | 'not-on-fault' | 'unknown-fault';
+  | 'not-on-fault' | 'unknown-fault' | 'too-large' | 'out-of-range';
 
 /** One input problem; `message` names the horizon or fault (if any) and how to fix it. */
 export interface SectionProblem { code: SectionProblemCode; horizon?: string; fault?: string; message: string }

@@ -2,6 +2,7 @@ import type { LengthUnit } from './section';
 import { readFault, type FaultArrays } from './readFault';
 import { readHorizon, type HorizonArrays, type JoinContext } from './readHorizon';
 import type { Allocate } from './readPoints';
+import { coordinateProblem, extentProblem, LIMITS, nameLengthProblem, tooManyMessage } from './limits';
 import type { SectionProblem } from './sectionProblem';
 
 // The section-level checks of a section file (units, pins, reference elevation, the horizon
@@ -39,6 +40,16 @@ function readPins(v: unknown, out: SectionProblem[]): [number, number] | null {
     out.push({ code: 'not-finite', message: 'Section: a pin position is not a finite number; set both pins to real x values.' });
     return null;
   }
+  const far = coordinateProblem(l) ?? coordinateProblem(r);
+  if (far) {
+    out.push({ code: 'out-of-range', message: `Section: a pin position: ${far}.` });
+    return null;
+  }
+  const small = extentProblem(Math.abs(r - l));
+  if (small) {
+    out.push({ code: 'out-of-range', message: `Section: ${small}; the pins are ${Math.abs(r - l).toPrecision(3)} units apart. Give the coordinates in larger units.` });
+    return null;
+  }
   if (l === r) out.push({ code: 'pins-invalid', message: `Section: both pins are at x = ${l}; move them apart, left pin first.` });
   else if (l > r) out.push({ code: 'pins-invalid', message: `Section: pins are reversed (${l} > ${r}); write them as [xLeft, xRight].` });
   return l < r ? [l, r] : null;
@@ -63,6 +74,10 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
     out.push({ code: 'bad-shape', message: 'Section: "horizons" must be an array of horizons; add it (it may be empty).' });
     return { ok: false, problems: out };
   }
+  if (input.horizons.length > LIMITS.horizons) {
+    out.push({ code: 'too-large', message: `Section: ${tooManyMessage('horizons', input.horizons.length, LIMITS.horizons)}; split the section into several files.` });
+    return { ok: false, problems: out };
+  }
   const faults = readFaults(input.faults, out, allocate);
   const join: JoinContext | null = pins && faults ? { faults, tolerance: ON_FAULT_TOLERANCE * (pins[1] - pins[0]) } : null;
   const horizons: HorizonArrays[] = [];
@@ -70,12 +85,17 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
   input.horizons.forEach((v, i) => {
     const h = readHorizon(v, i, out, allocate, join);
     const name = isObject(v) && typeof v.name === 'string' ? v.name : undefined;
+    const long = name === undefined ? null : nameLengthProblem(name, 'horizon name');
+    if (long) out.push({ code: 'too-large', horizon: name!.slice(0, 60), message: `Horizon #${i + 1}: ${long}; shorten it.` });
     if (name !== undefined && name.trim() !== '') {
       if (seen.has(name)) out.push({ code: 'duplicate-name', horizon: name, message: `Horizon "${name}" appears more than once; rename one of them.` });
       seen.add(name);
     }
     if (h) horizons.push(h);
   });
+  let total = 0;
+  for (const h of horizons) total += h.lineX.length + h.regionalX.length;
+  if (total > LIMITS.totalPoints) out.push({ code: 'too-large', message: `Section: ${tooManyMessage('vertices', total, LIMITS.totalPoints)}; simplify the lines or split the section.` });
   if (out.length > 0 || !pins || !faults) return { ok: false, problems: out };
   const section: SectionArrays = { units: units as LengthUnit, pins, horizons, faults };
   if (typeof ref === 'number') section.referenceElevation = ref;

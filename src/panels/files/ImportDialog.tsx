@@ -1,5 +1,6 @@
 // The preview before horizons are imported: what will be added, every problem by row, the units,
 // and for SVG the two reference points that place the drawing in the section.
+import { docLimitProblem } from '../../core/model/docLimitProblem';
 import { useMemo, useState } from 'react';
 import { importHorizons, type ImportedHorizon } from '../../core/model/commands/importHorizons';
 import type { LengthUnit } from '../../core/model/section';
@@ -71,6 +72,13 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
   const confirm = () => {
     if (!mapped.ok) return;
     const before = useDocStore.getState().doc;
+    // The horizons already drawn count too: the document after the import must stay within the limits.
+    const over = docLimitProblem(importHorizons(before, mapped.horizons, units));
+    if (over) {
+      useSessionStore.getState().showMessage('error', `Nothing was imported from ${pending.fileName}: with the horizons already in the project there would be ${over}.`);
+      onClose();
+      return;
+    }
     useDocStore.getState().apply((doc) => importHorizons(doc, mapped.horizons, units));
     const after = useDocStore.getState().doc;
     if (!before.scan && after !== before) fitViewToDoc(after);

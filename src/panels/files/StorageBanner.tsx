@@ -1,11 +1,11 @@
 // Banners about work kept in this browser: a restored session (keep it or start fresh) and a full storage quota.
 import { saveProjectFile } from '../../state/projectActions';
-import { startFresh } from '../../state/autosave';
+import { downloadKeptAside, startFresh } from '../../state/autosave';
 import { useAutosaveStatus } from '../../state/autosaveStatus';
 
 export function StorageBanner() {
-  const { restoredFrom, quotaFull, failure } = useAutosaveStatus();
-  if (!restoredFrom && !quotaFull && !failure) return null;
+  const { restoredFrom, quotaFull, failure, keptAside } = useAutosaveStatus();
+  if (!restoredFrom && !quotaFull && !failure && !keptAside) return null;
   return (
     <div className="storage-banners">
       {restoredFrom && (
@@ -20,6 +20,13 @@ export function StorageBanner() {
           <span>This browser has no room left to keep the project (storage quota full). Download the project file to keep your work safe.</span>
           <button type="button" className="primary" onClick={() => void saveProjectFile()}>Download project</button>
           <button type="button" onClick={() => useAutosaveStatus.setState({ quotaFull: false })}>Dismiss</button>
+        </div>
+      )}
+      {keptAside && (
+        <div className="storage-banner error" role="alert" data-testid="kept-aside-banner">
+          <span>{keptAside} Download it to keep it as a file.</span>
+          <button type="button" className="primary" data-testid="download-kept-aside" onClick={() => void downloadKeptAside()}>Download the kept copy</button>
+          <button type="button" onClick={() => useAutosaveStatus.setState({ keptAside: null })}>Dismiss</button>
         </div>
       )}
       {failure && (

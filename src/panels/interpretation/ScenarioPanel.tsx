@@ -7,6 +7,8 @@ import { scenarioCreate } from '../../core/model/commands/scenarioCreate';
 import { scenarioDelete } from '../../core/model/commands/scenarioDelete';
 import { scenarioDuplicate } from '../../core/model/commands/scenarioDuplicate';
 import { scenarioRename } from '../../core/model/commands/scenarioRename';
+import { nameLengthProblem } from '../../core/model/limits';
+import { useSessionStore } from '../../state/sessionStore';
 import { scenarioSwitch } from '../../core/model/commands/scenarioSwitch';
 import { AreaDepthGraph, type GraphSeriesSpec } from './AreaDepthGraph';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
@@ -37,7 +39,9 @@ export function ScenarioPanel() {
   }));
   const active = doc.activeScenarioId;
   const finishRename = () => {
-    if (renaming) apply((d) => scenarioRename(d, renaming.id, renaming.name));
+    const tooLong = renaming && nameLengthProblem(renaming.name.trim(), 'scenario name');
+    if (tooLong) useSessionStore.getState().showMessage('error', `The name was not changed: ${tooLong}.`);
+    else if (renaming) apply((d) => scenarioRename(d, renaming.id, renaming.name));
     setRenaming(null);
   };
   return (

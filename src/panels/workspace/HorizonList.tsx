@@ -10,6 +10,7 @@ import { horizonNameTaken } from '../../core/model/commands/horizonNameTaken';
 import { parallelRegionals } from '../../core/model/commands/parallelRegionals';
 import { proposeRegional } from '../../core/model/commands/proposeRegional';
 import { renameHorizon } from '../../core/model/commands/renameHorizon';
+import { nameLengthProblem } from '../../core/model/limits';
 import { reorderHorizons } from '../../core/model/commands/reorderHorizons';
 import { documentFit } from '../../core/model/commands/sectionFrame';
 import { setHorizonPoints } from '../../core/model/commands/setHorizonPoints';
@@ -36,6 +37,8 @@ function NameField({ h }: { h: DocHorizon }) {
     if (name === h.name) return;
     const show = useSessionStore.getState().showMessage;
     if (name === '') return show('error', `A horizon needs a name — kept “${h.name}”.`);
+    const tooLong = nameLengthProblem(name, 'horizon name');
+    if (tooLong) return show('error', `The name was not changed: ${tooLong} — kept “${h.name}”.`);
     if (horizonNameTaken(useDocStore.getState().doc, h.id, name)) {
       return show('error', `“${name}” is already the name of another horizon — kept “${h.name}”.`);
     }

@@ -1,3 +1,4 @@
+import { nameWithSuffix } from '../limits';
 import type { DocHorizon, ImagePx, ProjectDoc } from '../projectDoc';
 import { horizonNameTaken } from './horizonNameTaken';
 import { nextHorizonName } from './nextHorizonName';
@@ -17,8 +18,8 @@ function freeName(doc: ProjectDoc, id: string, name: string): string {
   const base = name.trim();
   if (!horizonNameTaken(doc, id, base)) return base;
   let k = 2;
-  while (horizonNameTaken(doc, id, `${base} (${k})`)) k++;
-  return `${base} (${k})`;
+  while (horizonNameTaken(doc, id, nameWithSuffix(base, ` (${k})`))) k++;
+  return nameWithSuffix(base, ` (${k})`);
 }
 
 /**

@@ -1,6 +1,7 @@
 // Adds horizons given in section units (from CSV, GeoJSON or SVG) to the document, which stores
 // image pixels: each vertex goes through the inverse of the calibration. Without a usable
 // calibration the document gets a true-scale stand-in canvas first (as for a section file).
+import { nameWithSuffix } from '../limits';
 import { fitCalibration } from '../../calibration/fitCalibration';
 import { sectionToImage } from '../../calibration/mapPoints';
 import { canvasCalibration } from '../migrations/canvasCalibration';
@@ -20,7 +21,7 @@ function convert(v: number, from: LengthUnit, to: LengthUnit): number {
 
 function uniqueName(name: string, taken: Set<string>): string {
   let candidate = name;
-  for (let k = 2; taken.has(candidate); k++) candidate = `${name} (${k})`;
+  for (let k = 2; taken.has(candidate); k++) candidate = nameWithSuffix(name, ` (${k})`);
   taken.add(candidate);
   return candidate;
 }

@@ -1,3 +1,4 @@
+import { nameWithSuffix } from '../limits';
 import type { ProjectDoc, Scenario } from '../projectDoc';
 import { scenarioNextId } from './scenarioNextId';
 import { scenarioUniqueName } from './scenarioUniqueName';
@@ -9,7 +10,7 @@ export function scenarioDuplicate(doc: ProjectDoc, sourceId: string, name?: stri
   const source = doc.scenarios[index];
   const id = scenarioNextId(doc);
   // A JSON deep copy: the document is plain JSON (DEVELOPERS.md §Code style), and the copy must share no arrays.
-  const copy: Scenario = { ...(JSON.parse(JSON.stringify(source)) as Scenario), id, name: scenarioUniqueName(doc, name ?? `${source.name} copy`) };
+  const copy: Scenario = { ...(JSON.parse(JSON.stringify(source)) as Scenario), id, name: scenarioUniqueName(doc, name ?? nameWithSuffix(source.name, ' copy')) };
   const scenarios = [...doc.scenarios.slice(0, index + 1), copy, ...doc.scenarios.slice(index + 1)];
   return { ...doc, scenarios, activeScenarioId: id };
 }

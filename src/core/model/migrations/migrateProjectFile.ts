@@ -1,7 +1,7 @@
 // Brings a parsed project file up to the current version, one step at a time (DEVELOPERS.md §File versions:
 // files carry a version; an unknown or newer version fails with a clear message).
 import { checkProjectDoc } from '../projectSchema';
-import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFile } from './projectFileFormat';
+import { formatFieldProblem, PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFile } from './projectFileFormat';
 import { v0ToV1 } from './v0ToV1';
 import { checkedText, contentCheck } from './contentCheck';
 
@@ -39,6 +39,7 @@ export function migrateProjectFile(raw: unknown): ProjectFileCheck {
 }
 
 function migrate(raw: unknown): ProjectFileCheck {
+  if (isObject(raw) && 'format' in raw && raw.format !== PROJECT_FORMAT) return { ok: false, message: formatFieldProblem(raw.format) };
   if (!isObject(raw) || raw.format !== PROJECT_FORMAT) {
     return { ok: false, message: `This is not a Foldroot project file (it has no "format": "${PROJECT_FORMAT}").` };
   }

@@ -20,3 +20,9 @@ export interface ProjectFile {
   doc: ProjectDoc;
   scan: EmbeddedScan | null;
 }
+
+/** Returns the message for a "format" field that is not PROJECT_FORMAT, naming the field and what it holds. */
+export function formatFieldProblem(format: unknown): string {
+  const got = typeof format === 'string' ? `"${format.slice(0, 60)}"` : (JSON.stringify(format) ?? 'undefined').slice(0, 60);
+  return `the "format" field is ${got}, not "${PROJECT_FORMAT}": fix that field (a project file has "format": "${PROJECT_FORMAT}"; a section file has no "format" field).`;
+}
