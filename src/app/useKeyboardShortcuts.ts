@@ -1,6 +1,6 @@
 // Keyboard shortcuts of the whole page; ignored while typing in a field.
 import { useEffect } from 'react';
-import { undoInTool } from '../canvas/toolDispatch';
+import { redoInTool, undoInTool } from '../canvas/toolDispatch';
 import { zoomByStep, zoomToFit } from '../panels/ScanControls';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
@@ -19,14 +19,15 @@ export function useKeyboardShortcuts(): void {
       const doc = useDocStore.getState();
       if (mod && e.key.toLowerCase() === 'z') {
         e.preventDefault();
-        if (e.shiftKey) doc.redo();
-        // While a line is being drawn by anchors, undo takes back its last stretch first.
-        else if (!undoInTool()) doc.undo();
+        // While a line is being drawn by anchors, undo takes back its last stretch and redo puts it back.
+        if (e.shiftKey) {
+          if (!redoInTool()) doc.redo();
+        } else if (!undoInTool()) doc.undo();
         return;
       }
       if (mod && e.key.toLowerCase() === 'y') {
         e.preventDefault();
-        doc.redo();
+        if (!redoInTool()) doc.redo();
         return;
       }
       if (mod) return;

@@ -149,6 +149,14 @@ export function undoInTool(): boolean {
   return true;
 }
 
+/** Redo while a line is being drawn by anchors puts back the stretch undo took; returns true when the active tool took it (even with nothing to put back, so the document does not change under the line). */
+export function redoInTool(): boolean {
+  const entry = toolEntry(toolId);
+  if (!entry.tracesLines || dragging || toolState.name === entry.tool.initial.name) return false;
+  dispatchToolEvent({ type: 'key', key: 'Redo' });
+  return true;
+}
+
 /** Returns true while the active tool is mid-gesture (a pointer held, or a line, pin pair or regional begun). */
 export function toolMidGesture(): boolean {
   return dragging || toolState.name !== toolEntry(toolId).tool.initial.name;

@@ -114,7 +114,7 @@ test('traces three horizons with four clicks each; the vertices sit on the drawn
   expect(rms(boundary, c)).toBeLessThan(1);
 });
 
-test('Alt-click places a straight stretch and Backspace takes back the last stretch', async ({ page }) => {
+test('Alt-click places a straight stretch; Backspace and Ctrl+Z take back the last stretch, while drawing and after', async ({ page }) => {
   page.on('dialog', (d) => void d.accept());
   await gotoStarted(page);
   await expect(page.getByTestId('busy')).toHaveCount(0);
@@ -135,11 +135,30 @@ test('Alt-click places a straight stretch and Backspace takes back the last stre
   await page.mouse.click(off.x, off.y);
   await page.keyboard.up('Alt');
   await page.keyboard.press('Backspace');
+  // Ctrl+Z then Ctrl+Y while drawing: the traced stretch is taken back and put back.
+  await page.keyboard.press('Control+z');
+  await page.keyboard.press('Control+y');
+  // One more straight stretch, kept this time, then finish.
+  const end = toScreen(cam, [1000, 160]);
+  await page.keyboard.down('Alt');
+  await page.mouse.click(end.x, end.y);
+  await page.keyboard.up('Alt');
   await page.keyboard.press('Enter');
   await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(1);
+  const [whole] = await savedHorizons(page);
+  expect(whole.pointsPx.at(-1)![0]).toBeCloseTo(1000, 6);
+  // After finishing, Ctrl+Z takes back the last stretch (the straight one) and keeps the traced one.
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(1);
   const [h] = await savedHorizons(page);
-  // The traced stretch is kept (many vertices, all on the line); the straight one is gone.
+  expect(h.pointsPx).toEqual(whole.pointsPx.slice(0, -1));
+  // The traced stretch is kept (many vertices, all on the line); the straight ones are gone.
   expect(h.pointsPx.length).toBeGreaterThan(8);
   expect(rms(inkA, h.pointsPx)).toBeLessThan(0.5);
   expect(h.pointsPx.reduce((m, p) => Math.max(m, p[0]), -Infinity)).toBeLessThan(710);
+  // One more undo removes the line; redo brings back its first stretch.
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(0);
+  await page.keyboard.press('Control+y');
+  await expect(page.getByTestId('horizon-list').locator('li')).toHaveCount(1);
 });

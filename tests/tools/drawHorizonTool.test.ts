@@ -5,7 +5,7 @@ import { ToolHarness } from './toolHarness';
 import { toolDoc } from './toolFixture';
 
 describe('drawHorizonTool', () => {
-  it('drawHorizonTool: clicks place vertices and a double-click finishes one horizon (one undo entry)', () => {
+  it('drawHorizonTool: clicks place vertices and a double-click finishes one horizon (one undo entry per stretch)', () => {
     const t = new ToolHarness(drawHorizonTool, toolDoc());
     t.click([10, 300]).click([200, 280]).click([400, 250]);
     expect(t.state).toMatchObject({ name: 'placing', points: [[10, 300], [200, 280], [400, 250]] });
@@ -16,7 +16,11 @@ describe('drawHorizonTool', () => {
     expect(t.doc.horizons).toHaveLength(2);
     expect(t.doc.horizons[1]).toMatchObject({ id: 'h2', name: 'Horizon 2', pointsPx: [[10, 300], [200, 280], [400, 250], [600, 300]] });
     expect(t.selected).toBe('h2');
-    expect(t.history).toHaveLength(1);
+    // Three stretches, three undo entries: before the line, with its first stretch, with two.
+    expect(t.history).toHaveLength(3);
+    expect(t.history[0].horizons).toHaveLength(1);
+    expect(t.history[1].horizons[1].pointsPx).toEqual([[10, 300], [200, 280]]);
+    expect(t.history[2].horizons[1].pointsPx).toEqual([[10, 300], [200, 280], [400, 250]]);
     expect(t.preview).toBeNull();
   });
 

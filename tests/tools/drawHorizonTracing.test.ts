@@ -35,7 +35,11 @@ describe('drawHorizonTool with a line tracer', () => {
     const h = t.doc.horizons[1];
     expect(h.pointsPx.length).toBeGreaterThan(30);
     expect(onTheLine(h.pointsPx)).toBe(true);
-    expect(t.history).toHaveLength(1);
+    // One undo entry per stretch: the entry after the first holds the line up to the second anchor.
+    expect(t.history).toHaveLength(2);
+    const firstStretch = t.history[1].horizons[1].pointsPx;
+    expect(firstStretch.at(-1)).toEqual(h.pointsPx[firstStretch.length - 1]);
+    expect(firstStretch.length).toBeLessThan(h.pointsPx.length);
   });
 
   it('waits for a stretch still computing when asked to finish, then adds the whole line', () => {
@@ -64,7 +68,7 @@ describe('drawHorizonTool with a line tracer', () => {
     expect(t.doc.horizons[1].pointsPx).toHaveLength(3);
     expect(onTheLine(t.doc.horizons[1].pointsPx)).toBe(true);
     expect(t.messages.at(-1)).toMatch(/straight/);
-    expect(t.history).toHaveLength(1);
+    expect(t.history).toHaveLength(2);
   });
 
   it('a click for the next line while finishing waits keeps this line and starts the next at the click', () => {

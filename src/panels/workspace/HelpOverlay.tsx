@@ -3,8 +3,8 @@ import { useToolSession } from '../../state/toolSessionStore';
 import { TOOLS } from '../../tools/toolRegistry';
 
 const GENERAL: [string, string][] = [
-  ['Ctrl/Cmd + Z', 'Undo (while drawing a line: remove its last stretch)'],
-  ['Shift + Ctrl/Cmd + Z, Ctrl/Cmd + Y', 'Redo'],
+  ['Ctrl/Cmd + Z', 'Undo (a drawn line steps back one stretch at a time, while drawing and after)'],
+  ['Shift + Ctrl/Cmd + Z, Ctrl/Cmd + Y', 'Redo (while drawing a line: put back the stretch undo took)'],
   ['Wheel', 'Zoom about the cursor'],
   ['+ / −', 'Zoom in / out'],
   ['F', 'Zoom to fit'],

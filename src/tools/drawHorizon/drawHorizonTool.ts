@@ -1,10 +1,12 @@
 // Draw a horizon by clicking anchors. While following the line (the default when a scan is shown) each
 // anchor snaps to the line centre and the stretch from the previous anchor follows the drawn line (live
 // preview to the pointer); Alt-click, or the hint's toggle, places a straight stretch. Double-click or
-// Enter finishes, Backspace (or undo) removes the last stretch, Esc cancels (after Enter it finishes with what is
-// traced). Nothing reaches the document
-// until the line is finished (one undo entry).
+// Enter finishes, Backspace (or undo) removes the last stretch and redo puts it back, Esc cancels (after Enter it
+// finishes with what is traced). Nothing reaches the document until the line is finished; then it arrives as one
+// undo entry per stretch (the first adds the horizon with its first stretch, each next one extends it), so undo
+// after finishing steps back stretch by stretch, exactly as it did while drawing, and redo forward again.
 import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
+import { setHorizonPoints } from '../../core/model/commands/setHorizonPoints';
 import type { ImagePx, ProjectDoc } from '../../core/model/projectDoc';
 import { paletteColour } from '../horizonPalette';
 import type { Tool, ToolCommand, ToolContext, ToolResult } from '../toolTypes';
@@ -23,6 +25,8 @@ export type DrawHorizonState =
     hoverPath: ImagePx[] | null;
     /** Finish asked while a stretch was still computing: finish when it is ready. */
     finishing: boolean;
+    /** Stretches taken back by undo or Backspace, last taken first, for redo; emptied by a new anchor. */
+    undone?: { anchor: ImagePx; stretch: Stretch }[];
   };
 
 type Placing = Extract<DrawHorizonState, { name: 'placing' }>;
@@ -52,19 +56,28 @@ function show(s: Placing, ctx: ToolContext, extra: ToolCommand[] = []): ToolResu
   return { next: p.state, commands: [p.command, ...extra] };
 }
 
-function finish(points: ImagePx[], doc: ProjectDoc): ToolResult<DrawHorizonState> {
-  if (points.length < 2) {
+/** Returns the vertices of the line's first k stretches. */
+const firstStretches = (line: TracedLine, k: number): ImagePx[] => lineVertices({ anchors: line.anchors.slice(0, k + 1), stretches: line.stretches.slice(0, k) });
+
+/** Adds the line to the document, one edit (one undo entry) per stretch. */
+function finish(line: TracedLine, doc: ProjectDoc): ToolResult<DrawHorizonState> {
+  if (line.anchors.length < 2) {
     return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'message', kind: 'info', text: 'A horizon needs at least two vertices.' }] };
   }
   const id = nextHorizonId(doc);
   // Named by addHorizon from the document it is added to: the next "Horizon N" that no horizon has.
-  const horizon = { id, colour: paletteColour(doc.horizons.length), pointsPx: points };
-  return { next: idle, commands: [{ type: 'preview', preview: null }, { type: 'edit', edit: (d) => addHorizon(d, horizon) }, { type: 'select', horizonId: id }] };
+  const horizon = { id, colour: paletteColour(doc.horizons.length), pointsPx: firstStretches(line, 1) };
+  const edits: ToolCommand[] = [{ type: 'edit', edit: (d) => addHorizon(d, horizon) }];
+  for (let k = 2; k <= line.stretches.length; k++) {
+    const points = firstStretches(line, k);
+    edits.push({ type: 'edit', edit: (d) => setHorizonPoints(d, id, points) });
+  }
+  return { next: idle, commands: [{ type: 'preview', preview: null }, ...edits, { type: 'select', horizonId: id }] };
 }
 
 /** Finishes at once: stretches still tracing are taken straight between their anchors, and the user is told. */
 function finishNow(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
-  const done = finish(lineVertices(resolveStretches(lineOf(s), ctx)), ctx.doc);
+  const done = finish(resolveStretches(lineOf(s), ctx), ctx.doc);
   const note: ToolCommand = { type: 'message', kind: 'info', text: 'Horizon finished: stretches still tracing were drawn straight between their clicks.' };
   return { ...done, commands: [...(done.commands ?? []), note] };
 }
@@ -73,7 +86,7 @@ function finishNow(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
 function finishWhenReady(s: Placing, ctx: ToolContext): ToolResult<DrawHorizonState> {
   const line = resolveStretches(lineOf(s), ctx);
   if (!computing(line)) {
-    const done = finish(lineVertices(line), ctx.doc);
+    const done = finish(line, ctx.doc);
     // Take down the note shown while waiting.
     return s.finishing ? { ...done, commands: [...(done.commands ?? []), { type: 'clearMessage' }] } : done;
   }
@@ -107,7 +120,7 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
         if (e.clicks >= 2) return finishWhenReady(s, ctx);
         const line = addAnchor(resolveStretches(lineOf(s), ctx), e.p, ctx, e.alt);
         if (!line) return {};
-        return show({ ...withLine(s, line), hover: null, hoverPath: null }, ctx);
+        return show({ ...withLine(s, line), hover: null, hoverPath: null, undone: [] }, ctx);
       },
       pointerMove: (s, e, ctx) => show({ ...withLine(s, resolveStretches(lineOf(s), ctx)), hover: e.p, hoverAlt: e.alt ?? false }, ctx),
       traced: (s, _e, ctx) => {
@@ -117,9 +130,18 @@ export const drawHorizonTool: Tool<DrawHorizonState> = {
       key: (s, e, ctx) => {
         if (e.key === 'Enter') return finishWhenReady(s, ctx);
         if (e.key === 'Backspace' || e.key === 'Delete' || e.key === 'Undo') {
-          const line = removeLastStretch(lineOf(s));
+          const full = lineOf(s);
+          const line = removeLastStretch(full);
           if (!line) return { next: idle, commands: [{ type: 'preview', preview: null }] };
-          return show({ ...withLine(s, line), hoverPath: null, finishing: false }, ctx);
+          const taken = { anchor: full.anchors[full.anchors.length - 1], stretch: full.stretches[full.stretches.length - 1] };
+          return show({ ...withLine(s, line), hoverPath: null, finishing: false, undone: [...(s.undone ?? []), taken] }, ctx);
+        }
+        if (e.key === 'Redo') {
+          const undone = s.undone ?? [];
+          const back = undone[undone.length - 1];
+          if (!back) return {};
+          const line = { anchors: [...s.points, back.anchor], stretches: [...s.stretches, back.stretch] };
+          return show({ ...withLine(s, line), hoverPath: null, undone: undone.slice(0, -1) }, ctx);
         }
         return {};
       },
