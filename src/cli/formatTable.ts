@@ -2,8 +2,9 @@ import type { AreaDepthResult, SectionAnalysis } from '../core/analysis/analyseS
 import { terminalText } from './terminalText';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { isExactFit } from '../core/analysis/isExactFit';
-import { EXACT_FIT_TEXT, formatChamberlin, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
+import { EXACT_FIT_TEXT, formatArea, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
 import { maxOf } from '../core/stats/minMax';
+import { columnHeader, columnsOf, screenCell, tableAreaUnit } from '../format/horizonColumns';
 
 // The terminal writes numbers by the one rule of src/format (as the screen, the figure and the report do).
 
@@ -16,14 +17,13 @@ function fiellerRange(d: AreaDepthResult, u: string): string {
   return d.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded' : range(d.detachmentDepthCI95, d, u);
 }
 
-/** The analysis as a plain-text table for a terminal (section units, areas in units²); `source`, when given, is its first line (project and scenario). */
+/** The analysis as a plain-text table for a terminal (columns of src/format/horizonColumns.ts; section units, one area unit for the table); `source`, when given, is its first line (project and scenario). */
 export function formatTable(a: SectionAnalysis, source: string | null = null): string {
   const u = a.units;
-  const head = ['Horizon', 'Fit', `Excess area (${u}²)`, `Bed length (${u})`, `Regional length (${u})`, `Regional elev. (${u})`, `Depth (${u})`, `Chamberlin (${u})`, 'LPS strain (%)'];
-  const rows = a.horizons.map((h) => [
-    terminalText(h.name), h.included ? 'yes' : 'no', num(h.excessArea), num(h.bedLength), num(h.regionalLength),
-    num(h.regionalElevation), num(h.depth), formatChamberlin(h), h.lpsStrain === null ? '—' : num(100 * h.lpsStrain),
-  ]);
+  const area = tableAreaUnit(a);
+  const cols = columnsOf('terminal');
+  const head = cols.map((c) => columnHeader(c, u, area));
+  const rows = a.horizons.map((h) => cols.map((c) => terminalText(screenCell(c, h, area))));
   const widths = head.map((t, c) => maxOf(rows.map((r) => r[c].length), t.length));
   const line = (r: string[]) => r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   const out = [
@@ -37,7 +37,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
   ];
   const d = a.areaDepth;
   if (d) {
-    out.push(`Area–depth line over ${d.n} horizons: A = ${num(d.intercept)} ${u}² + (${num(d.slope)} ${u}) × depth, r² = ${formatR2(d.r2, isExactFit(d))}`);
+    out.push(`Area–depth line over ${d.n} horizons: A = ${formatArea(d.intercept, u, area)} + (${num(d.slope)} ${u}) × depth, r² = ${formatR2(d.r2, isExactFit(d))}`);
     // D = −slope is a displacement only when the line reaches zero below the horizons (docs/method.md
     // §Area-depth line): D > 0 shortening, D < 0 extension; the JSON keeps the number either way.
     out.push(d.noDetachment

@@ -10,6 +10,7 @@ import type { Section } from '../core/model/section';
 import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
 import { toCsv } from './csvText';
+import { columnsOf, csvHeader, dataCell } from '../format/horizonColumns';
 import type { UncertaintyReport } from './uncertaintyReport';
 
 /** Returns every horizon of the document in section units (empty when the document has no usable calibration). */
@@ -57,11 +58,10 @@ export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: 
   const u = a.units;
   const rows: (string | number | boolean | null)[][] = [
     ['# project', doc.title], ['# scenario', activeScenario(doc).name], ['# units', u],
-    ['horizon', 'included', `excess_area_${u}2`, `bed_length_${u}`, `regional_length_${u}`, `regional_elevation_${u}`, `depth_${u}`, `chamberlin_depth_${u}`, 'layer_parallel_strain', 'projected_area_share', `residual_${u}2`],
+    columnsOf('csv').map((c) => csvHeader(c, u)),
+    // A single number goes in as a number (csvField guards text that starts like a formula, not numbers).
+    ...a.horizons.map((h) => columnsOf('csv').map((c) => { const v = dataCell(c, h); return v !== '' && c.kind === 'horizon' && c.unit !== 'text' && c.unit !== 'yes-no' ? Number(v) : v; })),
   ];
-  for (const h of a.horizons) {
-    rows.push([h.name, h.included, r(h.excessArea), r(h.bedLength), r(h.regionalLength), r(h.regionalElevation), r(h.depth), r(h.chamberlinDepth), r(h.lpsStrain), r(h.projectedAreaShare), r(h.residual)]);
-  }
   const ad = a.areaDepth;
   rows.push([]);
   rows.push(['quantity', 'value', 'low_95', 'high_95']);

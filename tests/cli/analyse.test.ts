@@ -35,7 +35,7 @@ describe('analyse FILE --json', () => {
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
     expect(Object.keys(j)).toEqual(['pinWidth', 'referenceElevation', 'horizons', 'areaDepth', 'regime', 'notes']);
-    expect(Object.keys(j.horizons[0])).toEqual(['name', 'excessArea', 'bedLength', 'regionalLength', 'regionalElevation', 'depth', 'chamberlinDepth', 'lpsStrain', 'included', 'pieces', 'cutoffs']);
+    expect(Object.keys(j.horizons[0])).toEqual(['name', 'included', 'excessArea', 'regionalElevation', 'depth', 'chamberlinDepth', 'lpsStrain', 'pieces', 'bedLength', 'regionalLength', 'projectedAreaShare', 'residual', 'cutoffs']);
     expect(j.regime).toBe('shortening');
     expect(j.horizons[0].pieces).toBe(1);
     expect(j.horizons[0].cutoffs).toEqual([]);
@@ -174,7 +174,9 @@ describe('analyse FILE (table)', () => {
   it('prints a readable table with the horizons and the detachment', () => {
     const r = analyse(join(fixtures, 'method-example.json'));
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/^H1\s+yes\s+2500000/m);
+    // Areas in one unit for the table: 2.5 km² for H1 (src/format/formatQuantity.ts areaUnit).
+    expect(r.stdout).toMatch(/^Horizon\s+In fit\s+Excess area \(km²\)/m);
+    expect(r.stdout).toMatch(/^H1\s+yes\s+2\.5\s/m);
     expect(r.stdout).toContain('Detachment depth 3000 m below the reference');
   }, T);
 });

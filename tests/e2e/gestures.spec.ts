@@ -96,7 +96,7 @@ test('beside the Chamberlin column and in the report: bed length was not conserv
   await gotoStarted(page);
   const note = page.getByTestId('chamberlin-note');
   await expect(note).toContainText('Chamberlin’s depth assumes bed length is conserved');
-  await expect(page.getByTestId('strain-sign')).toHaveText('− = shortened');
+  await expect(page.getByTestId('note-lpsStrain')).toHaveText('− = shortened');
   await expect(note).toContainText('negative = shortened along the layer');
   await page.getByTestId('open-report').click();
   await expect(page.getByTestId('report-chamberlin-note')).toContainText('assumes bed length is conserved');

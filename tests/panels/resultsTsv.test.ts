@@ -18,10 +18,10 @@ describe('resultsTsv(analysis, scenarioName)', () => {
 
   it('has one row per horizon with the same number of cells as the header', () => {
     const header = rows.findIndex((r) => r[0] === 'Horizon');
-    expect(rows[header]).toHaveLength(11);
+    expect(rows[header]).toHaveLength(16);
     const body = rows.slice(header + 1, header + 5);
     expect(body.map((r) => r[0])).toEqual(['H1', 'H2', 'H3', 'H4']);
-    for (const r of body) expect(r).toHaveLength(11);
+    for (const r of body) expect(r).toHaveLength(16);
     expect(body.map((r) => Number(r[2]))).toEqual([2.5e6, 2e6, 1.5e6, 1e6]);
     expect(body.map((r) => Number(r[4]))).toEqual([500, 1000, 1500, 2000]);
   });

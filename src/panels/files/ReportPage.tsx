@@ -5,7 +5,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { currentFigureSvg } from '../../state/currentFigureSvg';
-import { areaUnit, formatAreaNumber, formatChamberlin, formatInterval, formatNumber, formatPercent, formatR2, largestMagnitude } from '../../format/formatQuantity';
+import { formatInterval, formatNumber, formatR2 } from '../../format/formatQuantity';
 import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
 import { useDocStore } from '../../state/docStore';
@@ -15,6 +15,8 @@ import { activeScenario } from '../../core/model/docToSection';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { uncertaintyReport } from '../../io/uncertaintyReport';
 import { reportScenarioRows } from './reportScenarioRows';
+import { ReportHorizonTable } from './ReportHorizonTable';
+import { tableAreaUnit } from '../../format/horizonColumns';
 
 function useSvgUrl(svg: string | null): string | null {
   const url = useMemo(() => (svg ? URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' })) : null), [svg]);
@@ -52,7 +54,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
     ? `${formatNumber(result.referenceElevation)} ${u} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional, by default'})`
     : '—';
   const range = (p: [number, number] | null, exact: boolean) => (exact ? EXACT_FIT_TEXT : p ? formatInterval(p, u) : '—');
-  const area = areaUnit(u, largestMagnitude((result?.horizons ?? []).map((h) => h.excessArea)));
+  const area = result ? tableAreaUnit(result) : null;
   return createPortal(
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">
@@ -76,20 +78,9 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
           Chamberlin depth of each horizon divides its excess area by its bed-length shortening (Chamberlin 1910), and the layer-parallel strain compares
           the bed length with the original length implied by the displacement (Groshong 2006).
         </p>
-        <h2>Results ({u}, {area.label})</h2>
+        <h2>Results ({u}{area ? `, ${area.label}` : ''})</h2>
         {result ? (
-          <table className="files-table" data-testid="report-table">
-            <thead><tr><th>Horizon</th><th>In fit</th><th>Excess area ({area.label})</th><th>Depth</th><th>Bed length</th><th>Regional length</th><th>Chamberlin depth</th><th>Layer-parallel strain (negative = shortened along the layer)</th></tr></thead>
-            <tbody>
-              {result.horizons.map((h, i) => (
-                <tr key={i}>
-                  <td>{h.name}</td><td>{h.included ? 'yes' : 'no'}</td><td>{formatAreaNumber(h.excessArea, area)}</td><td>{formatNumber(h.depth)}</td>
-                  <td>{formatNumber(h.bedLength)}</td><td>{formatNumber(h.regionalLength)}</td><td>{formatChamberlin(h)}</td>
-                  <td>{formatPercent(h.lpsStrain)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <ReportHorizonTable analysis={result} />
         ) : (
           <p data-testid="report-no-results">No results yet: {analysis.docSection.ok ? 'the section has input problems or fewer than two horizons with regionals.' : analysis.docSection.message}</p>
         )}

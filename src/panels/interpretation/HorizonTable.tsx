@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { useSessionStore } from '../../state/sessionStore';
-import { areaUnit, formatAreaNumber, formatChamberlin, formatNumber, largestMagnitude } from '../../format/formatQuantity';
+import { columnHeader, columnsOf, HORIZON_COLUMNS, screenCell, tableAreaUnit } from '../../format/horizonColumns';
 import { resultsTsv } from './resultsTsv';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { summaryRows } from './summaryRows';
@@ -14,13 +14,15 @@ interface Props {
   flagged: Set<string>;
   scenarioName: string;
   onToggle: (horizonId: string, included: boolean) => void;
+  /** Whether "All columns" starts ticked. */
+  initialAll?: boolean;
 }
 
-export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle }: Props) {
-  const [all, setAll] = useState(false);
+export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle, initialAll = false }: Props) {
+  const [all, setAll] = useState(initialAll);
   const u = analysis.units;
   const note = chamberlinNote(analysis);
-  const unit = areaUnit(u, largestMagnitude(analysis.horizons.map((h) => h.excessArea)));
+  const unit = tableAreaUnit(analysis);
   const copy = () => {
     const text = resultsTsv(analysis, scenarioName);
     const { showMessage } = useSessionStore.getState();
@@ -33,52 +35,36 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
       () => showMessage('error', 'Could not copy to the clipboard: the browser refused. Allow clipboard access and try again.'),
     );
   };
+  // The hover text of a row: its name, and the expanded columns the table hides until "All columns".
   const rowTitle = (h: SectionAnalysis['horizons'][number]) => [
     `${h.name}${h.included ? '' : ' (left out of the fit)'}`,
-    `bed length ${formatNumber(h.bedLength)} ${u}, regional length ${formatNumber(h.regionalLength)} ${u}`,
-    `projected share ${formatNumber(100 * h.projectedAreaShare)} %, off the line ${formatAreaNumber(h.residual, unit)} ${unit.label}`,
+    ...HORIZON_COLUMNS.filter((c) => c.expanded && c.tables.includes('pane')).map((c) => `${columnHeader(c, u, unit)}: ${screenCell(c, h, unit)}`),
   ].join('\n');
+  const columns = columnsOf('pane', all);
   return (
     <div>
       <div className="table-box" data-testid="horizon-table-box">
         <table className={`results-table horizons${all ? ' all' : ''}`} data-testid="horizon-table">
           <thead>
             <tr>
-              <th className="name-col" title="Tick to include the horizon in the area–depth fit">Horizon (in fit)</th>
-              <th>Excess area ({unit.label})</th>
-              <th>Regional elev. ({u})</th>
-              <th title={`Depth of the regional below the reference, ${formatNumber(analysis.referenceElevation)} ${u}`}>Depth ({u})</th>
-              <th>Chamberlin depth ({u})</th>
-              <th title={`Layer-parallel strain e = L / (W + D) − 1; ${STRAIN_SIGN_TEXT}`}>Layer strain (%)<span className="th-note" data-testid="strain-sign">− = shortened</span></th>
-              {all && <>
-                <th>Bed length ({u})</th>
-                <th>Regional length ({u})</th>
-                <th>Projected share (%)</th>
-                <th>Off line ({unit.label})</th>
-              </>}
+              {columns.map((c) => c.key === 'name'
+                ? <th key={c.key} className="name-col" title="Tick to include the horizon in the area–depth fit">Horizon (in fit)</th>
+                : <th key={c.key} title={c.title ?? columnHeader(c, u, unit)}>{columnHeader(c, u, unit, true)}{c.note && <span className="th-note" data-testid={`note-${c.key}`}>{c.note.short}</span>}</th>)}
             </tr>
           </thead>
           <tbody>
             {analysis.horizons.map((h, i) => (
               <tr key={horizonIds[i] ?? i} className={`${h.included ? '' : 'excluded'} ${flagged.has(horizonIds[i]) ? 'flagged' : ''}`} title={rowTitle(h)}>
-                <td className="name-col">
-                  <label>
-                    <input type="checkbox" checked={h.included} aria-label={`Include ${h.name} in the fit`} data-testid={`include-${i}`}
-                      onChange={(e) => onToggle(horizonIds[i], e.target.checked)} />
-                    <span className="name-text">{h.name}</span>
-                  </label>
-                </td>
-                <td>{formatAreaNumber(h.excessArea, unit)}</td>
-                <td>{formatNumber(h.regionalElevation)}</td>
-                <td>{formatNumber(h.depth)}</td>
-                <td title={h.chamberlinReason ?? undefined}>{formatChamberlin(h)}</td>
-                <td>{formatNumber(h.lpsStrain === null ? null : 100 * h.lpsStrain)}</td>
-                {all && <>
-                  <td>{formatNumber(h.bedLength)}</td>
-                  <td>{formatNumber(h.regionalLength)}</td>
-                  <td>{formatNumber(100 * h.projectedAreaShare)}</td>
-                  <td>{formatAreaNumber(h.residual, unit)}</td>
-                </>}
+                {columns.map((c) => c.key === 'name'
+                  ? (
+                    <td key={c.key} className="name-col">
+                      <label>
+                        <input type="checkbox" checked={h.included} aria-label={`Include ${h.name} in the fit`} data-testid={`include-${i}`}
+                          onChange={(e) => onToggle(horizonIds[i], e.target.checked)} />
+                        <span className="name-text">{h.name}</span>
+                      </label>
+                    </td>)
+                  : <td key={c.key} title={c.key === 'chamberlinDepth' ? h.chamberlinReason ?? undefined : undefined}>{screenCell(c, h, unit)}</td>)}
               </tr>
             ))}
           </tbody>
@@ -86,7 +72,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
       </div>
       {note && <p className={`chamberlin-note${note.large ? ' large' : ''}`} data-testid="chamberlin-note">{note.text} Layer strain: {STRAIN_SIGN_TEXT}.</p>}
       <label className="check table-more"><input type="checkbox" checked={all} onChange={(e) => setAll(e.target.checked)} data-testid="horizon-table-all" />
-        All columns (bed and regional length, projected share, distance off the line); hover a row for them</label>
+        All columns (pieces, bed and regional length, projected share, distance off the line, and per cutoff pair its fault, slip, heave and throw); hover a row for them</label>
       <table className="summary-table" data-testid="summary-table">
         <tbody>
           {summaryRows(analysis).map((r) => (

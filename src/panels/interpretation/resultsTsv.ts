@@ -2,10 +2,12 @@ import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { plainNumber } from '../../format/formatQuantity';
 import { summaryRows } from './summaryRows';
+import { columnHeader, columnsOf, dataCell } from '../../format/horizonColumns';
 
 // The results table as tab-separated text for the clipboard (spreadsheets paste it into cells), so its
 // numbers are plain, as in the data files (src/format plainNumber): ASCII minus, no unit in the cell.
-// Areas in the section unit squared, lengths in the section unit; the caution travels with it (DEVELOPERS.md §Project rules).
+// Columns from src/format/horizonColumns.ts: areas in the section unit squared, lengths in the section unit,
+// shares as fractions; the caution travels with it (DEVELOPERS.md §Project rules).
 
 function clean(text: string): string {
   return text.replace(/[\t\r\n]+/g, ' ');
@@ -18,13 +20,8 @@ export function resultsTsv(a: SectionAnalysis, scenarioName: string): string {
   const lines: string[][] = [
     ['Scenario', clean(scenarioName)],
     [],
-    ['Horizon', 'Included', `Excess area (${u}²)`, `Regional elevation (${u})`, `Depth (${u})`, `Bed length (${u})`, `Regional length (${u})`,
-      `Chamberlin depth (${u})`, 'Layer-parallel strain (%)', 'Projected share (%)', `Residual (${u}²)`],
-    ...a.horizons.map((h) => [
-      clean(h.name), h.included ? 'yes' : 'no', plainNumber(h.excessArea), plainNumber(h.regionalElevation), plainNumber(h.depth),
-      plainNumber(h.bedLength), plainNumber(h.regionalLength), plainNumber(h.chamberlinDepth),
-      pct(h.lpsStrain), pct(h.projectedAreaShare), plainNumber(h.residual),
-    ]),
+    columnsOf('clipboard').map((c) => columnHeader(c, u, null)),
+    ...a.horizons.map((h) => columnsOf('clipboard').map((c) => clean(dataCell(c, h)))),
     [],
     ['Summary', 'Value', 'Unit', 'Low 95%', 'High 95%', 'Note'],
     ...summaryRows(a).map((r) => [r.label, r.unit === '%' ? pct(r.value) : plainNumber(r.value), r.unit, plainNumber(r.low), plainNumber(r.high), r.low === null ? r.interval : '']),
