@@ -4,13 +4,13 @@ import demoSection from '../../public/demo/section.json';
 import demoCalibration from '../../public/demo/calibration.json';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { sectionToImage } from '../core/calibration/mapPoints';
+import { paletteColour } from '../core/model/horizonPalette';
+import { freshHorizonIds } from '../core/model/commands/addHorizon';
 import { emptyProjectDoc, type ControlPoint, type ProjectDoc } from '../core/model/projectDoc';
 import type { Section, XZ } from '../core/model/section';
 import { useDocStore } from './docStore';
 import { putScan } from './scanCache';
 import { useSessionStore } from './sessionStore';
-
-const DEMO_COLOURS = ['#b5522b', '#2f6f4f', '#2b5f8a', '#7a3f8f', '#4d5d2a', '#8a3030', '#1f6f8b', '#8a6d1f'];
 
 /** Returns the demo as a project document, given the scan's id and size. */
 export function demoDoc(scanId: string, widthPx: number, heightPx: number): ProjectDoc {
@@ -21,10 +21,11 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number): Proj
   const toPx = (q: XZ) => sectionToImage(cal.fit, q);
   const base = emptyProjectDoc();
   const zMid = section.horizons.reduce((s, h) => s + h.regional[0][1], 0) / section.horizons.length;
+  const ids = freshHorizonIds(base, section.horizons.length);
   const horizons = section.horizons.map((h, i) => ({
-    id: `h${i + 1}`,
+    id: ids[i],
     name: h.name,
-    colour: DEMO_COLOURS[i % DEMO_COLOURS.length],
+    colour: paletteColour(i),
     visible: true,
     locked: false,
     pointsPx: (h.line ?? []).map(toPx),
@@ -32,7 +33,7 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number): Proj
   }));
   const regionals: Record<string, [number, number][]> = {};
   section.horizons.forEach((h, i) => {
-    regionals[`h${i + 1}`] = h.regional.map(toPx);
+    regionals[ids[i]] = h.regional.map(toPx);
   });
   return {
     ...base,
@@ -48,7 +49,7 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number): Proj
         name: 'Base case',
         pinsPx: [toPx([section.pins[0], zMid]), toPx([section.pins[1], zMid])],
         regionals,
-        excluded: section.horizons.flatMap((h, i) => (h.include === false ? [`h${i + 1}`] : [])),
+        excluded: section.horizons.flatMap((h, i) => (h.include === false ? [ids[i]] : [])),
       },
     ],
     activeScenarioId: 'scenario-1',

@@ -9,6 +9,7 @@ import { freshProject, gotoStarted } from './startup';
 import { clickAt, fittedScan, screen, type Cam } from './fittedScan';
 import { gradientPng } from './pngFixture';
 import { viewPixel } from './canvasPixels';
+import { paletteColour } from '../../src/core/model/horizonPalette';
 
 const W = 1000;
 const H = 500;
@@ -310,8 +311,9 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
   // display rule drops trailing zeros, so 3.9996 … 4.0004 km² read "4"; 3.999 or 4.001 would show).
   await expect(page.getByTestId('horizon-table').locator('tbody tr').first().locator('td').nth(1)).toHaveText('4');
   const box = (await page.getByTestId('section-view').boundingBox())!;
-  // Drawn: the line's red (#c0392b, the first horizon colour) crosses the view at a quarter, half and three quarters.
-  const red: [number, number, number] = [192, 57, 43];
+  // Drawn: the line's red (#d1495b, the palette's first colour) crosses the view at a quarter, half and three quarters.
+  expect(paletteColour(0)).toBe('#d1495b');
+  const red: [number, number, number] = [209, 73, 91];
   for (const f of [0.25, 0.5, 0.75]) await expect.poll(async () => (await rowsOfColour(page, box.width * f, red)).length).toBeGreaterThan(0);
   // At screen resolution: no more than four vertices per pixel column for the line, again for the white outline
   // drawn under it, and again for its fill (min/max decimation) over the view and a view's width each side,
@@ -345,7 +347,7 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
 
   // Editing: with thousands of vertices in view their handles would merge into a band, so the view asks the
   // user to zoom in instead; zoomed in far enough, the handles of the vertices in view are drawn.
-  const handleShapes = `(() => window.Konva.stages[0].find('Shape').filter((s) => s.getClassName() === 'Shape' && s.fill() === '#ffffff' && s.stroke() === '#c0392b').length)()`;
+  const handleShapes = `(() => window.Konva.stages[0].find('Shape').filter((s) => s.getClassName() === 'Shape' && s.fill() === '#ffffff' && s.stroke() === '${paletteColour(0)}').length)()`;
   const zoomNote = () => page.evaluate(`(() => window.Konva.stages[0].find('Text').map((t) => t.text()).filter((t) => t.includes('zoom in to see')).join())()`);
   await page.getByTestId('tool-edit').click();
   await expect.poll(zoomNote).toMatch(/^[\d,]+ vertices of “Long line” in view: zoom in to see/);

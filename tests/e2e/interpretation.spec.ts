@@ -13,6 +13,7 @@ import { monteCarlo } from '../../src/core/analysis/monteCarlo';
 import { fitCalibration } from '../../src/core/calibration/fitCalibration';
 import { sectionToImage } from '../../src/core/calibration/mapPoints';
 import { interpolateZAt } from '../../src/core/geometry/interpolateZAt';
+import { paletteColour } from '../../src/core/model/horizonPalette';
 import { docToSection } from '../../src/core/model/docToSection';
 import type { ControlPoint, ProjectDoc } from '../../src/core/model/projectDoc';
 import type { Section } from '../../src/core/model/section';
@@ -74,8 +75,8 @@ test('the pane shows the engine’s detachment for the demo, with an interval th
   // section draws it dashed (with its halo), and the pane says how much of that horizon's area is projected.
   const projectedHorizons = demo.horizons.filter((h) => (h.projected ?? []).length > 0);
   expect(projectedHorizons.map((h) => h.name)).toEqual([demo.horizons[0].name]);
-  // The demo draws its first horizon in #b5522b (state/openDemo.ts); the detachment is dashed in another colour.
-  const dashed = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.stroke() === '#b5522b' && (l.dash() ?? []).length > 0).length)()`);
+  // The demo draws its first horizon in the palette's first colour (state/openDemo.ts); the detachment is dashed in another colour.
+  const dashed = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.stroke() === '${paletteColour(0)}' && (l.dash() ?? []).length > 0).length)()`);
   await expect.poll(dashed).toBeGreaterThanOrEqual(1);
   await expect(page.getByTestId('diagnostics')).toContainText(`Horizon "${demo.horizons[0].name}"`);
   await expect(page.getByTestId('diagnostics')).toContainText('are projected (interpreted)');

@@ -20,7 +20,7 @@ import { activeScenario } from '../../core/model/docToSection';
 import type { DocHorizon } from '../../core/model/projectDoc';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
-import { HORIZON_PALETTE, paletteColour } from '../../tools/horizonPalette';
+import { HORIZON_PALETTE, paletteColour } from '../../core/model/horizonPalette';
 import { parseXZTable } from './parseXZTable';
 import { RegionalFields } from './RegionalFields';
 

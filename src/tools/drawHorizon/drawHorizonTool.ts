@@ -8,7 +8,7 @@
 import { addHorizon, nextHorizonId } from '../../core/model/commands/addHorizon';
 import { setHorizonPoints } from '../../core/model/commands/setHorizonPoints';
 import type { ImagePx, ProjectDoc } from '../../core/model/projectDoc';
-import { paletteColour } from '../horizonPalette';
+import { paletteColour } from '../../core/model/horizonPalette';
 import type { Tool, ToolCommand, ToolContext, ToolResult } from '../toolTypes';
 import { addAnchor, computing, hoverStretch, lineVertices, removeLastStretch, resolveStretches, startLine, type Stretch, type TracedLine } from '../tracedLine';
 

@@ -10,6 +10,7 @@ import { selectAnalysis } from '../../../src/state/selectors';
 import type { ImagePx, ProjectDoc } from '../../../src/core/model/projectDoc';
 import type { XZ } from '../../../src/core/model/section';
 import { sampleDoc, SAMPLE_SECTION } from './sampleDoc';
+import { paletteColour } from '../../../src/core/model/horizonPalette';
 
 /** Section (x, z) → image pixel of a scan drawn rotated by `deg` at 0.8 px per unit across and 1.6 px per unit up (VE 2 on the scan). */
 function scanOf(deg: number): (q: XZ) => ImagePx {
@@ -88,7 +89,7 @@ describe('the section figure of a rotated scan', () => {
         expect(ax.z(fy)).toBeCloseTo(p.z, 0);
       }
       // Every vertex of the upper horizon reads back its section coordinate off the axes.
-      const upper = /<polyline points="([^"]+)" fill="none" stroke="#c0392b" stroke-width="2.5"/.exec(svg)![1].split(' ').map((s) => s.split(',').map(Number));
+      const upper = new RegExp(`<polyline points="([^"]+)" fill="none" stroke="${paletteColour(0)}" stroke-width="2.5"`).exec(svg)![1].split(' ').map((s) => s.split(',').map(Number));
       upper.forEach(([fx, fy], i) => {
         expect(ax.x(fx)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line![i][0], 0);
         expect(ax.z(fy)).toBeCloseTo(SAMPLE_SECTION.horizons[0].line![i][1], 0);

@@ -3,14 +3,25 @@ import type { DocHorizon, ImagePx, ProjectDoc } from '../projectDoc';
 import { horizonNameTaken } from './horizonNameTaken';
 import { nextHorizonName } from './nextHorizonName';
 
-/** Returns the next free horizon id ("h1", "h2", …), from the highest numbered id in the document. */
-export function nextHorizonId(doc: ProjectDoc): string {
+/**
+ * Returns `count` new horizon ids ("h1", "h2", …) after the highest numbered one in the document: the one id
+ * rule for drawn, imported and opened horizons. Ids of other forms that older documents hold ("horizon-2")
+ * are kept as they are and never clash with these.
+ */
+export function freshHorizonIds(doc: ProjectDoc, count: number): string[] {
   let max = 0;
   for (const h of doc.horizons) {
     const m = /^h(\d+)$/.exec(h.id);
     if (m) max = Math.max(max, Number(m[1]));
   }
-  return `h${max + 1}`;
+  const ids: string[] = [];
+  for (let k = 1; k <= count; k++) ids.push(`h${max + k}`);
+  return ids;
+}
+
+/** Returns the next free horizon id ("h1", "h2", …), from the highest numbered id in the document. */
+export function nextHorizonId(doc: ProjectDoc): string {
+  return freshHorizonIds(doc, 1)[0];
 }
 
 /** Returns `name` trimmed, or with " (2)", " (3)" … when another horizon has it: no two horizons share a name. */

@@ -5,7 +5,8 @@ import { nameWithSuffix } from '../limits';
 import { fitCalibration } from '../../calibration/fitCalibration';
 import { sectionToImage } from '../../calibration/mapPoints';
 import { canvasCalibration } from '../migrations/canvasCalibration';
-import { HORIZON_COLOURS } from '../migrations/sectionToProjectDoc';
+import { paletteColour } from '../horizonPalette';
+import { freshHorizonIds } from './addHorizon';
 import type { DocHorizon, ProjectDoc } from '../projectDoc';
 import type { LengthUnit, XZ } from '../section';
 
@@ -26,14 +27,6 @@ function uniqueName(name: string, taken: Set<string>): string {
   return candidate;
 }
 
-function uniqueId(taken: Set<string>): string {
-  let k = taken.size + 1;
-  while (taken.has(`horizon-${k}`)) k++;
-  const id = `horizon-${k}`;
-  taken.add(id);
-  return id;
-}
-
 /** Returns the document with the horizons added (converted from `units` to the document's, renamed on clashes); lines with < 2 points are dropped; an empty list returns the same document. */
 export function importHorizons(doc: ProjectDoc, horizons: ImportedHorizon[], units: LengthUnit): ProjectDoc {
   const usable = horizons.filter((h) => h.line.length >= 2);
@@ -51,11 +44,11 @@ export function importHorizons(doc: ProjectDoc, horizons: ImportedHorizon[], uni
   }
   const f = fit.fit;
   const names = new Set(doc.horizons.map((h) => h.name));
-  const ids = new Set(doc.horizons.map((h) => h.id));
+  const ids = freshHorizonIds(doc, usable.length);
   const added: DocHorizon[] = usable.map((h, i) => ({
-    id: uniqueId(ids),
+    id: ids[i],
     name: uniqueName(h.name, names),
-    colour: HORIZON_COLOURS[(doc.horizons.length + i) % HORIZON_COLOURS.length],
+    colour: paletteColour(doc.horizons.length + i),
     visible: true,
     locked: false,
     pointsPx: lines[i].map((q) => sectionToImage(f, q)),

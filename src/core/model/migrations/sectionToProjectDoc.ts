@@ -5,9 +5,9 @@ import { sectionToImage } from '../../calibration/mapPoints';
 import { emptyProjectDoc, type DocHorizon, type ImagePx, type ProjectDoc } from '../projectDoc';
 import { horizonPieces, type Section, type XZ } from '../section';
 import { canvasCalibration } from './canvasCalibration';
+import { paletteColour } from '../horizonPalette';
+import { freshHorizonIds } from '../commands/addHorizon';
 
-/** Colours given to horizons in order (our own palette, readable on white and on a grey scan). */
-export const HORIZON_COLOURS = ['#c0392b', '#1f77b4', '#2e8b57', '#8e44ad', '#d35400', '#16a085', '#7f6000', '#b03a78'];
 
 /** Returns a project document holding the section, calibrated onto a true-scale canvas; title is the given name. */
 export function sectionToProjectDoc(section: Section, title = 'Section'): ProjectDoc {
@@ -26,10 +26,11 @@ export function sectionToProjectDoc(section: Section, title = 'Section'): Projec
   if (!fitted.ok) throw new Error(`canvasCalibration produced an unusable calibration: ${fitted.message}`);
   const toPx = (q: XZ): ImagePx => sectionToImage(fitted.fit, q);
   const doc = emptyProjectDoc();
+  const ids = freshHorizonIds(doc, section.horizons.length);
   const horizons: DocHorizon[] = section.horizons.map((h, i) => ({
-    id: `horizon-${i + 1}`,
+    id: ids[i],
     name: h.name,
-    colour: HORIZON_COLOURS[i % HORIZON_COLOURS.length],
+    colour: paletteColour(i),
     visible: true,
     locked: false,
     // A horizon in pieces is opened through its own path (the caller refuses it until then): only a line here.

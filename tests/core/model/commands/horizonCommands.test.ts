@@ -47,14 +47,18 @@ describe('horizon commands', () => {
     expect(h(addHorizon(doc, { id: 'h3', name: 'Horizon 4', colour: '#000', pointsPx: [] }), 'h3').name).toBe('Horizon 4 (2)');
   });
 
-  it('addHorizon(doc, horizon) after an import whose unnamed lines were called "Horizon 1", "Horizon 2" does not repeat them', () => {
-    // Imported horizons have ids of their own ("horizon-1" …), so the next drawn one gets id h1, whose own
-    // number names a horizon that exists already.
+  it('importHorizons and addHorizon take ids by one rule (h after the highest hN); ids of an older form are kept', () => {
     const imported = importHorizons(fixtureDoc(), [{ name: 'Horizon 1', line: [[0, 0], [10, 5]] }, { name: 'Horizon 2', line: [[0, -5], [10, -6]] }], 'm');
-    const renamed = { ...imported, horizons: imported.horizons.filter((k) => k.id !== 'h1' && k.id !== 'h2') };
-    expect(nextHorizonId(renamed)).toBe('h1');
-    const added = addHorizon(renamed, { id: 'h1', colour: '#000', pointsPx: [[0, 300], [1000, 300]] });
-    expect(added.horizons.map((k) => k.name)).toEqual(['Horizon 1', 'Horizon 2', 'Horizon 3']);
+    expect(imported.horizons.map((k) => k.id)).toEqual(['h1', 'h2', 'h3', 'h4']);
+    expect(nextHorizonId(imported)).toBe('h5');
+    // A document saved with ids of the older form ("horizon-1") keeps them; a new horizon gets h1, no clash.
+    const older = { ...fixtureDoc(), horizons: fixtureDoc().horizons.map((k, i) => ({ ...k, id: `horizon-${i + 1}` })) };
+    const next = importHorizons(older, [{ name: 'Horizon 1', line: [[0, 0], [10, 5]] }], 'm');
+    expect(next.horizons.map((k) => k.id)).toEqual(['horizon-1', 'horizon-2', 'h1']);
+    // Its unnamed-style name is not repeated by the next drawn horizon.
+    const added = addHorizon(next, { id: nextHorizonId(next), colour: '#000', pointsPx: [[0, 300], [1000, 300]] });
+    expect(added.horizons.map((k) => k.id)).toEqual(['horizon-1', 'horizon-2', 'h1', 'h2']);
+    expect(new Set(added.horizons.map((k) => k.name)).size).toBe(4);
   });
 
   it('moveVertex(doc, id, i, p) moves one vertex and leaves the others and the input untouched', () => {

@@ -1,4 +1,4 @@
-// Our own palette for horizons: twelve strong, distinct hues that read on grey or white scans,
+// The one palette for horizons — drawn, imported, opened from a section file, and the demo's: twelve strong, distinct hues that read on grey or white scans,
 // ordered so neighbouring horizons differ in hue and lightness.
 export const HORIZON_PALETTE = [
   '#d1495b', '#2e86ab', '#edae49', '#3b8b5a', '#8e5ea2', '#e07a1f',
