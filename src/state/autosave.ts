@@ -2,19 +2,24 @@
 // scan's bytes go to IndexedDB; on the next visit the last state comes back (with "Start fresh").
 // Closing the tab with changes not saved to a file asks first (beforeunload).
 import { docLimitProblem } from '../core/model/docLimitProblem';
-import { emptyProjectDoc } from '../core/model/projectDoc';
+import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { PROJECT_FILE_VERSION, PROJECT_FORMAT } from '../core/model/migrations/projectFileFormat';
 import { downloadFile } from '../io/downloadFile';
-import { readSetAside, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type StoredScan } from './autosaveDb';
+import { readSetAside, readStoredScan, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type KeptRead, type StoredScan } from './autosaveDb';
+import { clearJournal, nextStamp, readJournal, writeJournal } from './autosaveJournal';
+import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
+import { useTabStore } from './tabLock';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
 import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
 import { getScan, putScan } from './scanCache';
 import { useSessionStore } from './sessionStore';
 
-/** Wait after the last change before writing, in milliseconds. */
+/** Wait after the last change before writing a large document, in milliseconds (a small one is written at once, after its journal entry). */
 export const AUTOSAVE_DELAY_MS = 500;
+/** Vertices up to which a document is written to IndexedDB as soon as it changes. */
+const WRITE_AT_ONCE_VERTICES = 100_000;
 
 /** The scan id of the start-up demo (src/state/openDemo.ts): an untouched demo is not work to bring back. */
 const DEMO_SCAN_ID = 'scan-demo';
@@ -29,6 +34,8 @@ let writtenScanId: string | null = null;
 
 /** Writes the current document now; reports quota problems through the status store. */
 export async function autosaveNow(): Promise<void> {
+  // A read-only tab (another tab edits) never writes over the kept work.
+  if (useTabStore.getState().role === 'read-only') return;
   const { doc, revision, savedRevision } = useDocStore.getState();
   // Work the restore would refuse is not written over a copy it can restore (the same limits as the schema).
   const over = docLimitProblem(doc);
@@ -43,7 +50,8 @@ export async function autosaveNow(): Promise<void> {
     if (doc.scan && cached) {
       scan = { id: doc.scan.id, type: doc.scan.type, name: doc.scan.name, bytes: fresh ? await cached.bytes.arrayBuffer() : new ArrayBuffer(0) };
     }
-    await writeSnapshot(await db(), { savedAt: new Date().toISOString(), doc, dirty: revision !== savedRevision }, scan, fresh);
+    const stamp = nextStamp();
+    await writeSnapshot(await db(), { savedAt: new Date(stamp).toISOString(), stamp, doc, dirty: revision !== savedRevision }, scan, fresh);
     if (fresh) writtenScanId = doc.scan?.id ?? null;
     if (!doc.scan) writtenScanId = null;
     useAutosaveStatus.setState({ lastSavedAt: new Date().toISOString(), keptRevision: revision, quotaFull: false });
@@ -53,21 +61,43 @@ export async function autosaveNow(): Promise<void> {
   }
 }
 
+async function setAsideQuietly(): Promise<void> {
+  try {
+    await setAsideKept(await db());
+  } catch {
+    // Could not move it; the message still says why it was not restored.
+  }
+}
+
+/** The journal entry as kept work when it is newer than what IndexedDB holds and this build can read it, else null. */
+async function journalIfNewer(kept: KeptRead): Promise<KeptRead | null> {
+  const entry = readJournal();
+  if (!entry || (kept.kind === 'kept' && kept.snap.stamp >= entry.stamp)) return null;
+  const checked = migrateKeptDoc(entry.doc);
+  if (!checked.ok) return null;
+  const doc = checked.doc;
+  let scan: StoredScan | null = kept.kind === 'kept' && kept.snap.scan?.id === doc.scan?.id ? kept.snap.scan : null;
+  if (!scan && doc.scan) scan = await readStoredScan(await db(), doc.scan.id).catch(() => null);
+  return { kind: 'kept', snap: { savedAt: entry.savedAt, stamp: entry.stamp, doc, dirty: entry.dirty, scan, migratedFrom: checked.migratedFrom, fromSetAside: false } };
+}
+
 /** Brings back the last autosaved state if there is one worth restoring; returns true when it did. */
 export async function restoreAutosave(): Promise<boolean> {
-  let kept;
+  let kept: KeptRead;
   try {
     kept = await readKept(await db());
   } catch {
     return false;
   }
+  // The write-ahead journal holds the last edit when the page went away before IndexedDB had it.
+  const journal = await journalIfNewer(kept);
+  if (journal) {
+    if (kept.kind === 'unreadable') await setAsideQuietly();
+    kept = journal;
+  }
   if (kept.kind === 'unreadable') {
     // Not replaced by the demo's autosave: moved aside, and the user is told why it did not come back.
-    try {
-      await setAsideKept(await db());
-    } catch {
-      // Could not move it; the message still says why it was not restored.
-    }
+    await setAsideQuietly();
     const words = `${kept.message} It is kept aside in this browser, not deleted; the demo opened instead.`;
     useSessionStore.getState().showMessage('error', words);
     useAutosaveStatus.setState({ keptAside: words });
@@ -128,11 +158,18 @@ export async function startFresh(): Promise<void> {
   useDocStore.getState().replace(emptyProjectDoc());
   useAutosaveStatus.setState({ restoredFrom: null });
   writtenScanId = null;
+  clearJournal();
   try {
     await clearSnapshot(await db());
   } catch {
     // Nothing kept to clear.
   }
+}
+
+function vertexCount(doc: ProjectDoc): number {
+  let n = 0;
+  for (const h of doc.horizons) n += h.pointsPx.length;
+  return n;
 }
 
 function onBeforeUnload(e: BeforeUnloadEvent): void {
@@ -146,17 +183,42 @@ function onBeforeUnload(e: BeforeUnloadEvent): void {
 /** Starts autosaving after every document change and the close warning; returns the stop function. */
 export function startAutosave(): () => void {
   let timer: number | undefined;
+  let writing = false;
+  let again = false;
+  // One write at a time; changes made while one is under way are written by the next, straight after it.
   const run = () => {
     timer = undefined;
-    void autosaveNow();
+    if (writing) {
+      again = true;
+      return;
+    }
+    writing = true;
+    void autosaveNow().finally(() => {
+      writing = false;
+      if (again) {
+        again = false;
+        run();
+      }
+    });
+  };
+  // The journal first, synchronously: when this returns the edit survives a reload or navigation.
+  const journal = () => {
+    const { doc, revision, savedRevision, gestureStart } = useDocStore.getState();
+    if (gestureStart || useTabStore.getState().role === 'read-only' || docLimitProblem(doc)) return false;
+    return writeJournal(doc, revision !== savedRevision, nextStamp());
   };
   const unsubscribe = useDocStore.subscribe((s, prev) => {
-    if (s.revision === prev.revision && s.savedRevision === prev.savedRevision) return;
+    const gestureEnded = prev.gestureStart !== null && s.gestureStart === null;
+    if (s.revision === prev.revision && s.savedRevision === prev.savedRevision && !gestureEnded) return;
+    // While a drag is under way the document changes every frame: it is kept when the gesture ends.
+    if (s.gestureStart) return;
+    const small = journal() || vertexCount(s.doc) <= WRITE_AT_ONCE_VERTICES;
     window.clearTimeout(timer);
-    timer = window.setTimeout(run, AUTOSAVE_DELAY_MS);
+    timer = window.setTimeout(run, small ? 0 : AUTOSAVE_DELAY_MS);
   });
-  // Leaving the page with a write still waiting: start it now (the browser usually lets it finish).
+  // Leaving the page with a write still waiting: the journal now, and the write started (it may not finish).
   const flush = () => {
+    journal();
     if (timer === undefined) return;
     window.clearTimeout(timer);
     run();

@@ -17,6 +17,8 @@ const SET_ASIDE = 'set-aside';
 export interface StoredScan { id: string; type: string; name: string; bytes: ArrayBuffer }
 export interface AutosaveSnapshot {
   savedAt: string; doc: ProjectDoc; dirty: boolean; scan: StoredScan | null;
+  /** When it was kept (autosaveJournal's nextStamp; for records written before stamps, the time of savedAt): the newer of this and the journal comes back. */
+  stamp: number;
   /** The schema version the document was kept at when it was older than this build's (it was migrated), else null. */
   migratedFrom: number | null;
   /** True when it came from the set-aside record (kept by a build that could read it, moved aside by one that could not). */
@@ -26,7 +28,7 @@ export interface AutosaveSnapshot {
 /** What the browser holds: nothing, kept work this build can restore, or kept work it cannot read (with why). */
 export type KeptRead = { kind: 'none' } | { kind: 'kept'; snap: AutosaveSnapshot } | { kind: 'unreadable'; message: string };
 
-type StateRecord = { savedAt?: unknown; doc?: unknown; dirty?: unknown; scanId?: unknown };
+type StateRecord = { savedAt?: unknown; doc?: unknown; dirty?: unknown; scanId?: unknown; stamp?: unknown };
 
 /** True when the error means the browser's storage quota is used up. */
 export function isQuotaError(e: unknown): boolean {
@@ -64,11 +66,11 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
 }
 
 /** Writes the snapshot in one transaction; the scan's bytes are written only when `writeScanBytes` (other scans are dropped, but a set-aside record's). Rejects with the browser's error (see isQuotaError). */
-export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
+export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean; stamp?: number }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   const tx = db.transaction([STATE, SCANS], 'readwrite');
   const finished = done(tx);
   // Lines packed into typed arrays (autosavePack): the browser copies each as one block.
-  tx.objectStore(STATE).put({ savedAt: snap.savedAt, doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
+  tx.objectStore(STATE).put({ savedAt: snap.savedAt, stamp: snap.stamp ?? Date.parse(snap.savedAt), doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
     // Other scans are dropped, except the one of a set-aside record (setAsideKept).
     const scans = tx.objectStore(SCANS);
@@ -94,12 +96,19 @@ export async function readKept(db: IDBDatabase): Promise<KeptRead> {
       if (s && s.bytes instanceof ArrayBuffer) scan = s;
     }
     const savedAt = typeof state.savedAt === 'string' ? state.savedAt : '';
-    return { kind: 'kept', snap: { savedAt, doc: checked.doc, dirty: state.dirty === true, scan, migratedFrom: checked.migratedFrom, fromSetAside } };
+    const stamp = typeof state.stamp === 'number' ? state.stamp : Date.parse(savedAt) || 0;
+    return { kind: 'kept', snap: { savedAt, stamp, doc: checked.doc, dirty: state.dirty === true, scan, migratedFrom: checked.migratedFrom, fromSetAside } };
   };
   const first = current ? await record(current, false) : ({ kind: 'none' } as const);
   if (first.kind === 'kept' || !aside) return first;
   const second = await record(aside, true);
   return second.kind === 'kept' ? second : first;
+}
+
+/** Returns the stored bytes of the scan with this id, or null. */
+export async function readStoredScan(db: IDBDatabase, id: string): Promise<StoredScan | null> {
+  const s = (await request(db.transaction([SCANS], 'readonly').objectStore(SCANS).get(id))) as StoredScan | undefined;
+  return s && s.bytes instanceof ArrayBuffer ? s : null;
 }
 
 /** Returns the kept snapshot this build can restore, or null when there is none or it cannot be read. */

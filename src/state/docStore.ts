@@ -17,6 +17,8 @@ export interface DocState {
   revision: number;
   /** Revision of the last save or open, to warn before closing with unsaved changes. */
   savedRevision: number;
+  /** True while another tab edits the kept work (set by tabLock.ts): this one only shows it, and edits do nothing. */
+  readOnly: boolean;
   /** Bumped by every replace (new, open, restore): what the session derived for one project means nothing for the next. */
   opened: number;
   apply: (command: DocCommand) => void;
@@ -35,10 +37,12 @@ export const useDocStore = create<DocState>()((set, get) => ({
   past: [],
   future: [],
   gestureStart: null,
+  readOnly: false,
   revision: 0,
   savedRevision: 0,
   opened: 0,
   apply: (command) => {
+    if (get().readOnly) return;
     const { doc, past, gestureStart, revision } = get();
     const next = command(doc);
     if (next === doc) return;
@@ -46,7 +50,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
     else set({ doc: next, past: [...past, doc].slice(-HISTORY_LIMIT), future: [], revision: revision + 1 });
   },
   beginGesture: () => {
-    if (!get().gestureStart) set({ gestureStart: get().doc });
+    if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc });
   },
   endGesture: () => {
     const { gestureStart, doc, past } = get();
@@ -60,12 +64,12 @@ export const useDocStore = create<DocState>()((set, get) => ({
   },
   undo: () => {
     const { past, doc, future, gestureStart, revision } = get();
-    if (gestureStart || past.length === 0) return;
+    if (gestureStart || past.length === 0 || get().readOnly) return;
     set({ doc: past[past.length - 1], past: past.slice(0, -1), future: [doc, ...future], revision: revision + 1 });
   },
   redo: () => {
     const { past, doc, future, gestureStart, revision } = get();
-    if (gestureStart || future.length === 0) return;
+    if (gestureStart || future.length === 0 || get().readOnly) return;
     set({ doc: future[0], past: [...past, doc], future: future.slice(1), revision: revision + 1 });
   },
   replace: (doc) => {

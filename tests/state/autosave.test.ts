@@ -205,3 +205,40 @@ describe('a kept copy is never overwritten by work the restore would refuse', ()
     useAutosaveStatus.setState({ keptAside: null });
   });
 });
+
+describe('the write-ahead journal', () => {
+  const store = new Map<string, string>();
+  const localStorageStub = { getItem: (k: string) => store.get(k) ?? null, setItem: (k: string, v: string) => void store.set(k, v), removeItem: (k: string) => void store.delete(k) };
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    vi.stubGlobal('localStorage', localStorageStub);
+    store.clear();
+    useSessionStore.getState().clearMessage();
+    await clearSnapshot(await openAutosaveDb(factory));
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('brings back the journal\'s edit when the page went away before IndexedDB had it, and IndexedDB\'s when it is newer', async () => {
+    const { writeJournal, nextStamp } = await import('../../src/state/autosaveJournal');
+    const db = await openAutosaveDb(factory);
+    const older = nextStamp();
+    await writeSnapshot(db, { savedAt: new Date(older).toISOString(), stamp: older, doc: setProjectInfo(sampleDoc(), { title: 'In IndexedDB' }), dirty: true }, null, true);
+    expect(writeJournal(setProjectInfo(sampleDoc(), { title: 'Only in the journal' }), true, nextStamp())).toBe(true);
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Only in the journal');
+    // A later IndexedDB copy wins over an older journal entry.
+    const later = nextStamp();
+    await writeSnapshot(db, { savedAt: new Date(later).toISOString(), stamp: later, doc: setProjectInfo(sampleDoc(), { title: 'Later in IndexedDB' }), dirty: true }, null, true);
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Later in IndexedDB');
+  });
+
+  it('a document too large for the journal clears it, so an old entry cannot win', async () => {
+    const { writeJournal, readJournal, nextStamp, JOURNAL_MAX_CHARS } = await import('../../src/state/autosaveJournal');
+    expect(writeJournal(sampleDoc(), true, nextStamp())).toBe(true);
+    const big = sampleDoc();
+    big.horizons[0].pointsPx = Array.from({ length: Math.ceil(JOURNAL_MAX_CHARS / 12) + 1 }, (_, i) => [i, i]);
+    expect(writeJournal(big, true, nextStamp())).toBe(false);
+    expect(readJournal()).toBeNull();
+  });
+});

@@ -2,12 +2,25 @@
 import { saveProjectFile } from '../../state/projectActions';
 import { downloadKeptAside, startFresh } from '../../state/autosave';
 import { useAutosaveStatus } from '../../state/autosaveStatus';
+import { restoreAutosave } from '../../state/autosave';
+import { takeOverEditing, useTabStore } from '../../state/tabLock';
 
 export function StorageBanner() {
   const { restoredFrom, quotaFull, failure, keptAside } = useAutosaveStatus();
-  if (!restoredFrom && !quotaFull && !failure && !keptAside) return null;
+  const { role, why } = useTabStore();
+  const readOnly = role === 'read-only';
+  if (!restoredFrom && !quotaFull && !failure && !keptAside && !readOnly) return null;
   return (
     <div className="storage-banners">
+      {readOnly && (
+        <div className="storage-banner error" role="alert" data-testid="read-only-banner">
+          <span>{why === 'taken-over'
+            ? 'Another tab took over editing this project; this tab now only shows it (edits here are not possible, so neither tab overwrites the other).'
+            : 'This project is open for editing in another tab of this browser. This tab only shows it: edits here are not possible, so neither tab overwrites the other\'s work.'}</span>
+          <button type="button" className="primary" data-testid="take-over" onClick={() => void takeOverEditing(async () => { await restoreAutosave(); })}>Edit here instead</button>
+          <button type="button" data-testid="read-only-download" onClick={() => void saveProjectFile()}>Download this copy</button>
+        </div>
+      )}
       {restoredFrom && (
         <div className="storage-banner" role="status" data-testid="restore-banner">
           <span>Your last session was brought back (kept in this browser {new Date(restoredFrom).toLocaleString()}).</span>

@@ -1,0 +1,92 @@
+// One tab edits the work kept in this browser at a time. The editing tab holds a Web Lock for as long as it
+// is open; a tab that opens while another holds it shows the kept work read-only and says so, offering to
+// take over. Taking over asks the editing tab (BroadcastChannel) to write what it has and let go; only then
+// does the new tab read the kept work and start editing. So neither tab writes over the other's newer work
+// without the user having chosen it. Browsers without Web Locks edit as before (there is no way to know).
+import { create } from 'zustand';
+import { useDocStore } from './docStore';
+
+const LOCK = 'foldroot-editing';
+const CHANNEL = 'foldroot-tabs';
+
+export type TabRole = 'starting' | 'editing' | 'read-only';
+
+export interface TabState {
+  role: TabRole;
+  /** Why this tab is read-only: another tab had the work open at start-up, or took it over later. */
+  why: 'other-tab' | 'taken-over' | null;
+}
+
+export const useTabStore = create<TabState>()(() => ({ role: 'starting', why: null }));
+
+function setRole(role: TabRole, why: TabState['why']): void {
+  useTabStore.setState({ role, why });
+  useDocStore.setState({ readOnly: role === 'read-only' });
+}
+
+let release: (() => void) | null = null;
+let channel: BroadcastChannel | null = null;
+/** What the editing tab does before letting go (write its pending changes). */
+let beforeRelease: () => Promise<void> = async () => undefined;
+
+function locks(): LockManager | null {
+  return typeof navigator !== 'undefined' && navigator.locks ? navigator.locks : null;
+}
+
+function hold(): Promise<void> {
+  return new Promise<void>((resolve) => {
+    release = resolve;
+  });
+}
+
+function listen(): void {
+  if (channel || typeof BroadcastChannel === 'undefined') return;
+  channel = new BroadcastChannel(CHANNEL);
+  channel.onmessage = (e: MessageEvent<{ type?: string }>) => {
+    if (e.data?.type !== 'take-over' || useTabStore.getState().role !== 'editing') return;
+    void (async () => {
+      // Its last changes are written first, so that the tab taking over reads them.
+      await beforeRelease();
+      setRole('read-only', 'taken-over');
+      release?.();
+      release = null;
+    })();
+  };
+}
+
+/** Tries to become the editing tab without waiting; returns the role this tab has. `flush` writes pending changes before another tab takes over. */
+export async function claimEditing(flush: () => Promise<void>): Promise<TabRole> {
+  beforeRelease = flush;
+  listen();
+  const lm = locks();
+  if (!lm) {
+    setRole('editing', null);
+    return 'editing';
+  }
+  const got = await new Promise<boolean>((resolve) => {
+    void lm.request(LOCK, { ifAvailable: true }, (lock) => {
+      resolve(lock !== null);
+      return lock ? hold() : undefined;
+    });
+  });
+  if (got) setRole('editing', null);
+  else setRole('read-only', 'other-tab');
+  return got ? 'editing' : 'read-only';
+}
+
+/** Asks the editing tab to write its work and let go, waits for the lock, then runs `reload` (read the kept work) and makes this tab the editing one. */
+export async function takeOverEditing(reload: () => Promise<void>): Promise<void> {
+  const lm = locks();
+  if (!lm || useTabStore.getState().role === 'editing') return;
+  listen();
+  const acquired = new Promise<void>((resolve) => {
+    void lm.request(LOCK, () => {
+      resolve();
+      return hold();
+    });
+  });
+  channel?.postMessage({ type: 'take-over' });
+  await acquired;
+  await reload();
+  setRole('editing', null);
+}
