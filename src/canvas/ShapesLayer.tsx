@@ -13,10 +13,11 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix } from './decimatePolyline';
 import { clippedHorizonPx, excessFillSides } from './excessFillGeometry';
+import { EXCESS_FILL, fillRgba } from '../core/model/horizonPalette';
 import { pinLinePx } from './pinLinePx';
 
-export const FILL_ABOVE = 'rgba(232, 121, 30, 0.30)';
-export const FILL_BELOW = 'rgba(38, 104, 199, 0.30)';
+export const FILL_ABOVE = fillRgba(EXCESS_FILL.above);
+export const FILL_BELOW = fillRgba(EXCESS_FILL.below);
 const PROJECTED_DASH = [7, 5];
 const REGIONAL_DASH = [14, 4, 3, 4];
 

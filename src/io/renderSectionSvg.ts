@@ -6,7 +6,6 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { imageToSection } from '../core/calibration/mapPoints';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
-import { clipPolylineToPins } from '../core/geometry/clipPolylineToPins';
 import { toCoordinateArrays } from '../core/geometry/toCoordinateArrays';
 import { activeScenario } from '../core/model/docToSection';
 import type { ImagePx, ProjectDoc } from '../core/model/projectDoc';
@@ -19,15 +18,16 @@ import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../forma
 import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
-import { minOf, maxOf } from '../core/stats/minMax';
+import { EXCESS_FILL } from '../core/model/horizonPalette';
+import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
 
 export const FIGURE_WIDTH = 1400;
 export const FIGURE_HEIGHT = 990;
 // Room on the left for the elevation labels and below for the distance labels.
 const PANEL = { x: 92, y: 96, w: 908, h: 690 };
-/** The canvas's excess-area fills (src/canvas/ShapesLayer.tsx FILL_ABOVE / FILL_BELOW): orange above the regional, blue below. */
-export const FIGURE_FILL_ABOVE = { colour: 'rgb(232, 121, 30)', opacity: 0.3 };
-export const FIGURE_FILL_BELOW = { colour: 'rgb(38, 104, 199)', opacity: 0.3 };
+/** The excess-area fills, as on the canvas (src/core/model/horizonPalette.ts EXCESS_FILL). */
+export const FIGURE_FILL_ABOVE = EXCESS_FILL.above;
+export const FIGURE_FILL_BELOW = EXCESS_FILL.below;
 const RED = '#b3261e';
 
 export interface SectionFigureInput {
@@ -220,19 +220,18 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     ds.section.horizons.forEach((h, i) => {
       if (!h.line) return;
       const line = toCoordinateArrays(h.line), reg = toCoordinateArrays(h.regional);
-      const cl = clipPolylineToPins(line.xs, line.zs, pL, pR).clipped;
-      const cr = clipPolylineToPins(reg.xs, reg.zs, pL, pR).clipped;
+      const cl = fillHorizonPart(line.xs, line.zs, [pL, pR]);
+      const cr = cl && fillRegionalPart(reg.xs, reg.zs, [pL, pR], cl);
       if (!cl || !cr) return;
+      // The outline of src/core/geometry/excessFillOutline.ts, as on the canvas: the loop is drawn twice,
+      // clipped to the half-planes above and below the regional, so lobes above it (added) and below it
+      // (subtracted) differ in colour.
       const loop: [number, number][] = [];
       for (let j = 0; j < cl.xs.length; j++) loop.push(toFig([cl.xs[j], cl.zs[j]]));
-      for (let j = cr.xs.length - 1; j >= 0; j--) loop.push(toFig([cr.xs[j], cr.zs[j]]));
-      // As on the canvas (excessFillGeometry): the loop is drawn twice, clipped to the half-planes above
-      // and below the regional, so lobes above it (added) and below it (subtracted) differ in colour.
-      const zsAll = [...cl.zs, ...cr.zs];
-      const margin = maxOf(zsAll) - minOf(zsAll) + (pR - pL);
-      const half = (zFar: number) => pts([...Array.from(cr.xs, (x, j) => toFig([x, cr.zs[j]])), toFig([pR, zFar]), toFig([pL, zFar])]);
-      defs.push(`<clipPath id="above-${i}"><polygon points="${half(maxOf(zsAll) + margin)}"/></clipPath><clipPath id="below-${i}"><polygon points="${half(minOf(zsAll) - margin)}"/></clipPath>`);
-      const diffs = Array.from(cl.xs, (x, j) => cl.zs[j] - zAt(cr.xs, cr.zs, x));
+      for (const q of cr.tail) loop.push(toFig(q));
+      defs.push(`<clipPath id="above-${i}"><polygon points="${pts(cr.above.map(toFig))}"/></clipPath><clipPath id="below-${i}"><polygon points="${pts(cr.below.map(toFig))}"/></clipPath>`);
+      const regXs = cr.tail.map((q) => q[0]).reverse(), regZs = cr.tail.map((q) => q[1]).reverse();
+      const diffs = Array.from(cl.xs, (x, j) => cl.zs[j] - zAt(regXs, regZs, x));
       const tol = 1e-9 * (Math.abs(zHi - zLo) + 1);
       const isAbove = diffs.some((d) => d > tol), isBelow = diffs.some((d) => d < -tol);
       drawn.above ||= isAbove;

@@ -9,3 +9,14 @@ export const HORIZON_PALETTE = [
 export function paletteColour(n: number): string {
   return HORIZON_PALETTE[((n % HORIZON_PALETTE.length) + HORIZON_PALETTE.length) % HORIZON_PALETTE.length];
 }
+
+/** The excess-area fills, on the canvas and in the figure: orange above the regional (added), blue below (subtracted). */
+export const EXCESS_FILL = {
+  above: { colour: 'rgb(232, 121, 30)', opacity: 0.3 },
+  below: { colour: 'rgb(38, 104, 199)', opacity: 0.3 },
+} as const;
+
+/** Returns a fill as one CSS colour with its opacity ("rgba(232, 121, 30, 0.3)"). */
+export function fillRgba(fill: { colour: string; opacity: number }): string {
+  return fill.colour.replace(/^rgb\((.*)\)$/, `rgba($1, ${fill.opacity})`);
+}
