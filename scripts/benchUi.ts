@@ -2,7 +2,8 @@
 // and prints, for each piece of work a geologist feels, what it took beside the floor for the same work measured
 // in the same page, their ratio and the longest main-thread task it caused (PerformanceObserver 'longtask').
 //
-//   npm run bench:ui [-- --scans 1,25,100,200 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans]
+//   npm run bench:ui [-- --scans 1,25,100,200 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
+//                       --trace-mp 200 --no-trace --only-trace]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -14,6 +15,11 @@
 // - big documents (12 horizons × each --vertices): opening the section file, the first move of a regional drag,
 //   single and Shift (every regional) drags waiting for the numbers, a continuous drag at 60 moves a second, the
 //   autosave task after the edit; floor: one 16.7 ms frame.
+// - tracing on a --trace-mp scan (default 200 MP): Draw horizon, an anchor on a drawn line, the pointer moved
+//   3,000 px along it; the first preview that follows the line (the rough one), the full-resolution preview (when
+//   the preview stops changing), and each later pointer position of a few pixels (move → preview redrawn);
+//   floor: one 16.7 ms frame. Then the renderer's memory with the scan open, before tracing and after the
+//   stretch is placed: the difference is what tracing holds.
 // The script fails loudly (exit 1) when what it meant to open is not open or a measurement saw nothing.
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import { createServer } from 'node:net';
@@ -38,7 +44,10 @@ const SCAN_MP = list(flag('scans'), [1, 25, 100, 200]);
 const VERTICES = list(flag('vertices'), [2000, 20000, 100000]);
 const RUNS = Math.max(1, Number(flag('runs') ?? 3));
 const WITH_UNCAPPED = !process.argv.includes('--no-uncapped');
-const WITH_SCANS = !process.argv.includes('--no-scans');
+const WITH_SCANS = !process.argv.includes('--no-scans') && !process.argv.includes('--only-trace');
+const WITH_TRACE = !process.argv.includes('--no-trace');
+const ONLY_TRACE = process.argv.includes('--only-trace');
+const TRACE_MP = Number(flag('trace-mp') ?? 200);
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -475,6 +484,103 @@ async function scans(page: Page): Promise<void> {
   }
 }
 
+// The preview line as the overlay draws it: each drawing sets a user-timing mark (canvas/OverlayLayer.tsx,
+// PREVIEW_DRAWN_MARK) whose detail holds its point count; a log of [time, points] of every drawing whose points
+// differ from the one before is kept as window.__previewLog.
+const WATCH_PREVIEW = `(() => {
+  window.__previewLog = [];
+  let last = '';
+  window.__previewObserver = new PerformanceObserver((l) => {
+    for (const e of l.getEntries()) {
+      if (e.name !== 'foldroot-preview-drawn') continue;
+      const sig = e.detail.points + ':' + e.detail.last.join(',');
+      if (sig !== last) { last = sig; window.__previewLog.push([e.startTime, e.detail.points]); }
+    }
+  });
+  window.__previewObserver.observe({ type: 'mark' });
+})()`;
+
+/** Polls an expression in the page until it is true (the page's policy forbids waitForFunction's eval); times come from the page's own log. */
+async function until(page: Page, expr: string, timeoutMs: number, what: string): Promise<void> {
+  const end = Date.now() + timeoutMs;
+  while (!(await page.evaluate(expr))) {
+    check(Date.now() < end, what);
+    await new Promise((r) => setTimeout(r, 40));
+  }
+}
+
+async function tracing(page: Page): Promise<void> {
+  const side = Math.round(Math.sqrt(TRACE_MP * 1e6));
+  const name = `trace-${TRACE_MP}mp.jpg`;
+  // A fresh project, then a scan with one drawn line to follow: paper tone and a gently waving ink line
+  // (v = side / 2 + 40 sin(u / 300), 3 px wide) across the whole scan.
+  await page.getByTestId('menu-project').click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await page.evaluate(`(async () => {
+    const s = ${side};
+    const c = new OffscreenCanvas(s, s);
+    const ctx = c.getContext('2d');
+    ctx.fillStyle = '#f1ead8';
+    ctx.fillRect(0, 0, s, s);
+    ctx.strokeStyle = '#2a2420';
+    ctx.lineWidth = 3;
+    ctx.beginPath();
+    for (let u = 0; u <= s; u += 4) ctx.lineTo(u, s / 2 + 40 * Math.sin(u / 300));
+    ctx.stroke();
+    const blob = await c.convertToBlob({ type: 'image/jpeg', quality: 0.85 });
+    window.__scanFile = new File([blob], ${JSON.stringify(name)}, { type: 'image/jpeg' });
+  })()`);
+  await openScan(page, name);
+  await page.getByTestId('zoom-fit').click();
+  const before = await rendererMb(page);
+  const box = (await page.getByTestId('section-view').boundingBox())!;
+  const cam = fitCamera(side, side, box.width, box.height);
+  const toScreen = (u: number, v: number) => ({ x: box.x + cam.x + u * cam.scale, y: box.y + cam.y + v * cam.scale });
+  // The line from u0 for 3,000 px.
+  const lineV = (u: number) => side / 2 + 40 * Math.sin(u / 300);
+  const u0 = Math.round(side / 10);
+  const u1 = u0 + 3000;
+  const v = lineV(u0);
+  await page.getByTestId('tool-draw').click();
+  const a = toScreen(u0, v);
+  await page.mouse.move(a.x, a.y);
+  await page.mouse.click(a.x, a.y);
+  await page.evaluate(WATCH_PREVIEW);
+  const b = toScreen(u1, lineV(u1));
+  const t0 = await now(page);
+  await page.mouse.move(b.x, b.y);
+  // Wait until the preview follows the line (more than anchor and pointer), then until it has not changed for 3 s.
+  await until(page, 'window.__previewLog.some((e) => e[1] > 2)', 120_000, 'no traced preview appeared');
+  await until(page, 'performance.now() - window.__previewLog[window.__previewLog.length - 1][0] > 3000', 180_000, 'the preview never settled');
+  const log = (await page.evaluate('window.__previewLog')) as [number, number][];
+  const firstFollowing = log.find((e) => e[1] > 2)!;
+  const settled = log[log.length - 1];
+  report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: first that follows`, ms: firstFollowing[0] - t0, floor: FRAME_MS, longest: await longestSince(page, t0), note: `${firstFollowing[1]} points; the rough search (window read at ≤ 60,000 px)` });
+  report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: full resolution`, ms: settled[0] - t0, floor: FRAME_MS, note: `${settled[1]} points; tiles and tree in the worker` });
+  // Later pointer positions: a few image pixels along the line each, waiting for the redrawn preview.
+  const later: number[] = [];
+  for (let k = 1; k <= 12; k++) {
+    const u = u1 + (k * 2) / cam.scale;
+    const p = toScreen(u, lineV(u));
+    const n = ((await page.evaluate('window.__previewLog.length')) as number);
+    const t = await now(page);
+    await page.mouse.move(p.x, p.y);
+    await until(page, `window.__previewLog.length > ${n}`, 60_000, 'a pointer move redrew no preview');
+    later.push(((await page.evaluate(`window.__previewLog[${n}][0]`)) as number) - t);
+  }
+  report({ work: `trace preview, later pointer positions (${TRACE_MP} MP)`, ms: median(later), floor: FRAME_MS, note: `largest ${later.reduce((m, x) => Math.max(m, x), 0).toFixed(1)} ms of ${later.length}; move → redrawn` });
+  await page.evaluate('window.__previewObserver.disconnect()');
+  const end = toScreen(u1, lineV(u1));
+  await page.mouse.click(end.x, end.y);
+  await page.keyboard.press('Enter');
+  await page.getByTestId('horizon-list').locator('li').first().waitFor();
+  const after = await rendererMb(page);
+  if (before !== null && after !== null) {
+    report({ work: `renderer memory with a ${TRACE_MP} MP scan: before tracing`, ms: before, floor: (side * side * 4) / 1048576, unit: 'MB', note: 'floor: its RGBA size' });
+    report({ work: `renderer memory with a ${TRACE_MP} MP scan: after one 3,000 px stretch`, ms: after, floor: before, unit: 'MB', note: `tracing holds ${(after - before).toFixed(0)} MB (workers, tiles, trees)` });
+  }
+}
+
 async function run(base: string, uncapped: boolean): Promise<void> {
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: uncapped ? [...ARGS, ...UNCAPPED] : ARGS });
   try {
@@ -498,7 +604,12 @@ async function run(base: string, uncapped: boolean): Promise<void> {
         await page.close();
         page = await fresh();
       }
-      await bigDocuments(page, uncapped ? 'uncapped' : 'capped');
+      if (WITH_TRACE && !uncapped) {
+        await tracing(page);
+        await page.close();
+        page = await fresh();
+      }
+      if (!ONLY_TRACE) await bigDocuments(page, uncapped ? 'uncapped' : 'capped');
     } catch (e) {
       const shot = `${process.env.BENCH_OUT || '/tmp'}/bench-ui-failure.png`;
       await page.screenshot({ path: shot }).catch(() => undefined);
@@ -520,12 +631,12 @@ async function main(): Promise<void> {
   const server = await serve(port);
   try {
     await run(`http://127.0.0.1:${port}`, false);
-    if (WITH_UNCAPPED) await run(`http://127.0.0.1:${port}`, true);
+    if (WITH_UNCAPPED && !ONLY_TRACE) await run(`http://127.0.0.1:${port}`, true);
   } finally {
     server.kill();
   }
   console.log(`\n${rows.length} rows measured.`);
-  execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
+  if (!ONLY_TRACE) execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
 }
 
 main().catch((e) => {

@@ -138,6 +138,9 @@ const CalibrationMarks = memo(function CalibrationMarks({ scale }: { scale: numb
   );
 });
 
+/** The user-timing mark set each time a tool's preview line is drawn (its detail: the line's point count and last point), so the UI benchmark can time the preview from the page itself; only the latest is kept. */
+export const PREVIEW_DRAWN_MARK = 'foldroot-preview-drawn';
+
 function ToolPreviewShape() {
   const ref = useRef<Konva.Shape>(null);
   useEffect(() => subscribeToolPreview(() => ref.current?.getLayer()?.batchDraw()), []);
@@ -156,6 +159,8 @@ function ToolPreviewShape() {
           raw.beginPath();
           preview.line.forEach(([u, v], i) => (i === 0 ? raw.moveTo(u, v) : raw.lineTo(u, v)));
           raw.stroke();
+          performance.clearMarks(PREVIEW_DRAWN_MARK);
+          performance.mark(PREVIEW_DRAWN_MARK, { detail: { points: preview.line.length, last: preview.line[preview.line.length - 1] } });
         }
         if (preview.pinXs) {
           const doc = useDocStore.getState().doc;

@@ -2,6 +2,11 @@
 // stretches are computed in a worker (feature tiles, one shortest-path tree per anchor, the path read
 // back per pointer position), so a large scan never stalls the page. Answers are synchronous — ready or
 // not yet — and `onReady` is called whenever something asked for has arrived.
+// The first preview from an anchor is progressive: while the full-resolution tiles and tree are computed, a
+// second worker searches the same window read at a reduced resolution (at most COARSE_PIXELS pixels, so tens of
+// milliseconds however long the stretch), and its path, mapped back to the image, is shown until the full one is ready. As soon
+// as an anchor is placed, the tree around it is built ahead, towards where the line was heading, so the next
+// preview usually finds its tree waiting.
 import type { ImagePx } from '../core/model/projectDoc';
 import { pixelFeatures } from '../core/trace/pixelFeatures';
 import type { Raster } from '../core/trace/raster';
@@ -17,6 +22,11 @@ export const MAX_SNAP_RADIUS_PX = 24;
 const PATHS_KEPT = 256;
 /** Trees the worker keeps; the same number as its session keeps. */
 const TREES_KEPT = 4;
+/** The rough search reads the window reduced to at most this many pixels (and by at least 2 in each direction). */
+export const COARSE_PIXELS = 60_000;
+
+/** A rough tree: its anchor and window (image px), and the window's image px per reduced pixel across and down. */
+interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: number }
 
 interface TreeRef { id: number; from: ImagePx; win: Raster }
 
@@ -35,18 +45,28 @@ export class ScanLineTracer {
   private asked = new Set<string>();
   private snapCanvas: OffscreenCanvas | null = null;
   private closed = false;
+  /** The second worker, for the rough first previews (made when first needed). */
+  private coarseWorker: Worker | null = null;
+  private coarseTrees: CoarseRef[] = [];
+  private coarseWanted: { from: ImagePx; win: Raster } | null = null;
+  private coarseBuilding = false;
+  private coarsePaths = new Map<string, ImagePx[]>();
+  private coarseAsked = new Set<string>();
   /** Bytes the worker reported holding after its latest tree. */
   bytesHeld = 0;
 
   constructor(private bitmap: ImageBitmap, private onReady: () => void) {
     this.worker = new Worker(new URL('./workers/traceLine.worker.ts', import.meta.url), { type: 'module' });
     this.worker.onmessage = (e: MessageEvent<TraceWorkerReply>) => this.receive(e.data);
+    // The rough worker is started at once, so that the first preview does not wait for it to load.
+    this.coarse();
   }
 
   /** Stops the worker; later questions get no answers. */
   close(): void {
     this.closed = true;
     this.worker.terminate();
+    this.coarseWorker?.terminate();
   }
 
   /** Returns the line centre within `radiusPx` (at most MAX_SNAP_RADIUS_PX) of p, or null where no line is drawn. */
@@ -83,12 +103,12 @@ export class ScanLineTracer {
     // Off the scan, or no length to follow: a straight stretch.
     if (!inside(from) || !inside(to) || Math.hypot(to[0] - from[0], to[1] - from[1]) < 1.5) return [from, to];
     if (this.closed) return [from, to];
-    if (this.asked.has(key)) return null;
+    if (this.asked.has(key)) return placed ? null : this.roughStretch(from, to, key);
     const tree = [...this.trees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H));
     if (tree) {
       this.asked.add(key);
       this.post({ type: 'path', id: tree.id, key, to: [to[0], to[1]] });
-      return null;
+      return placed ? null : this.roughStretch(from, to, key);
     }
     const win = traceWindow(from, to, W, H);
     if (placed) {
@@ -97,11 +117,106 @@ export class ScanLineTracer {
         const tileKeys = await this.sendTiles(win);
         this.post({ type: 'once', key, from: [from[0], from[1]], to: [to[0], to[1]], win, tileKeys });
       });
+      this.buildAhead(from, to);
       return null;
     }
     this.wanted = { from, win };
     this.pumpTree();
+    return this.roughStretch(from, to, key);
+  }
+
+  /** Builds the trees of a just-placed anchor `to` ahead of the pointer: over the window of a stretch as long as the last, going on the same way. */
+  private buildAhead(from: ImagePx, to: ImagePx): void {
+    const W = this.bitmap.width;
+    const H = this.bitmap.height;
+    const next: ImagePx = [Math.min(W, Math.max(0, 2 * to[0] - from[0])), Math.min(H, Math.max(0, 2 * to[1] - from[1]))];
+    const win = traceWindow(to, next, W, H);
+    if (win.w <= 0 || win.h <= 0) return;
+    this.wanted = { from: to, win };
+    this.pumpTree();
+    this.coarseWanted = { from: to, win };
+    this.pumpCoarse();
+  }
+
+  /** Returns the rough preview from `from` to `to` when its reduced-resolution search has it, else null and starts it. */
+  private roughStretch(from: ImagePx, to: ImagePx, key: string): ImagePx[] | null {
+    const done = this.coarsePaths.get(key);
+    if (done) return done;
+    if (this.closed || this.coarseAsked.has(key)) return null;
+    const W = this.bitmap.width;
+    const H = this.bitmap.height;
+    const tree = [...this.coarseTrees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H, 2 * Math.max(t.sx, t.sy)));
+    if (tree) {
+      this.coarseAsked.add(key);
+      const c: [number, number] = [(to[0] - tree.win.x0) / tree.sx, (to[1] - tree.win.y0) / tree.sy];
+      this.coarse().postMessage({ type: 'path', id: tree.id, key, to: c } satisfies TraceWorkerRequest);
+      return null;
+    }
+    this.coarseWanted = { from, win: traceWindow(from, to, W, H) };
+    this.pumpCoarse();
     return null;
+  }
+
+  private coarse(): Worker {
+    if (!this.coarseWorker) {
+      this.coarseWorker = new Worker(new URL('./workers/traceLine.worker.ts', import.meta.url), { type: 'module' });
+      this.coarseWorker.onmessage = (e: MessageEvent<TraceWorkerReply>) => this.receiveCoarse(e.data);
+    }
+    return this.coarseWorker;
+  }
+
+  /** Sends the wanted rough tree when no other is being built: the window read reduced (COARSE_PIXELS), as one tile. */
+  private pumpCoarse(): void {
+    if (this.coarseBuilding || !this.coarseWanted || this.closed) return;
+    const { from, win } = this.coarseWanted;
+    this.coarseWanted = null;
+    const step = Math.max(2, Math.sqrt((win.w * win.h) / COARSE_PIXELS));
+    const cw = Math.max(1, Math.round(win.w / step));
+    const ch = Math.max(1, Math.round(win.h / step));
+    this.coarseBuilding = true;
+    const id = this.nextId++;
+    const key = `coarse-${id}`;
+    const [sx, sy] = [win.w / cw, win.h / ch];
+    createImageBitmap(this.bitmap, win.x0, win.y0, win.w, win.h, { resizeWidth: cw, resizeHeight: ch, resizeQuality: 'medium' }).then((bitmap) => {
+      if (this.closed) return;
+      const worker = this.coarse();
+      const whole = { x0: 0, y0: 0, w: cw, h: ch };
+      worker.postMessage({ type: 'tile', key, tile: whole, crop: whole, bitmap } satisfies TraceWorkerRequest, [bitmap]);
+      const c: [number, number] = [(from[0] - win.x0) / sx, (from[1] - win.y0) / sy];
+      worker.postMessage({ type: 'tree', id, from: c, win: whole, tileKeys: [key] } satisfies TraceWorkerRequest);
+      // The tile served only this tree: the worker keeps the tree's own copy of its features.
+      worker.postMessage({ type: 'drop', keys: [key] } satisfies TraceWorkerRequest);
+      this.coarseTrees.push({ id, from, win, sx, sy });
+      while (this.coarseTrees.length > TREES_KEPT) this.coarseTrees.shift();
+    }).catch((err: unknown) => {
+      this.coarseBuilding = false;
+      console.error(`Line tracing: ${err instanceof Error ? err.message : String(err)}`);
+    });
+  }
+
+  private receiveCoarse(m: TraceWorkerReply): void {
+    if (this.closed) return;
+    if (m.type === 'treeDone') {
+      this.coarseBuilding = false;
+      this.pumpCoarse();
+    } else if (m.type === 'path') {
+      this.coarseAsked.delete(m.key);
+      const tree = this.coarseTrees.find((t) => t.id === m.id);
+      if (m.points && tree) {
+        // Back to image pixels, with the ends exactly at the anchor and the pointer.
+        const pts: ImagePx[] = m.points.map(([u, v]) => [tree.win.x0 + u * tree.sx, tree.win.y0 + v * tree.sy]);
+        const [a, b] = m.key.split('|').map((t) => t.split(',').map(Number) as ImagePx);
+        pts[0] = a;
+        pts[pts.length - 1] = b;
+        this.coarsePaths.set(m.key, pts);
+        while (this.coarsePaths.size > PATHS_KEPT) this.coarsePaths.delete(this.coarsePaths.keys().next().value as string);
+      } else {
+        this.coarseTrees = this.coarseTrees.filter((t) => t.id !== m.id);
+      }
+    } else {
+      console.error(`Line tracing: ${m.message}`);
+    }
+    this.onReady();
   }
 
   private post(m: TraceWorkerRequest, transfer: Transferable[] = []): void {
