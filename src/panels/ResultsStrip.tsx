@@ -40,6 +40,7 @@ export function ResultsStrip() {
             <span className="strip-figure">
               <span className="strip-label">Displacement</span>
               <strong data-testid="strip-displacement">{live.displacement === null || live.noDetachment ? '—' : formatLength(live.displacement, live.units)}</strong>
+              {live.regime && <span className="strip-aside" data-testid="strip-regime">{live.regime}</span>}
             </span>
             {live.note && <span className="strip-note" data-testid="strip-note">{live.note}</span>}
           </>

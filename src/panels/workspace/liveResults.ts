@@ -2,6 +2,7 @@
 // analyseDocGesture) that the pane, the graph, the detachment line and the exports read too, so the strip
 // cannot disagree with them. It follows a regional drag every frame through that analysis's fast path.
 import type { DocAnalysis } from '../../core/analysis/analyseDocSection';
+import type { Regime } from '../../core/analysis/analyseSection';
 import { activeScenario } from '../../core/model/docToSection';
 import type { ProjectDoc } from '../../core/model/projectDoc';
 import type { LengthUnit } from '../../core/model/section';
@@ -20,6 +21,8 @@ export type LiveResults =
     /** Null when fewer than two included horizons at distinct depths. */
     detachmentDepth: number | null; detachmentElevation: number | null; displacement: number | null;
     noDetachment: boolean; referenceElevation: number; note: string | null;
+    /** Shortening or extension, from the area–depth line; null without a detachment. */
+    regime: Regime | null;
   };
 
 /** Returns the strip's numbers for the document (section units; areas in units²), or why there are none yet. */
@@ -54,6 +57,7 @@ export function liveResultsOf(doc: ProjectDoc, d: DocAnalysis): LiveResults {
     displacement: ad ? ad.displacement : null,
     noDetachment: ad?.noDetachment ?? false,
     referenceElevation: a.referenceElevation,
+    regime: ad && !ad.noDetachment ? ad.regime : null,
     note: [fitNote, leftOut].filter((s) => s !== null).join(' ') || null,
   };
 }
