@@ -48,6 +48,8 @@ const WITH_SCANS = !process.argv.includes('--no-scans') && !process.argv.include
 const WITH_TRACE = !process.argv.includes('--no-trace');
 const ONLY_TRACE = process.argv.includes('--only-trace');
 const TRACE_MP = Number(flag('trace-mp') ?? 200);
+/** A folder for screenshots of the tracing rows' first previews (optional). */
+const SHOTS = flag('shots');
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -551,7 +553,9 @@ async function tracing(page: Page): Promise<void> {
   await page.mouse.move(b.x, b.y);
   // Wait until the preview follows the line (more than anchor and pointer), then until it has not changed for 3 s.
   await until(page, 'window.__previewLog.some((e) => e[1] > 2)', 120_000, 'no traced preview appeared');
+  if (SHOTS) await page.screenshot({ path: `${SHOTS}/bench-trace-first-preview-${TRACE_MP}mp.png` });
   await until(page, 'performance.now() - window.__previewLog[window.__previewLog.length - 1][0] > 3000', 180_000, 'the preview never settled');
+  if (SHOTS) await page.screenshot({ path: `${SHOTS}/bench-trace-full-preview-${TRACE_MP}mp.png` });
   const log = (await page.evaluate('window.__previewLog')) as [number, number][];
   const firstFollowing = log.find((e) => e[1] > 2)!;
   const settled = log[log.length - 1];
@@ -569,15 +573,31 @@ async function tracing(page: Page): Promise<void> {
     later.push(((await page.evaluate(`window.__previewLog[${n}][0]`)) as number) - t);
   }
   report({ work: `trace preview, later pointer positions (${TRACE_MP} MP)`, ms: median(later), floor: FRAME_MS, note: `largest ${later.reduce((m, x) => Math.max(m, x), 0).toFixed(1)} ms of ${later.length}; move → redrawn` });
-  await page.evaluate('window.__previewObserver.disconnect()');
+  // Place the anchor, let a second pass (the user's hand moving on), then preview the next 3,000 px: the trees
+  // around the new anchor were started when it was placed.
   const end = toScreen(u1, lineV(u1));
   await page.mouse.click(end.x, end.y);
+  await new Promise((r) => setTimeout(r, 1000));
+  const u2 = Math.min(side - 200, u1 + 3000);
+  const next = toScreen(u2, lineV(u2));
+  const n2 = (await page.evaluate('window.__previewLog.length')) as number;
+  const t2 = await now(page);
+  await page.mouse.move(next.x, next.y);
+  await until(page, `window.__previewLog.slice(${n2}).some((e) => e[1] > 2)`, 120_000, 'no traced preview from the second anchor');
+  await until(page, 'performance.now() - window.__previewLog[window.__previewLog.length - 1][0] > 3000', 180_000, 'the second preview never settled');
+  const log2 = ((await page.evaluate('window.__previewLog')) as [number, number][]).slice(n2);
+  const first2 = log2.find((e) => e[1] > 2)!;
+  const settled2 = log2[log2.length - 1];
+  report({ work: `trace preview from the next anchor, ${u2 - u1} px: first that follows`, ms: first2[0] - t2, floor: FRAME_MS, note: `${first2[1]} points; anchor placed 1 s before the move` });
+  report({ work: `trace preview from the next anchor, ${u2 - u1} px: full resolution`, ms: settled2[0] - t2, floor: FRAME_MS, note: `${settled2[1]} points; its tree built ahead since the click` });
+  await page.evaluate('window.__previewObserver.disconnect()');
+  await page.mouse.click(next.x, next.y);
   await page.keyboard.press('Enter');
   await page.getByTestId('horizon-list').locator('li').first().waitFor();
   const after = await rendererMb(page);
   if (before !== null && after !== null) {
     report({ work: `renderer memory with a ${TRACE_MP} MP scan: before tracing`, ms: before, floor: (side * side * 4) / 1048576, unit: 'MB', note: 'floor: its RGBA size' });
-    report({ work: `renderer memory with a ${TRACE_MP} MP scan: after one 3,000 px stretch`, ms: after, floor: before, unit: 'MB', note: `tracing holds ${(after - before).toFixed(0)} MB (workers, tiles, trees)` });
+    report({ work: `renderer memory with a ${TRACE_MP} MP scan: after two traced stretches`, ms: after, floor: before, unit: 'MB', note: `tracing holds ${(after - before).toFixed(0)} MB (workers, tiles, trees)` });
   }
 }
 
