@@ -42,7 +42,10 @@ function projectSection(doc: ProjectDoc, scenarioName: string | undefined): File
     return { ok: false, message: ds.fit ? `${who} has no pins: place the two pins in the app, save, and run again.` : `the project's calibration cannot be used: ${ds.message}` };
   }
   // Horizons not ready are left out with a note, as the app does; with none left there is nothing to analyse.
-  const left = ds.skipped.map((s) => `Horizon "${s.name}" is left out: ${s.reason}.`);
+  const left = [
+    ...ds.skippedFaults.map((f) => `Fault "${f.name}" is left out: ${f.reason}.`),
+    ...ds.skipped.map((s) => `Horizon "${s.name}" is left out: ${s.reason}.`),
+  ];
   if (ds.section.horizons.length === 0) {
     if (doc.horizons.length === 0) return { ok: false, message: 'the project has no horizons: digitise at least one horizon in the app, save, and run again.' };
     const why = ds.skipped.map((s) => `"${s.name}" (${s.reason})`).join(', ');

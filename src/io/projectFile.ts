@@ -70,9 +70,6 @@ function parse(text: string, fileName: string): OpenedProject {
     if (!checked.ok) {
       return { ok: false, message: `${who} looks like a section file but is not valid: ${checked.problems.slice(0, 3).map((p) => p.message).join(' ')}` };
     }
-    if (checked.section.horizons.some((h) => h.pieces && h.pieces.length > 1)) {
-      return { ok: false, message: `${who} has horizons in pieces (cut by faults), which the workspace cannot open yet; analyse it with the command line (npm run analyse).` };
-    }
     return { ok: true, doc: sectionToProjectDoc(checked.section, baseName(fileName)), scan: null, kind: 'section', migratedFrom: null, notes: ['Opened as a section file: the horizons are drawn on a true-scale canvas (no scan).'] };
   }
   const migrated = migrateProjectFile(raw);

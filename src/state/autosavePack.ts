@@ -27,8 +27,9 @@ export function unpackPoints(flat: Float64Array): ImagePx[] {
 }
 
 /** The document with its horizons' and regionals' vertices packed (packPoints); everything else as it is. */
-export type PackedDoc = Omit<ProjectDoc, 'horizons' | 'scenarios'> & {
+export type PackedDoc = Omit<ProjectDoc, 'horizons' | 'faults' | 'scenarios'> & {
   horizons: (Omit<ProjectDoc['horizons'][number], 'pointsPx'> & { pointsPx: Float64Array })[];
+  faults: (Omit<ProjectDoc['faults'][number], 'pointsPx'> & { pointsPx: Float64Array })[];
   scenarios: (Omit<ProjectDoc['scenarios'][number], 'regionals'> & { regionals: Record<string, Float64Array> })[];
 };
 
@@ -39,6 +40,7 @@ export function packDoc(doc: ProjectDoc): PackedDoc {
   return {
     ...doc,
     horizons: doc.horizons.map((h) => ({ ...h, pointsPx: packPoints(h.pointsPx) })),
+    faults: Array.isArray(doc.faults) ? doc.faults.map((f) => ({ ...f, pointsPx: packPoints(f.pointsPx) })) : doc.faults,
     scenarios: doc.scenarios.map((s) => ({ ...s, regionals: Object.fromEntries(Object.entries(s.regionals).map(([id, r]) => [id, packPoints(r)])) })),
   };
 }
@@ -49,11 +51,13 @@ export function packDoc(doc: ProjectDoc): PackedDoc {
  */
 export function unpackDoc(stored: unknown): unknown {
   if (typeof stored !== 'object' || stored === null) return stored;
-  const d = stored as { horizons?: unknown; scenarios?: unknown };
+  const d = stored as { horizons?: unknown; faults?: unknown; scenarios?: unknown };
   const line = (x: unknown) => (x instanceof Float64Array ? unpackPoints(x) : x);
+  const lines = (list: unknown[]) => list.map((h: unknown) => (typeof h === 'object' && h !== null ? { ...h, pointsPx: line((h as { pointsPx?: unknown }).pointsPx) } : h));
   return {
     ...d,
-    ...(Array.isArray(d.horizons) ? { horizons: d.horizons.map((h: unknown) => (typeof h === 'object' && h !== null ? { ...h, pointsPx: line((h as { pointsPx?: unknown }).pointsPx) } : h)) } : {}),
+    ...(Array.isArray(d.horizons) ? { horizons: lines(d.horizons) } : {}),
+    ...(Array.isArray(d.faults) ? { faults: lines(d.faults) } : {}),
     ...(Array.isArray(d.scenarios)
       ? {
           scenarios: d.scenarios.map((s: unknown) => {

@@ -30,6 +30,7 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number): Proj
     locked: false,
     pointsPx: (h.line ?? []).map(toPx),
     projected: h.projected ?? [],
+    joins: [],
   }));
   const regionals: Record<string, [number, number][]> = {};
   section.horizons.forEach((h, i) => {

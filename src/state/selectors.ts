@@ -6,19 +6,19 @@ import { analyseDoc, analyseDocGesture, prepareDocGesture, type DocGestureBase }
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
 
-// docToSection reads the scenario, the horizons, the calibration and the units and nothing else, so
-// the result is memoised on those four objects: editing one scenario (or undoing to a document that
+// docToSection reads the scenario, the horizons, the faults, the calibration and the units and nothing
+// else, so the result is memoised on those five objects: editing one scenario (or undoing to a document that
 // shares them) does not re-analyse the others.
-interface Entry { horizons: ProjectDoc['horizons']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; result: DocAnalysis }
+interface Entry { horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; result: DocAnalysis }
 const cache = new WeakMap<Scenario, Entry>();
 
 /** Returns the analysis of the document's active (or given) scenario, memoised on what it depends on. */
 export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysis {
   const scenario = activeScenario(doc, scenarioId);
   const hit = scenario ? cache.get(scenario) : undefined;
-  if (hit && hit.horizons === doc.horizons && hit.calibration === doc.calibration && hit.units === doc.units) return hit.result;
+  if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units) return hit.result;
   const result = analyseDoc(doc, scenarioId);
-  if (scenario) cache.set(scenario, { horizons: doc.horizons, calibration: doc.calibration, units: doc.units, result });
+  if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, result });
   return result;
 }
 

@@ -14,7 +14,7 @@ function doc(): ProjectDoc {
   d.calibration = { kind: 'axes', xPoints: [{ u: 0, v: 0, value: 0 }, { u: 1000, v: 0, value: 2000 }], zPoints: [{ u: 0, v: 0, value: 0 }, { u: 0, v: 1000, value: -2000 }] };
   for (let k = 0; k < 2; k++) {
     const pointsPx: [number, number][] = Array.from({ length: 500 }, (_, i) => [i * 2, 300 + 200 * k - (60 + 80 * k) * Math.sin((Math.PI * i) / 499)]);
-    d.horizons.push({ id: `h${k}`, name: `H${k}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: [] });
+    d.horizons.push({ id: `h${k}`, name: `H${k}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: [], joins: [] });
     d.scenarios[0].regionals[`h${k}`] = [[0, 300 + 200 * k], [998, 300 + 200 * k]];
   }
   d.scenarios[0].pinsPx = [[20, 0], [980, 0]];

@@ -25,7 +25,7 @@ function doc(shortRegional: number | null): ProjectDoc {
     const area = 1000 * (3000 - 500 * k);
     const height = (2 * area) / 8000;
     const id = `h${k + 1}`;
-    d.horizons.push({ id, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, projected: [],
+    d.horizons.push({ id, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, projected: [], joins: [],
       pointsPx: [px(-800, r), px(1000, r), px(5000, r + height), px(9000, r), px(10_800, r)] });
     d.scenarios[0].regionals[id] = [px(-800, r), px(k === shortRegional ? 9500 : 10_800, r)];
   }

@@ -20,7 +20,7 @@ function doc(): ProjectDoc {
       const u = 100 + i * 4.75;
       pointsPx.push([u, 300 + k * 200 - (400 - 40 * k) * Math.sin((Math.PI * (u - 100)) / 3800) ** 2 + 0.5 * Math.sin(i)]);
     }
-    d.horizons.push({ id: `h${k + 1}`, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: k === 2 ? [[300, 420]] : [] });
+    d.horizons.push({ id: `h${k + 1}`, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: k === 2 ? [[300, 420]] : [], joins: [] });
     d.scenarios[0].regionals[`h${k + 1}`] = [[50, 300 + k * 200], [3950, 300 + k * 200]];
   }
   d.scenarios[0].pinsPx = [[150, 0], [3800, 0]];

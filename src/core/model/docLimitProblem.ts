@@ -9,12 +9,14 @@ import type { ProjectDoc } from './projectDoc';
 export function docLimitProblem(doc: ProjectDoc): string | null {
   const names: [string, string][] = [[doc.title, 'project title'], [doc.author, 'author']];
   for (const h of doc.horizons) names.push([h.name, 'horizon name']);
+  for (const f of doc.faults ?? []) names.push([f.name, 'fault name']);
   for (const s of doc.scenarios) names.push([s.name, 'scenario name']);
   for (const [name, what] of names) {
     const p = nameLengthProblem(name, what);
     if (p) return p;
   }
   if (doc.horizons.length > LIMITS.horizons) return tooManyMessage('horizons', doc.horizons.length, LIMITS.horizons);
+  if ((doc.faults ?? []).length > LIMITS.faults) return tooManyMessage('faults', doc.faults.length, LIMITS.faults);
   if (doc.scenarios.length > LIMITS.scenarios) return tooManyMessage('scenarios', doc.scenarios.length, LIMITS.scenarios);
   let total = 0;
   const line = (n: number) => {
@@ -23,6 +25,10 @@ export function docLimitProblem(doc: ProjectDoc): string | null {
   };
   for (const h of doc.horizons) {
     const p = line(h.pointsPx.length);
+    if (p) return p;
+  }
+  for (const f of doc.faults ?? []) {
+    const p = line(f.pointsPx.length);
     if (p) return p;
   }
   for (const s of doc.scenarios) {

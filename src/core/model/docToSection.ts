@@ -1,13 +1,18 @@
 // The bridge from the project document (image pixels) to the engine's plain section (section units).
 import { fitCalibration, type FittedCalibration } from '../calibration/fitCalibration';
 import { imageToSection } from '../calibration/mapPoints';
-import type { ProjectDoc, Scenario } from './projectDoc';
-import type { Section, SectionHorizon } from './section';
+import { nearestOnPolyline } from '../geometry/nearestOnPolyline';
+import { selfIntersections } from '../geometry/selfIntersections';
+import type { DocFault, DocHorizon, ProjectDoc, Scenario } from './projectDoc';
+import type { Section, SectionFault, SectionHorizon, XZ } from './section';
+import { ON_FAULT_TOLERANCE } from './validateSectionArrays';
 
 export interface SkippedHorizon { id: string; name: string; reason: string }
+/** A fault left out of the section (too few vertices, or a line that crosses itself), with the reason. */
+export interface SkippedFault { id: string; name: string; reason: string }
 
 export type DocSection =
-  | { ok: true; section: Section; fit: FittedCalibration; horizonIds: string[]; skipped: SkippedHorizon[] }
+  | { ok: true; section: Section; fit: FittedCalibration; horizonIds: string[]; skipped: SkippedHorizon[]; skippedFaults: SkippedFault[] }
   | { ok: false; message: string; fit: FittedCalibration | null };
 
 /** Returns the active (or given) scenario of the document. */
@@ -16,7 +21,7 @@ export function activeScenario(doc: ProjectDoc, scenarioId?: string): Scenario {
   return doc.scenarios.find((s) => s.id === id) ?? doc.scenarios[0];
 }
 
-/** Returns the scenario's section in section units, skipping (with a reason) horizons not ready to analyse. */
+/** Returns the scenario's section in section units, skipping (with a reason) horizons and faults not ready to analyse. */
 export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
   if (!doc.calibration) return { ok: false, message: 'Calibrate the scan first: give known x and z positions.', fit: null };
   const cal = fitCalibration(doc.calibration);
@@ -26,6 +31,9 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
   if (!scenario?.pinsPx) return { ok: false, message: 'Place the two pins.', fit };
   const pl = imageToSection(fit, scenario.pinsPx[0])[0];
   const pr = imageToSection(fit, scenario.pinsPx[1])[0];
+  const toXZ = (p: [number, number]): XZ => imageToSection(fit, p);
+  const { faults, usable, skippedFaults } = readFaults(doc.faults, toXZ);
+  const tolerance = ON_FAULT_TOLERANCE * Math.abs(pr - pl);
   const horizons: SectionHorizon[] = [];
   const horizonIds: string[] = [];
   const skipped: SkippedHorizon[] = [];
@@ -39,10 +47,15 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
       skipped.push({ id: h.id, name: h.name, reason: 'no regional yet' });
       continue;
     }
+    const shape = horizonShape(h, doc.faults, usable, toXZ, tolerance, doc.units);
+    if (typeof shape === 'string') {
+      skipped.push({ id: h.id, name: h.name, reason: shape });
+      continue;
+    }
     horizons.push({
       name: h.name,
-      line: h.pointsPx.map((p) => imageToSection(fit, p)),
-      regional: regional.map((p) => imageToSection(fit, p)),
+      ...shape,
+      regional: regional.map(toXZ),
       include: !scenario.excluded.includes(h.id),
       ...(h.projected.length ? { projected: h.projected.map(([a, b]) => [a, b] as [number, number]) } : {}),
     });
@@ -55,6 +68,71 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
     // One scan pixel: the digitising resolves no finer length change.
     resolution: Math.max(Math.abs(fit.unitsPerPxX), Math.abs(fit.unitsPerPxZ)),
     ...(scenario.referenceElevation !== undefined ? { referenceElevation: scenario.referenceElevation } : {}),
+    ...(faults.length ? { faults } : {}),
   };
-  return { ok: true, section, fit, horizonIds, skipped };
+  return { ok: true, section, fit, horizonIds, skipped, skippedFaults };
+}
+
+/** The document's faults in section units, those usable for joins (by id), and the ones left out with the reason. */
+function readFaults(docFaults: readonly DocFault[], toXZ: (p: [number, number]) => XZ) {
+  const faults: SectionFault[] = [];
+  const usable = new Map<string, SectionFault>();
+  const skippedFaults: SkippedFault[] = [];
+  for (const f of docFaults) {
+    if (f.pointsPx.length < 2) {
+      skippedFaults.push({ id: f.id, name: f.name, reason: 'fewer than two vertices' });
+      continue;
+    }
+    const line = f.pointsPx.map(toXZ);
+    const crossing = selfIntersections(line.map((q) => q[0]), line.map((q) => q[1]), 1);
+    if (crossing.length > 0) {
+      const [i, j] = crossing[0];
+      skippedFaults.push({ id: f.id, name: f.name, reason: `the line crosses itself (segments ${i}–${i + 1} and ${j}–${j + 1}); redraw it so it does not` });
+      continue;
+    }
+    const sf = { name: f.name, line };
+    faults.push(sf);
+    usable.set(f.id, sf);
+  }
+  return { faults, usable, skippedFaults };
+}
+
+/**
+ * The horizon's line, or its pieces with the name of each join's fault; or why it cannot be joined: a join
+ * on a fault that is missing or left out, a piece of fewer than two vertices, a piece end off its fault.
+ */
+function horizonShape(
+  h: DocHorizon, docFaults: readonly DocFault[], usable: ReadonlyMap<string, SectionFault>,
+  toXZ: (p: [number, number]) => XZ, tolerance: number, units: string,
+): Pick<SectionHorizon, 'line' | 'pieces' | 'joinFaults'> | string {
+  if (h.joins.length === 0) return { line: h.pointsPx.map(toXZ) };
+  const pieces: XZ[][] = [];
+  const joinFaults: string[] = [];
+  let from = 0;
+  for (let k = 0; k <= h.joins.length; k++) {
+    const to = k < h.joins.length ? h.joins[k].at : h.pointsPx.length;
+    if (to - from < 2) return `piece ${k + 1} has fewer than two vertices`;
+    pieces.push(h.pointsPx.slice(from, to).map(toXZ));
+    from = to;
+  }
+  for (let k = 0; k < h.joins.length; k++) {
+    const id = h.joins[k].faultId;
+    const named = docFaults.find((f) => f.id === id);
+    const fault = usable.get(id);
+    if (!named) return `the join after piece ${k + 1} is on a fault the document no longer has; join it again or remove the join`;
+    if (!fault) return `it is joined on fault "${named.name}", which is left out (see the fault's own message)`;
+    joinFaults.push(fault.name);
+    const ends: [string, XZ][] = [[`the end of piece ${k + 1}`, pieces[k][pieces[k].length - 1]], [`the start of piece ${k + 2}`, pieces[k + 1][0]]];
+    for (const [what, p] of ends) {
+      const near = nearestOnPolyline(fault.line.map((q) => q[0]), fault.line.map((q) => q[1]), p[0], p[1]);
+      if (near && near.distance > tolerance) {
+        return `${what} is ${fmt(near.distance)} ${units} off fault "${fault.name}", which it is joined along; move it onto the fault`;
+      }
+    }
+  }
+  return { pieces, joinFaults };
+}
+
+function fmt(v: number): string {
+  return String(Number(v.toPrecision(3)));
 }

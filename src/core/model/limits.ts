@@ -8,6 +8,7 @@ export const LIMITS = {
   /** Characters in a name (horizon, scenario, project title, author). */
   nameLength: 500,
   horizons: 2000,
+  faults: 2000,
   /** Vertices in one line (horizon or regional). */
   pointsPerLine: 200_000,
   /** Vertices in all lines of a document together. */

@@ -35,8 +35,31 @@ export interface DocHorizon {
   locked: boolean;
   /** Vertices in image pixels, in digitising order. */
   pointsPx: ImagePx[];
-  /** Runs of vertex indices [from, to] (inclusive) that are projected (eroded, interpreted). */
+  /** Runs of vertex indices [from, to] (inclusive) that are projected (eroded, interpreted); indices count
+   *  along pointsPx, so for a horizon in pieces along the pieces in order. */
   projected: [number, number][];
+  /**
+   * Where the horizon is cut by faults, in increasing `at`: a new piece starts at vertex `at` (the piece before
+   * it ends at `at - 1`), and that end and this start both lie on fault `faultId` (the two cutoffs), joined along
+   * the fault's trace. Empty: one unbroken line.
+   */
+  joins: HorizonJoin[];
+}
+
+/** A cut of a horizon by a fault: the piece starting at vertex `at` follows the previous one along fault `faultId`. */
+export interface HorizonJoin { at: number; faultId: string }
+
+/** A fault: a polyline in image pixels that horizons in pieces are joined along (docs/method.md §Faults and horizons in pieces). */
+export interface DocFault {
+  /** "fault-1", "fault-2", …; joins refer to a fault by id, so renaming keeps them. */
+  id: string;
+  /** Unique among the faults (the section file joins by name). */
+  name: string;
+  colour: string;
+  visible: boolean;
+  locked: boolean;
+  /** Vertices in image pixels, in digitising order. */
+  pointsPx: ImagePx[];
 }
 
 export interface Scenario {
@@ -62,7 +85,7 @@ export interface ProjectSettings {
  * The version of the document this build writes, in the document (`schemaVersion`) and in the project
  * file (`version`): one number. To add a version, see src/core/model/migrations/README.md.
  */
-export const SCHEMA_VERSION = 1;
+export const SCHEMA_VERSION = 2;
 
 export interface ProjectDoc {
   schemaVersion: typeof SCHEMA_VERSION;
@@ -73,6 +96,8 @@ export interface ProjectDoc {
   calibration: Calibration | null;
   /** In stratigraphic order, youngest (top) first. */
   horizons: DocHorizon[];
+  /** Faults the horizons' pieces are joined along, in drawing order. */
+  faults: DocFault[];
   scenarios: Scenario[];
   activeScenarioId: string;
   settings: ProjectSettings;
@@ -90,6 +115,7 @@ export function emptyProjectDoc(): ProjectDoc {
     scan: null,
     calibration: null,
     horizons: [],
+    faults: [],
     scenarios: [{ id: 'scenario-1', name: 'Base case', pinsPx: null, regionals: {}, excluded: [] }],
     activeScenarioId: 'scenario-1',
     settings: { showDetachment: true, showGrid: false, showFills: true },

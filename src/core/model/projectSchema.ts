@@ -40,6 +40,15 @@ const horizon = z.object({
   locked: z.boolean(),
   pointsPx: line,
   projected: z.array(z.tuple([z.number().int().nonnegative(), z.number().int().nonnegative()])).max(PROJECT_LIMITS.pointsPerLine),
+  joins: z.array(z.object({ at: z.number().int().positive(), faultId: id })).max(PROJECT_LIMITS.pointsPerLine),
+});
+
+const fault = z.object({
+  id, name,
+  colour: z.string().max(64),
+  visible: z.boolean(),
+  locked: z.boolean(),
+  pointsPx: line,
 });
 
 const scenario = z.object({
@@ -60,6 +69,7 @@ const docShape = {
   scan: scanRef.nullable(),
   calibration: calibration.nullable(),
   horizons: z.array(horizon).max(PROJECT_LIMITS.horizons),
+  faults: z.array(fault).max(PROJECT_LIMITS.faults),
   scenarios: z.array(scenario).min(1).max(PROJECT_LIMITS.scenarios),
   activeScenarioId: id,
   settings: z.looseObject(settingsShape),
@@ -93,6 +103,18 @@ export function checkProjectDoc(value: unknown): ProjectDocCheck {
     if (ids.has(h.id)) return { ok: false, message: `The project document is not valid — two horizons share the id "${h.id}".` };
     ids.add(h.id);
   }
+  const faultIds = new Set<string>();
+  const faultNames = new Set<string>();
+  for (const f of doc.faults) {
+    if (faultIds.has(f.id)) return { ok: false, message: `The project document is not valid — two faults share the id "${f.id}".` };
+    if (faultNames.has(f.name)) return { ok: false, message: `The project document is not valid — two faults share the name "${f.name}".` };
+    faultIds.add(f.id);
+    faultNames.add(f.name);
+  }
+  for (const h of doc.horizons) {
+    const bad = joinProblem(h.joins, h.pointsPx.length, faultIds);
+    if (bad) return { ok: false, message: `The project document is not valid — horizon "${h.name}": ${bad}.` };
+  }
   if (!doc.scenarios.some((s) => s.id === doc.activeScenarioId)) {
     return { ok: false, message: 'The project document is not valid — activeScenarioId names no scenario.' };
   }
@@ -101,6 +123,8 @@ export function checkProjectDoc(value: unknown): ProjectDocCheck {
 
 /** What a path's array is a list of, for the shared words of a count over its limit. */
 function listWhat(key: PropertyKey | undefined): string {
+  if (key === 'faults') return 'faults';
+  if (key === 'joins') return 'cuts by faults';
   if (key === 'horizons' || key === 'scenarios' || key === 'excluded') return key === 'excluded' ? 'left-out horizons' : key;
   if (key === 'xPoints' || key === 'zPoints' || key === 'points') return 'calibration points';
   if (key === 'projected') return 'projected runs';
@@ -112,7 +136,18 @@ function limitWords(value: unknown, issue: z.core.$ZodIssue): string | null {
   if (issue.code !== 'too_big') return null;
   let at: unknown = value;
   for (const key of issue.path) at = typeof at === 'object' && at !== null ? (at as Record<PropertyKey, unknown>)[key] : undefined;
-  if (typeof at === 'string') return nameLengthProblem(at, issue.path.some((k) => k === 'horizons') ? 'horizon name' : issue.path.some((k) => k === 'scenarios') ? 'scenario name' : String(issue.path[issue.path.length - 1] ?? 'name'));
+  if (typeof at === 'string') return nameLengthProblem(at, issue.path.some((k) => k === 'horizons') ? 'horizon name' : issue.path.some((k) => k === 'faults') ? 'fault name' : issue.path.some((k) => k === 'scenarios') ? 'scenario name' : String(issue.path[issue.path.length - 1] ?? 'name'));
   if (Array.isArray(at)) return tooManyMessage(listWhat(issue.path[issue.path.length - 1] === undefined ? undefined : issue.path[issue.path.length - 1]), at.length, Number(issue.maximum));
+  return null;
+}
+
+/** Why a horizon's joins do not fit its vertices and the faults (every piece >= 2 vertices, `at` increasing), or null. */
+function joinProblem(joins: readonly { at: number; faultId: string }[], n: number, faultIds: ReadonlySet<string>): string | null {
+  let prev = 0;
+  for (const j of joins) {
+    if (!faultIds.has(j.faultId)) return `a join names fault id "${j.faultId}", which the document does not have`;
+    if (j.at < prev + 2 || j.at > n - 2) return `the join at vertex ${j.at} leaves a piece with fewer than two vertices (joins must increase and every piece needs two)`;
+    prev = j.at;
+  }
   return null;
 }

@@ -13,6 +13,7 @@ export const POOR_FIT_R2 = 0.9;
 export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | null, leftOut: readonly LeftOutHorizon[] = []): Diagnostic[] {
   if (!docSection.ok) return [{ level: 'info', text: docSection.message }];
   const out: Diagnostic[] = docSection.skipped.map((s) => ({ level: 'info' as const, text: `Horizon "${s.name}" is left out: ${s.reason}.` }));
+  for (const f of docSection.skippedFaults) out.push({ level: 'info', text: `Fault "${f.name}" is left out: ${f.reason}.` });
   // The others are analysed without them (selectors: analyseLenient); the reason is the engine's.
   for (const h of leftOut) out.push({ level: 'warning', text: `left out: ${h.name} — ${h.reason}` });
   if (!outcome) return [...out, { level: 'info', text: 'Draw a regional for at least two horizons to see the area–depth line.' }];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseProjectText, serializeProject } from '../../../src/io/projectFile';
-import { emptyProjectDoc } from '../../../src/core/model/projectDoc';
+import { emptyProjectDoc, SCHEMA_VERSION } from '../../../src/core/model/projectDoc';
 import { SECTION_CAUTION } from '../../../src/core/analysis/caution';
 import { SAMPLE_SECTION, sampleDoc } from './sampleDoc';
 
@@ -45,7 +45,7 @@ describe('serializeProject / parseProjectText', () => {
     expect(!parseProjectText('', 'e.json').ok).toBe(true);
     const foreign = parseProjectText('{"hello": 1}', 'f.json');
     expect(!foreign.ok && foreign.message).toMatch(/not a Foldroot project/);
-    const newer = parseProjectText(JSON.stringify({ format: 'foldroot-project', version: 2, doc: emptyProjectDoc(), scan: null }), 'n.json');
+    const newer = parseProjectText(JSON.stringify({ format: 'foldroot-project', version: SCHEMA_VERSION + 1, doc: emptyProjectDoc(), scan: null }), 'n.json');
     expect(!newer.ok && newer.message).toMatch(/newer Foldroot/);
   });
 

@@ -20,7 +20,7 @@ function bigDoc(): ProjectDoc {
       const u = 100 + i * 1.9;
       pointsPx.push([u, 200 + k * 120 - (300 - 20 * k) * Math.sin((Math.PI * (u - 100)) / 3800) ** 2 + 0.5 * Math.sin(i)]);
     }
-    doc.horizons.push({ id: `h${k + 1}`, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: [] });
+    doc.horizons.push({ id: `h${k + 1}`, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, pointsPx, projected: [], joins: [] });
     doc.scenarios[0].regionals[`h${k + 1}`] = [[50, 200 + k * 120], [3950, 200 + k * 120]];
   }
   doc.scenarios[0].pinsPx = [[150, 0], [3800, 0]];

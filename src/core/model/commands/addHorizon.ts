@@ -45,7 +45,7 @@ export function addHorizon(
   if (doc.horizons.some((h) => h.id === horizon.id)) return doc;
   const name = horizon.name?.trim() ? freeName(doc, horizon.id, horizon.name) : nextHorizonName(doc, horizon.id);
   const h: DocHorizon = {
-    visible: true, locked: false, projected: [], ...horizon, name,
+    visible: true, locked: false, projected: [], joins: [], ...horizon, name,
     pointsPx: horizon.pointsPx.map(([u, v]) => [u, v]),
   };
   const horizons = doc.horizons.slice();

@@ -53,6 +53,7 @@ export function importHorizons(doc: ProjectDoc, horizons: ImportedHorizon[], uni
     locked: false,
     pointsPx: lines[i].map((q) => sectionToImage(f, q)),
     projected: [],
+    joins: [],
   }));
   return { ...doc, units: docUnits, calibration, horizons: [...doc.horizons, ...added] };
 }

@@ -3,6 +3,7 @@
 import { checkProjectDoc } from '../projectSchema';
 import { formatFieldProblem, PROJECT_FILE_VERSION, PROJECT_FORMAT, type EmbeddedScan, type ProjectFile } from './projectFileFormat';
 import { v0ToV1 } from './v0ToV1';
+import { v1ToV2 } from './v1ToV2';
 import { checkedText, contentCheck } from './contentCheck';
 
 export type MigrationResult = { ok: true; file: Record<string, unknown> } | { ok: false; message: string };
@@ -10,7 +11,7 @@ export type MigrationResult = { ok: true; file: Record<string, unknown> } | { ok
 export type MigrationStep = (file: Record<string, unknown>) => MigrationResult;
 
 /** steps[n] migrates version n to n + 1; adding a version appends its step here (README.md in this folder). */
-export const MIGRATION_STEPS: MigrationStep[] = [v0ToV1];
+export const MIGRATION_STEPS: MigrationStep[] = [v0ToV1, v1ToV2];
 
 export type ProjectFileCheck = { ok: true; file: ProjectFile; migratedFrom: number | null } | { ok: false; message: string };
 

@@ -15,8 +15,8 @@ export function fixtureDoc(): ProjectDoc {
   const doc = emptyProjectDoc();
   doc.calibration = { kind: 'affine', points: [{ u: 0, v: 0, x: 0, z: 1000 }, { u: 1000, v: 0, x: 10_000, z: 1000 }, { u: 0, v: 500, x: 0, z: -4000 }] };
   doc.horizons = [
-    { id: 'h1', name: 'Upper', colour: '#d1495b', visible: true, locked: false, pointsPx: [[0, 100], [200, 100], [500, 40], [800, 100], [1000, 100]], projected: [[1, 3]] },
-    { id: 'h2', name: 'Lower', colour: '#2e86ab', visible: true, locked: false, pointsPx: [[0, 210], [200, 200], [500, 160], [800, 200], [1000, 190]], projected: [] },
+    { id: 'h1', name: 'Upper', colour: '#d1495b', visible: true, locked: false, pointsPx: [[0, 100], [200, 100], [500, 40], [800, 100], [1000, 100]], projected: [[1, 3]], joins: [] },
+    { id: 'h2', name: 'Lower', colour: '#2e86ab', visible: true, locked: false, pointsPx: [[0, 210], [200, 200], [500, 160], [800, 200], [1000, 190]], projected: [], joins: [] },
   ];
   doc.scenarios[0].pinsPx = [[100, 300], [900, 300]];
   return deepFreeze(doc);

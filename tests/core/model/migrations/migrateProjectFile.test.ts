@@ -19,12 +19,12 @@ describe('migrateProjectFile', () => {
     expect(MIGRATION_STEPS.length).toBe(PROJECT_FILE_VERSION);
   });
 
-  it('migrates a version-0 file step by step to a valid version-1 document', () => {
+  it('migrates a version-0 file step by step to a valid current document', () => {
     const r = migrateProjectFile(v0);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.migratedFrom).toBe(0);
-    expect(r.file.version).toBe(1);
+    expect(r.file.version).toBe(PROJECT_FILE_VERSION);
     expect(r.file.doc.title).toBe('Version-0 sample (invented)');
     expect(r.file.doc.horizons.map((h) => h.name)).toEqual(['Upper marker', 'Lower marker']);
     expect(checkProjectDoc(r.file.doc).ok).toBe(true);
@@ -50,9 +50,9 @@ describe('migrateProjectFile', () => {
     expect(viaDoc.analysis.areaDepth!.detachmentDepth!).toBeCloseTo(direct.analysis.areaDepth!.detachmentDepth!, 6);
   });
 
-  it('keeps a version-1 file unchanged (migratedFrom null)', () => {
+  it('keeps a file of the current version unchanged (migratedFrom null)', () => {
     const doc = sectionToProjectDoc(v0.section as Section, 'x');
-    const r = migrateProjectFile({ format: 'foldroot-project', version: 1, doc, scan: null });
+    const r = migrateProjectFile({ format: 'foldroot-project', version: PROJECT_FILE_VERSION, doc, scan: null });
     expect(r.ok && r.migratedFrom).toBe(null);
     expect(r.ok && r.file.doc).toEqual(doc);
   });
@@ -60,7 +60,7 @@ describe('migrateProjectFile', () => {
   it('refuses a newer version with a message naming both versions', () => {
     const r = migrateProjectFile({ format: 'foldroot-project', version: 7, doc: emptyProjectDoc(), scan: null });
     expect(r.ok).toBe(false);
-    expect(!r.ok && r.message).toMatch(/version 7.*newer.*up to version 1/);
+    expect(!r.ok && r.message).toMatch(new RegExp(`version 7.*newer.*up to version ${PROJECT_FILE_VERSION}`));
   });
 
   it('refuses unknown versions, other formats and a version-0 file with a bad section', () => {
@@ -75,19 +75,19 @@ describe('migrateProjectFile', () => {
 
   it('refuses a version-1 file whose document breaks the schema, naming the path', () => {
     const doc = { ...emptyProjectDoc(), horizons: [{ id: 'a', name: 'A', colour: '#000', visible: true, locked: false, pointsPx: [[0, 'x']], projected: [] }] };
-    const r = migrateProjectFile({ format: 'foldroot-project', version: 1, doc, scan: null });
+    const r = migrateProjectFile({ format: 'foldroot-project', version: PROJECT_FILE_VERSION, doc, scan: null });
     expect(!r.ok && r.message).toMatch(/horizons\.0\.pointsPx\.0\.1/);
   });
 
-  it('opens a version-1 file with or without the "caution" field; the check covers the document, not the caution', () => {
+  it('opens a current file with or without the "caution" field; the check covers the document, not the caution', () => {
     const doc = sectionToProjectDoc(v0.section as Section, 'x');
     const check = contentCheck(checkedText(doc, null));
-    const withCaution = migrateProjectFile({ format: 'foldroot-project', version: 1, caution: SECTION_CAUTION, check, doc, scan: null });
-    const without = migrateProjectFile({ format: 'foldroot-project', version: 1, check, doc, scan: null });
+    const withCaution = migrateProjectFile({ format: 'foldroot-project', version: PROJECT_FILE_VERSION, caution: SECTION_CAUTION, check, doc, scan: null });
+    const without = migrateProjectFile({ format: 'foldroot-project', version: PROJECT_FILE_VERSION, check, doc, scan: null });
     expect(withCaution.ok && withCaution.file.doc).toEqual(doc);
     expect(without.ok && without.file.doc).toEqual(doc);
     // The check still catches a changed document when a caution is present.
-    const changed = migrateProjectFile({ format: 'foldroot-project', version: 1, caution: SECTION_CAUTION, check, doc: { ...doc, title: 'y' }, scan: null });
+    const changed = migrateProjectFile({ format: 'foldroot-project', version: PROJECT_FILE_VERSION, caution: SECTION_CAUTION, check, doc: { ...doc, title: 'y' }, scan: null });
     expect(!changed.ok && changed.message).toMatch(/damaged.*check value/);
   });
 });
