@@ -5,6 +5,7 @@ import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import type { Plugin } from 'vite';
 import { PDF_STANDARD_FONTS_PATH } from './src/io/pdfStandardFonts.ts';
+import { SECURITY_HEADERS } from './securityHeaders.ts';
 
 // The dev server's React refresh preamble is an inline script; allow it in development only.
 // The built app keeps the strict policy of index.html.
@@ -46,7 +47,8 @@ export default defineConfig({
   build: { target: 'es2022', sourcemap: true, chunkSizeWarningLimit: 2000 },
   worker: { format: 'es' },
   server: { port: 5173, strictPort: false },
-  preview: { port: 4173, strictPort: true },
+  // `npm start` and the browser tests serve the build with the app's security headers (securityHeaders.ts).
+  preview: { port: 4173, strictPort: true, headers: SECURITY_HEADERS },
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],

@@ -1,5 +1,6 @@
 // Horizons as CSV: a header, then one row per vertex (horizon name, x, z), vertices in file order.
 // Units come from the header ("x_m", "x (ft)", "x [m]") or a "# units: m" line; else the caller chooses.
+import { fromSpreadsheetText } from '../format/spreadsheetText';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
@@ -55,7 +56,8 @@ export function parseHorizonsCsv(text: string): HorizonImport {
     const row = rows[r];
     if (row.join('').trim() === '' || row[0].trim().startsWith('#')) continue;
     const where = `line ${r + 1}`;
-    const name = (row[nameCol] ?? '').trim();
+    // Names were written through spreadsheetText: its mark comes off, so a name comes back exactly.
+    const name = fromSpreadsheetText((row[nameCol] ?? '').trim()).trim();
     if (name === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
     if (name.length > LIMITS.nameLength) { pushProblem(problems, { where, message: `horizon name longer than ${LIMITS.nameLength} characters` }, counter); continue; }
     const x = parseNumber(row[xCol] ?? '');

@@ -1,4 +1,5 @@
 // CSV reading and writing (RFC 4180: quoted fields, doubled quotes, CRLF or LF line ends).
+import { spreadsheetText } from '../format/spreadsheetText';
 
 /** Returns the rows of CSV text as arrays of fields; a line starting with '#' is kept as one field (a comment). */
 export function parseCsvRows(text: string, maxRows = 5_000_000): string[][] {
@@ -29,11 +30,11 @@ export function parseCsvRows(text: string, maxRows = 5_000_000): string[][] {
   return rows;
 }
 
-/** Returns one CSV field: quoted when it holds a comma, quote or line break; a leading = + - @ is defused with ' (spreadsheet formula injection). */
+/** Returns one CSV field: quoted when it holds a comma, quote or line break; text that starts like a formula is marked by spreadsheetText (src/format/spreadsheetText.ts). */
 export function csvField(value: string | number | boolean | null): string {
   if (value === null) return '';
   if (typeof value !== 'string') return String(value);
-  const safe = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+  const safe = spreadsheetText(value);
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 

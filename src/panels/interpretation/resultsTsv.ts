@@ -1,6 +1,7 @@
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
 import { plainNumber } from '../../format/formatQuantity';
+import { spreadsheetText } from '../../format/spreadsheetText';
 import { summaryRows } from './summaryRows';
 import { columnHeader, columnsOf, dataCell } from '../../format/horizonColumns';
 
@@ -9,8 +10,9 @@ import { columnHeader, columnsOf, dataCell } from '../../format/horizonColumns';
 // Columns from src/format/horizonColumns.ts: areas in the section unit squared, lengths in the section unit,
 // shares as fractions; the caution travels with it (DEVELOPERS.md §Project rules).
 
+/** A text cell: one line, marked by the same rule as the CSV files when a spreadsheet would take it for a formula. */
 function clean(text: string): string {
-  return text.replace(/[\t\r\n]+/g, ' ');
+  return spreadsheetText(text.replace(/[\t\r\n]+/g, ' '));
 }
 
 /** Tab-separated per-horizon table, summary and caution, lines joined by "\n". */
@@ -21,7 +23,7 @@ export function resultsTsv(a: SectionAnalysis, scenarioName: string): string {
     ['Scenario', clean(scenarioName)],
     [],
     columnsOf('clipboard').map((c) => columnHeader(c, u, null)),
-    ...a.horizons.map((h) => columnsOf('clipboard').map((c) => clean(dataCell(c, h)))),
+    ...a.horizons.map((h) => columnsOf('clipboard').map((c) => (c.unit === 'text' ? clean(dataCell(c, h)) : dataCell(c, h).replace(/[\t\r\n]+/g, ' ')))),
     [],
     ['Summary', 'Value', 'Unit', 'Low 95%', 'High 95%', 'Note'],
     ...summaryRows(a).map((r) => [r.label, r.unit === '%' ? pct(r.value) : plainNumber(r.value), r.unit, plainNumber(r.low), plainNumber(r.high), r.low === null ? r.interval : '']),
