@@ -185,6 +185,13 @@ function main(): void {
   console.log(`  On any scan, 200 MP included, it is bounded by the kept tiles (96 × ${(perTile / 1e6).toFixed(2)} MB = ${((96 * perTile) / 1e6).toFixed(0)} MB) and four trees of their windows; the scan's own pixels are not copied (an 800 MB RGBA bitmap at 200 MP is read tile by tile).`);
 }
 
+/** Index of the point of pts nearest to p. */
+function nearestIndex(pts: [number, number][], p: [number, number]): number {
+  let best = 0;
+  for (let i = 1; i < pts.length; i++) if (Math.hypot(pts[i][0] - p[0], pts[i][1] - p[1]) < Math.hypot(pts[best][0] - p[0], pts[best][1] - p[1])) best = i;
+  return best;
+}
+
 /** Distance from p to the polyline pts. */
 function distanceToPolyline(pts: [number, number][], p: [number, number]): number {
   let best = Infinity;
@@ -207,26 +214,33 @@ function demo(): void {
   // The truth is the forward model's lines the scan was drawn from; section.json is them digitised by hand, each
   // vertex off the ink by 0.7 px of seeded jitter and joined by chords, so it is no yardstick for sub-pixel tracing.
   const section = forwardSection(demoSpec).section as Section;
+  const handDigitised = JSON.parse(readFileSync('public/demo/section.json', 'utf8')) as Section;
   const toImage = (x: number, z: number): [number, number] => [cal.sectionToImage.u[0] * x + cal.sectionToImage.u[1] * z + cal.sectionToImage.u[2], cal.sectionToImage.v[0] * x + cal.sectionToImage.v[1] * z + cal.sectionToImage.v[2]];
   const toSection = (u: number, v: number): [number, number] => [cal.imageToSection.x[0] * u + cal.imageToSection.x[1] * v + cal.imageToSection.x[2], cal.imageToSection.z[0] * u + cal.imageToSection.z[1] * v + cal.imageToSection.z[2]];
   const w = png.width;
   const h = png.height;
   const rgba = png.data;
   const whole = { x0: 0, y0: 0, w, h };
-  console.log(`\nThe demo section (public/demo, ${w} × ${h} px): each horizon with the fewest evenly spaced clicks whose trace stays within 1.5 px of the drawn line (max: away from the ends; at ends: within 4 px of the line's first and last point)`);
+  console.log(`\nThe demo section (public/demo, ${w} × ${h} px): each horizon with the fewest evenly spaced clicks (plus one at each outcrop of an eroded horizon) whose trace stays within 1.5 px of the drawn line (max: away from the ends; at ends: within 4 px of the line's first and last point)`);
   console.log('Horizon                    clicks  RMS (px)  max (px)  at ends (px)  vertices');
   const traced: Section['horizons'] = [];
   for (const hz of section.horizons) {
     // The fold demo's horizons are unbroken lines; a horizon in pieces would be traced piece by piece.
     if (!hz.line) throw new Error(`benchTrace: horizon "${hz.name}" is in pieces; this measure expects unbroken lines`);
     const truth = hz.line.map(([x, z]) => toImage(x, z));
+    const digitised = handDigitised.horizons.find((k) => k.name === hz.name);
+    const outcrops = (digitised?.projected ?? []).flatMap((run) => run.map((i) => nearestIndex(truth, toImage(digitised!.line![i][0], digitised!.line![i][1]))));
     let pick: { clicks: number; rms: number; max: number; endMax: number; worst: [number, number]; pts: [number, number][] } | null = null;
     for (let n = 2; n <= 16; n++) {
       const session = new TraceSession();
-      const anchors: [number, number][] = [];
-      for (let i = 0; i < n; i++) anchors.push(truth[Math.round(((truth.length - 1) * i) / (n - 1))]);
+      // Evenly spaced clicks, and one at each outcrop of an eroded horizon (where the demo's digitised line
+      // starts and ends its projected runs), as a geologist clicks where the solid line meets the land surface.
+      const at = new Set<number>();
+      for (let i = 0; i < n; i++) at.add(Math.round(((truth.length - 1) * i) / (n - 1)));
+      for (const i of outcrops) at.add(i);
+      const anchors = [...at].sort((a, b) => a - b).map((i) => truth[i]);
       const pts: [number, number][] = [anchors[0]];
-      for (let i = 1; i < n; i++) {
+      for (let i = 1; i < anchors.length; i++) {
         const win = traceWindow(anchors[i - 1], anchors[i], w, h);
         const tiles = tilesOver(win, w, h);
         for (const t of tiles) session.putTile(t.key, t, rgba, whole);
@@ -247,11 +261,11 @@ function demo(): void {
         if (nearEnd(p)) endMax = Math.max(endMax, d);
         else if (d > max) [max, worst] = [d, p];
       }
-      pick = { clicks: n, rms: Math.sqrt(s / pts.length), max, endMax, worst, pts };
+      pick = { clicks: anchors.length, rms: Math.sqrt(s / pts.length), max, endMax, worst, pts };
       if (max <= 1.5) break;
     }
     traced.push({ ...hz, line: pick!.pts.map(([u, v]) => toSection(u, v)) });
-    const note = pick!.max <= 1.5 ? '' : `  (still beyond 1.5 px at 16 clicks, worst at u ${pick!.worst[0].toFixed(0)}, v ${pick!.worst[1].toFixed(0)})`;
+    const note = pick!.max <= 1.5 ? '' : `  (still beyond 1.5 px with 16 evenly spaced clicks, worst at u ${pick!.worst[0].toFixed(0)}, v ${pick!.worst[1].toFixed(0)})`;
     console.log(`${hz.name.padEnd(27)}${String(pick!.clicks).padStart(6)}  ${pick!.rms.toFixed(3).padStart(8)}  ${pick!.max.toFixed(3).padStart(8)}  ${pick!.endMax.toFixed(3).padStart(12)}  ${String(pick!.pts.length).padStart(8)}${note}`);
   }
   const truthDepth = depthOf(section);
