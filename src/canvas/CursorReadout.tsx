@@ -8,6 +8,7 @@ import { useFittedCalibration } from '../state/useFittedCalibration';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { imageToSection } from '../core/calibration/mapPoints';
+import { CutoffReadout } from './CutoffReadout';
 import { DragReadout } from './DragReadout';
 import { formatFixed } from '../format/formatQuantity';
 import { stepDecimals } from '../format/niceTicks';
@@ -67,6 +68,7 @@ export function CursorReadout() {
     <>
       <div ref={ref} className="cursor-readout" data-testid="cursor-readout" hidden={!hasScan} aria-live="off" />
       <DragReadout />
+      <CutoffReadout />
     </>
   );
 }

@@ -83,6 +83,40 @@ const VertexHandles = memo(function VertexHandles() {
   );
 });
 
+// Fault vertices are shown while a tool can move them or snap onto them (Edit, Fault, Draw horizon), for the faults in view.
+const FAULT_HANDLE_TOOLS = new Set(['edit', 'fault', 'draw']);
+
+const FaultHandles = memo(function FaultHandles({ scale }: { scale: number }) {
+  const tool = useSessionStore((s) => s.activeTool);
+  const faults = useDocStore((s) => s.doc.faults);
+  const camera = useSessionStore((s) => s.camera);
+  const viewport = useSessionStore((s) => s.viewport);
+  if (!FAULT_HANDLE_TOOLS.has(tool)) return null;
+  const half = (tool === 'draw' ? 2.5 : 3.5) / scale;
+  return (
+    <>
+      {faults.filter((f) => f.visible).map((f) => {
+        const points = handlesInView(f.pointsPx, { ...camera, ...viewport }, HANDLE_CAP).points;
+        if (!points) return null;
+        return (
+          <Shape key={f.id} listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={f.colour} strokeWidth={1.5} strokeScaleEnabled={false}
+            sceneFunc={(ctx, shape) => {
+              ctx.beginPath();
+              for (const [u, v] of points) {
+                ctx.moveTo(u, v - half);
+                ctx.lineTo(u + half, v);
+                ctx.lineTo(u, v + half);
+                ctx.lineTo(u - half, v);
+                ctx.closePath();
+              }
+              ctx.fillStrokeShape(shape);
+            }} />
+        );
+      })}
+    </>
+  );
+});
+
 const RegionalHandles = memo(function RegionalHandles({ scale }: { scale: number }) {
   const tool = useSessionStore((s) => s.activeTool);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
@@ -155,9 +189,10 @@ function ToolPreviewShape() {
         raw.lineWidth = 2 / scale;
         raw.strokeStyle = preview.colour ?? '#111111';
         raw.setLineDash([6 / scale, 4 / scale]);
-        if (preview.line && preview.line.length > 1) {
+        for (const line of preview.lines ?? (preview.line ? [preview.line] : [])) {
+          if (line.length < 2) continue;
           raw.beginPath();
-          preview.line.forEach(([u, v], i) => (i === 0 ? raw.moveTo(u, v) : raw.lineTo(u, v)));
+          line.forEach(([u, v], i) => (i === 0 ? raw.moveTo(u, v) : raw.lineTo(u, v)));
           raw.stroke();
           performance.clearMarks(PREVIEW_DRAWN_MARK);
           performance.mark(PREVIEW_DRAWN_MARK, { detail: { points: preview.line.length, last: preview.line[preview.line.length - 1] } });
@@ -194,6 +229,7 @@ export function OverlayLayer() {
   const scale = useSessionStore((s) => s.camera.scale);
   return (
     <Layer listening={false}>
+      <FaultHandles scale={scale} />
       <VertexHandles />
       <RegionalHandles scale={scale} />
       <CalibrationMarks scale={scale} />

@@ -3,7 +3,7 @@
 // are drawn decimated to screen-pixel resolution (decimatePolyline) and again on every zoom; the
 // document, the tools and the analysis keep every vertex.
 import { memo, useMemo } from 'react';
-import { Group, Layer, Line } from 'react-konva';
+import { Circle, Group, Layer, Line } from 'react-konva';
 import { useShallow } from 'zustand/react/shallow';
 import { pinXs } from '../core/model/commands/pinXs';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
@@ -14,6 +14,9 @@ import { useSessionStore } from '../state/sessionStore';
 import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix } from './decimatePolyline';
 import { clippedHorizonPx, excessFillSides } from './excessFillGeometry';
 import { EXCESS_FILL, fillRgba } from '../core/model/horizonPalette';
+import { joinedLinePx, type JoinedLinePx } from './joinedLinePx';
+import { pieceEndsOffFault } from '../tools/faultHits';
+import { FAULT_DASH, FAULT_WIDTH } from '../tools/faultStyle';
 import { pinLinePx } from './pinLinePx';
 
 export const FILL_ABOVE = fillRgba(EXCESS_FILL.above);
@@ -21,15 +24,23 @@ export const FILL_BELOW = fillRgba(EXCESS_FILL.below);
 const PROJECTED_DASH = [7, 5];
 const REGIONAL_DASH = [14, 4, 3, 4];
 
-/** Splits a horizon into runs of solid and projected segments, as flat point arrays. */
+/** Splits a horizon into runs of solid and projected segments, as flat point arrays; no run crosses from one piece to the next. */
 function runsOf(h: DocHorizon): { points: number[]; projected: boolean }[] {
   const n = h.pointsPx.length;
   const flags = new Array<boolean>(Math.max(0, n - 1)).fill(false);
   for (const [a, b] of h.projected) for (let s = Math.max(0, a); s < Math.min(b, n - 1); s++) flags[s] = true;
+  const gaps = new Set(h.joins.map((j) => j.at - 1));
   const runs: { points: number[]; projected: boolean }[] = [];
+  let broken = true;
   for (let s = 0; s < n - 1; s++) {
+    if (gaps.has(s)) {
+      broken = true;
+      continue;
+    }
     const last = runs[runs.length - 1];
-    if (last && last.projected === flags[s]) last.points.push(h.pointsPx[s + 1][0], h.pointsPx[s + 1][1]);
+    const carryOn = !broken && last && last.projected === flags[s];
+    broken = false;
+    if (carryOn) last.points.push(h.pointsPx[s + 1][0], h.pointsPx[s + 1][1]);
     else runs.push({ projected: flags[s], points: [h.pointsPx[s][0], h.pointsPx[s][1], h.pointsPx[s + 1][0], h.pointsPx[s + 1][1]] });
   }
   if (n === 1) runs.push({ projected: false, points: [h.pointsPx[0][0], h.pointsPx[0][1]] });
@@ -56,15 +67,72 @@ function useDecimation(vertices: number): Decimation | null {
 /** Returns the flat line as drawn: decimated, or itself without a decimation. */
 const drawnPoints = (flat: number[], d: Decimation | null): number[] => (d ? decimatePolyline(flat, d.scale, d.columns) : flat);
 
+/** The stretches of the joined line that run along a fault (between cutoffs), as flat point arrays. */
+function faultStretches(joined: JoinedLinePx): number[][] {
+  const out: number[][] = [];
+  let run: number[] | null = null;
+  joined.alongFault.forEach((along, s) => {
+    if (!along) {
+      run = null;
+      return;
+    }
+    const [a, b] = [joined.points[s], joined.points[s + 1]];
+    if (!run) out.push((run = [a[0], a[1]]));
+    run.push(b[0], b[1]);
+  });
+  return out;
+}
+
+/** A piece end that has left its fault: a red ring, with the problem named in the interpretation pane. */
+const OFF_FAULT = '#c62828';
+/** How near a piece end must be to its fault, as a share of the pin width (the analysis's rule). */
+const ON_FAULT_SHARE = 1e-6;
+
+function OffFaultMarks({ points }: { points: ImagePx[] }) {
+  const scale = useSessionStore((s) => s.camera.scale);
+  return (
+    <>
+      {points.map(([u, v], i) => (
+        <Circle key={i} x={u} y={v} radius={8 / scale} stroke={OFF_FAULT} strokeWidth={2.5} strokeScaleEnabled={false} perfectDrawEnabled={false} listening={false} name="off-fault" />
+      ))}
+    </>
+  );
+}
+
+/** The joined line of a horizon (its pieces along their faults), memoised on the horizon and the faults. */
+function useJoinedLine(h: DocHorizon | undefined): JoinedLinePx | null {
+  const faults = useDocStore((s) => (h && h.joins.length ? s.doc.faults : null));
+  return useMemo(() => (h ? joinedLinePx(h.pointsPx, h.joins, faults ?? []) : null), [h, faults]);
+}
+
+/** The piece ends of a horizon that are not on their fault (image px). */
+function useEndsOffFault(h: DocHorizon | undefined): ImagePx[] {
+  const faults = useDocStore((s) => (h && h.joins.length ? s.doc.faults : null));
+  const pins = useDocStore((s) => activeScenario(s.doc).pinsPx);
+  return useMemo(() => {
+    if (!h || !faults) return [];
+    // As near as the analysis asks a piece end to be (a millionth of the pin width), in image px.
+    const width = pins ? Math.abs(pins[1][0] - pins[0][0]) : 1000;
+    return pieceEndsOffFault(h.pointsPx, h.joins, faults, ON_FAULT_SHARE * width).map((e) => h.pointsPx[e.index]);
+  }, [h, faults, pins]);
+}
+
 const HorizonShape = memo(function HorizonShape({ id }: { id: string }) {
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
   const selected = useSessionStore((s) => s.selectedHorizonId === id);
   const decimation = useDecimation(h?.pointsPx.length ?? 0);
   const runs = useMemo(() => (h ? runsOf(h) : []), [h]);
   const drawn = useMemo(() => runs.map((r) => ({ ...r, points: drawnPoints(r.points, decimation) })), [runs, decimation]);
+  const joined = useJoinedLine(h?.joins.length ? h : undefined);
+  const stretches = useMemo(() => (joined ? faultStretches(joined) : []), [joined]);
+  const off = useEndsOffFault(h);
   if (!h || !h.visible) return null;
   return (
     <Group>
+      {stretches.map((points, i) => (
+        <Line key={`fault-${i}`} points={points} stroke={h.colour} strokeWidth={1.2} strokeScaleEnabled={false} lineJoin="round" lineCap="round" perfectDrawEnabled={false} listening={false} />
+      ))}
+      {off.length > 0 && <OffFaultMarks points={off} />}
       {drawn.map((r, i) => (
         <Line key={`halo-${i}`} points={r.points} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={(selected ? 3.5 : 2.2) + HALO_WIDTH} strokeScaleEnabled={false} lineJoin="round" lineCap="round"
           dash={r.projected ? PROJECTED_DASH : undefined} perfectDrawEnabled={false} listening={false} />
@@ -116,7 +184,9 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   // The horizon's side of the loop is kept, and decimated once, while only its regional moves (a regional drag):
   // each move rebuilds and decimates only the regional's side (decimateAfterPrefix: the same points as the whole).
   const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
-  const head = useMemo(() => (h && pins ? clippedHorizonPx(h.pointsPx, pins, frame) : null), [h, pins, frame]);
+  // A horizon in pieces is filled along its joined line (the line the analysis measures).
+  const joined = useJoinedLine(h?.joins.length ? h : undefined);
+  const head = useMemo(() => (h && pins ? clippedHorizonPx(joined ? joined.points : h.pointsPx, pins, frame) : null), [h, joined, pins, frame]);
   const geometry = useMemo(() => (head && regional && pins ? excessFillSides(regional, pins, frame, head) : null), [regional, pins, frame, head]);
   // The loop follows the horizon between the pins: as long, and decimated the same way.
   const decimation = useDecimation(head && geometry ? (head.loopHead.length + geometry.loopTail.length) / 2 : 0);
@@ -135,6 +205,19 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
       <Group clipFunc={clipTo(geometry.below)}>
         <Line points={loop} closed fill={FILL_BELOW} perfectDrawEnabled={false} listening={false} />
       </Group>
+    </Group>
+  );
+});
+
+const FaultShape = memo(function FaultShape({ id }: { id: string }) {
+  const f = useDocStore((s) => s.doc.faults.find((k) => k.id === id));
+  const decimation = useDecimation(f?.pointsPx.length ?? 0);
+  const points = useMemo(() => drawnPoints(f ? f.pointsPx.flat() : [], decimation), [f, decimation]);
+  if (!f || !f.visible) return null;
+  return (
+    <Group listening={false}>
+      <Line points={points} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={FAULT_WIDTH + HALO_WIDTH} strokeScaleEnabled={false} lineJoin="round" perfectDrawEnabled={false} listening={false} />
+      <Line points={points} stroke={f.colour} strokeWidth={FAULT_WIDTH} dash={FAULT_DASH} strokeScaleEnabled={false} lineJoin="round" perfectDrawEnabled={false} listening={false} />
     </Group>
   );
 });
@@ -163,10 +246,12 @@ const PinLines = memo(function PinLines() {
 export function ShapesLayer() {
   const ids = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
   const showFills = useDocStore((s) => s.doc.settings.showFills);
+  const faultIds = useDocStore(useShallow((s) => s.doc.faults.map((f) => f.id)));
   return (
     <Layer listening={false}>
       {showFills && ids.map((id) => <FillShape key={`f-${id}`} id={id} />)}
       {ids.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
+      {faultIds.map((id) => <FaultShape key={`k-${id}`} id={id} />)}
       {ids.map((id) => <HorizonShape key={`h-${id}`} id={id} />)}
       <PinLines />
     </Layer>

@@ -213,7 +213,7 @@ function isTyping(target: EventTarget | null): boolean {
   );
 }
 
-/** Keys for the tools; the tool shortcuts (v, c, d, e, j, p, r) switch tools. */
+/** Keys for the tools; the tool shortcuts (v, c, d, k, e, j, p, r) switch tools. */
 function onKey(e: KeyboardEvent): void {
   if (isTyping(e.target) || e.ctrlKey || e.metaKey) return;
   if (e.key === 'Escape') {

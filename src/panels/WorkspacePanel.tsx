@@ -7,6 +7,7 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { toolEntry, TOOLS } from '../tools/toolRegistry';
 import { CalibrationPanel } from './workspace/CalibrationPanel';
+import { FaultList } from './workspace/FaultList';
 import { HelpOverlay } from './workspace/HelpOverlay';
 import { HorizonList } from './workspace/HorizonList';
 import { isDocReplaced } from './workspace/isDocReplaced';
@@ -57,6 +58,7 @@ export function WorkspacePanel() {
       {/* The pins before the horizon list: two fields that stay in reach however many horizons there are. */}
       <PinsPanel />
       <HorizonList />
+      <FaultList />
       <HelpOverlay />
     </>
   );

@@ -52,6 +52,8 @@ export interface ToolContext {
 /** Drawn above the shapes while a tool works; never stored in the document. */
 export interface ToolPreview {
   line?: ImagePx[];
+  /** A line drawn in pieces: every piece (drawn instead of `line`, which is then the piece being drawn). */
+  lines?: ImagePx[][];
   colour?: string;
   /** Image points to mark (vertex being dragged, first vertex of a projected run, a pin being placed). */
   marks?: ImagePx[];

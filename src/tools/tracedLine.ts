@@ -21,14 +21,17 @@ export function snapped(p: ImagePx, ctx: ToolContext, alt: boolean): ImagePx {
   return ctx.tracer?.snap(p, ctx.tolerancePx) ?? p;
 }
 
-/** Returns a line of one anchor at p (snapped when following). */
-export function startLine(p: ImagePx, ctx: ToolContext, alt: boolean): TracedLine {
-  return { anchors: [snapped(p, ctx, alt)], stretches: [] };
+/** Returns a line of one anchor at p (snapped when following, unless `exact`: a point already placed on a fault). */
+export function startLine(p: ImagePx, ctx: ToolContext, alt: boolean, exact = false): TracedLine {
+  return { anchors: [exact ? p : snapped(p, ctx, alt)], stretches: [] };
 }
 
-/** Returns the line with an anchor added at p and the stretch to it (traced when following); null when p is the last anchor. */
-export function addAnchor(line: TracedLine, p: ImagePx, ctx: ToolContext, alt: boolean): TracedLine | null {
-  const q = snapped(p, ctx, alt);
+/**
+ * Returns the line with an anchor added at p and the stretch to it (traced when following); null when p is the last
+ * anchor. With `exact` the anchor is p itself (a piece end snapped onto a fault), the stretch still traced to it.
+ */
+export function addAnchor(line: TracedLine, p: ImagePx, ctx: ToolContext, alt: boolean, exact = false): TracedLine | null {
+  const q = exact ? p : snapped(p, ctx, alt);
   const last = line.anchors[line.anchors.length - 1];
   if (Math.hypot(last[0] - q[0], last[1] - q[1]) < 1e-9) return null;
   const straight = !follows(ctx, alt);

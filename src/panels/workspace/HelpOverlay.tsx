@@ -15,7 +15,7 @@ const GENERAL: [string, string][] = [
   ['Backspace', 'Remove the last point drawn (and the stretch traced to it); in Edit, delete the chosen vertex'],
   ['Esc', 'Cancel what the tool is doing'],
   ['Shift + drag', 'Edit: move a whole line · Regional: move every regional'],
-  ['Alt + click', 'Draw horizon: a straight stretch (or a followed one, with following off) · Calibrate: no snapping · Edit: delete a vertex'],
+  ['Alt + click', 'Draw horizon, Fault: a straight stretch (or a followed one, with following off) · Calibrate: no snapping · Edit: delete a vertex'],
   ['?', 'Show or hide this list'],
 ];
 
