@@ -6,6 +6,7 @@ import type { DocFault } from '../../core/model/projectDoc';
 import { useDocStore } from '../../state/docStore';
 import { deleteFaultAction, renameFaultAction, setFaultStyleAction } from '../../state/faultActions';
 import { FAULT_COLOURS } from '../../tools/faultStyle';
+import { EyeIcon, LockIcon } from './HorizonList';
 
 function FaultName({ f }: { f: DocFault }) {
   const [text, setText] = useState(f.name);
@@ -38,11 +39,11 @@ function FaultRow({ f, cuts }: { f: DocFault; cuts: number }) {
       <div className="horizon-row fault-row">
         <button type="button" className="fault-swatch" style={{ borderColor: f.colour }} aria-label={`Colour of ${f.name}`} aria-expanded={open} title="Colour" onClick={() => setOpen(!open)} />
         <FaultName f={f} />
-        {cuts > 0 && <span className="hint" title={`${cuts} horizon${cuts === 1 ? '' : 's'} joined along this fault`}>{cuts} cut</span>}
+        {cuts > 0 && <span className="hint fault-cuts" data-testid={`fault-cuts-${f.id}`} title={`${cuts} horizon${cuts === 1 ? '' : 's'} drawn in pieces along this fault`}>cuts {cuts}</span>}
         <button type="button" className={`row-toggle${f.visible ? ' on' : ''}`} aria-pressed={f.visible} aria-label={`Show ${f.name}`} data-testid={`fault-show-${f.id}`}
-          title={f.visible ? 'Shown: click to hide' : 'Hidden: click to show'} onClick={() => setFaultStyleAction(f.id, { visible: !f.visible })}>{f.visible ? 'shown' : 'hidden'}</button>
+          title={f.visible ? 'Shown: click to hide' : 'Hidden: click to show'} onClick={() => setFaultStyleAction(f.id, { visible: !f.visible })}><EyeIcon on={f.visible} /></button>
         <button type="button" className={`row-toggle${f.locked ? ' on' : ''}`} aria-pressed={f.locked} aria-label={`Lock ${f.name}`} data-testid={`fault-lock-${f.id}`}
-          title={f.locked ? 'Locked against editing: click to unlock' : 'Editable: click to lock'} onClick={() => setFaultStyleAction(f.id, { locked: !f.locked })}>{f.locked ? 'locked' : 'lock'}</button>
+          title={f.locked ? 'Locked against editing: click to unlock' : 'Editable: click to lock'} onClick={() => setFaultStyleAction(f.id, { locked: !f.locked })}><LockIcon on={f.locked} /></button>
         <button type="button" className="row-icon danger" aria-label={`Delete ${f.name}`} data-testid={`fault-delete-${f.id}`} title="Delete this fault (undo brings it back)" onClick={() => deleteFaultAction(f.id)}>×</button>
       </div>
       {open && (

@@ -58,7 +58,7 @@ function NameField({ h }: { h: DocHorizon }) {
 }
 
 /** An eye, struck through when the horizon is hidden. */
-function EyeIcon({ on }: { on: boolean }) {
+export function EyeIcon({ on }: { on: boolean }) {
   return (
     <svg viewBox="0 0 16 16" width="14" height="14" aria-hidden focusable="false">
       <path d="M1.2 8S3.8 3.6 8 3.6 14.8 8 14.8 8 12.2 12.4 8 12.4 1.2 8 1.2 8Z" fill="none" stroke="currentColor" strokeWidth="1.3" />
@@ -69,7 +69,7 @@ function EyeIcon({ on }: { on: boolean }) {
 }
 
 /** A padlock, closed when the horizon is locked against editing. */
-function LockIcon({ on }: { on: boolean }) {
+export function LockIcon({ on }: { on: boolean }) {
   return (
     <svg viewBox="0 0 16 16" width="14" height="14" aria-hidden focusable="false">
       <rect x="3.5" y="7.2" width="9" height="6.8" rx="1" fill={on ? 'currentColor' : 'none'} stroke="currentColor" strokeWidth="1.2" />
