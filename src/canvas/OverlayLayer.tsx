@@ -86,33 +86,31 @@ const VertexHandles = memo(function VertexHandles() {
 // Fault vertices are shown while a tool can move them or snap onto them (Edit, Fault, Draw horizon), for the faults in view.
 const FAULT_HANDLE_TOOLS = new Set(['edit', 'fault', 'draw']);
 
-const FaultHandles = memo(function FaultHandles({ scale }: { scale: number }) {
+const FaultHandles = memo(function FaultHandles() {
   const tool = useSessionStore((s) => s.activeTool);
   const faults = useDocStore((s) => s.doc.faults);
-  const camera = useSessionStore((s) => s.camera);
-  const viewport = useSessionStore((s) => s.viewport);
   if (!FAULT_HANDLE_TOOLS.has(tool)) return null;
-  const half = (tool === 'draw' ? 2.5 : 3.5) / scale;
+  // Drawn from the camera at draw time (the layer redraws with the camera), not through React on every pan frame.
   return (
     <>
-      {faults.filter((f) => f.visible).map((f) => {
-        const points = handlesInView(f.pointsPx, { ...camera, ...viewport }, HANDLE_CAP).points;
-        if (!points) return null;
-        return (
-          <Shape key={f.id} listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={f.colour} strokeWidth={1.5} strokeScaleEnabled={false}
-            sceneFunc={(ctx, shape) => {
-              ctx.beginPath();
-              for (const [u, v] of points) {
-                ctx.moveTo(u, v - half);
-                ctx.lineTo(u + half, v);
-                ctx.lineTo(u, v + half);
-                ctx.lineTo(u - half, v);
-                ctx.closePath();
-              }
-              ctx.fillStrokeShape(shape);
-            }} />
-        );
-      })}
+      {faults.filter((f) => f.visible).map((f) => (
+        <Shape key={f.id} listening={false} perfectDrawEnabled={false} fill="#ffffff" stroke={f.colour} strokeWidth={1.5} strokeScaleEnabled={false}
+          sceneFunc={(ctx, shape) => {
+            const { camera, viewport } = useSessionStore.getState();
+            const points = handlesInView(f.pointsPx, { ...camera, ...viewport }, HANDLE_CAP).points;
+            if (!points) return;
+            const half = (tool === 'draw' ? 2.5 : 3.5) / camera.scale;
+            ctx.beginPath();
+            for (const [u, v] of points) {
+              ctx.moveTo(u, v - half);
+              ctx.lineTo(u + half, v);
+              ctx.lineTo(u, v + half);
+              ctx.lineTo(u - half, v);
+              ctx.closePath();
+            }
+            ctx.fillStrokeShape(shape);
+          }} />
+      ))}
     </>
   );
 });
@@ -229,7 +227,7 @@ export function OverlayLayer() {
   const scale = useSessionStore((s) => s.camera.scale);
   return (
     <Layer listening={false}>
-      <FaultHandles scale={scale} />
+      <FaultHandles />
       <VertexHandles />
       <RegionalHandles scale={scale} />
       <CalibrationMarks scale={scale} />
