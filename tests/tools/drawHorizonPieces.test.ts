@@ -35,7 +35,10 @@ describe('drawing a horizon in pieces', () => {
     expect(onFault(h.pointsPx[2])).toBeLessThan(1e-12);
     expect(onFault(h.pointsPx[3])).toBe(0);
     expect(h.pointsPx[3]).toEqual([492, 384]);
-    expect(t.history).toHaveLength(1);
+    // One undo entry per stretch: two in the first piece, one in the second (which brings the join).
+    expect(t.history).toHaveLength(3);
+    expect(t.history[2].horizons[1].joins).toEqual([]);
+    expect(t.doc.horizons[1].joins).toHaveLength(1);
   });
 
   it('a click away from faults goes on drawing the same piece, and a horizon without faults has no joins', () => {
@@ -124,7 +127,7 @@ describe('drawFaultTool', () => {
     expect(FAULT_COLOURS).toContain(f.colour);
     expect(HORIZON_PALETTE as readonly string[]).not.toContain(f.colour);
     expect(t.doc.horizons).toHaveLength(1);
-    expect(t.history).toHaveLength(1);
+    expect(t.history).toHaveLength(2);
   });
 
   it('a fault drawn near another fault does not end there (faults are one piece)', () => {

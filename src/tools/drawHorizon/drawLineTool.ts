@@ -1,9 +1,10 @@
 // Draw a line by clicking anchors (a horizon, or a fault). While following the line (the default when a
 // scan is shown) each anchor snaps to the line centre and the stretch from the previous anchor follows
 // the drawn line (live preview to the pointer); Alt-click, or the hint's toggle, places a straight
-// stretch. Double-click or Enter finishes, Backspace (or undo) removes the last stretch, Esc cancels
-// (after Enter it finishes with what is traced). Nothing reaches the document until the line is finished
-// (one undo entry).
+// stretch. Double-click or Enter finishes, Backspace (or undo) removes the last stretch and redo puts it
+// back, Esc cancels (after Enter it finishes with what is traced). Nothing reaches the document until the
+// line is finished; then it arrives as one undo entry per stretch (the first adds the line with its first
+// stretch, each next one extends it), so undo after finishing steps back stretch by stretch.
 //
 // A horizon may be drawn in pieces (docs/method.md §Faults and horizons in pieces): a click within a few
 // screen pixels of a fault lands exactly on the fault and ends the piece there (its cutoff); the next
@@ -20,6 +21,29 @@ export interface EndedPiece { line: TracedLine; faultId: string }
 /** Where each new piece starts along the finished line's vertices, and on which fault. */
 export interface LineJoin { at: number; faultId: string }
 
+/** The line as far as one stretch: its vertices and the joins among them. */
+export interface LineStep { pointsPx: ImagePx[]; joins: LineJoin[] }
+
+/** Returns the vertices of the line's first k stretches. */
+const firstStretches = (line: TracedLine, k: number): ImagePx[] => lineVertices({ anchors: line.anchors.slice(0, k + 1), stretches: line.stretches.slice(0, k) });
+
+/**
+ * Returns the line after each of its stretches in order, across its pieces (a piece of one anchor is left out):
+ * undo after finishing steps back stretch by stretch as it did while drawing.
+ */
+export function lineSteps(lines: TracedLine[], pieces: EndedPiece[]): LineStep[] {
+  const steps: LineStep[] = [];
+  let before: ImagePx[] = [];
+  let joins: LineJoin[] = [];
+  lines.forEach((line, k) => {
+    if (line.stretches.length === 0) return;
+    if (k > 0 && before.length > 0) joins = [...joins, { at: before.length, faultId: pieces[k - 1].faultId }];
+    for (let s = 1; s <= line.stretches.length; s++) steps.push({ pointsPx: [...before, ...firstStretches(line, s)], joins });
+    before = steps[steps.length - 1].pointsPx;
+  });
+  return steps;
+}
+
 export type DrawLineState =
   | { name: 'idle' }
   | {
@@ -35,6 +59,8 @@ export type DrawLineState =
     finishing: boolean;
     /** The pieces before this one, each ended on a fault (empty for a line in one piece). */
     pieces: EndedPiece[];
+    /** Stretches taken back by undo or Backspace, last taken first, for redo; emptied by a new anchor. */
+    undone?: { anchor: ImagePx; stretch: Stretch }[];
   }
   /** A piece has just ended on a fault: the next click starts the next piece on it. */
   | { name: 'continuing'; pieces: EndedPiece[]; hover: ImagePx | null; finishing: boolean };
@@ -48,8 +74,11 @@ export interface DrawLineSpec {
   colour: (doc: ProjectDoc) => string;
   /** Whether a click near a fault ends a piece (horizons) or not (faults). */
   inPieces: boolean;
-  /** The commands that add the finished line (≥ 2 vertices; joins empty unless drawn in pieces). */
-  add: (pointsPx: ImagePx[], joins: LineJoin[], doc: ProjectDoc) => ToolCommand[];
+  /**
+   * The commands that add the finished line as one undo entry per stretch: `steps` are the line after its first
+   * stretch, its first two, … (each ≥ 2 vertices; joins empty unless drawn in pieces), the last the whole line.
+   */
+  add: (steps: LineStep[], doc: ProjectDoc) => ToolCommand[];
   /** What is drawn, for messages ("horizon", "fault"). */
   noun: string;
 }
@@ -120,19 +149,13 @@ export function drawLineTool(spec: DrawLineSpec): Tool<DrawLineState> {
     return { next: p.state, commands: [p.command, ...extra] };
   }
 
-  /** Adds the line from its pieces (stretches still computing taken straight). */
+  /** Adds the line from its pieces (stretches still computing taken straight), one undo entry per stretch. */
   function finish(lines: TracedLine[], pieces: EndedPiece[], doc: ProjectDoc): ToolResult<DrawLineState> {
-    const points: ImagePx[] = [];
-    const joins: LineJoin[] = [];
-    lines.forEach((line, k) => {
-      const v = lineVertices(line);
-      if (k > 0 && v.length >= 2) joins.push({ at: points.length, faultId: pieces[k - 1].faultId });
-      if (k === 0 || v.length >= 2) for (const p of v) points.push(p);
-    });
-    if (points.length < 2) {
+    const steps = lineSteps(lines, pieces);
+    if (steps.length === 0) {
       return { next: idle, commands: [clear, { type: 'message', kind: 'info', text: `A ${spec.noun} needs at least two vertices.` }] };
     }
-    return { next: idle, commands: [clear, ...spec.add(points, joins, doc)] };
+    return { next: idle, commands: [clear, ...spec.add(steps, doc)] };
   }
 
   /** Finishes at once: stretches still tracing are taken straight between their anchors, and the user is told. */
@@ -199,7 +222,7 @@ export function drawLineTool(spec: DrawLineSpec): Tool<DrawLineState> {
           if (snap && snap.faultId !== startedOn) return endPiece(s, snap.point, snap.faultId, e.alt, ctx);
           const line = addAnchor(resolveStretches(lineOf(s), ctx), e.p, ctx, e.alt);
           if (!line) return {};
-          return show({ ...withLine(s, line), hover: null, hoverPath: null }, ctx);
+          return show({ ...withLine(s, line), hover: null, hoverPath: null, undone: [] }, ctx);
         },
         pointerMove: (s, e, ctx) => show({ ...resolved(s, ctx), hover: e.p, hoverAlt: e.alt ?? false }, ctx),
         traced: (s, _e, ctx) => (s.finishing ? finishWhenReady(s, ctx) : show(resolved(s, ctx), ctx)),
@@ -208,9 +231,18 @@ export function drawLineTool(spec: DrawLineSpec): Tool<DrawLineState> {
           if (e.key === 'Backspace' || e.key === 'Delete' || e.key === 'Undo') {
             // The first anchor of a piece started on a fault: back to waiting for that piece's first click.
             if (s.points.length === 1 && s.pieces.length > 0) return show({ name: 'continuing', pieces: s.pieces, hover: s.hover, finishing: false }, ctx);
-            const line = removeLastStretch(lineOf(s));
+            const full = lineOf(s);
+            const line = removeLastStretch(full);
             if (!line) return { next: idle, commands: [clear] };
-            return show({ ...withLine(s, line), hoverPath: null, finishing: false }, ctx);
+            const taken = { anchor: full.anchors[full.anchors.length - 1], stretch: full.stretches[full.stretches.length - 1] };
+            return show({ ...withLine(s, line), hoverPath: null, finishing: false, undone: [...(s.undone ?? []), taken] }, ctx);
+          }
+          if (e.key === 'Redo') {
+            const undone = s.undone ?? [];
+            const back = undone[undone.length - 1];
+            if (!back) return {};
+            const line = { anchors: [...s.points, back.anchor], stretches: [...s.stretches, back.stretch] };
+            return show({ ...withLine(s, line), hoverPath: null, undone: undone.slice(0, -1) }, ctx);
           }
           return {};
         },
