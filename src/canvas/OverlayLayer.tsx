@@ -192,6 +192,8 @@ function ToolPreviewShape() {
           raw.beginPath();
           line.forEach(([u, v], i) => (i === 0 ? raw.moveTo(u, v) : raw.lineTo(u, v)));
           raw.stroke();
+        }
+        if (preview.line && preview.line.length > 1) {
           performance.clearMarks(PREVIEW_DRAWN_MARK);
           performance.mark(PREVIEW_DRAWN_MARK, { detail: { points: preview.line.length, last: preview.line[preview.line.length - 1] } });
         }
