@@ -37,17 +37,28 @@ const MIME: Record<string, string> = { png: 'image/png', jpeg: 'image/jpeg', web
 /** Leading bytes read to find the pixel size (a JPEG's frame header can follow a long metadata block). */
 const HEAD_BYTES = 256 * 1024;
 
-function tooLarge(name: string, w: number, h: number): string {
-  return `${name} is ${((w * h) / 1e6).toFixed(0)} megapixels (${w} × ${h} px); the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels.`;
+/** Longest side, in pixels, that Chromium and Firefox decode an image at (common practice: 32,767 for canvases and bitmaps). */
+const BROWSER_MAX_SIDE = 32_767;
+
+/** Returns the message for a scan over the size limit: "… is too large (4096 megapixels, 64000 × 64000 px; the limit is 200 megapixels)". */
+export function scanTooLargeMessage(name: string, w: number, h: number): string {
+  return `${name} is too large to open (${((w * h) / 1e6).toFixed(0)} megapixels, ${w} × ${h} px; the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels).`;
 }
+const tooLarge = scanTooLargeMessage;
 
 async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Promise<DecodeResult> {
-  const size = decodeImageSize(new Uint8Array(await file.slice(0, HEAD_BYTES).arrayBuffer()), kind);
+  // The size is in the header; a JPEG may put it after a metadata block longer than the head read first.
+  const size = decodeImageSize(new Uint8Array(await file.slice(0, HEAD_BYTES).arrayBuffer()), kind)
+    ?? (file.size > HEAD_BYTES ? decodeImageSize(new Uint8Array(await file.arrayBuffer()), kind) : null);
   if (size && size.widthPx * size.heightPx > MAX_PIXELS) return { ok: false, message: tooLarge(name, size.widthPx, size.heightPx) };
   let bitmap: ImageBitmap;
   try {
     bitmap = await createImageBitmap(new Blob([file], { type: MIME[kind] }));
   } catch {
+    // A size the browser will not decode is said as such, not called damage.
+    if (size && (size.widthPx > BROWSER_MAX_SIDE || size.heightPx > BROWSER_MAX_SIDE)) {
+      return { ok: false, message: `${name} is too large to open (${size.widthPx} × ${size.heightPx} px; the largest side a browser decodes is ${BROWSER_MAX_SIDE} px, and the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels).` };
+    }
     return { ok: false, message: `${name} looks like a ${kind.toUpperCase()} file but could not be decoded: it may be damaged or truncated.` };
   }
   return { ok: true, bitmap, kind, widthPx: bitmap.width, heightPx: bitmap.height, mime: MIME[kind] };

@@ -228,8 +228,26 @@ test('bad files give their message and leave the open scan unchanged', async ({ 
   huge.writeUInt32BE(20000, 16);
   huge.writeUInt32BE(20000, 20);
   await openFile(page, 'huge.png', 'image/png', huge);
-  await expect(error).toContainText('huge.png is 400 megapixels');
+  await expect(error).toContainText('huge.png is too large to open (400 megapixels, 20000 × 20000 px');
   await expect(error).toContainText('the largest scan Foldroot opens is 200 megapixels');
+  await expect(page.getByTestId('scan-name')).toContainText('good.png');
+
+  // A JPEG whose frame header says 64000 × 64000 px is too large, not damaged (ITU T.81: SOF0 carries the size).
+  const sof = [0xff, 0xc0, 0, 17, 8, 0xfa, 0x00, 0xfa, 0x00, 3, 1, 0x22, 0, 2, 0x11, 1, 3, 0x11, 1];
+  const app0 = [0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46, 0, 1, 1, 0, 0, 1, 0, 1, 0, 0];
+  await openFile(page, 'vast.jpg', 'image/jpeg', Buffer.from([0xff, 0xd8, ...app0, ...sof, 0xff, 0xd9]));
+  await expect(error).toContainText('vast.jpg is too large to open (4096 megapixels, 64000 × 64000 px; the largest scan Foldroot opens is 200 megapixels)');
+  await expect(error).not.toContainText('damaged');
+  await expect(page.getByTestId('scan-name')).toContainText('good.png');
+
+  // A TIFF whose strip runs past the end of the file (its pixel data cut short) is called truncated.
+  const whole = Buffer.from(writeTiff([gradientRgbPage(64, 32)]));
+  const dir = whole.readUInt32LE(4);
+  for (let k = 0; k < whole.readUInt16LE(dir); k++) {
+    if (whole.readUInt16LE(dir + 2 + 12 * k) === 273) whole.writeUInt32LE(whole.length - 64 * 32 * 3 + 3000, dir + 2 + 12 * k + 8);
+  }
+  await openFile(page, 'pixels-cut.tif', 'image/tiff', whole);
+  await expect(error).toContainText('pixels-cut.tif (page 1) is truncated');
   await expect(page.getByTestId('scan-name')).toContainText('good.png');
 
   await openFile(page, 'broken.pdf', 'application/pdf', Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> garbage'));

@@ -2,6 +2,7 @@
 // sizes; 'decode' (a page index) answers with an ImageBitmap of that page, transferred, not copied.
 import * as UTIF from 'utif2';
 import { decodeTiffLayout } from '../decodeTiffLayout';
+import { tiffTruncation } from '../tiffTruncation';
 import { tiffPageInfo, tiffToRgba, type TiffIfd, type TiffPageInfo } from '../decodeTiffPixels';
 
 export type TiffWorkerRequest = { type: 'open'; buffer: ArrayBuffer; maxPixels: number } | { type: 'decode'; page: number };
@@ -23,6 +24,8 @@ async function decodePage(page: number): Promise<void> {
   if (!buffer || !ifd) return reply({ type: 'error', message: 'has no such page' });
   const info = tiffPageInfo(ifd, page);
   if (info.widthPx * info.heightPx > maxPixels) return reply({ type: 'error', message: `(page ${page + 1}) is ${((info.widthPx * info.heightPx) / 1e6).toFixed(0)} megapixels; the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels` });
+  const cut = tiffTruncation(ifd, buffer.byteLength, page);
+  if (cut) return reply({ type: 'error', message: cut });
   (UTIF.decodeImage as (b: ArrayBuffer, i: TiffIfd, all: TiffIfd[]) => void)(buffer, ifd, ifds);
   if (!ifd.data || ifd.data.length === 0) return reply({ type: 'error', message: 'uses a TIFF compression this build cannot read' });
   const rgba = tiffToRgba(ifd, info);
