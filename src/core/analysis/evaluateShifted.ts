@@ -1,4 +1,4 @@
-import { leastSquares } from '../stats/leastSquares';
+import { createLeastSquaresWork, leastSquares, type LeastSquaresWork } from '../stats/leastSquares';
 import { detachmentOfLine } from './detachmentOfLine';
 import type { PreparedSection } from './prepareSection';
 import { shiftRegionals, type AdjustedMeasures, type SectionAdjustment } from './shiftRegionals';
@@ -20,15 +20,15 @@ export interface QuickDetachment {
   detachmentElevation: number | null;
 }
 
-/** Reusable buffers for evaluateShifted (one set per worker / sweep). */
-export interface EvaluationScratch { measures: AdjustedMeasures; x: Float64Array; y: Float64Array }
+/** Reusable buffers for evaluateShifted, held by the caller (one set per sweep or Monte Carlo run): no module-level state, so computations may interleave. */
+export interface EvaluationScratch { measures: AdjustedMeasures; x: Float64Array; y: Float64Array; fit: LeastSquaresWork }
 
 /** Scratch buffers sized for a prepared section. */
 export function createEvaluationScratch(prepared: PreparedSection): EvaluationScratch {
   const n = prepared.horizons.length;
   return {
     measures: { areas: new Float64Array(n), regionalElevations: new Float64Array(n), depths: new Float64Array(n), regionalLengths: new Float64Array(n) },
-    x: new Float64Array(n), y: new Float64Array(n),
+    x: new Float64Array(n), y: new Float64Array(n), fit: createLeastSquaresWork(n),
   };
 }
 
@@ -44,7 +44,7 @@ export function evaluateShifted(prepared: PreparedSection, adj: SectionAdjustmen
     scratch.y[n] = m.areas[i];
     n++;
   }
-  const fit = leastSquares(scratch.x.subarray(0, n), scratch.y.subarray(0, n));
+  const fit = leastSquares(scratch.x.subarray(0, n), scratch.y.subarray(0, n), scratch.fit);
   if (!fit) return null;
   const depth = detachmentOfLine(fit.slope, fit.intercept, deepest).depth;
   const noDetachment = depth === null;

@@ -18,28 +18,45 @@ export interface LineFit {
   s: number;
   /** Coefficient of determination 1 − SSE / Syy; NaN when all y are equal. */
   r2: number;
-  /** y − (intercept + slope·x), in input order. */
-  residuals: number[];
+  /** y − (intercept + slope·x), in input order; a view into the work buffers when they were given (valid until their next use). */
+  residuals: readonly number[] | Float64Array;
   xMean: number;
   yMean: number;
   /** Σ (x − x̄)². */
   sxx: number;
 }
 
+/**
+ * Buffers for leastSquares, owned by the caller (one per sweep, Monte Carlo run or worker), so a hot loop
+ * allocates nothing per fit and two computations never share memory. Grown in place when a fit needs more.
+ */
+export interface LeastSquaresWork { deviations: Float64Array; xx: Float64Array; xy: Float64Array; yy: Float64Array; residuals: Float64Array }
+
+/** Returns work buffers for fits of up to n points. */
+export function createLeastSquaresWork(n: number): LeastSquaresWork {
+  const m = Math.max(2, n);
+  return { deviations: new Float64Array(m), xx: new Float64Array(m), xy: new Float64Array(m), yy: new Float64Array(m), residuals: new Float64Array(m) };
+}
+
+function ensure(work: LeastSquaresWork, n: number): void {
+  if (work.xx.length >= n) return;
+  Object.assign(work, createLeastSquaresWork(2 * n));
+}
+
 /** Mean with one correction pass, so that large offsets do not cost digits. */
-function accurateMean(values: ArrayLike<number>): number {
+function accurateMean(values: ArrayLike<number>, deviations: Float64Array): number {
   const n = values.length;
   const first = neumaierSum(values) / n;
-  const deviations = new Float64Array(n);
   for (let i = 0; i < n; i++) deviations[i] = values[i] - first;
-  return first + neumaierSum(deviations) / n;
+  return first + neumaierSum(deviations.subarray(0, n)) / n;
 }
 
 /**
  * Least-squares line through (x, y), in the inputs' units; null when n < 2, a value is not finite or all
  * x are equal; at n = 2, s = 0 and the standard errors are NaN. Throws RangeError if lengths differ.
+ * With `work` nothing is allocated but the result, and its residuals are a view into work.residuals.
  */
-export function leastSquares(x: ArrayLike<number>, y: ArrayLike<number>): LineFit | null {
+export function leastSquares(x: ArrayLike<number>, y: ArrayLike<number>, work?: LeastSquaresWork): LineFit | null {
   const n = x.length;
   if (y.length !== n) throw new RangeError(`leastSquares: x has ${n} values, y has ${y.length}`);
   if (n < 2) return null;
@@ -49,11 +66,13 @@ export function leastSquares(x: ArrayLike<number>, y: ArrayLike<number>): LineFi
     if (x[i] !== x[0]) allXEqual = false;
   }
   if (allXEqual) return null;
-  const xMean = accurateMean(x);
-  const yMean = accurateMean(y);
-  const xx = new Float64Array(n);
-  const xy = new Float64Array(n);
-  const yy = new Float64Array(n);
+  const w = work ?? createLeastSquaresWork(n);
+  ensure(w, n);
+  const xMean = accurateMean(x, w.deviations);
+  const yMean = accurateMean(y, w.deviations);
+  const xx = w.xx.subarray(0, n);
+  const xy = w.xy.subarray(0, n);
+  const yy = w.yy.subarray(0, n);
   for (let i = 0; i < n; i++) {
     const dx = x[i] - xMean;
     const dy = y[i] - yMean;
@@ -65,7 +84,7 @@ export function leastSquares(x: ArrayLike<number>, y: ArrayLike<number>): LineFi
   const syy = neumaierSum(yy);
   const slope = neumaierSum(xy) / sxx;
   const intercept = yMean - slope * xMean;
-  const residuals: number[] = new Array(n);
+  const residuals = work ? w.residuals.subarray(0, n) : new Array<number>(n);
   for (let i = 0; i < n; i++) {
     residuals[i] = y[i] - yMean - slope * (x[i] - xMean); // centred form: no cancellation against the intercept
     yy[i] = residuals[i] * residuals[i];

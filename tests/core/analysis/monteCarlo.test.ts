@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { areaVertexCoefficients } from '../../../src/core/analysis/areaVertexCoefficients';
-import { evaluateShifted } from '../../../src/core/analysis/evaluateShifted';
+import { createEvaluationScratch, evaluateShifted } from '../../../src/core/analysis/evaluateShifted';
 import { monteCarlo, type MonteCarloOptions, type MonteCarloResult } from '../../../src/core/analysis/monteCarlo';
 import { prepareHorizon } from '../../../src/core/analysis/prepareHorizon';
 import { prepareSection } from '../../../src/core/analysis/prepareSection';
@@ -117,6 +117,23 @@ describe('areaVertexCoefficients(line, n, pins)', () => {
       const moved = prepareHorizon(h.name, line.xs, zs, reg.xs, reg.zs, s.pins);
       if (!moved.ok) throw new Error('moved prepare failed');
       expectClose(moved.horizon.excessArea - base.horizon.excessArea, 3.5 * c[i], 1e-7, { abs: 1e-6 });
+    }
+  });
+});
+
+describe('evaluateShifted with caller-held scratch', () => {
+  it('two sections evaluated in turn, each with its own scratch, give what each gives alone', () => {
+    const s1 = section();
+    const s2 = { ...section(), horizons: section().horizons.slice(0, 3) };
+    const p1 = prepareSection(s1), p2 = prepareSection(s2);
+    if (!p1.ok || !p2.ok) throw new Error('sections rejected');
+    const w1 = createEvaluationScratch(p1.prepared), w2 = createEvaluationScratch(p2.prepared);
+    const adj = (k: number) => ({ regionalOffset: 10 * k, regionalTilt: 1e-5 * k });
+    for (let k = 0; k < 5; k++) {
+      const a = evaluateShifted(p1.prepared, adj(k), w1);
+      const b = evaluateShifted(p2.prepared, adj(-k), w2);
+      expect(a).toEqual(evaluateShifted(p1.prepared, adj(k)));
+      expect(b).toEqual(evaluateShifted(p2.prepared, adj(-k)));
     }
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import jStat from 'jstat';
-import { leastSquares } from '../../../src/core/stats/leastSquares';
+import { createLeastSquaresWork, leastSquares } from '../../../src/core/stats/leastSquares';
 import { leastSquaresThroughOrigin } from '../../../src/core/stats/leastSquaresThroughOrigin';
 import { expectClose } from '../../expectClose';
 import { certified, certifiedSD, readStrd } from './nistStrd';
@@ -26,7 +26,7 @@ describe('leastSquares(x, y) on NIST StRD Norris', () => {
     expectClose(fit.s, certified(header, 'residual SD'), 1e-10, { label: 'residual SD' });
     expectClose(fit.r2, certified(header, 'R-squared'), 1e-12, { label: 'R²' });
     // NIST StRD Norris ANOVA: residual SS and df.
-    const sse = fit.residuals.reduce((acc, r) => acc + r * r, 0);
+    const sse = Array.from(fit.residuals).reduce((acc, r) => acc + r * r, 0);
     expectClose(sse, certified(header, 'residual SS'), 1e-9, { label: 'residual SS' });
     expect(fit.df).toBe(34);
     expect(fit.n).toBe(36);
@@ -196,4 +196,34 @@ describe('leastSquares(x, y) properties', () => {
       );
     });
   }
+});
+
+describe('leastSquares(x, y, work): caller-held buffers', () => {
+  const norris = readStrd('nist-strd-norris.csv');
+
+  it('gives the certified NIST StRD Norris line with work buffers grown from too small a start', () => {
+    const fit = leastSquares(norris.x, norris.y, createLeastSquaresWork(3))!;
+    expectClose(fit.slope, certified(norris.header, 'B1'), 1e-12, { label: 'B1' });
+    expectClose(fit.intercept, certified(norris.header, 'B0'), 1e-11, { label: 'B0' });
+    expectClose(Array.from(fit.residuals).reduce((acc, r) => acc + r * r, 0), certified(norris.header, 'residual SS'), 1e-9, { label: 'residual SS' });
+  });
+
+  it('two computations interleaved, each with its own work, leave each other untouched', () => {
+    // Two independent fits stepped in turn, as two sweeps sharing one thread would: each one's residuals
+    // must stay those of a fit made alone (fresh buffers), not the other's.
+    const a = { x: norris.x, y: norris.y, work: createLeastSquaresWork(norris.x.length) };
+    const bx = [1, 2, 3, 4, 5, 6], by = [2.1, 3.9, 6.2, 7.8, 10.1, 12.2];
+    const b = { x: bx, y: by, work: createLeastSquaresWork(bx.length) };
+    const aloneA = leastSquares(a.x, a.y)!;
+    const aloneB = leastSquares(b.x, b.y)!;
+    for (let k = 0; k < 3; k++) {
+      const fa = leastSquares(a.x, a.y, a.work)!;
+      const fb = leastSquares(b.x, b.y, b.work)!;
+      const fa2 = leastSquares(a.x, a.y, a.work)!;
+      expect(Array.from(fa.residuals)).toEqual(aloneA.residuals);
+      expect(Array.from(fb.residuals)).toEqual(aloneB.residuals);
+      expect(fa2.slope).toBe(aloneA.slope);
+      expect(fb.slope).toBe(aloneB.slope);
+    }
+  });
 });
