@@ -7,6 +7,7 @@ import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanPoint } from './cleanCoordinate';
 import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
 import { jsonDepthProblem } from '../core/model/jsonDepthProblem';
+import { geographicHint } from './geographicHint';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 function isObject(v: unknown): v is Record<string, unknown> {
@@ -71,7 +72,8 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
   if (horizons.length === 0) return { ok: false, message: 'The GeoJSON file holds no usable LineString horizon.', problems };
   const tooMany = lineCountProblem({ horizons: horizons.length, ...countLines(horizons.map((h) => h.line.length)) });
   if (tooMany) return { ok: false, message: `The GeoJSON file holds ${tooMany}; thin the vertices or import the file in parts. Nothing was imported.`, problems };
-  return { ok: true, horizons, units, problems };
+  const warning = geographicHint(raw, horizons);
+  return warning ? { ok: true, horizons, units, problems, warning } : { ok: true, horizons, units, problems };
 }
 
 /** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties, and the caution as a top-level "caution" member; coordinates rounded to 1e-6 unit (cleanCoordinate). */

@@ -7,7 +7,7 @@ import { LIMITS } from '../core/model/limits';
 export interface RowProblem { where: string; message: string }
 
 export type HorizonImport =
-  | { ok: true; horizons: ImportedHorizon[]; units: LengthUnit | null; problems: RowProblem[] }
+  | { ok: true; horizons: ImportedHorizon[]; units: LengthUnit | null; problems: RowProblem[]; /** Said before importing (e.g. coordinates that look like longitude/latitude). */ warning?: string }
   | { ok: false; message: string; problems: RowProblem[] };
 
 /** Largest text file an importer reads, in bytes. */

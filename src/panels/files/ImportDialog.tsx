@@ -91,6 +91,7 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
       <div className="files-dialog" role="dialog" aria-modal="true" aria-label="Import horizons" data-testid="import-dialog">
         <h2>Import horizons from {pending.fileName}</h2>
         {!pending.result.ok && <p className="files-error" role="alert" data-testid="import-error">{pending.result.message}</p>}
+        {pending.result.ok && 'warning' in pending.result && pending.result.warning && <p className="files-error" role="alert" data-testid="import-warning">{pending.result.warning}</p>}
         {pending.kind === 'svg' && pending.result.ok && svgBox && (
           <>
             <p className="hint">
