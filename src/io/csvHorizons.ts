@@ -1,8 +1,9 @@
 // Horizons as CSV: a header, then one row per vertex (horizon name, x, z), vertices in file order.
+// Two optional columns: "piece" (1, 2, … along a horizon cut by faults) and "kind" ("horizon" or "fault").
 // Units come from the header ("x_m", "x (ft)", "x [m]") or a "# units: m" line; else the caller chooses.
 import { fromSpreadsheetText } from '../format/spreadsheetText';
 import { SECTION_CAUTION } from '../core/analysis/caution';
-import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanCoordinate } from './cleanCoordinate';
 import { parseCsvRows, toCsv } from './csvText';
@@ -50,7 +51,11 @@ export function parseHorizonsCsv(text: string): HorizonImport {
     return { ok: false, message: 'The x and z columns are in different units; convert them to one unit.', problems };
   }
   units = headerUnits[0] ?? units;
+  const pieceCol = header.findIndex((h) => h.base === 'piece');
+  const kindCol = header.findIndex((h) => h.base === 'kind');
   const byName = new Map<string, XZ[]>();
+  const faultsByName = new Map<string, XZ[]>();
+  const pieceStarts = new Map<string, { piece: string; starts: number[] }>();
   const counter = { n: 0 };
   for (let r = line + 1; r < rows.length; r++) {
     const row = rows[r];
@@ -66,25 +71,57 @@ export function parseHorizonsCsv(text: string): HorizonImport {
       pushProblem(problems, { where, message: `${x === null ? 'x' : 'z'} is not a finite number (${JSON.stringify((row[x === null ? xCol : zCol] ?? '').slice(0, 40))})` }, counter);
       continue;
     }
-    let pts = byName.get(name);
-    if (!pts) { pts = []; byName.set(name, pts); }
+    const kind = kindCol >= 0 ? (row[kindCol] ?? '').trim().toLowerCase() : '';
+    if (kind !== '' && kind !== 'horizon' && kind !== 'fault') { pushProblem(problems, { where, message: `kind must be "horizon" or "fault" (got ${JSON.stringify(kind.slice(0, 40))})` }, counter); continue; }
+    const into = kind === 'fault' ? faultsByName : byName;
+    let pts = into.get(name);
+    if (!pts) { pts = []; into.set(name, pts); }
+    if (kind !== 'fault' && pieceCol >= 0) {
+      // A new value in the piece column starts the next piece of the horizon.
+      const piece = (row[pieceCol] ?? '').trim();
+      const seen = pieceStarts.get(name);
+      if (!seen) pieceStarts.set(name, { piece, starts: [0] });
+      else if (seen.piece !== piece) { seen.piece = piece; seen.starts.push(pts.length); }
+    }
     pts.push([x, z]);
   }
   const horizons: ImportedHorizon[] = [];
   for (const [name, pts] of byName) {
-    if (pts.length < 2) pushProblem(problems, { where: `horizon "${name}"`, message: 'has only one vertex; a horizon needs at least two' }, counter);
-    else horizons.push({ name, line: pts });
+    if (pts.length < 2) { pushProblem(problems, { where: `horizon "${name}"`, message: 'has only one vertex; a horizon needs at least two' }, counter); continue; }
+    const starts = pieceStarts.get(name)?.starts ?? [0];
+    const cuts = [...starts, pts.length];
+    const pieces = starts.map((from, k) => pts.slice(from, cuts[k + 1]));
+    const short = pieces.findIndex((p) => p.length < 2);
+    if (short >= 0) pushProblem(problems, { where: `horizon "${name}"`, message: `piece ${short + 1} has fewer than two vertices; a piece needs at least two` }, counter);
+    else horizons.push(pieces.length > 1 ? { name, line: pts, pieces } : { name, line: pts });
   }
-  if (horizons.length === 0) return { ok: false, message: 'The CSV file holds no horizon with at least two valid vertices.', problems };
+  const faults: ImportedFault[] = [];
+  for (const [name, pts] of faultsByName) {
+    if (pts.length < 2) pushProblem(problems, { where: `fault "${name}"`, message: 'has only one vertex; a fault needs at least two' }, counter);
+    else faults.push({ name, line: pts });
+  }
+  if (horizons.length === 0 && faults.length === 0) return { ok: false, message: 'The CSV file holds no horizon with at least two valid vertices.', problems };
   const tooMany = lineCountProblem({ horizons: horizons.length, ...countLines(horizons.map((h) => h.line.length)) });
   if (tooMany) return { ok: false, message: `The CSV file holds ${tooMany}; thin the vertices or import the file in parts. Nothing was imported.`, problems };
-  return { ok: true, horizons, units, problems };
+  return { ok: true, horizons, units, problems, ...(faults.length ? { faults } : {}) };
 }
 
-/** Returns horizons (section units) as CSV text: a "# caution: …" comment line (DEVELOPERS.md §Project rules: the caution in every export), then a "horizon,x_<unit>,z_<unit>" header; coordinates rounded to 1e-6 unit (cleanCoordinate). */
-export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit): string {
-  const rows: (string | number)[][] = [['horizon', `x_${units}`, `z_${units}`]];
-  for (const h of horizons) for (const [x, z] of h.line) rows.push([h.name, cleanCoordinate(x), cleanCoordinate(z)]);
+/**
+ * Returns horizons and faults (section units) as CSV text: a "# caution: …" comment line (DEVELOPERS.md §Project rules:
+ * the caution in every export), then a "horizon,x_<unit>,z_<unit>" header, with ",piece,kind" when there are pieces or faults — piece 1, 2, … along a horizon
+ * cut by faults, kind "horizon" or "fault" (a fault's rows carry its name in the horizon column and no piece);
+ * coordinates rounded to 1e-6 unit (cleanCoordinate).
+ */
+export function writeHorizonsCsv(horizons: ImportedHorizon[], units: LengthUnit, faults: ImportedFault[] = []): string {
+  // The two extra columns only when there is something to say in them: a plain file keeps the three columns.
+  const faulted = faults.length > 0 || horizons.some((h) => h.pieces && h.pieces.length > 1);
+  const rows: (string | number)[][] = [faulted ? ['horizon', `x_${units}`, `z_${units}`, 'piece', 'kind'] : ['horizon', `x_${units}`, `z_${units}`]];
+  for (const h of horizons) {
+    (h.pieces ?? [h.line]).forEach((p, k) => {
+      for (const [x, z] of p) rows.push(faulted ? [h.name, cleanCoordinate(x), cleanCoordinate(z), k + 1, 'horizon'] : [h.name, cleanCoordinate(x), cleanCoordinate(z)]);
+    });
+  }
+  for (const f of faults) for (const [x, z] of f.line) rows.push([f.name, cleanCoordinate(x), cleanCoordinate(z), '', 'fault']);
   // Written unquoted so the line starts with '#', the comment mark our parser (and most CSV readers) skip.
   return `# caution: ${SECTION_CAUTION.replace(/[\r\n]+/g, ' ')}\r\n${toCsv(rows)}`;
 }

@@ -3,7 +3,7 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection } from '../core/calibration/mapPoints';
-import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import type { Section } from '../core/model/section';
@@ -13,12 +13,25 @@ import { toCsv } from './csvText';
 import { columnsOf, csvHeader, dataCell } from '../format/horizonColumns';
 import type { UncertaintyReport } from './uncertaintyReport';
 
-/** Returns every horizon of the document in section units (empty when the document has no usable calibration). */
+/** Returns every horizon of the document in section units, a horizon cut by faults with its pieces (empty when the document has no usable calibration). */
 export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
   const cal = doc.calibration ? fitCalibration(doc.calibration) : null;
   if (!cal || !cal.ok) return [];
   const fit = cal.fit;
-  return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => ({ name: h.name, line: h.pointsPx.map((p) => imageToSection(fit, p)) }));
+  return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => {
+    const line = h.pointsPx.map((p) => imageToSection(fit, p));
+    if (h.joins.length === 0) return { name: h.name, line };
+    const cuts = [0, ...h.joins.map((j) => j.at), line.length];
+    return { name: h.name, line, pieces: cuts.slice(0, -1).map((from, k) => line.slice(from, cuts[k + 1])) };
+  });
+}
+
+/** Returns every fault of the document with at least two vertices, in section units (empty without a usable calibration). */
+export function docFaultsInSection(doc: ProjectDoc): ImportedFault[] {
+  const cal = doc.calibration ? fitCalibration(doc.calibration) : null;
+  if (!cal || !cal.ok) return [];
+  const fit = cal.fit;
+  return doc.faults.filter((f) => f.pointsPx.length >= 2).map((f) => ({ name: f.name, line: f.pointsPx.map((p) => imageToSection(fit, p)) }));
 }
 
 /** Returns the section with every coordinate, pin and reference rounded to 1e-6 unit (cleanCoordinate), for writing to a file. */

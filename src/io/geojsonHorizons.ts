@@ -1,8 +1,9 @@
 // Horizons as GeoJSON: LineString / MultiLineString features whose coordinates are section
 // [x, z] (not longitude/latitude), with the unit in a "units" property (feature or collection).
-import { featureCollection, lineString } from '@turf/helpers';
+import { featureCollection, lineString, multiLineString } from '@turf/helpers';
+import type { LineString, MultiLineString } from 'geojson';
 import { SECTION_CAUTION } from '../core/analysis/caution';
-import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanPoint } from './cleanCoordinate';
 import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
@@ -49,6 +50,7 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
   if (features.length === 0) return { ok: false, message: 'The GeoJSON file holds no features.', problems };
   let units = readUnit(raw.units) ?? (isObject(raw.properties) ? readUnit(raw.properties.units) : null);
   const horizons: ImportedHorizon[] = [];
+  const faults: ImportedFault[] = [];
   const counter = { n: 0 };
   features.forEach((f, i) => {
     const where = `feature ${i + 1}`;
@@ -62,6 +64,18 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
     const g = f.geometry;
     const parts = g.type === 'LineString' ? [g.coordinates] : g.type === 'MultiLineString' && Array.isArray(g.coordinates) ? g.coordinates : null;
     if (!parts) { pushProblem(problems, { where: `${where} ("${name}")`, message: `is a ${String(g.type).slice(0, 40)}; only LineString and MultiLineString are horizons` }, counter); return; }
+    // A fault (kind "fault") is a LineString; a horizon cut by faults (kind "horizon") a MultiLineString of its pieces in order.
+    if (props.kind === 'fault' || (props.kind === 'horizon' && parts.length > 1)) {
+      const lines = parts.map(readLine);
+      const bad = lines.findIndex((l: XZ[] | string) => typeof l === 'string');
+      if (bad >= 0) { pushProblem(problems, { where: `${where} ("${name}")`, message: `${parts.length > 1 ? `part ${bad + 1}: ` : ''}${lines[bad] as string}` }, counter); return; }
+      const ok = lines as XZ[][];
+      if (props.kind === 'fault') {
+        if (ok.length > 1) { pushProblem(problems, { where: `${where} ("${name}")`, message: 'is a fault of several parts; a fault is one LineString' }, counter); return; }
+        faults.push({ name, line: ok[0] });
+      } else horizons.push({ name, line: ok.flat(), pieces: ok });
+      return;
+    }
     parts.forEach((part: unknown, k: number) => {
       const line = readLine(part);
       const partName = parts.length > 1 ? `${name} ${k + 1}` : name;
@@ -69,16 +83,25 @@ export function parseHorizonsGeoJson(text: string): HorizonImport {
       else horizons.push({ name: partName, line });
     });
   });
-  if (horizons.length === 0) return { ok: false, message: 'The GeoJSON file holds no usable LineString horizon.', problems };
+  if (horizons.length === 0 && faults.length === 0) return { ok: false, message: 'The GeoJSON file holds no usable LineString horizon.', problems };
   const tooMany = lineCountProblem({ horizons: horizons.length, ...countLines(horizons.map((h) => h.line.length)) });
   if (tooMany) return { ok: false, message: `The GeoJSON file holds ${tooMany}; thin the vertices or import the file in parts. Nothing was imported.`, problems };
   const warning = geographicHint(raw, horizons);
-  return warning ? { ok: true, horizons, units, problems, warning } : { ok: true, horizons, units, problems };
+  return { ok: true, horizons, units, problems, ...(warning ? { warning } : {}), ...(faults.length ? { faults } : {}) };
 }
 
-/** Returns horizons (section units) as a GeoJSON FeatureCollection text of LineStrings with name and units properties, and the caution as a top-level "caution" member; coordinates rounded to 1e-6 unit (cleanCoordinate). */
-export function writeHorizonsGeoJson(horizons: ImportedHorizon[], units: LengthUnit): string {
-  const fc = featureCollection(horizons.map((h) => lineString(h.line.map(cleanPoint), { name: h.name, units })));
+/**
+ * Returns horizons and faults (section units) as a GeoJSON FeatureCollection text: a horizon a LineString, one cut
+ * by faults a MultiLineString of its pieces in order (kind "horizon"; an unmarked MultiLineString reads as separate horizons), a fault a LineString with kind "fault"; name
+ * and units properties, and the caution as a top-level "caution" member; coordinates rounded to 1e-6 unit (cleanCoordinate).
+ */
+export function writeHorizonsGeoJson(horizons: ImportedHorizon[], units: LengthUnit, faults: ImportedFault[] = []): string {
+  const fc = featureCollection<LineString | MultiLineString, { name: string; units: LengthUnit; kind?: string }>([
+    ...horizons.map((h) => (h.pieces && h.pieces.length > 1
+      ? multiLineString(h.pieces.map((p) => p.map(cleanPoint)), { name: h.name, units, kind: 'horizon' })
+      : lineString(h.line.map(cleanPoint), { name: h.name, units }))),
+    ...faults.map((f) => lineString(f.line.map(cleanPoint), { name: f.name, units, kind: 'fault' })),
+  ]);
   // "caution" and "units" are foreign members, which GeoJSON readers keep or ignore (RFC 7946 §6.1).
   return JSON.stringify({ ...fc, units, caution: SECTION_CAUTION }, null, 1);
 }

@@ -1,5 +1,5 @@
 // What every horizon importer (CSV, GeoJSON, SVG) returns: horizons in section units, per-row problems.
-import type { ImportedHorizon } from '../core/model/commands/importHorizons';
+import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit } from '../core/model/section';
 import { LIMITS } from '../core/model/limits';
 
@@ -7,7 +7,7 @@ import { LIMITS } from '../core/model/limits';
 export interface RowProblem { where: string; message: string }
 
 export type HorizonImport =
-  | { ok: true; horizons: ImportedHorizon[]; units: LengthUnit | null; problems: RowProblem[]; /** Said before importing (e.g. coordinates that look like longitude/latitude). */ warning?: string }
+  | { ok: true; horizons: ImportedHorizon[]; units: LengthUnit | null; problems: RowProblem[]; /** Said before importing (e.g. coordinates that look like longitude/latitude). */ warning?: string; faults?: ImportedFault[] }
   | { ok: false; message: string; problems: RowProblem[] };
 
 /** Largest text file an importer reads, in bytes. */

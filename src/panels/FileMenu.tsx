@@ -8,7 +8,7 @@ import { downloadFile, safeFileName } from '../io/downloadFile';
 import { figureToPng, PNG_SIZES, type PngStep } from '../io/exportFigure';
 import { currentFigureParts, currentFigureSvg } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
-import { docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
+import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
 import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
 import { newProject, openProjectFile, saveProjectFile } from '../state/projectActions';
@@ -50,8 +50,9 @@ async function exportPng(sizeId: string): Promise<void> {
 function horizonsOrNull(kind: 'csv' | 'geojson'): string | null {
   const doc = useDocStore.getState().doc;
   const hs = docHorizonsInSection(doc);
-  if (hs.length === 0) return null;
-  return kind === 'csv' ? writeHorizonsCsv(hs, doc.units) : writeHorizonsGeoJson(hs, doc.units);
+  const fs = docFaultsInSection(doc);
+  if (hs.length === 0 && fs.length === 0) return null;
+  return kind === 'csv' ? writeHorizonsCsv(hs, doc.units, fs) : writeHorizonsGeoJson(hs, doc.units, fs);
 }
 
 export function FileMenu() {

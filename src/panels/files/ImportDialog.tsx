@@ -72,17 +72,18 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
   const confirm = () => {
     if (!mapped.ok) return;
     const before = useDocStore.getState().doc;
+    const faultsIn = pending.kind !== 'svg' && pending.result.ok ? pending.result.faults ?? [] : [];
     // The horizons already drawn count too: the document after the import must stay within the limits.
-    const over = docLimitProblem(importHorizons(before, mapped.horizons, units));
+    const over = docLimitProblem(importHorizons(before, mapped.horizons, units, faultsIn));
     if (over) {
       useSessionStore.getState().showMessage('error', `Nothing was imported from ${pending.fileName}: with the horizons already in the project there would be ${over}.`);
       onClose();
       return;
     }
-    useDocStore.getState().apply((doc) => importHorizons(doc, mapped.horizons, units));
+    useDocStore.getState().apply((doc) => importHorizons(doc, mapped.horizons, units, faultsIn));
     const after = useDocStore.getState().doc;
     if (!before.scan && after !== before) fitViewToDoc(after);
-    useSessionStore.getState().showMessage('info', `Imported ${mapped.horizons.length} horizon${mapped.horizons.length === 1 ? '' : 's'} from ${pending.fileName}.`);
+    useSessionStore.getState().showMessage('info', `Imported ${mapped.horizons.length} horizon${mapped.horizons.length === 1 ? '' : 's'}${faultsIn.length ? ` and ${faultsIn.length} fault${faultsIn.length === 1 ? '' : 's'}` : ''} from ${pending.fileName}.`);
     onClose();
   };
 
