@@ -7,6 +7,7 @@ import type Konva from 'konva';
 import { calibrationPoints } from '../core/model/commands/calibrationPointRef';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
 import { activeScenario } from '../core/model/docToSection';
+import { countText } from '../core/model/limits';
 import type { ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
@@ -37,7 +38,7 @@ const VertexHandles = memo(function VertexHandles() {
   const shapeRef = useRef<Konva.Shape>(null);
   const labelRef = useRef<Konva.Label>(null);
   const textRef = useRef<Konva.Text>(null);
-  const noteText = (count: number, name: string) => `${count.toLocaleString('en')} vertices of “${name}” in view: zoom in to see and drag single vertices`;
+  const noteText = (count: number, name: string) => `${countText(count)} vertices of “${name}” in view: zoom in to see and drag single vertices`;
 
   useLayoutEffect(() => {
     if (!shown) {

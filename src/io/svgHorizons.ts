@@ -8,7 +8,7 @@ import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { XZ } from '../core/model/section';
 import { MAX_IMPORT_BYTES, pushProblem, type RowProblem } from './importTypes';
 import { pathDataToPolylines, TOO_MANY_POINTS, type Pt } from './svgPathData';
-import { LIMITS, tooManyMessage } from '../core/model/limits';
+import { LIMITS, countText, tooManyMessage } from '../core/model/limits';
 import { applyMatrix, IDENTITY, multiply, parseTransform, type Matrix } from './svgTransform';
 import { nestedViewport, rootViewportSize, type ViewportSize } from './svgViewport';
 
@@ -155,7 +155,7 @@ export function readSvgLines(text: string): SvgRead {
 }
 
 function tooMany(lines: number, problems: RowProblem[]): SvgRead {
-  const what = lines > LIMITS.horizons ? tooManyMessage('lines', lines, LIMITS.horizons) : `more than ${LIMITS.totalPoints.toLocaleString('en-US')} vertices, too many for the app (the limit is ${LIMITS.totalPoints.toLocaleString('en-US')})`;
+  const what = lines > LIMITS.horizons ? tooManyMessage('lines', lines, LIMITS.horizons) : `more than ${countText(LIMITS.totalPoints)} vertices, too many for the app (the limit is ${countText(LIMITS.totalPoints)})`;
   return { ok: false, message: `The SVG file holds ${what}; simplify the drawing (fewer curves and arcs) or import it in parts. Nothing was imported.`, problems };
 }
 

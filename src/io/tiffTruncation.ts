@@ -1,4 +1,5 @@
 import type { TiffIfd } from './decodeTiffPixels';
+import { countText } from '../core/model/limits';
 
 // A TIFF page whose strips or tiles point past the end of the file has lost part of its pixels (a copy
 // cut short). The decoder would fill the missing part with black; it is refused instead, with how much is
@@ -22,5 +23,5 @@ export function tiffTruncation(ifd: TiffIfd, fileBytes: number, page: number): s
   }
   if (end <= fileBytes) return null;
   const missing = Math.max(1, Math.round((100 * (needed - present)) / Math.max(1, needed)));
-  return `(page ${page + 1}) is truncated: its pixel data runs to byte ${end.toLocaleString('en-US')} but the file ends at byte ${fileBytes.toLocaleString('en-US')} (about ${missing} % of the image is missing); open a complete copy of the file`;
+  return `(page ${page + 1}) is truncated: its pixel data runs to byte ${countText(end)} but the file ends at byte ${countText(fileBytes)} (about ${missing} % of the image is missing); open a complete copy of the file`;
 }

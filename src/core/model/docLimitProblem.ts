@@ -5,7 +5,7 @@ import type { ProjectDoc } from './projectDoc';
 // it does not read every vertex), so that it can run before every write of the kept copy: work the
 // restore would refuse is never written over work it can restore.
 
-/** Returns the first limit the document breaks, in the shared words ("too many horizons for the app (2,001; the limit is 2,000)"), or null. */
+/** Returns the first limit the document breaks, in the shared words ("too many horizons for the app (2001; the limit is 2000)"), or null. */
 export function docLimitProblem(doc: ProjectDoc): string | null {
   const names: [string, string][] = [[doc.title, 'project title'], [doc.author, 'author']];
   for (const h of doc.horizons) names.push([h.name, 'horizon name']);

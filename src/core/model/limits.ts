@@ -29,14 +29,14 @@ export const LIMITS = {
 
 const MiB = 1024 * 1024;
 
-/** Returns a count with thousands separators for messages ("150,000"). */
-function count(n: number): string {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+/** Returns a count for messages as a plain whole number ("150000"): no thousands separators, the one rule of src/format/formatQuantity.ts. */
+export function countText(n: number): string {
+  return Math.round(n).toString();
 }
 
-/** Returns the message for a count over its limit, e.g. "too many vertices for the app (250,000; the limit is 200,000)". */
+/** Returns the message for a count over its limit, e.g. "too many vertices for the app (250000; the limit is 200000)". */
 export function tooManyMessage(what: string, n: number, limit: number): string {
-  return `too many ${what} for the app (${count(n)}; the limit is ${count(limit)})`;
+  return `too many ${what} for the app (${countText(n)}; the limit is ${countText(limit)})`;
 }
 
 /** Returns the message for a file over its size limit: "file too large (600 MB; the limit is 500 MB)". */
@@ -47,7 +47,7 @@ export function fileTooLargeMessage(bytes: number, limit: number): string {
 
 /** Returns the message for a name over the length limit, or null when it fits. */
 export function nameLengthProblem(name: string, what = 'name'): string | null {
-  return name.length > LIMITS.nameLength ? `the ${what} is too long (${count(name.length)} characters; the limit is ${count(LIMITS.nameLength)})` : null;
+  return name.length > LIMITS.nameLength ? `the ${what} is too long (${countText(name.length)} characters; the limit is ${countText(LIMITS.nameLength)})` : null;
 }
 
 /** Returns the message for a coordinate outside the range Foldroot computes in, or null when it is inside. */

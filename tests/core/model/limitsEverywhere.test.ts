@@ -63,11 +63,11 @@ describe('the project schema and the kept document use the same limits and words
     expect(docLimitProblem(doc)).toBe('the horizon name is too long (501 characters; the limit is 500)');
   });
 
-  it('2,001 horizons: the schema and docLimitProblem say "too many horizons for the app (2,001; the limit is 2,000)"', () => {
+  it('2,001 horizons: the schema and docLimitProblem say "too many horizons for the app (2001; the limit is 2000)"', () => {
     const doc = sampleDoc();
     const h = doc.horizons[0];
     doc.horizons = Array.from({ length: 2001 }, (_, i) => ({ ...h, id: `h${i + 1}`, name: `H${i}` }));
-    const words = 'too many horizons for the app (2,001; the limit is 2,000)';
+    const words = 'too many horizons for the app (2001; the limit is 2000)';
     expect(docLimitProblem(doc)).toBe(words);
     const r = checkProjectDoc(doc);
     expect(!r.ok && r.message).toContain(words);
@@ -85,8 +85,8 @@ describe('the project schema and the kept document use the same limits and words
 describe('section files: the app and the command line read them through one check', () => {
   it('2,001 horizons and 200,001 vertices in a line are refused with the shared words by the app\'s opener and validateSection', () => {
     const cases: [ReturnType<typeof section>, string][] = [
-      [section(2001, 2), 'too many horizons for the app (2,001; the limit is 2,000)'],
-      [section(1, LIMITS.pointsPerLine + 1), 'too many vertices for the app (200,001; the limit is 200,000)'],
+      [section(2001, 2), 'too many horizons for the app (2001; the limit is 2000)'],
+      [section(1, LIMITS.pointsPerLine + 1), 'too many vertices for the app (200001; the limit is 200000)'],
     ];
     for (const [s, words] of cases) {
       const v = validateSection(s);
