@@ -1,6 +1,6 @@
 // A horizon in pieces as drawn, in image pixels: its pieces in order and, between the end of one piece
-// and the start of the next, the trace of the fault they are cut by (docs/method.md §Faults and horizons
-// in pieces). The join is core's joinPieces, the rule the analysis measures with, run on image pixels
+// and the start of the next, the trace of the fault they are cut by
+// (docs/method.md §Faults and horizons in pieces). The join is core's joinPieces, the rule the analysis measures with, run on image pixels
 // (an affine calibration maps the fault's trace between two of its points onto the same trace), so the
 // outline and the fills follow the line that is measured. A piece end that has left its fault is still
 // joined (from the nearest point of the fault), so the line stays drawn while the problem is shown.

@@ -146,7 +146,7 @@ test('an extensional section through the whole UI: regime, signed displacement, 
   await expect(page.getByTestId('scenario-compare')).toContainText('−');
   await expect(page.getByTestId('result-regime')).toContainText('extension');
 
-  // Sensitivity: 1 + W/D for D < 0 (docs/method.md §Sensitivity).
+  // Sensitivity: 1 + W/D for D < 0 (docs/method.md §Sensitivity to the regional).
   await page.getByTestId('sensitivity-section').locator('summary').click();
   const amp = 1 + 20000 / D;
   const text = (await page.getByTestId('sensitivity-amplification').textContent()) ?? '';

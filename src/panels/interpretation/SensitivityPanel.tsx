@@ -43,7 +43,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
   const amp = sweep.result.amplification;
   const ampText = amp === null
     ? 'No detachment at the base case: no amplification factor.'
-    // zd' = zd − δ(1 + W/D) for either sign of D (docs/method.md §Sensitivity): with extension (D < 0) the factor is
+    // zd' = zd − δ(1 + W/D) for either sign of D (docs/method.md §Sensitivity to the regional): with extension (D < 0) the factor is
     // negative and a raised regional moves the detachment down.
     : `Amplification 1 + W/D = ${formatNumber(amp, 3)}: raising every regional by 10 ${u} moves the detachment ${formatNumber(10 * Math.abs(amp))} ${u} ${amp >= 0 ? 'up' : 'down'}.`;
   return (

@@ -1,4 +1,4 @@
-// The regime in words for the key results (docs/method.md §Shortening and extension): the area–depth line's
+// The regime in words for the key results (docs/method.md §Area-depth line): the area–depth line's
 // displacement D > 0 is shortening, D < 0 extension, E = −D; none without a detachment below the horizons.
 import type { AreaDepthResult } from '../../core/analysis/analyseSection';
 import { formatLength } from '../../format/formatQuantity';

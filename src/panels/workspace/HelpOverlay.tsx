@@ -1,23 +1,29 @@
 // The keyboard shortcuts, shown on "?" (and from the tool bar's "?" button).
 import { useToolSession } from '../../state/toolSessionStore';
 import { TOOLS } from '../../tools/toolRegistry';
+import { GENERAL_KEYS } from './generalKeys';
 
-const GENERAL: [string, string][] = [
-  ['Ctrl/Cmd + Z', 'Undo (a drawn line steps back one stretch at a time, while drawing and after)'],
-  ['Shift + Ctrl/Cmd + Z, Ctrl/Cmd + Y', 'Redo (while drawing a line: put back the stretch undo took)'],
-  ['Wheel', 'Zoom about the cursor'],
-  ['+ / −', 'Zoom in / out'],
-  ['F', 'Zoom to fit'],
-  ['1', 'Actual size: one scan pixel per screen pixel'],
-  ['Space + drag, middle drag', 'Pan (Space on a focused button presses the button)'],
-  ['Arrow keys', 'Pan'],
-  ['Enter / double-click', 'Finish the line being drawn (Enter on a focused button presses the button)'],
-  ['Backspace', 'Remove the last point drawn (and the stretch traced to it); in Edit, delete the chosen vertex'],
-  ['Esc', 'Cancel what the tool is doing'],
-  ['Shift + drag', 'Edit: move a whole line · Regional: move every regional'],
-  ['Alt + click', 'Draw horizon, Fault: a straight stretch (or a followed one, with following off) · Calibrate: no snapping · Edit: delete a vertex'],
-  ['?', 'Show or hide this list'],
-];
+/** The two tables of keys: each tool's key (from the tool registry), then the general keys. */
+export function HelpKeyTables() {
+  return (
+    <div className="help-columns">
+      <table>
+        <tbody>
+          {TOOLS.map((t) => (
+            <tr key={t.tool.id}><td><kbd>{t.key.toUpperCase()}</kbd></td><td><strong>{t.label}</strong> — {t.hint}</td></tr>
+          ))}
+        </tbody>
+      </table>
+      <table>
+        <tbody>
+          {GENERAL_KEYS.map(([k, what]) => (
+            <tr key={k}><td><kbd>{k}</kbd></td><td>{what}</td></tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
 
 export function HelpOverlay() {
   const open = useToolSession((s) => s.helpOpen);
@@ -30,22 +36,7 @@ export function HelpOverlay() {
           <h2>Keyboard shortcuts</h2>
           <button type="button" aria-label="Close" onClick={() => setOpen(false)}>×</button>
         </div>
-        <div className="help-columns">
-          <table>
-            <tbody>
-              {TOOLS.map((t) => (
-                <tr key={t.tool.id}><td><kbd>{t.key.toUpperCase()}</kbd></td><td><strong>{t.label}</strong> — {t.hint}</td></tr>
-              ))}
-            </tbody>
-          </table>
-          <table>
-            <tbody>
-              {GENERAL.map(([k, what]) => (
-                <tr key={k}><td><kbd>{k}</kbd></td><td>{what}</td></tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <HelpKeyTables />
       </div>
     </div>
   );
