@@ -8,14 +8,16 @@ import { prepareHorizon } from './prepareHorizon';
 import { prepareSection, type PreparedSection } from './prepareSection';
 import type { SectionAdjustment } from './shiftRegionals';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
+import { sectionPerturbation } from './perturbSection';
 import { validateSectionArrays } from '../model/validateSectionArrays';
 
 // Monte Carlo of the detachment (docs/method.md §Sensitivity to the regional: propagate digitising and regional error,
 // report P10/P50/P90). Each run draws, in this fixed order: a common regional offset, a common
 // regional tilt about the chosen pin, a calibration scale factor, per-horizon regional offsets,
 // then the digitising noise — either one normal area change per horizon with variance σ² Σ cᵢ²
-// ('analytic', docs/method.md §Area variance of a horizon, exact because the area is linear in z) or σ on every input vertex with
-// the horizon re-clipped ('vertices', the brute force the analytic method is checked against).
+// ('analytic', docs/method.md §Area variance of a horizon, exact because the area is linear in z) or σ on every input vertex,
+// the faults' vertices too, with the cutoffs moved along with their faults and every horizon re-joined and re-clipped
+// ('vertices', the brute force the analytic method is checked against).
 
 export interface MonteCarloOptions {
   runs: number;
@@ -113,19 +115,18 @@ function analyticNoise(section: Section, p: PreparedSection, sigma: number): Noi
   };
 }
 
-/** σ on every input vertex's z (for a horizon in pieces: every vertex of its joined line), each horizon re-clipped; false when a perturbed line no longer crosses the pins once. */
+/** σ on every digitised vertex's z, faults included, cutoffs moved with their faults (perturbSection.ts), each horizon re-joined and re-clipped; false when a perturbed section no longer validates or a line no longer crosses the pins once. */
 function vertexNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
-  // The section was validated by prepareSection above, so this reads it again without problems (fresh arrays, kept).
-  const v = validateSectionArrays(section);
-  const inputs = v.ok ? v.section.horizons.map((h) => ({
-    line: { xs: h.lineX, zs: h.lineZ }, reg: { xs: h.regionalX, zs: h.regionalZ }, flags: projectedSegmentFlags(h.projected, h.lineX.length),
-  })) : [];
+  const perturb = sectionPerturbation(section);
   return (normal, out) => {
+    const v = validateSectionArrays(perturb(sigma, normal));
+    if (!v.ok) return false;
     let ok = true;
-    inputs.forEach((h, i) => {
-      const zs = Float64Array.from(h.line.zs, (z) => z + sigma * normal());
+    v.section.horizons.forEach((h, i) => {
       const base = p.horizons[i];
-      const again = prepareHorizon(base.name, h.line.xs, zs, h.reg.xs, h.reg.zs, p.pins, base.included, h.flags);
+      const flags = projectedSegmentFlags(h.projected, h.lineX.length);
+      const join = h.faultSegments ? { faultSegments: h.faultSegments, pieces: h.pieceCount, cutoffs: h.cutoffs } : undefined;
+      const again = prepareHorizon(base.name, h.lineX, h.lineZ, h.regionalX, h.regionalZ, p.pins, base.included, flags, p.units, undefined, join);
       if (again.ok) out[i] = again.horizon.excessArea - base.excessArea;
       else ok = false;
     });
