@@ -20,6 +20,10 @@ import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
 import { EXCESS_FILL } from '../core/model/horizonPalette';
 import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
+import { joinPieces } from '../core/model/joinPieces';
+import type { FaultArrays } from '../core/model/readFault';
+import type { SectionHorizon } from '../core/model/section';
+import type { SectionProblem } from '../core/model/sectionProblem';
 
 export const FIGURE_WIDTH = 1400;
 export const FIGURE_HEIGHT = 990;
@@ -29,6 +33,20 @@ const PANEL = { x: 92, y: 96, w: 908, h: 690 };
 export const FIGURE_FILL_ABOVE = EXCESS_FILL.above;
 export const FIGURE_FILL_BELOW = EXCESS_FILL.below;
 const RED = '#b3261e';
+/** A fault's line width and dash (figure units), heavier than a horizon (2.5) and long-dashed, as on the canvas (src/tools/faultStyle.ts). */
+export const FIGURE_FAULT_WIDTH = 3.5;
+export const FIGURE_FAULT_DASH = '16 5';
+
+/** The horizon's line as measured (section units): its line, or its pieces joined along their faults (the analysis's rule), with which segments run along a fault; null when the pieces do not join. */
+function measuredLine(h: SectionHorizon, faults: readonly FaultArrays[]): { xs: ArrayLike<number>; zs: ArrayLike<number>; alongFault: ArrayLike<number> | null } | null {
+  if (h.line) return { ...toCoordinateArrays(h.line), alongFault: null };
+  if (!h.pieces) return null;
+  if (h.pieces.length === 1) return { ...toCoordinateArrays(h.pieces[0]), alongFault: null };
+  const problems: SectionProblem[] = [];
+  // The section was checked when it was built (piece ends on their faults within the analysis's tolerance); join as it does.
+  const joined = joinPieces(h.pieces.map(toCoordinateArrays), faults, Infinity, 'horizon', h.name, problems, (n) => new Float64Array(n), h.joinFaults);
+  return joined ? { xs: joined.xs, zs: joined.zs, alongFault: joined.faultSegments } : null;
+}
 
 export interface SectionFigureInput {
   doc: ProjectDoc;
@@ -91,7 +109,7 @@ function wrap(text: string, width: number): string[] {
 }
 
 /** What the drawing holds, so that the legend lists only that. */
-interface Drawn { regionals: boolean; pins: boolean; above: boolean; below: boolean; projected: boolean; detachment: boolean; band: boolean; reference: boolean }
+interface Drawn { faults: boolean; stretches: boolean; regionals: boolean; pins: boolean; above: boolean; below: boolean; projected: boolean; detachment: boolean; band: boolean; reference: boolean }
 
 function legendRows(doc: ProjectDoc, drawn: Drawn, x: number, y: number): { svg: string; bottom: number } {
   const rows: string[] = [];
@@ -107,6 +125,8 @@ function legendRows(doc: ProjectDoc, drawn: Drawn, x: number, y: number): { svg:
   const line = (stroke: string, w: number, dash = '') => (yy: number) => `<line x1="${x + 10}" y1="${yy - 4}" x2="${x + 40}" y2="${yy - 4}" stroke="${stroke}" stroke-width="${w}"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`;
   const box = (fill: string, opacity: number) => (yy: number) => `<rect x="${x + 10}" y="${yy - 10}" width="30" height="10" fill="${fill}" fill-opacity="${opacity}" stroke="${fill}" stroke-opacity="0.6" stroke-width="0.6"/>`;
   const key: [string, (yy: number) => string][] = [];
+  if (drawn.faults) key.push(['fault (heavy, long dashes)', line('#263238', FIGURE_FAULT_WIDTH, FIGURE_FAULT_DASH)]);
+  if (drawn.stretches) key.push(['horizon along its fault, between cutoffs (thin)', line('#444', 1.2)]);
   if (drawn.regionals) key.push(['regional (dashed, in the horizon’s colour)', line('#444', 1.5, '7 4')]);
   if (drawn.pins) key.push(['pin', (yy) => `<line x1="${x + 25}" y1="${yy - 11}" x2="${x + 25}" y2="${yy + 3}" stroke="#20323f" stroke-width="2"/>`]);
   if (drawn.above || drawn.below) {
@@ -136,6 +156,31 @@ function zAt(xs: ArrayLike<number>, zs: ArrayLike<number>, x: number): number {
   return zs[0];
 }
 
+/** Returns the runs of consecutive segments flagged along a fault, as point lists. */
+function alongFaultRuns(xs: ArrayLike<number>, zs: ArrayLike<number>, along: ArrayLike<number>): XZ[][] {
+  const runs: XZ[][] = [];
+  let run: XZ[] | null = null;
+  for (let s = 0; s < along.length; s++) {
+    if (along[s] !== 1) { run = null; continue; }
+    if (!run) runs.push((run = [[xs[s], zs[s]]]));
+    run.push([xs[s + 1], zs[s + 1]]);
+  }
+  return runs;
+}
+
+/** Returns the vertices split into pieces where each join starts one (joins out of range or out of order left out). */
+function piecesOf(pointsPx: readonly ImagePx[], joins: readonly { at: number }[]): ImagePx[][] {
+  const pieces: ImagePx[][] = [];
+  let from = 0;
+  for (const j of joins) {
+    if (j.at <= from || j.at >= pointsPx.length) continue;
+    pieces.push(pointsPx.slice(from, j.at));
+    from = j.at;
+  }
+  pieces.push(pointsPx.slice(from));
+  return pieces;
+}
+
 /**
  * The figure in the two parts drawn below and above the scan, with where the scan goes: so that a PNG can draw
  * the decoded scan itself between them (exportFigure.figureToPng) instead of passing it through an SVG string.
@@ -153,6 +198,8 @@ export interface SectionSvgParts {
   panel: { x: number; y: number; w: number; h: number };
   /** The scan's place: scan pixels (0, 0)–(widthPx, heightPx) mapped to figure units by the affine `matrix` (SVG order a b c d e f), at `opacity`; null without a scan. */
   scan: { widthPx: number; heightPx: number; matrix: [number, number, number, number, number, number]; opacity: number } | null;
+  /** Section units → figure units (sectionToFigure): how to read the drawing back in section units. */
+  frame: SectionFrame;
 }
 
 /** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. The scan, when given, is embedded once. */
@@ -189,7 +236,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   const [zLo, zHi] = frame.zRange;
   const toFig = (q: XZ) => sectionToFigure(frame, q);
   const fig = (p: ImagePx) => toFig(imageToSection(mapFit, p));
-  const drawn: Drawn = { regionals: false, pins: false, above: false, below: false, projected: false, detachment: false, band: false, reference: false };
+  const drawn: Drawn = { faults: false, stretches: false, regionals: false, pins: false, above: false, below: false, projected: false, detachment: false, band: false, reference: false };
   const out: string[] = [];
   const defs: string[] = [`<clipPath id="panel-clip"><rect x="${PANEL.x}" y="${PANEL.y}" width="${PANEL.w}" height="${PANEL.h}"/></clipPath>`];
   out.push(`<rect width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" fill="#ffffff"/>`);
@@ -215,11 +262,17 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   const scan = doc.scan
     ? { widthPx: doc.scan.widthPx, heightPx: doc.scan.heightPx, matrix: imageToFigureMatrix(mapFit, frame).map((v) => Number(v.toPrecision(10))) as [number, number, number, number, number, number], opacity: 0.85 }
     : null;
+  // The stretches of joined lines along their faults (between cutoffs), drawn thin over the faults.
+  const stretches: { colour: string; runs: [number, number][][] }[] = [];
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
+    const faultArrays: FaultArrays[] = (ds.section.faults ?? []).map((f) => ({ name: f.name, ...toCoordinateArrays(f.line) }));
     ds.section.horizons.forEach((h, i) => {
-      if (!h.line) return;
-      const line = toCoordinateArrays(h.line), reg = toCoordinateArrays(h.regional);
+      // A horizon in pieces is filled along its joined line (the line the analysis measures), as on the canvas.
+      const line = measuredLine(h, faultArrays);
+      if (!line) return;
+      const reg = toCoordinateArrays(h.regional);
+      if (line.alongFault) stretches.push({ colour: escapeXml(doc.horizons.find((d) => d.id === ds.horizonIds[i])?.colour ?? '#444'), runs: alongFaultRuns(line.xs, line.zs, line.alongFault).map((r) => r.map(toFig)) });
       const cl = fillHorizonPart(line.xs, line.zs, [pL, pR]);
       const cr = cl && fillRegionalPart(reg.xs, reg.zs, [pL, pR], cl);
       if (!cl || !cr) return;
@@ -250,6 +303,20 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
       }
     }
   }
+  // Faults: heavy and long-dashed in their own dark colours, so none reads as a horizon; under the horizons.
+  for (const f of doc.faults) {
+    if (!f.visible || f.pointsPx.length < 2) continue;
+    const line = pts(f.pointsPx.map(fig));
+    out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="${FIGURE_FAULT_WIDTH + 2.5}" stroke-linejoin="round"/>`);
+    out.push(`<polyline class="fault" data-fault="${escapeXml(f.id)}" points="${line}" fill="none" stroke="${escapeXml(f.colour)}" stroke-width="${FIGURE_FAULT_WIDTH}" stroke-dasharray="${FIGURE_FAULT_DASH}" stroke-linejoin="round"/>`);
+    drawn.faults = true;
+  }
+  for (const s of stretches) {
+    for (const run of s.runs) {
+      out.push(`<polyline class="fault-stretch" points="${pts(run)}" fill="none" stroke="${s.colour}" stroke-width="1.2" stroke-linejoin="round" stroke-linecap="round"/>`);
+      drawn.stretches = true;
+    }
+  }
   for (const h of doc.horizons) {
     if (!h.visible) continue;
     const reg = scenario.regionals[h.id];
@@ -261,8 +328,10 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
       out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="1.5" stroke-dasharray="7 4"/>`);
       drawn.regionals = true;
     }
-    if (h.pointsPx.length >= 2) {
-      const line = pts(h.pointsPx.map(fig));
+    // Each piece on its own: no straight step is drawn across a fault.
+    for (const piece of piecesOf(h.pointsPx, h.joins)) {
+      if (piece.length < 2) continue;
+      const line = pts(piece.map(fig));
       out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="5" stroke-linejoin="round"/>`);
       out.push(`<polyline points="${line}" fill="none" stroke="${c}" stroke-width="2.5" stroke-linejoin="round"/>`);
     }
@@ -332,6 +401,6 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   const head = `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="${FIGURE_WIDTH}" height="${FIGURE_HEIGHT}" viewBox="0 0 ${FIGURE_WIDTH} ${FIGURE_HEIGHT}" font-family="DejaVu Sans, sans-serif" fill="#1d2731">`;
   return {
     head: `${head}<defs>${defs.join('')}</defs>`, under: out.slice(0, slot).join(''), panelOpen: out[slot], over: out.slice(slot + 1).join(''),
-    panel: { ...PANEL }, scan,
+    panel: { ...PANEL }, scan, frame,
   };
 }
