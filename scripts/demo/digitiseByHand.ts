@@ -31,7 +31,7 @@ function turnDeg(a: [number, number], b: [number, number], c: [number, number]):
 }
 
 /** Returns the line's clicks in scan pixels (before jitter): ends, sharp bends, the points marked `must`, and every spacingPx of arc between. */
-function clicksAlong(px: [number, number][], must: boolean[], o: HandOptions): [number, number][] {
+export function clicksAlong(px: [number, number][], must: boolean[], o: HandOptions): [number, number][] {
   const out: [number, number][] = [px[0]];
   let since = 0;
   for (let i = 1; i < px.length; i++) {

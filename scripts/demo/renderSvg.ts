@@ -16,8 +16,8 @@ export interface DrawingInput {
 }
 
 const LETTER = "'URW Gothic', 'DejaVu Sans', sans-serif";
-const ITALIC = "'URW Bookman', 'DejaVu Serif', serif";
-const INK = '#1d1b19';
+export const ITALIC = "'URW Bookman', 'DejaVu Serif', serif";
+export const INK = '#1d1b19';
 
 const f1 = (v: number): string => v.toFixed(1);
 /** A slight, smooth wander of the pen (≤ 0.6 px), the same function everywhere so shared edges still meet. */
@@ -26,7 +26,7 @@ function warp([u, v]: [number, number]): [number, number] {
 }
 
 /** Drawing-pixel points of a section polyline, split into pieces of at most 6 px so the wander shows. */
-function pts(line: XZ[]): string {
+export function pts(line: XZ[]): string {
   const out: string[] = [];
   const px = line.map(drawingPx);
   px.forEach((p, i) => {
@@ -41,7 +41,7 @@ function pts(line: XZ[]): string {
 }
 const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;');
 
-function text(u: number, v: number, s: string, size: number, opts: { anchor?: string; font?: string; style?: string; spacing?: number; rotate?: number } = {}): string {
+export function text(u: number, v: number, s: string, size: number, opts: { anchor?: string; font?: string; style?: string; spacing?: number; rotate?: number } = {}): string {
   const rot = opts.rotate ? ` transform="rotate(${opts.rotate} ${f1(u)} ${f1(v)})"` : '';
   return `<text x="${f1(u)}" y="${f1(v)}" font-family="${opts.font ?? LETTER}" font-size="${size}" text-anchor="${opts.anchor ?? 'middle'}"` +
     `${opts.style ? ` font-style="${opts.style}"` : ''}${opts.spacing ? ` letter-spacing="${opts.spacing}"` : ''} fill="${INK}"${rot}>${esc(s)}</text>`;
@@ -76,7 +76,7 @@ export function renderSvg(d: DrawingInput): string {
   return out.join('\n');
 }
 
-function axes(uL: number, uR: number, vB: number): string {
+export function axes(uL: number, uR: number, vB: number): string {
   const out: string[] = [];
   for (let z = Math.ceil(window.zMin / 500) * 500; z <= window.zMax; z += 500) {
     const v = drawingPx([0, z])[1];
@@ -117,7 +117,7 @@ function placeNames(d: DrawingInput): string {
   }).join('');
 }
 
-function furniture(d: DrawingInput, uL: number, uR: number, vT: number, vB: number): string {
+export function furniture(d: DrawingInput, uL: number, uR: number, vT: number, vB: number): string {
   const out: string[] = [];
   out.push(text(image.width / 2, 62, d.title, 42, { spacing: 6 }));
   out.push(text(image.width / 2, 100, d.sectionName, 26, { spacing: 4 }));

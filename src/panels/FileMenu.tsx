@@ -11,7 +11,8 @@ import { currentUncertainty } from '../state/currentUncertainty';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
 import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
-import { newProject, openProjectFile, saveProjectFile } from '../state/projectActions';
+import { newProject, openProjectFile, saveProjectFile, unsavedChangesMayGo } from '../state/projectActions';
+import { DEMOS, openDemo, type DemoId } from '../state/openDemo';
 import { ImportDialog } from './files/ImportDialog';
 import { ProjectInfoDialog } from './files/ProjectInfoDialog';
 import { readImport, type ImportKind, type PendingImport } from './files/readImport';
@@ -109,6 +110,12 @@ export function FileMenu() {
             <button type="button" role="menuitem" onClick={choose(newProject)}>New</button>
             <button type="button" role="menuitem" onClick={choose(() => openRef.current?.click())}>Open… <span className="hint">project or section file</span></button>
             <button type="button" role="menuitem" onClick={choose(() => void saveProjectFile())} data-testid="save-project">Save…</button>
+            <hr />
+            <span className="hint">Invented examples</span>
+            {(Object.keys(DEMOS) as DemoId[]).map((id) => (
+              <button key={id} type="button" role="menuitem" data-testid={`open-example-${id}`}
+                onClick={choose(() => { if (unsavedChangesMayGo('Discard the changes not saved to a file and open the example?')) void openDemo(id); })}>{DEMOS[id].label}</button>
+            ))}
             <hr />
             <button type="button" role="menuitem" onClick={choose(() => setInfo(true))} data-testid="menu-project-info">Title and author…</button>
           </div>
