@@ -4,17 +4,17 @@
 // analysis of it, as a file and as the document the app opens, gives the model's D and zd to the digitising error.
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { analyseSection } from '../../../src/core/analysis/analyseSection';
-import { analyseDoc } from '../../../src/core/analysis/analyseDocGesture';
-import { faultedSection } from '../../../src/core/forward/faultedSection';
-import { nearestOnPolyline } from '../../../src/core/geometry/nearestOnPolyline';
-import type { Section } from '../../../src/core/model/section';
-import { validateSection } from '../../../src/core/model/validateSection';
-import { demoDoc } from '../../../src/state/openDemo';
-import { invert, sectionToImage } from '../../../scripts/demo/layout';
-import { digitiseFaultedByHand, FAULT_DEMOS } from '../../../scripts/demo/faultDemos';
+import { analyseSection } from '../../src/core/analysis/analyseSection';
+import { analyseDoc } from '../../src/core/analysis/analyseDocGesture';
+import { faultedSection } from '../../src/core/forward/faultedSection';
+import { nearestOnPolyline } from '../../src/core/geometry/nearestOnPolyline';
+import type { Section } from '../../src/core/model/section';
+import { validateSection } from '../../src/core/model/validateSection';
+import { demoDoc } from '../../src/state/openDemo';
+import { invert, sectionToImage } from '../../scripts/demo/layout';
+import { digitiseFaultedByHand, FAULT_DEMOS } from '../../scripts/demo/faultDemos';
 
-const read = (name: string): unknown => JSON.parse(readFileSync(new URL(`../../../public/demo/${name}`, import.meta.url), 'utf8'));
+const read = (name: string): unknown => JSON.parse(readFileSync(new URL(`../../public/demo/${name}`, import.meta.url), 'utf8'));
 
 describe.each(FAULT_DEMOS)('public/demo/$id', (demo) => {
   const section = read(`${demo.id}/section.json`) as Section;
