@@ -10,9 +10,16 @@ describe('chamberlinDepth(A, L − W, resolution)', () => {
     // Source: Chamberlin (1910), H = A / (L − W) (docs/method.md §Chamberlin depth).
     expect(chamberlinDepth(2e6, 11_000 - 10_000)).toEqual({ depth: 2000, reason: null });
   });
-  it('gives no depth, with the reason, when L ≤ W, when L − W is below the resolution, or an input is not finite', () => {
-    expect(chamberlinDepth(1e6, 0).reason).toBe('bed length does not exceed regional length');
-    expect(chamberlinDepth(1e6, -1000).depth).toBeNull();
+  it('holds in extension, where the lost area and the bed length lost to the gaps are both negative', () => {
+    // H = A / (L − W) with A < 0 and L − W < 0: the same quotient, a positive height (our inference from the
+    // definitions: area and length lost below the regional, after Groshong (1994), Tectonics 13, lost area).
+    expect(chamberlinDepth(-2e6, 9_000 - 10_000)).toEqual({ depth: 2000, reason: null });
+  });
+  it('gives no depth, with the reason, when L = W, when A and L − W differ in sign, when |L − W| is below the resolution, or an input is not finite', () => {
+    expect(chamberlinDepth(1e6, 0).reason).toBe('bed length equals regional length');
+    expect(chamberlinDepth(1e6, -1000)).toEqual({ depth: null, reason: 'the bed is shorter than its regional but the area is lifted above it' });
+    expect(chamberlinDepth(-1e6, 1000)).toEqual({ depth: null, reason: 'the bed is longer than its regional but the area is lost below it' });
+    expect(chamberlinDepth(-5, -2.5e-10, 2.5, 'm').reason).toBe('not meaningful: the bed is only 2.5e-10 m shorter than its regional, less than the 2.5 m the digitising resolves');
     expect(chamberlinDepth(Number.NaN, 1000).depth).toBeNull();
     const tiny = chamberlinDepth(5, 2.5e-10, 2.5, 'm');
     expect(tiny.depth).toBeNull();
