@@ -25,7 +25,7 @@ import './interpretation/interpretation.css';
 
 /** Whether the open project is the built-in invented demo (src/state/openDemo.ts). */
 function isDemo(doc: ProjectDoc): boolean {
-  return doc.scan?.id === 'scan-demo' && /demo/i.test(doc.title);
+  return (doc.scan?.id ?? '').startsWith('scan-demo') && /demo/i.test(doc.title);
 }
 
 const MIN_WIDTH = 320;

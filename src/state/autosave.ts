@@ -21,7 +21,7 @@ export const AUTOSAVE_DELAY_MS = 500;
 /** Vertices up to which a document is written to IndexedDB as soon as it changes. */
 const WRITE_AT_ONCE_VERTICES = 100_000;
 
-/** The scan id of the start-up demo (src/state/openDemo.ts): an untouched demo is not work to bring back. */
+/** The scan id of the start-up demo and prefix of the examples' (src/state/openDemo.ts): an untouched demo is not work to bring back. */
 const DEMO_SCAN_ID = 'scan-demo';
 
 let dbPromise: Promise<IDBDatabase> | null = null;
@@ -109,7 +109,7 @@ export async function restoreAutosave(): Promise<boolean> {
   const { doc } = snap;
   if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
   // The untouched start-up demo is not work to bring back.
-  if (!snap.dirty && doc.scan?.id === DEMO_SCAN_ID) return false;
+  if (!snap.dirty && doc.scan?.id.startsWith(DEMO_SCAN_ID)) return false;
   let notShown: string | null = null;
   if (doc.scan && snap.scan && snap.scan.id === doc.scan.id && snap.scan.bytes.byteLength > 0) {
     const blob = new Blob([snap.scan.bytes], { type: snap.scan.type });

@@ -106,7 +106,8 @@ export async function openDemo(which: DemoId = 'fold'): Promise<void> {
     canvas.height = bitmap.height;
     canvas.getContext('2d')?.drawImage(bitmap, 0, 0);
     const bytes = await new Promise<Blob>((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error('PNG encoding failed'))), 'image/png'));
-    const id = 'scan-demo';
+    // One scan id per example: the canvas keeps tiles by scan id.
+    const id = which === 'fold' ? 'scan-demo' : `scan-demo-${which}`;
     putScan(id, { bitmap, bytes });
     useDocStore.getState().replace(demoDoc(id, bitmap.width, bitmap.height, which));
     session.fitTo({ u0: 0, v0: 0, width: bitmap.width, height: bitmap.height, margin: 24 });
