@@ -4,6 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { maxOf } from '../../src/core/stats/minMax';
 
 const num = (s: string | null) => Number(/-?[\d.]+/.exec((s ?? '').replace(/\u2212/g, '-'))![0]);
 
@@ -11,7 +12,7 @@ for (const id of ['thrust', 'normal'] as const) {
   test(`the ${id} example opens from the Project menu and gives its truth's D and depth within 1 %`, async ({ page }) => {
     const truth = JSON.parse(readFileSync(`public/demo/${id}/truth.json`, 'utf8')) as { displacement: number; detachmentElevation: number };
     const section = JSON.parse(readFileSync(`public/demo/${id}/section.json`, 'utf8')) as { horizons: { regional: [number, number][] }[] };
-    const reference = Math.max(...section.horizons.map((h) => h.regional[0][1]));
+    const reference = maxOf(section.horizons.map((h) => h.regional[0][1]));
     await gotoStarted(page);
     await expect(page.getByTestId('demo-note')).toBeVisible();
     await expect(page.getByTestId('busy')).toHaveCount(0);
