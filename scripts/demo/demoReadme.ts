@@ -54,6 +54,17 @@ error of any hand-made section, and the truth lies ${inside(ci, truth) ? 'inside
 | truth.json | \`{ units, displacement, detachmentElevation }\`: D = ${truth.displacement} m, detachment at ${truth.detachmentElevation} m (${truth.detachmentDepth} m below the highest regional, ${truth.referenceElevation} m) |
 | calibration.json | the mapping between image pixels and section coordinates, both directions, and control points |
 
+## The faulted examples: thrust/ and normal/
+
+Two more invented sections, opened from *Project ▾ → Invented examples*: \`thrust/\` (the Brennock Thrust
+Sheet, a thrust sheet carried up a ramp from a lower flat onto an upper flat, four horizons cut by the
+thrust) and \`normal/\` (the Orvane Basin Margin, a hanging wall slid down a normal fault onto a flat, four
+horizons cut, area lost below the regionals). Each is built with the faulted forward model (vertical simple
+shear over the fault, src/core/forward/faultedSection.ts), drawn as a scanned figure and digitised by hand
+the same way as the fold belt, fault included; each piece's end at the fault lies on the digitised fault,
+as the app's snapping puts it. Each folder holds the same four files as this one, its section.json with
+\`faults\` and horizons in \`pieces\`. README.md at the top of the repository gives each answer against its truth.
+
 ## calibration.json
 
 Image pixels: \`u\` to the right, \`v\` down, origin at the top-left corner of the image (pixel (i, j) covers

@@ -1,4 +1,5 @@
-// The annotated section as one SVG document: scan, horizons, regionals, pins, excess-area fills
+// The annotated section as one SVG document: scan, horizons (each piece of a cut horizon drawn on its own),
+// faults (heavy, long dashes) with the fault stretch between cutoffs thin in the horizon's colour, regionals, pins, excess-area fills
 // (orange above the regional, blue below, as on the canvas), detachment and its 95% band, the
 // reference level of the depths, elevation and distance scales, legend of what is drawn, scale bar,
 // vertical exaggeration, title block, an inset area–depth graph and the caution. Pure: the same input always gives the same string; every
