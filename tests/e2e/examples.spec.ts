@@ -28,6 +28,11 @@ for (const id of ['thrust', 'normal'] as const) {
     console.log(`${id}: app D = ${D} m (truth ${truth.displacement}), depth = ${depth} m (truth ${truthDepth})`);
     expect(Math.abs(D - truth.displacement)).toBeLessThan(0.01 * Math.abs(truth.displacement));
     expect(Math.abs(depth - truthDepth)).toBeLessThan(0.01 * truthDepth);
-    await page.screenshot({ path: `/work/wt/shots/fault-demos-${id}.png` });
+    await page.screenshot({ path: test.info().outputPath(`example-${id}.png`) });
+    // The report names the fault, how many horizons it cuts, and the regime with the signed displacement.
+    const faultName = id === 'thrust' ? 'Brennock Thrust' : 'Grellan Fault';
+    await page.getByTestId('open-report').click();
+    await expect(page.getByTestId('report-faults')).toContainText(`${faultName} (cuts 4 horizons`);
+    await expect(page.getByTestId('report-summary')).toContainText(id === 'thrust' ? 'shortening (D = ' : 'extension (E = −D = ');
   });
 }

@@ -16,6 +16,7 @@ import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { uncertaintyReport } from '../../io/uncertaintyReport';
 import { reportScenarioRows } from './reportScenarioRows';
 import { ReportHorizonTable } from './ReportHorizonTable';
+import { regimeText } from '../interpretation/regimeText';
 import { tableAreaUnit } from '../../format/horizonColumns';
 
 function useSvgUrl(svg: string | null): string | null {
@@ -90,7 +91,16 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
           <p data-testid="report-summary">
             {ad.noDetachment
               ? 'The area–depth line does not reach zero area below the deepest horizon: there is no detachment below these horizons.'
-              : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? formatInterval(ad.detachmentDepthCI95, u) : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}; r² = ${formatR2(ad.r2, isExactFit(ad))} over ${ad.n} horizons.`}
+              : `Detachment at elevation ${formatNumber(ad.detachmentElevation)} ${u}, ${formatNumber(ad.detachmentDepth)} ${u} below the reference level (elevation ${formatNumber(result!.referenceElevation)} ${u}); 95% interval on the depth ${isExactFit(ad) ? EXACT_FIT_TEXT : ad.detachmentDepthCI95 ? formatInterval(ad.detachmentDepthCI95, u) : ad.detachmentDepthInterval.kind === 'unbounded' ? 'unbounded (Fieller)' : 'not available'}. Displacement ${formatNumber(ad.displacement)} ${u}, ${regimeText(ad, u)}; r² = ${formatR2(ad.r2, isExactFit(ad))} over ${ad.n} horizons.`}
+          </p>
+        )}
+        {doc.faults.length > 0 && (
+          <p data-testid="report-faults">
+            Faults ({doc.faults.length}): {doc.faults.map((f) => {
+              const cut = doc.horizons.filter((h) => h.joins.some((j) => j.faultId === f.id)).length;
+              return `${f.name} (cuts ${cut} horizon${cut === 1 ? '' : 's'}, ${f.pointsPx.length} vertices)`;
+            }).join('; ')}. A horizon cut by a fault is measured along its pieces joined along the fault between its cutoffs;
+            its bed length counts the pieces only, and the table gives each cutoff pair’s fault, slip (along the fault), heave and throw.
           </p>
         )}
         {result && result.notes.length > 0 && <ul className="report-notes">{result.notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}
