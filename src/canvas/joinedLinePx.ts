@@ -4,6 +4,7 @@
 // (an affine calibration maps the fault's trace between two of its points onto the same trace), so the
 // outline and the fills follow the line that is measured. A piece end that has left its fault is still
 // joined (from the nearest point of the fault), so the line stays drawn while the problem is shown.
+import { piecesOfPoints } from '../core/model/piecesOfPoints';
 import { joinPieces } from '../core/model/joinPieces';
 import type { FaultArrays } from '../core/model/readFault';
 import type { PointArrays } from '../core/model/readPoints';
@@ -17,19 +18,6 @@ export interface JoinPx { at: number; faultId: string }
 export interface JoinedLinePx { points: ImagePx[]; alongFault: boolean[]; pieceStarts: number[] }
 
 const arraysOf = (pts: readonly ImagePx[]): PointArrays => ({ xs: Float64Array.from(pts, (p) => p[0]), zs: Float64Array.from(pts, (p) => p[1]) });
-
-/** Returns the vertices split into pieces at the joins' `at` (joins out of range or out of order are left out). */
-export function piecesOfPoints(pointsPx: readonly ImagePx[], joins: readonly JoinPx[]): ImagePx[][] {
-  const pieces: ImagePx[][] = [];
-  let from = 0;
-  for (const j of joins) {
-    if (j.at <= from || j.at >= pointsPx.length) continue;
-    pieces.push(pointsPx.slice(from, j.at));
-    from = j.at;
-  }
-  pieces.push(pointsPx.slice(from));
-  return pieces;
-}
 
 /**
  * Returns the horizon's line as drawn and measured: the vertices themselves when it has no joins, else its pieces

@@ -1,5 +1,6 @@
 // Tables and data files written from the document: results CSV, horizons in section units, the
 // section file for the command line. Every results table carries the caution (DEVELOPERS.md §Project rules).
+import { piecesOfPoints } from '../core/model/piecesOfPoints';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection } from '../core/calibration/mapPoints';
@@ -21,8 +22,7 @@ export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
   return doc.horizons.filter((h) => h.pointsPx.length >= 2).map((h) => {
     const line = h.pointsPx.map((p) => imageToSection(fit, p));
     if (h.joins.length === 0) return { name: h.name, line };
-    const cuts = [0, ...h.joins.map((j) => j.at), line.length];
-    return { name: h.name, line, pieces: cuts.slice(0, -1).map((from, k) => line.slice(from, cuts[k + 1])) };
+    return { name: h.name, line, pieces: piecesOfPoints(line, h.joins) };
   });
 }
 

@@ -4,6 +4,7 @@
 // reference level of the depths, elevation and distance scales, legend of what is drawn, scale bar,
 // vertical exaggeration, title block, an inset area–depth graph and the caution. Pure: the same input always gives the same string; every
 // user string is escaped (escapeXml), so a hostile name stays text.
+import { piecesOfPoints } from '../core/model/piecesOfPoints';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { imageToSection } from '../core/calibration/mapPoints';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
@@ -169,18 +170,6 @@ function alongFaultRuns(xs: ArrayLike<number>, zs: ArrayLike<number>, along: Arr
   return runs;
 }
 
-/** Returns the vertices split into pieces where each join starts one (joins out of range or out of order left out). */
-function piecesOf(pointsPx: readonly ImagePx[], joins: readonly { at: number }[]): ImagePx[][] {
-  const pieces: ImagePx[][] = [];
-  let from = 0;
-  for (const j of joins) {
-    if (j.at <= from || j.at >= pointsPx.length) continue;
-    pieces.push(pointsPx.slice(from, j.at));
-    from = j.at;
-  }
-  pieces.push(pointsPx.slice(from));
-  return pieces;
-}
 
 /**
  * The figure in the two parts drawn below and above the scan, with where the scan goes: so that a PNG can draw
@@ -330,7 +319,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
       drawn.regionals = true;
     }
     // Each piece on its own: no straight step is drawn across a fault.
-    for (const piece of piecesOf(h.pointsPx, h.joins)) {
+    for (const piece of piecesOfPoints(h.pointsPx, h.joins)) {
       if (piece.length < 2) continue;
       const line = pts(piece.map(fig));
       out.push(`<polyline class="halo" points="${line}" fill="none" stroke="#ffffff" stroke-opacity="0.85" stroke-width="5" stroke-linejoin="round"/>`);
