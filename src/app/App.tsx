@@ -42,7 +42,7 @@ export function App() {
       <header className="top-bar">
         <span className="app-name">Foldroot</span>
         <span className="app-tagline">depth to detachment by area balance</span>
-        <KeepWorkBoundary part="The file menu"><FileMenu /></KeepWorkBoundary>
+        <KeepWorkBoundary part="The file menu" compact><FileMenu /></KeepWorkBoundary>
         <MessageBar />
       </header>
       <div className="workspace">

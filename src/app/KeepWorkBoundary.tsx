@@ -6,7 +6,8 @@ import { Component, type ErrorInfo, type ReactNode } from 'react';
 import { autosaveNow } from '../state/autosave';
 import { saveProjectFile } from '../state/projectActions';
 
-interface Props { part: string; children: ReactNode }
+/** `compact`: the notice sits in the top bar, whose height is fixed, so its buttons come first, beside the title. */
+interface Props { part: string; compact?: boolean; children: ReactNode }
 interface State { error: string | null }
 
 export class KeepWorkBoundary extends Component<Props, State> {
@@ -23,17 +24,20 @@ export class KeepWorkBoundary extends Component<Props, State> {
 
   override render(): ReactNode {
     if (this.state.error === null) return this.props.children;
+    const buttons = (
+      <span className="keep-work-actions">
+        <button type="button" data-testid="part-failed-retry" onClick={() => this.setState({ error: null })}>Try again</button>{' '}
+        <button type="button" onClick={() => void saveProjectFile()}>Save project…</button>{' '}
+        <button type="button" onClick={() => window.location.reload()}>Reload the page</button>
+      </span>
+    );
+    const title = <strong>{this.props.part} could not be drawn</strong>;
+    const why = <>({this.state.error}). Your project is unchanged and kept in this browser; the rest of the page still works.</>;
     return (
       <div className="keep-work-boundary" role="alert" data-testid="part-failed">
-        <p>
-          <strong>{this.props.part} could not be drawn</strong> ({this.state.error}). Your project is unchanged and kept in
-          this browser; the rest of the page still works.
-        </p>
-        <p>
-          <button type="button" data-testid="part-failed-retry" onClick={() => this.setState({ error: null })}>Try again</button>{' '}
-          <button type="button" onClick={() => void saveProjectFile()}>Save project…</button>{' '}
-          <button type="button" onClick={() => window.location.reload()}>Reload the page</button>
-        </p>
+        {this.props.compact
+          ? <><p>{title} {buttons}</p><p>{why}</p></>
+          : <><p>{title} {why}</p><p>{buttons}</p></>}
       </div>
     );
   }
