@@ -2,7 +2,7 @@
 // restoring; otherwise the demo section opens, ready to explore. Autosave starts after either,
 // so that the restore itself is not mistaken for new work.
 import { openDemo } from '../state/openDemo';
-import { autosaveNow, restoreAutosave, startAutosave } from '../state/autosave';
+import { autosaveNow, followKeptWork, restoreAutosave, startAutosave } from '../state/autosave';
 import { claimEditing } from '../state/tabLock';
 import { startGesturePreparation } from '../state/gesturePreparation';
 import { useSessionStore } from '../state/sessionStore';
@@ -16,8 +16,9 @@ export function startApp(): void {
   started = true;
   startScanLifetime();
   void (async () => {
-    // Another tab editing the kept work: this one shows it read-only (and can take over), never writes over it.
-    await claimEditing(autosaveNow);
+    // Another tab editing the kept work: this one shows it read-only, following what that tab keeps (and can take
+    // over), and never writes over it.
+    await claimEditing(autosaveNow, followKeptWork);
     const restored = await restoreAutosave();
     if (!restored) await openDemo();
     startAutosave();

@@ -3,6 +3,7 @@ import { useEffect, useRef, useState } from 'react';
 import { selectAnalysis } from '../state/selectors';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
+import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
 import { figureToPng, PNG_SIZES, type PngStep } from '../io/exportFigure';
@@ -67,6 +68,8 @@ export function FileMenu() {
   const dirty = useDocStore((s) => s.revision !== s.savedRevision);
   const revision = useDocStore((s) => s.revision);
   const kept = useAutosaveStatus((s) => s.keptRevision === revision);
+  const readOnly = useTabStore((s) => s.role === 'read-only');
+  const shownKeptAt = useTabStore((s) => s.shownKeptAt);
   const openRef = useRef<HTMLInputElement>(null);
   const importRefs = { csv: useRef<HTMLInputElement>(null), geojson: useRef<HTMLInputElement>(null), svg: useRef<HTMLInputElement>(null) };
   const rootRef = useRef<HTMLDivElement>(null);
@@ -168,9 +171,14 @@ export function FileMenu() {
         )}
       </div>
       <button type="button" onClick={() => { setMenu(null); setReport(true); }} data-testid="open-report">Report</button>
-      <span className="autosave-state" data-testid="autosave-status" title={lastSaved ? `Kept in this browser at ${new Date(lastSaved).toLocaleTimeString()}` : 'Not yet kept in this browser'}>
-        {dirty ? 'Unsaved changes' : 'Saved'}{kept ? ' · kept in browser' : ''}
-      </span>
+      {readOnly
+        // A read-only tab keeps nothing and saves nothing: it says whose work it shows, never "Saved".
+        ? <span className="autosave-state read-only" data-testid="autosave-status" title="Another tab of this browser edits this project; this tab shows what that tab keeps">
+            Read-only · another tab edits{shownKeptAt ? ` · its work as kept at ${new Date(shownKeptAt).toLocaleTimeString()}` : ''}
+          </span>
+        : <span className="autosave-state" data-testid="autosave-status" title={lastSaved ? `Kept in this browser at ${new Date(lastSaved).toLocaleTimeString()}` : 'Not yet kept in this browser'}>
+            {dirty ? 'Unsaved changes' : 'Saved'}{kept ? ' · kept in browser' : ''}
+          </span>}
       <StorageBanner />
       {pending && <ImportDialog pending={pending} onClose={() => setPending(null)} />}
       {report && <ReportPage onClose={() => setReport(false)} onEditInfo={() => setInfo(true)} />}

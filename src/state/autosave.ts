@@ -9,7 +9,7 @@ import { downloadFile } from '../io/downloadFile';
 import { readSetAside, readStoredScan, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type KeptRead, type StoredScan } from './autosaveDb';
 import { clearJournal, nextStamp, readJournal, writeJournal } from './autosaveJournal';
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
-import { useTabStore } from './tabLock';
+import { announceKept, useTabStore } from './tabLock';
 import { useAutosaveStatus } from './autosaveStatus';
 import { useDocStore } from './docStore';
 import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
@@ -55,6 +55,7 @@ export async function autosaveNow(): Promise<void> {
     if (fresh) writtenScanId = doc.scan?.id ?? null;
     if (!doc.scan) writtenScanId = null;
     useAutosaveStatus.setState({ lastSavedAt: new Date().toISOString(), keptRevision: revision, quotaFull: false });
+    announceKept();
   } catch (e) {
     if (isQuotaError(e)) useAutosaveStatus.setState({ quotaFull: true });
     else useAutosaveStatus.setState({ failure: `Could not keep the project in this browser: ${e instanceof Error ? e.message : String(e)}` });
@@ -79,6 +80,69 @@ async function journalIfNewer(kept: KeptRead): Promise<KeptRead | null> {
   let scan: StoredScan | null = kept.kind === 'kept' && kept.snap.scan?.id === doc.scan?.id ? kept.snap.scan : null;
   if (!scan && doc.scan) scan = await readStoredScan(await db(), doc.scan.id).catch(() => null);
   return { kind: 'kept', snap: { savedAt: entry.savedAt, stamp: entry.stamp, doc, dirty: entry.dirty, scan, migratedFrom: checked.migratedFrom, fromSetAside: false } };
+}
+
+/** Puts the kept scan of `doc` into the scan cache (decoded when it can be); returns why it is not shown, or null. */
+async function bringBackScan(doc: ProjectDoc, stored: StoredScan | null): Promise<string | null> {
+  if (!doc.scan || !stored || stored.id !== doc.scan.id || stored.bytes.byteLength === 0) return null;
+  let notShown: string | null = null;
+  const blob = new Blob([stored.bytes], { type: stored.type });
+  // At the saved page and size, nothing asked (reopenSavedScan). A scan that cannot be shown keeps its bytes in
+  // the cache, not shown: the next write must not drop the browser's only copy of it.
+  const reopened = await reopenSavedScan(blob, doc.scan);
+  if (reopened.ok) {
+    putScan(doc.scan.id, reopened.cached);
+    notShown = reopened.notShown;
+  } else {
+    notShown = `The scan "${doc.scan.name}" kept in this browser cannot be shown (${reopened.message}). ${SCAN_NOT_SHOWN_WORDS}`;
+    putScan(doc.scan.id, { bitmap: null, bytes: blob, notShown: reopened.message });
+  }
+  writtenScanId = doc.scan.id;
+  return notShown;
+}
+
+let following = false;
+let followAgain = false;
+
+/**
+ * In a read-only tab: reads the work the editing tab has just kept and shows it (its scan too, when that changed),
+ * so this tab never shows an older state as if it were current. Calls that arrive while one runs are run once after it.
+ */
+export async function followKeptWork(): Promise<void> {
+  if (following) {
+    followAgain = true;
+    return;
+  }
+  following = true;
+  try {
+    do {
+      followAgain = false;
+      await showKeptWork();
+    } while (followAgain && useTabStore.getState().role === 'read-only');
+  } finally {
+    following = false;
+  }
+}
+
+async function showKeptWork(): Promise<void> {
+  if (useTabStore.getState().role !== 'read-only') return;
+  let kept: KeptRead;
+  try {
+    kept = await readKept(await db());
+  } catch {
+    return;
+  }
+  kept = (await journalIfNewer(kept)) ?? kept;
+  if (kept.kind !== 'kept' || useTabStore.getState().role !== 'read-only') return;
+  const { doc, dirty, savedAt } = kept.snap;
+  const shown = useDocStore.getState().doc;
+  const newScan = doc.scan?.id !== shown.scan?.id;
+  const notShown = newScan && !getScan(doc.scan?.id) ? await bringBackScan(doc, kept.snap.scan) : null;
+  useDocStore.getState().replace(doc);
+  if (dirty) useDocStore.setState({ savedRevision: useDocStore.getState().revision - 1 });
+  if (newScan) fitViewToDoc(doc);
+  useTabStore.setState({ shownKeptAt: savedAt || new Date().toISOString() });
+  if (notShown) useSessionStore.getState().showMessage('error', notShown);
 }
 
 /** Brings back the last autosaved state if there is one worth restoring; returns true when it did. */
@@ -110,21 +174,7 @@ export async function restoreAutosave(): Promise<boolean> {
   if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
   // The untouched start-up demo is not work to bring back.
   if (!snap.dirty && doc.scan?.id.startsWith(DEMO_SCAN_ID)) return false;
-  let notShown: string | null = null;
-  if (doc.scan && snap.scan && snap.scan.id === doc.scan.id && snap.scan.bytes.byteLength > 0) {
-    const blob = new Blob([snap.scan.bytes], { type: snap.scan.type });
-    // At the saved page and size, nothing asked (reopenSavedScan). A scan that cannot be shown keeps its bytes in
-    // the cache, not shown: the next write must not drop the browser's only copy of it.
-    const reopened = await reopenSavedScan(blob, doc.scan);
-    if (reopened.ok) {
-      putScan(doc.scan.id, reopened.cached);
-      notShown = reopened.notShown;
-    } else {
-      notShown = `The scan "${doc.scan.name}" kept in this browser cannot be shown (${reopened.message}). ${SCAN_NOT_SHOWN_WORDS}`;
-      putScan(doc.scan.id, { bitmap: null, bytes: blob, notShown: reopened.message });
-    }
-    writtenScanId = doc.scan.id;
-  }
+  const notShown = await bringBackScan(doc, snap.scan);
   useDocStore.getState().replace(doc);
   // The camera is session state, not kept: frame the restored scan (or drawing) in the current viewport.
   fitViewToDoc(doc);
@@ -153,8 +203,9 @@ export async function downloadKeptAside(): Promise<boolean> {
   return true;
 }
 
-/** Forgets the kept state and opens an empty project. */
+/** Forgets the kept state and opens an empty project; does nothing in a read-only tab (the kept work is another tab's). */
 export async function startFresh(): Promise<void> {
+  if (useTabStore.getState().role === 'read-only') return;
   useDocStore.getState().replace(emptyProjectDoc());
   useAutosaveStatus.setState({ restoredFrom: null });
   writtenScanId = null;

@@ -15,12 +15,14 @@ export interface TabState {
   role: TabRole;
   /** Why this tab is read-only: another tab had the work open at start-up, or took it over later. */
   why: 'other-tab' | 'taken-over' | null;
+  /** In a read-only tab: when the work now shown was kept by the editing tab (ISO time), or null before the first. */
+  shownKeptAt: string | null;
 }
 
-export const useTabStore = create<TabState>()(() => ({ role: 'starting', why: null }));
+export const useTabStore = create<TabState>()(() => ({ role: 'starting', why: null, shownKeptAt: null }));
 
 function setRole(role: TabRole, why: TabState['why']): void {
-  useTabStore.setState({ role, why });
+  useTabStore.setState({ role, why, shownKeptAt: null });
   useDocStore.setState({ readOnly: role === 'read-only' });
 }
 
@@ -28,6 +30,8 @@ let release: (() => void) | null = null;
 let channel: BroadcastChannel | null = null;
 /** What the editing tab does before letting go (write its pending changes). */
 let beforeRelease: () => Promise<void> = async () => undefined;
+/** What a read-only tab does when the editing tab says it kept a change (read the kept work and show it). */
+let onOtherTabKept: () => Promise<void> = async () => undefined;
 
 function locks(): LockManager | null {
   return typeof navigator !== 'undefined' && navigator.locks ? navigator.locks : null;
@@ -43,6 +47,11 @@ function listen(): void {
   if (channel || typeof BroadcastChannel === 'undefined') return;
   channel = new BroadcastChannel(CHANNEL);
   channel.onmessage = (e: MessageEvent<{ type?: string }>) => {
+    // The editing tab kept a change: a read-only tab shows it (never the other way round).
+    if (e.data?.type === 'kept' && useTabStore.getState().role === 'read-only') {
+      void onOtherTabKept();
+      return;
+    }
     if (e.data?.type !== 'take-over' || useTabStore.getState().role !== 'editing') return;
     void (async () => {
       // Its last changes are written first, so that the tab taking over reads them.
@@ -54,9 +63,18 @@ function listen(): void {
   };
 }
 
-/** Tries to become the editing tab without waiting; returns the role this tab has. `flush` writes pending changes before another tab takes over. */
-export async function claimEditing(flush: () => Promise<void>): Promise<TabRole> {
+/** Tells the other tabs that this (editing) tab has just kept a change in the browser, so a read-only tab can show it. */
+export function announceKept(): void {
+  if (useTabStore.getState().role === 'editing') channel?.postMessage({ type: 'kept' });
+}
+
+/**
+ * Tries to become the editing tab without waiting; returns the role this tab has. `flush` writes pending changes
+ * before another tab takes over; `follow` shows the work kept by the editing tab while this one is read-only.
+ */
+export async function claimEditing(flush: () => Promise<void>, follow: () => Promise<void> = async () => undefined): Promise<TabRole> {
   beforeRelease = flush;
+  onOtherTabKept = follow;
   listen();
   const lm = locks();
   if (!lm) {

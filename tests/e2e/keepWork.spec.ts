@@ -1,5 +1,6 @@
 // Work kept in the browser survives a reload straight after an edit, and two tabs never overwrite each
-// other's work silently: the second tab shows the work read-only until the user takes over editing there.
+// other's work silently: the second tab shows the work read-only, following the first tab's kept edits and
+// saying it saves nothing, until the user takes over editing there.
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
@@ -46,10 +47,55 @@ test('a second tab opens read-only, cannot overwrite the first, and takes over o
   await expect(firstName(second)).toHaveValue('Tab A second');
   await expect(page.getByTestId('read-only-banner')).toContainText('Another tab took over editing');
   await rename(second, 'Tab B edit');
+  // The first tab, now read-only, follows the second tab's kept edit and cannot edit over it.
+  await expect(firstName(page)).toHaveValue('Tab B edit');
   await rename(page, 'Tab A after losing editing');
-  await expect(firstName(page)).toHaveValue('Tab A second');
+  await expect(firstName(page)).toHaveValue('Tab B edit');
 
   await second.reload();
   await expect(second.locator('[data-startup="done"]')).toHaveCount(1, { timeout: 30_000 });
   await expect(firstName(second)).toHaveValue('Tab B edit');
+});
+
+test('a read-only tab follows the editing tab\'s kept edits and never claims to have saved', async ({ page, context }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await rename(page, 'Kept by the editing tab');
+  await expect(page.getByTestId('autosave-status')).toContainText('kept in browser');
+
+  const second = await context.newPage();
+  second.on('dialog', (d) => void d.accept());
+  await gotoStarted(second);
+  const banner = second.getByTestId('read-only-banner');
+  await expect(banner).toContainText('This project is open for editing in another tab of this browser');
+  await expect(banner).toContainText('it saves nothing');
+  const status = second.getByTestId('autosave-status');
+  await expect(status).toContainText('Read-only · another tab edits');
+  await expect(status).not.toContainText('Saved');
+  await expect(firstName(second)).toHaveValue('Kept by the editing tab');
+  // "Start fresh" would clear the kept work, which is the other tab's: a read-only tab does not offer it.
+  await expect(second.getByTestId('start-fresh')).toHaveCount(0);
+
+  // Each edit the first tab keeps appears in the second without a reload, and the second says when it was kept.
+  await rename(page, 'Newer work in the editing tab');
+  await expect(firstName(second)).toHaveValue('Newer work in the editing tab');
+  await expect(status).toContainText('its work as kept at');
+  await expect(status).not.toContainText('Saved');
+  await expect(status).not.toContainText('Unsaved');
+  await second.screenshot({ path: '/work/wt/shots/hostile-read-only-tab.png' });
+  // A second horizon renamed too: the whole kept document is followed, not one field.
+  const secondName = (p: Page) => p.getByTestId('horizon-list').getByLabel('Horizon name').nth(1);
+  await secondName(page).fill('Second horizon renamed');
+  await secondName(page).press('Enter');
+  await expect(secondName(second)).toHaveValue('Second horizon renamed');
+  await expect(firstName(second)).toHaveValue('Newer work in the editing tab');
+
+  // Nothing the read-only tab does reaches the kept work: a reload of the editing tab brings back its own edits.
+  await rename(second, 'Typed in the read-only tab');
+  await expect(firstName(second)).toHaveValue('Newer work in the editing tab');
+  await second.close();
+  await page.reload();
+  await expect(page.locator('[data-startup="done"]')).toHaveCount(1, { timeout: 30_000 });
+  await expect(firstName(page)).toHaveValue('Newer work in the editing tab');
+  await expect(secondName(page)).toHaveValue('Second horizon renamed');
 });

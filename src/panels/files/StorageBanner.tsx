@@ -15,13 +15,14 @@ export function StorageBanner() {
       {readOnly && (
         <div className="storage-banner error" role="alert" data-testid="read-only-banner">
           <span>{why === 'taken-over'
-            ? 'Another tab took over editing this project; this tab now only shows it (edits here are not possible, so neither tab overwrites the other).'
-            : 'This project is open for editing in another tab of this browser. This tab only shows it: edits here are not possible, so neither tab overwrites the other\'s work.'}</span>
+            ? 'Another tab took over editing this project. This tab only shows it, following that tab\'s changes as they are kept; it saves nothing, and edits here are not possible, so neither tab overwrites the other.'
+            : 'This project is open for editing in another tab of this browser. This tab only shows it, following that tab\'s changes as they are kept; it saves nothing, and edits here are not possible, so neither tab overwrites the other\'s work.'}</span>
           <button type="button" className="primary" data-testid="take-over" onClick={() => void takeOverEditing(async () => { await restoreAutosave(); })}>Edit here instead</button>
           <button type="button" data-testid="read-only-download" onClick={() => void saveProjectFile()}>Download this copy</button>
         </div>
       )}
-      {restoredFrom && (
+      {/* Not in a read-only tab: what it shows is the other tab's work, and "Start fresh" there would clear it. */}
+      {restoredFrom && !readOnly && (
         <div className="storage-banner" role="status" data-testid="restore-banner">
           <span>Your last session was brought back (kept in this browser {new Date(restoredFrom).toLocaleString()}).</span>
           <button type="button" onClick={() => useAutosaveStatus.setState({ restoredFrom: null })} data-testid="restore-keep">Keep working</button>
