@@ -5,6 +5,8 @@ import { useSessionStore } from '../state/sessionStore';
 export function MessageBar() {
   const message = useSessionStore((s) => s.message);
   const busy = useSessionStore((s) => s.busy);
+  const busyDone = useSessionStore((s) => s.busyDone);
+  const busyCancel = useSessionStore((s) => s.busyCancel);
   useEffect(() => {
     if (!message || message.kind === 'error') return;
     const t = window.setTimeout(() => useSessionStore.getState().clearMessage(), 4000);
@@ -12,7 +14,13 @@ export function MessageBar() {
   }, [message]);
   return (
     <div className="message-area" aria-live="polite">
-      {busy && <div className="message busy" data-testid="busy">{busy}</div>}
+      {busy && (
+        <div className="message busy" data-testid="busy">
+          <span data-testid="busy-text">{busy}</span>
+          {busyDone !== null && <progress data-testid="busy-progress" max={1} value={busyDone} aria-label="Done so far" />}
+          {busyCancel && <button type="button" className="busy-cancel" data-testid="busy-cancel" onClick={busyCancel}>Cancel</button>}
+        </div>
+      )}
       {message && (
         <div className={`message ${message.kind}`} role={message.kind === 'error' ? 'alert' : 'status'} data-testid={`message-${message.kind}`}>
           <span>{message.text}</span>

@@ -1,9 +1,14 @@
 // The annotated section as SVG or PNG, drawn from renderSectionSvg. The SVG inlines the scan once as a
-// data: URL. The PNG is drawn on a canvas at the chosen size in three layers: the figure below the scan,
-// the decoded scan itself through the calibration's matrix (clipped to the panel, sampled at the PNG's
-// resolution: the scan's file never passes through a string), and the figure above it.
-// The figure of the open project is put together in state/currentFigureSvg.
+// data: URL. The PNG is drawn in a worker from the same figure markup (io/paintFigureSvg), in three layers:
+// the figure below the scan, the scan region the panel shows, taken from the scan's tile pyramid at about the
+// PNG's resolution and drawn through the calibration's matrix (the scan's file never passes through a string),
+// and the figure above it; then encoded there. The figure of the open project is put together in
+// state/currentFigureSvg.
 import { FIGURE_HEIGHT, FIGURE_WIDTH, type SectionSvgParts } from './renderSectionSvg';
+import { figureScanRegion } from './figureScanRegion';
+import type { FigurePngReply, FigurePngRequest, FigureScanRegion, PngStep } from './figurePngProtocol';
+
+export type { PngStep } from './figurePngProtocol';
 
 /** PNG sizes offered; the last is A3 landscape at 300 dpi (420 × 297 mm). */
 export const PNG_SIZES = [
@@ -35,83 +40,110 @@ export async function scanDataUrl(type: string, scan: { bitmap: ImageBitmap; byt
   return canvas.toDataURL('image/png');
 }
 
-function loadImage(url: string): Promise<HTMLImageElement> {
-  return new Promise((resolve, reject) => {
-    const img = new Image();
-    img.onload = () => resolve(img);
-    img.onerror = () => reject(new Error('The figure could not be drawn as an image.'));
-    img.src = url;
-  });
+/** The decoded scan to draw a PNG from: its bitmap and, when it has been cut, its tile pyramid (state/scanTilesPyramid). */
+export interface FigureScanSource {
+  bitmap: ImageBitmap;
+  pyramid: { tilePx: number; levels: { factor: number; widthPx: number; heightPx: number; cols: number; rows: number }[]; tiles: ImageBitmap[][] } | null;
 }
 
-/** The steps of a PNG export, for its progress message. */
-export type PngStep = 'figure' | 'scan' | 'labels' | 'encoding';
+/** The outcome of a PNG export. */
+export type FigurePngResult = { ok: true; blob: Blob } | { ok: false; cancelled: boolean; message: string };
 
-/** Draws a standalone SVG document over the whole canvas (an SVG drawn as an image loads nothing else). */
-async function drawSvg(ctx: CanvasRenderingContext2D, svg: string, width: number, height: number): Promise<void> {
-  const url = URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }));
-  try {
-    ctx.drawImage(await loadImage(url), 0, 0, width, height);
-  } finally {
-    URL.revokeObjectURL(url);
-  }
-}
-
-/** Lets the page draw a frame (the progress message) between the export's steps. */
-const nextFrame = () => new Promise<void>((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+/** A PNG export under way: its outcome, and a cancel that stops the work at once. */
+export interface FigurePngJob { done: Promise<FigurePngResult>; cancel: () => void }
 
 /**
- * Returns a PNG of the figure at width × height pixels: its part below the scan, the decoded scan through the
- * figure's matrix (clipped to the panel) when there is one, and its part above; or a message (e.g. when the
- * browser cannot make a canvas that large). `onStep` hears each step as it starts.
+ * Returns the pieces of the scan region the figure shows, at about its resolution, as bitmaps of their own
+ * (the worker takes and closes them; the scan and its tiles stay as they are); null when none shows.
  */
-export async function figureToPng(parts: SectionSvgParts, scan: ImageBitmap | null, width: number, height: number,
-  onStep: (step: PngStep) => void = () => undefined): Promise<{ ok: true; blob: Blob } | { ok: false; message: string }> {
-  try {
-    const canvas = document.createElement('canvas');
-    canvas.width = width;
-    canvas.height = height;
-    const ctx = canvas.getContext('2d');
-    if (!ctx) return { ok: false, message: 'This browser cannot draw a canvas of that size; choose a smaller PNG size.' };
-    onStep('figure');
-    ctx.fillStyle = '#ffffff';
-    ctx.fillRect(0, 0, width, height);
-    await drawSvg(ctx, `${parts.head}${parts.under}</svg>`, width, height);
-    if (scan && parts.scan) {
-      onStep('scan');
-      await nextFrame();
-      const { panel, scan: place } = parts;
-      ctx.save();
-      ctx.scale(width / FIGURE_WIDTH, height / FIGURE_HEIGHT);
-      ctx.beginPath();
-      ctx.rect(panel.x, panel.y, panel.w, panel.h);
-      ctx.clip();
-      ctx.transform(...place.matrix);
-      ctx.globalAlpha = place.opacity;
-      ctx.imageSmoothingEnabled = true;
-      ctx.drawImage(scan, 0, 0, place.widthPx, place.heightPx);
-      ctx.restore();
-    }
-    onStep('labels');
-    await nextFrame();
-    await drawSvg(ctx, `${parts.head}${parts.panelOpen}${parts.over}</svg>`, width, height);
-    onStep('encoding');
-    await nextFrame();
-    const blob = await new Promise<Blob | null>((resolve, reject) => {
-      try {
-        canvas.toBlob(resolve, 'image/png');
-      } catch (e) {
-        reject(e);
-      }
-    });
-    if (!blob) return { ok: false, message: 'The browser could not encode a PNG of that size; choose a smaller size.' };
-    return { ok: true, blob };
-  } catch (e) {
-    if ((e as { name?: string }).name === 'SecurityError') {
-      return { ok: false, message: 'The browser refused to read back the drawn figure (a cross-origin image made the canvas unreadable). Export as SVG instead.' };
-    }
-    return { ok: false, message: e instanceof Error ? e.message : String(e) };
+async function scanRegion(parts: SectionSvgParts, source: FigureScanSource, width: number, height: number, stopped: () => boolean): Promise<FigureScanRegion | null> {
+  const place = parts.scan;
+  if (!place) return null;
+  const py = source.pyramid;
+  const levels = py?.levels ?? [{ factor: 1, widthPx: place.widthPx, heightPx: place.heightPx, cols: 1, rows: 1 }];
+  const choice = figureScanRegion(place, place.matrix, parts.panel, width / FIGURE_WIDTH, height / FIGURE_HEIGHT, levels);
+  if (!choice) return null;
+  const base = { matrix: place.matrix, opacity: place.opacity, regionW: choice.x1 - choice.x0, regionH: choice.y1 - choice.y0 };
+  const tiles: FigureScanRegion['tiles'] = [];
+  if (!py) {
+    // No pyramid yet: the region cropped and reduced from the bitmap itself (by the browser, off this task).
+    const [sx, sy, sw, sh] = [choice.x0, choice.y0, choice.x1 - choice.x0, choice.y1 - choice.y0];
+    const along = Math.max(Math.hypot(place.matrix[0], place.matrix[1]), Math.hypot(place.matrix[2], place.matrix[3])) * (width / FIGURE_WIDTH);
+    const k = Math.min(1, Math.max(along, 1e-6));
+    const [rw, rh] = [Math.max(1, Math.ceil(sw * k)), Math.max(1, Math.ceil(sh * k))];
+    const bitmap = await createImageBitmap(source.bitmap, sx, sy, sw, sh, { resizeWidth: rw, resizeHeight: rh, resizeQuality: 'high' });
+    return { ...base, regionW: rw, regionH: rh, tiles: [{ bitmap, x: 0, y: 0 }], originPx: [sx, sy], pxPerRegionPx: [sw / rw, sh / rh] };
   }
+  const lv = levels[choice.level];
+  const t = py.tilePx;
+  for (let row = Math.floor(choice.y0 / t); row <= Math.floor((choice.y1 - 1) / t); row++) {
+    for (let col = Math.floor(choice.x0 / t); col <= Math.floor((choice.x1 - 1) / t); col++) {
+      if (stopped()) break;
+      const tile = py.tiles[choice.level][row * lv.cols + col];
+      if (tile) tiles.push({ bitmap: await createImageBitmap(tile), x: col * t - choice.x0, y: row * t - choice.y0 });
+    }
+  }
+  return { ...base, tiles, originPx: [choice.x0 * choice.factor, choice.y0 * choice.factor], pxPerRegionPx: [choice.factor, choice.factor] };
+}
+
+/**
+ * Starts a PNG of the figure at width × height pixels, drawn and encoded in a worker (io/workers/figurePng.worker.ts):
+ * its part below the scan, the scan region it shows through the figure's matrix (clipped to the panel) when there is
+ * a scan, and its part above. `onStep` hears each step as it starts. `cancel` ends the worker: the outcome is then
+ * `{ ok: false, cancelled: true }` and nothing else is touched.
+ */
+export function startFigurePng(parts: SectionSvgParts, scan: FigureScanSource | null, width: number, height: number,
+  onStep: (step: PngStep) => void = () => undefined): FigurePngJob {
+  let worker: Worker | null = null;
+  let stopped = false;
+  let finish: (r: FigurePngResult) => void = () => undefined;
+  const done = new Promise<FigurePngResult>((resolve) => { finish = resolve; });
+  const settle = (r: FigurePngResult) => {
+    worker?.terminate();
+    worker = null;
+    finish(r);
+  };
+  const cancel = () => {
+    if (stopped) return;
+    stopped = true;
+    settle({ ok: false, cancelled: true, message: 'Export cancelled.' });
+  };
+  void (async () => {
+    try {
+      if (scan && parts.scan) onStep('scan-region');
+      const region = scan ? await scanRegion(parts, scan, width, height, () => stopped) : null;
+      if (stopped) {
+        region?.tiles.forEach((t) => t.bitmap.close());
+        return;
+      }
+      const req: FigurePngRequest = {
+        under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>`,
+        figure: { width: FIGURE_WIDTH, height: FIGURE_HEIGHT }, panel: parts.panel, width, height, scan: region,
+      };
+      const w = new Worker(new URL('./workers/figurePng.worker.ts', import.meta.url), { type: 'module' });
+      worker = w;
+      w.onmessage = (e: MessageEvent<FigurePngReply>) => {
+        const m = e.data;
+        if (stopped) return;
+        if (m.kind === 'step') onStep(m.step);
+        else {
+          stopped = true;
+          settle(m.kind === 'done' ? { ok: true, blob: m.blob } : { ok: false, cancelled: false, message: m.message });
+        }
+      };
+      w.onerror = (e) => {
+        if (stopped) return;
+        stopped = true;
+        settle({ ok: false, cancelled: false, message: e.message || 'The figure could not be drawn.' });
+      };
+      w.postMessage(req, region ? region.tiles.map((t) => t.bitmap) : []);
+    } catch (e) {
+      if (stopped) return;
+      stopped = true;
+      settle({ ok: false, cancelled: false, message: e instanceof Error ? e.message : String(e) });
+    }
+  })();
+  return { done, cancel };
 }
 
 export { FIGURE_WIDTH, FIGURE_HEIGHT };

@@ -173,7 +173,7 @@ function alongFaultRuns(xs: ArrayLike<number>, zs: ArrayLike<number>, along: Arr
 
 /**
  * The figure in the two parts drawn below and above the scan, with where the scan goes: so that a PNG can draw
- * the decoded scan itself between them (exportFigure.figureToPng) instead of passing it through an SVG string.
+ * the decoded scan itself between them (exportFigure.startFigurePng) instead of passing it through an SVG string.
  */
 export interface SectionSvgParts {
   /** `<svg …>` and its `<defs>`: opens both parts. */

@@ -6,7 +6,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
-import { figureToPng, PNG_SIZES, type PngStep } from '../io/exportFigure';
+import { startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
 import { currentFigureParts, currentFigureSvg } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
@@ -33,18 +33,27 @@ function exportText(text: string | null, type: string, ext: string, empty: strin
   downloadFile(new Blob([text], { type }), safeFileName(doc.title, ext));
 }
 
+/** The PNG export under way, if any: one at a time. */
+let pngJob: FigurePngJob | null = null;
+
 async function exportPng(sizeId: string): Promise<void> {
+  if (pngJob) return;
   const size = PNG_SIZES.find((s) => s.id === sizeId) ?? PNG_SIZES[0];
   const session = useSessionStore.getState();
-  const steps: Record<PngStep, string> = { figure: 'drawing the figure', scan: 'drawing the scan', labels: 'drawing the lines and labels', encoding: 'encoding the PNG' };
-  const say = (step: PngStep) => session.setBusy(`PNG ${size.width} × ${size.height} px: ${steps[step]} …`);
+  const steps: Record<PngStep, string> = { 'scan-region': 'taking the scan region', figure: 'drawing the figure', scan: 'drawing the scan', labels: 'drawing the lines and labels', encoding: 'encoding the PNG' };
+  const order = Object.keys(steps) as PngStep[];
+  const cancel = () => pngJob?.cancel();
+  const say = (step: PngStep) => session.setBusy(`PNG ${size.width} × ${size.height} px: ${steps[step]} …`, { done: order.indexOf(step) / order.length, cancel });
   say('figure');
   try {
     const { parts, scan } = currentFigureParts();
-    const png = await figureToPng(parts, scan, size.width, size.height, say);
-    if (!png.ok) session.showMessage('error', png.message);
-    else downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
+    pngJob = startFigurePng(parts, scan, size.width, size.height, say);
+    const png = await pngJob.done;
+    if (png.ok) downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
+    else if (png.cancelled) session.showMessage('info', `PNG export cancelled; nothing was saved.`);
+    else session.showMessage('error', png.message);
   } finally {
+    pngJob = null;
     session.setBusy(null);
   }
 }

@@ -1,11 +1,13 @@
 // The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg
 // (whole, as SVG; or in parts, for a PNG that draws the decoded scan itself).
 import type { ProjectDoc } from '../core/model/projectDoc';
-import { scanDataUrl } from '../io/exportFigure';
+import { scanDataUrl, type FigureScanSource } from '../io/exportFigure';
 import { renderSectionSvg, renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
+import { getTilePyramid } from './scanTilesPyramid';
+import { TILE_PX } from './scanTiles';
 import { selectAnalysis } from './selectors';
 
 /** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not shown in this browser. */
@@ -22,10 +24,13 @@ export async function currentFigureSvg(): Promise<string> {
   return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
 }
 
-/** Returns the figure of the open project in its parts below and above the scan, with the decoded scan to draw between them (null when none is shown). */
-export function currentFigureParts(): { parts: SectionSvgParts; scan: ImageBitmap | null } {
+/** Returns the figure of the open project in its parts below and above the scan, with the decoded scan (and its tile pyramid when cut) to draw between them (null when none is shown). */
+export function currentFigureParts(): { parts: SectionSvgParts; scan: FigureScanSource | null } {
   const doc = useDocStore.getState().doc;
   const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
   const parts = renderSectionSvgParts({ doc, analysis: selectAnalysis(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
-  return { parts, scan: (doc.scan && getScan(doc.scan.id)?.bitmap) || null };
+  const bitmap = (doc.scan && getScan(doc.scan.id)?.bitmap) || null;
+  if (!doc.scan || !bitmap) return { parts, scan: null };
+  const pyramid = getTilePyramid(doc.scan.id);
+  return { parts, scan: { bitmap, pyramid: pyramid ? { tilePx: TILE_PX, levels: pyramid.levels, tiles: pyramid.tiles } : null } };
 }

@@ -27,6 +27,10 @@ export interface SessionState {
   selectedHorizonId: string | null;
   message: Message | null;
   busy: string | null;
+  /** The share of the busy work done (0..1), when it is known. */
+  busyDone: number | null;
+  /** Stops the busy work, when it can be stopped (a Cancel button is shown). */
+  busyCancel: (() => void) | null;
   /** False until start-up (restore or demo) has finished. */
   started: boolean;
   /** Vertical exaggeration of the exported figure (1 = true scale); null: as on the scan. */
@@ -42,7 +46,8 @@ export interface SessionState {
   selectHorizon: (id: string | null) => void;
   showMessage: (kind: MessageKind, text: string) => void;
   clearMessage: () => void;
-  setBusy: (text: string | null) => void;
+  /** Shows what the page is busy with (null: nothing), with the share done and a way to stop it when known. */
+  setBusy: (text: string | null, work?: { done?: number | null; cancel?: (() => void) | null }) => void;
   setStarted: () => void;
   setFigureVerticalExaggeration: (ve: number | null) => void;
 }
@@ -58,6 +63,8 @@ export const useSessionStore = create<SessionState>()((set) => ({
   selectedHorizonId: null,
   message: null,
   busy: null,
+  busyDone: null,
+  busyCancel: null,
   started: false,
   figureVerticalExaggeration: null,
   setCamera: (camera) => set({ camera, fitted: null }),
@@ -72,7 +79,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
   selectHorizon: (selectedHorizonId) => set({ selectedHorizonId }),
   showMessage: (kind, text) => set({ message: { kind, text, id: ++messageId } }),
   clearMessage: () => set({ message: null }),
-  setBusy: (busy) => set({ busy }),
+  setBusy: (busy, work) => set({ busy, busyDone: busy === null ? null : work?.done ?? null, busyCancel: busy === null ? null : work?.cancel ?? null }),
   setStarted: () => set({ started: true }),
   setFigureVerticalExaggeration: (figureVerticalExaggeration) => set({ figureVerticalExaggeration }),
 }));

@@ -1,0 +1,173 @@
+// The PNG export is drawn in a worker from the figure's own SVG markup: it must be the same picture as the
+// browser's rendering of the exported SVG (the reference: Chromium's own SVG renderer, drawn on the page's
+// canvas); while it runs it shows its progress and a Cancel button that stops it without a download and
+// without touching the project; run again, it downloads a PNG of the asked size.
+import { readFileSync, writeFileSync } from 'node:fs';
+import type { Page } from '@playwright/test';
+import { PNG } from 'pngjs';
+import { test, expect } from './guard';
+import { gotoStarted } from './startup';
+import { serializeProject } from '../../src/io/projectFile';
+import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
+import type { ImagePx, ProjectDoc } from '../../src/core/model/projectDoc';
+import type { Section, XZ } from '../../src/core/model/section';
+
+const SECTION: Section = {
+  units: 'm',
+  pins: [0, 1000],
+  horizons: [
+    { name: 'Upper marker', line: [[-100, 500], [0, 500], [500, 900], [1000, 500], [1100, 500]], regional: [[-100, 500], [1100, 500]] },
+    { name: 'Middle marker', line: [[-100, 250], [0, 250], [500, 600], [1000, 250], [1100, 250]], regional: [[-100, 250], [1100, 250]] },
+    { name: 'Lower marker', line: [[-100, 0], [0, 0], [500, 300], [1000, 0], [1100, 0]], regional: [[-100, 0], [1100, 0]] },
+  ],
+};
+const [W, H] = [1500, 1100];
+/** Section (x, z) → scan pixel: 1 px per metre, x from −200 m, z down from 1000 m. */
+const toPx = ([x, z]: XZ): ImagePx => [x + 200, 1000 - z];
+
+/** A small synthetic scan: a smooth two-way colour ramp with broad dark bands (nothing finer than the figure can show). */
+function syntheticScan(): Buffer {
+  const png = new PNG({ width: W, height: H });
+  for (let v = 0; v < H; v++) {
+    for (let u = 0; u < W; u++) {
+      const i = (v * W + u) * 4;
+      const band = Math.floor(v / 120) % 2 === 0 ? 0 : 40;
+      png.data[i] = 230 - Math.round((u / W) * 90) - band;
+      png.data[i + 1] = 215 - Math.round((v / H) * 70) - band;
+      png.data[i + 2] = 170 - band;
+      png.data[i + 3] = 255;
+    }
+  }
+  return PNG.sync.write(png);
+}
+
+function project(): string {
+  const base = sectionToProjectDoc(SECTION, 'Worker figure');
+  const corners: XZ[] = [[-200, 1000], [1300, 1000], [-200, -100]];
+  const doc: ProjectDoc = {
+    ...base,
+    scan: { id: 'synthetic-scan', name: 'synthetic.png', widthPx: W, heightPx: H, type: 'image/png' },
+    calibration: { kind: 'affine', points: corners.map((q) => { const [u, v] = toPx(q); return { u, v, x: q[0], z: q[1] }; }) },
+    horizons: base.horizons.map((h, i) => ({ ...h, pointsPx: SECTION.horizons[i].line!.map(toPx) })),
+    scenarios: [{ ...base.scenarios[0], pinsPx: [toPx([0, 300]), toPx([1000, 450])], regionals: Object.fromEntries(base.horizons.map((h, i) => [h.id, SECTION.horizons[i].regional.map(toPx)])) }],
+  };
+  return serializeProject(doc, { type: 'image/png', name: 'synthetic.png', bytes: new Uint8Array(syntheticScan()) });
+}
+
+async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
+  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
+  return readFileSync((await dl.path())!);
+}
+
+async function openProject(page: Page): Promise<void> {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  await page.getByTestId('open-project').setInputFiles({ name: 'worker.foldroot.json', mimeType: 'application/json', buffer: Buffer.from(project()) });
+  await expect(page.getByTestId('scan-name')).toContainText(`synthetic.png — ${W} × ${H} px`);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+}
+
+/** The browser's own rendering of an SVG document at width × height, as RGBA bytes. */
+async function renderSvgInPage(page: Page, svg: string, width: number, height: number): Promise<Buffer> {
+  const rgba = await page.evaluate(async ([text, w, h]) => {
+    const url = URL.createObjectURL(new Blob([text], { type: 'image/svg+xml' }));
+    const img = new Image();
+    await new Promise((resolve, reject) => { img.onload = resolve; img.onerror = reject; img.src = url; });
+    const c = document.createElement('canvas');
+    c.width = w;
+    c.height = h;
+    const ctx = c.getContext('2d')!;
+    ctx.fillStyle = '#ffffff';
+    ctx.fillRect(0, 0, w, h);
+    ctx.drawImage(img, 0, 0, w, h);
+    URL.revokeObjectURL(url);
+    return c.toDataURL('image/png');
+  }, [svg, width, height] as const);
+  return PNG.sync.read(Buffer.from(rgba.slice(rgba.indexOf(',') + 1), 'base64')).data;
+}
+
+/** Mean absolute difference per colour channel (0..255) over the whole image and over its worst 16 × 16 block. */
+function difference(a: Buffer, b: Buffer, width: number, height: number): { mean: number; worstBlock: number; diff: PNG } {
+  const diff = new PNG({ width, height });
+  let total = 0, worstBlock = 0;
+  const B = 16;
+  for (let by = 0; by < height; by += B) {
+    for (let bx = 0; bx < width; bx += B) {
+      let sum = 0, n = 0;
+      for (let y = by; y < Math.min(height, by + B); y++) {
+        for (let x = bx; x < Math.min(width, bx + B); x++) {
+          const i = (y * width + x) * 4;
+          const d = (Math.abs(a[i] - b[i]) + Math.abs(a[i + 1] - b[i + 1]) + Math.abs(a[i + 2] - b[i + 2])) / 3;
+          sum += d;
+          n++;
+          diff.data[i] = diff.data[i + 1] = diff.data[i + 2] = 255 - Math.min(255, Math.round(d * 4));
+          diff.data[i + 3] = 255;
+        }
+      }
+      total += sum;
+      worstBlock = Math.max(worstBlock, sum / n);
+    }
+  }
+  return { mean: total / (width * height), worstBlock, diff };
+}
+
+test('the PNG drawn in the worker is the picture the browser draws from the exported SVG', async ({ page }) => {
+  await openProject(page);
+  await page.getByTestId('menu-export').click();
+  const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');
+  for (const [id, w, h] of [['screen', 1400, 990], ['a4-150', 1754, 1240]] as const) {
+    await page.getByTestId('menu-export').click();
+    await page.getByTestId('png-size').selectOption(id);
+    const bytes = await download(page, () => page.getByTestId('export-png').click());
+    const png = PNG.sync.read(bytes);
+    expect([png.width, png.height]).toEqual([w, h]);
+    const reference = await renderSvgInPage(page, svg, w, h);
+    const { mean, worstBlock, diff } = difference(png.data, reference, w, h);
+    writeFileSync(test.info().outputPath(`worker-${id}.png`), bytes);
+    writeFileSync(test.info().outputPath(`svg-${id}.png`), PNG.sync.write(Object.assign(new PNG({ width: w, height: h }), { data: reference })));
+    writeFileSync(test.info().outputPath(`diff-${id}.png`), PNG.sync.write(diff));
+    // Anti-aliasing and glyph placement differ by a level or two; a missing line, fill or label moves a block by far more.
+    expect(mean, `mean difference at ${id}`).toBeLessThan(1);
+    expect(worstBlock, `worst 16 × 16 block at ${id}`).toBeLessThan(16);
+  }
+});
+
+test('a PNG export shows its progress, stops on Cancel without a download or a change, and runs again', async ({ page }) => {
+  await openProject(page);
+  const pngs: string[] = [];
+  page.on('download', (d) => { if (d.suggestedFilename().endsWith('.png')) pngs.push(d.suggestedFilename()); });
+  const projectText = async () => {
+    await page.getByTestId('menu-project').click();
+    const text = (await download(page, () => page.getByTestId('save-project').click())).toString('utf8');
+    return text.replace(/"savedAt":\s*"[^"]*"/, '');
+  };
+  const before = await projectText();
+  await expect(page.getByTestId('autosave-status')).toContainText('Saved');
+  // The worker's script is held back, so the export is surely still running when Cancel is pressed.
+  let release: () => void = () => undefined;
+  const held = new Promise<void>((resolve) => { release = resolve; });
+  await page.route(/figurePng\.worker-[^/]*\.js$/, async (route) => { await held; await route.continue(); });
+  await page.getByTestId('menu-export').click();
+  await page.getByTestId('png-size').selectOption('a4-300');
+  await page.getByTestId('export-png').click();
+  await expect(page.getByTestId('busy-text')).toContainText('PNG 3508 × 2480 px');
+  await expect(page.getByTestId('busy-progress')).toBeVisible();
+  await page.screenshot({ path: test.info().outputPath('export-progress.png') });
+  await page.getByTestId('busy-cancel').click();
+  await expect(page.getByTestId('message-info')).toContainText('PNG export cancelled');
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  await page.screenshot({ path: test.info().outputPath('export-cancelled.png') });
+  release();
+  await page.unroute(/figurePng\.worker-[^/]*\.js$/);
+  await expect(page.getByTestId('autosave-status')).toContainText('Saved');
+  expect(await projectText()).toBe(before);
+  // Run again: one PNG, of the asked size (read from its header: IHDR width and height).
+  await page.getByTestId('menu-export').click();
+  await page.getByTestId('png-size').selectOption('a4-300');
+  const bytes = await download(page, () => page.getByTestId('export-png').click());
+  expect(bytes.subarray(1, 4).toString('latin1')).toBe('PNG');
+  expect([bytes.readUInt32BE(16), bytes.readUInt32BE(20)]).toEqual([3508, 2480]);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  expect(pngs, 'PNG downloads: only the second export').toHaveLength(1);
+});
