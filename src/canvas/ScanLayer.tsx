@@ -1,75 +1,70 @@
-// The scan, drawn beneath everything and never listening for events. The image is tiled (scanTilesPyramid)
-// and only the tiles on screen, at the level that fits the zoom, are in the layer: Konva draws every node
-// it holds, so tiles off screen are removed from view here rather than left to the canvas to clip.
-import { memo, useEffect, useRef, useState, useSyncExternalStore } from 'react';
+// The scan, drawn beneath everything and never listening for events. Only the tiles on screen, at the level that
+// fits the zoom, are in the layer (Konva draws every node it holds, so tiles off screen are removed from view here
+// rather than left to the canvas to clip). Full resolution is the decoded bitmap itself, drawn a tile-sized crop at
+// a time; reduced levels come from the scan's tile pyramid (state/scanTilesPyramid) as they are made, and until the
+// level a zoom wants is made the whole bitmap is drawn as one image.
+import { memo, useEffect, useRef, useSyncExternalStore } from 'react';
 import Konva from 'konva';
-import { Layer, Group, Image as KonvaImage, Rect } from 'react-konva';
+import { Layer, Group, Rect } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
 import { TILE_PX, visibleTiles } from '../state/scanTiles';
-import { ensureTilePyramid, getTilePyramid, type TilePyramid } from '../state/scanTilesPyramid';
+import { getTilePyramid, pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
 
 /** Screen pixels past the view's edge that are kept drawn, so a short pan never shows a gap. */
 const MARGIN_PX = 64;
 /** Above this zoom the scan's pixels are shown as crisp squares rather than smoothed. */
 const CRISP_ABOVE_SCALE = 2;
 
-function useTilePyramid(scanId: string | undefined, bitmap: ImageBitmap | undefined): TilePyramid | null {
-  const [built, setBuilt] = useState<{ id: string; pyramid: TilePyramid } | null>(null);
-  const ready = scanId ? getTilePyramid(scanId) : undefined;
-  useEffect(() => {
-    if (!scanId || !bitmap || ready) return;
-    let live = true;
-    ensureTilePyramid(scanId, bitmap).then(
-      (pyramid) => live && setBuilt({ id: scanId, pyramid }),
-      () => live && useSessionStore.getState().showMessage('error', 'The scan could not be prepared for display (out of memory?).'),
-    );
-    return () => {
-      live = false;
-    };
-  }, [scanId, bitmap, ready]);
-  if (ready) return ready;
-  return built && built.id === scanId ? built.pyramid : null;
-}
-
 export const ScanLayer = memo(function ScanLayer() {
   const scan = useDocStore((s) => s.doc.scan);
   useSyncExternalStore(subscribeScans, scanCacheVersion);
-  const cached = getScan(scan?.id);
-  const bitmap = cached?.bitmap ?? undefined;
+  useSyncExternalStore(subscribePyramids, pyramidsVersion);
   // A scan kept but not shown (scanCache) draws nothing, not even tiles cut earlier under the same id.
-  const pyramid = useTilePyramid(bitmap ? scan?.id : undefined, bitmap);
+  const bitmap = getScan(scan?.id)?.bitmap ?? null;
+  const pyramid = bitmap ? getTilePyramid(scan?.id) : undefined;
   const layerRef = useRef<Konva.Layer>(null);
   const groupRef = useRef<Konva.Group>(null);
 
   useEffect(() => {
     const group = groupRef.current;
     const layer = layerRef.current;
-    if (!pyramid || !group || !layer) return;
+    if (!bitmap || !group || !layer) return;
     const nodes = new Map<string, Konva.Image>();
-    let shownLevel = -1;
+    let shown = '';
+    const place = (key: string, attrs: Konva.ImageConfig) => {
+      if (nodes.has(key)) return;
+      const node = new Konva.Image({ ...attrs, listening: false, perfectDrawEnabled: false });
+      nodes.set(key, node);
+      group.add(node);
+    };
     const update = () => {
       const { camera, viewport } = useSessionStore.getState();
       const ratio = layer.getCanvas().getPixelRatio();
-      const { level, tiles } = visibleTiles(camera, viewport.width, viewport.height, pyramid.widthPx, pyramid.heightPx, ratio, MARGIN_PX);
+      const { level, tiles } = visibleTiles(camera, viewport.width, viewport.height, bitmap.width, bitmap.height, ratio, MARGIN_PX);
+      const levelTiles = pyramid?.tiles[level];
       const wanted = new Set<string>();
-      const lv = pyramid.levels[level];
-      for (const t of tiles) {
-        wanted.add(t.key);
-        if (nodes.has(t.key)) continue;
-        const bitmap = pyramid.tiles[level][t.row * lv.cols + t.col];
-        const node = new Konva.Image({
-          image: bitmap,
-          x: t.col * TILE_PX * lv.factor,
-          y: t.row * TILE_PX * lv.factor,
-          width: bitmap.width * lv.factor,
-          height: bitmap.height * lv.factor,
-          listening: false,
-          perfectDrawEnabled: false,
-        });
-        nodes.set(t.key, node);
-        group.add(node);
+      if (level > 0 && !levelTiles) {
+        // That level is not made yet: the whole bitmap, reduced by the canvas.
+        wanted.add('full');
+        place('full', { image: bitmap, x: 0, y: 0, width: bitmap.width, height: bitmap.height });
+      } else {
+        const lv = pyramid?.levels[level] ?? { cols: Math.ceil(bitmap.width / TILE_PX), factor: 1 };
+        for (const t of tiles) {
+          wanted.add(t.key);
+          const x = t.col * TILE_PX * lv.factor;
+          const y = t.row * TILE_PX * lv.factor;
+          if (levelTiles) {
+            const tile = levelTiles[t.row * lv.cols + t.col];
+            place(t.key, { image: tile, x, y, width: tile.width * lv.factor, height: tile.height * lv.factor });
+          } else {
+            // Full resolution: a tile-sized crop of the decoded bitmap itself.
+            const width = Math.min(TILE_PX, bitmap.width - x);
+            const height = Math.min(TILE_PX, bitmap.height - y);
+            place(t.key, { image: bitmap, x, y, width, height, crop: { x, y, width, height } });
+          }
+        }
       }
       for (const [key, node] of nodes) {
         if (wanted.has(key)) continue;
@@ -78,28 +73,30 @@ export const ScanLayer = memo(function ScanLayer() {
       }
       const crisp = camera.scale > CRISP_ABOVE_SCALE;
       if (layer.imageSmoothingEnabled() === crisp) layer.imageSmoothingEnabled(!crisp);
-      if (level !== shownLevel) layer.batchDraw();
-      shownLevel = level;
+      const now = [...wanted].sort().join(' ');
+      if (now !== shown) layer.batchDraw();
+      shown = now;
     };
     update();
     layer.batchDraw();
-    const unsubscribe = useSessionStore.subscribe((s, prev) => {
+    const unsubscribeCamera = useSessionStore.subscribe((s, prev) => {
       if (s.camera !== prev.camera || s.viewport !== prev.viewport) update();
     });
+    // A reduced level made while this scan is shown takes the place of the whole bitmap at once.
+    const unsubscribeLevels = subscribePyramids(update);
     return () => {
-      unsubscribe();
+      unsubscribeCamera();
+      unsubscribeLevels();
       nodes.forEach((n) => n.destroy());
       nodes.clear();
       layer.batchDraw();
     };
-  }, [pyramid]);
+  }, [bitmap, pyramid]);
 
   if (!scan) return <Layer listening={false} />;
   return (
     <Layer listening={false} ref={layerRef}>
       <Rect x={0} y={0} width={scan.widthPx} height={scan.heightPx} fill="#ffffff" perfectDrawEnabled={false} />
-      {/* Until the tiles are cut (a scan restored from a saved project or the demo), the whole bitmap is drawn. */}
-      {!pyramid && bitmap && <KonvaImage image={bitmap} x={0} y={0} width={scan.widthPx} height={scan.heightPx} perfectDrawEnabled={false} />}
       <Group ref={groupRef} />
     </Layer>
   );

@@ -1,7 +1,9 @@
 // Opening a scan and fitting the view: the first things a user does.
 import { useEffect, useRef, useSyncExternalStore } from 'react';
 import { useDocStore } from '../state/docStore';
-import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
+import { formatNumber } from '../format/formatQuantity';
+import { getScan, scanCacheVersion, scanMemoryHeld, subscribeScans } from '../state/scanCache';
+import { pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
 import { useSessionStore } from '../state/sessionStore';
 import { zoomAbout } from '../state/camera';
 import { openScanFile } from '../state/openScanFile';
@@ -40,7 +42,10 @@ export function ScanControls() {
   const calibrated = useDocStore((s) => s.doc.calibration !== null);
   const scale = useSessionStore((s) => s.camera.scale);
   useSyncExternalStore(subscribeScans, scanCacheVersion);
+  useSyncExternalStore(subscribePyramids, pyramidsVersion);
   const notShown = getScan(scan?.id)?.notShown;
+  const held = scanMemoryHeld();
+  const mb = (bytes: number) => `${formatNumber(Math.round(bytes / 1048576))} MB`;
   const fileInput = useRef<HTMLInputElement>(null);
   useEffect(() => {
     // "1" shows the scan at actual size (one image pixel per screen pixel).
@@ -78,6 +83,11 @@ export function ScanControls() {
         </p>
       )}
       {scan && notShown && <p className="hint warn" data-testid="scan-not-shown">Not shown: {notShown}</p>}
+      {scan && held.decoded > 0 && (
+        <p className="hint" data-testid="scan-memory" data-decoded-scans={held.decoded} data-reduced-tiles={held.tiles} data-building={held.building ? 'yes' : 'no'}>
+          In this tab: {mb(held.fullBytes)} at full resolution, {mb(held.tileBytes)} of reduced views{held.building ? ' (making the reduced views for zooming out …)' : ''}
+        </p>
+      )}
       <div className="button-row">
         <button type="button" onClick={() => zoomByStep(1 / 1.25)} title="Zoom out (−)" aria-label="Zoom out">−</button>
         <span className="zoom-readout" data-testid="zoom-readout">{(scale * 100).toFixed(scale < 0.1 ? 1 : 0)}%</span>

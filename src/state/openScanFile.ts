@@ -4,7 +4,6 @@ import { decodeScan } from '../io/decodeScan';
 import { useDocStore } from './docStore';
 import { putScan } from './scanCache';
 import { requestScanChoice } from './scanChoiceStore';
-import { ensureTilePyramid } from './scanTilesPyramid';
 import { useSessionStore } from './sessionStore';
 
 let scanCounter = 0;
@@ -26,14 +25,7 @@ export async function openScanFile(file: File): Promise<boolean> {
       return false;
     }
     const id = `scan-${Date.now().toString(36)}-${++scanCounter}`;
-    try {
-      // Tiles are cut now, while the progress shows, so that the first frame of the new scan is smooth.
-      await ensureTilePyramid(id, result.bitmap, (done) => session.setBusy(`Opening ${file.name} — preparing ${Math.round(done * 100)}%`));
-    } catch {
-      result.bitmap.close();
-      session.showMessage('error', `${file.name} was decoded but could not be prepared for display: the browser may be short of memory.`);
-      return false;
-    }
+    // Shown at once from its bitmap; its reduced views for zooming out are made afterwards (scanTilesPyramid).
     putScan(id, { bitmap: result.bitmap, bytes: file });
     useDocStore.getState().apply((doc) =>
       setScan(doc, {

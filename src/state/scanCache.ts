@@ -1,5 +1,8 @@
 // Decoded scans and their original bytes, keyed by the document's scan id. Kept out of the
 // document (and its undo history) because bitmaps are neither plain data nor cheap to copy.
+// A decoded scan is held once: its bitmap is the full-resolution level of its tile pyramid (scanTilesPyramid),
+// which this cache starts when the bitmap comes in and releases when the bitmap is closed.
+import { detachTilePyramid, pyramidsHeld, releaseTilePyramid, startTilePyramid } from './scanTilesPyramid';
 
 /**
  * A scan's original bytes and its decoded bitmap. `bitmap` is null for a scan kept but not shown (a saved scan that
@@ -16,9 +19,20 @@ const scans = new Map<string, CachedScan>();
 const listeners = new Set<() => void>();
 let version = 0;
 
-/** Stores a decoded scan under its id and notifies subscribers. */
+/** Stores a decoded scan under its id, starts its reduced views (a bitmap of its own under that id) and notifies subscribers. */
 export function putScan(id: string, scan: CachedScan): void {
+  const before = scans.get(id)?.bitmap;
+  if (before && before !== scan.bitmap) {
+    // Another bitmap under the same id: the old one and its tiles close a task later, once the view has let go.
+    const closeTiles = detachTilePyramid(id);
+    setTimeout(() => {
+      closeTiles();
+      before.close();
+    }, 0);
+  }
   scans.set(id, scan);
+  if (scan.bitmap) startTilePyramid(id, scan.bitmap);
+  else releaseTilePyramid(id);
   version += 1;
   listeners.forEach((l) => l());
 }
@@ -37,12 +51,13 @@ export function subscribeScans(listener: () => void): () => void {
 /**
  * Keeps decoded only the scan `shownId`: every other scan the `keepIds` list holds (the undo history can bring
  * it back) keeps its bytes with its bitmap closed (`released`); every other scan is dropped with its bitmap
- * closed. Returns the ids whose bitmaps were closed.
+ * closed; their tile pyramids are released with them. Returns the ids whose bitmaps were closed.
  */
 export function retainScans(shownId: string | null, keepIds: Set<string>): string[] {
   const closed: string[] = [];
   for (const [id, scan] of scans) {
     if (id === shownId) continue;
+    releaseTilePyramid(id);
     if (scan.bitmap) {
       scan.bitmap.close();
       closed.push(id);
@@ -64,6 +79,22 @@ export function retainScans(shownId: string | null, keepIds: Set<string>): strin
 /** The ids of the scans held (decoded or not), for tests and the memory benchmark. */
 export function heldScanIds(): string[] {
   return [...scans.keys()];
+}
+
+/**
+ * What decoded scans hold in this tab: how many are decoded, their full bitmaps' bytes (RGBA), the reduced views'
+ * tiles and bytes, and whether reduced views are still being made. Shown in the scan panel; read by tests.
+ */
+export function scanMemoryHeld(): { decoded: number; fullBytes: number; tiles: number; tileBytes: number; building: boolean } {
+  let decoded = 0;
+  let fullBytes = 0;
+  for (const scan of scans.values()) {
+    if (!scan.bitmap) continue;
+    decoded += 1;
+    fullBytes += scan.bitmap.width * scan.bitmap.height * 4;
+  }
+  const p = pyramidsHeld();
+  return { decoded, fullBytes, tiles: p.tiles, tileBytes: p.bytes, building: p.building };
 }
 
 /** Returns a counter that changes whenever a scan is added (for useSyncExternalStore). */

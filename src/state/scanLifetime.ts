@@ -1,4 +1,4 @@
-// How long decoded scans live. A 100 MP scan holds about 0.4 GB as a bitmap and as much again as tiles, so
+// How long decoded scans live. A 100 MP scan holds about 0.4 GB as a bitmap (and a twelfth more as reduced tiles), so
 // only the scan the open project shows stays decoded. A scan the undo history can bring back keeps its bytes
 // (closed bitmap, no tiles) and is decoded again from them when it returns; any other scan is dropped.
 // Releases wait one task after the change, so the scan layer has let go of the old tiles before they close.
@@ -6,7 +6,6 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore, type DocState } from './docStore';
 import { reopenSavedScan } from './projectActions';
 import { getScan, putScan, retainScans } from './scanCache';
-import { releaseTilePyramid } from './scanTilesPyramid';
 
 function scanIdsOf(docs: (ProjectDoc | null)[], into: Set<string>): void {
   for (const d of docs) if (d?.scan) into.add(d.scan.id);
@@ -19,7 +18,7 @@ export function retainScansFor(state: Pick<DocState, 'doc' | 'past' | 'future' |
   scanIdsOf(state.past, keep);
   scanIdsOf(state.future, keep);
   scanIdsOf([state.gestureStart], keep);
-  for (const id of retainScans(shown?.id ?? null, keep)) releaseTilePyramid(id);
+  retainScans(shown?.id ?? null, keep);
   const cached = getScan(shown?.id);
   if (!shown || !cached?.released) return;
   void reopenSavedScan(cached.bytes, shown).then((r) => {

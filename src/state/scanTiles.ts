@@ -33,14 +33,33 @@ export function tileLevels(imageW: number, imageH: number, tilePx = TILE_PX): Ti
   }
 }
 
-/** Returns the coarsest level whose pixels are still no larger than a device pixel (0 when zoomed in past 1:1). */
+/**
+ * Returns whether a pyramid of `levelCount` levels holds level `level` as tiles of its own. Level 0 is the decoded
+ * scan itself (drawn and read in place, never copied into tiles). Level 1 would cost a quarter of the scan's memory
+ * again for zooms between 1/2 and 1/4, so it is held only when it is the coarsest level (a scan under 2048 px a
+ * side); those zooms draw level 0 or level 2, whichever is nearer (chooseLevel). Levels 2 and beyond add 1/12.
+ */
+export function levelHeld(level: number, levelCount: number): boolean {
+  if (level < 0 || level >= levelCount) return false;
+  return level !== 1 || levelCount === 2;
+}
+
+/**
+ * Returns the level to draw: the coarsest whose pixels are still no larger than a device pixel (0 when zoomed in
+ * past 1:1) when that level is held (levelHeld), else the held level nearest to it in scale: between 1/2 and 1/4,
+ * level 0 reduced at most 2× (above 1/2) or level 2 enlarged at most 2× (below), never thinned beyond a 2 × 2 box.
+ */
 export function chooseLevel(scale: number, pixelRatio: number, levelCount: number): number {
   if (levelCount <= 0) return 0;
   const devicePerImage = scale * pixelRatio;
   if (!(devicePerImage > 0)) return levelCount - 1;
   // Level k is sharp enough while 2^k image pixels span at least one device pixel: k <= log2(1 / devicePerImage).
-  const k = Math.floor(Math.log2(1 / devicePerImage) + 1e-9);
-  return Math.min(levelCount - 1, Math.max(0, k));
+  const exact = Math.log2(1 / devicePerImage);
+  const k = Math.min(levelCount - 1, Math.max(0, Math.floor(exact + 1e-9)));
+  if (levelHeld(k, levelCount)) return k;
+  let best = 0;
+  for (let j = 0; j < levelCount; j++) if (levelHeld(j, levelCount) && Math.abs(j - exact) < Math.abs(best - exact)) best = j;
+  return best;
 }
 
 /** Returns the image-pixel rectangle a tile covers (clipped to the image). */

@@ -96,6 +96,12 @@ test('a generated 100-megapixel scan opens with progress shown, and pans and zoo
   await expect(page.getByTestId('scan-name')).toContainText('big-section.jpg — 10000 × 10000 px', { timeout: 60_000 });
   await expect(page.getByTestId('busy')).toHaveCount(0);
   const { box, cx, cy } = await viewCentre(page);
+  // Zoomed out to fit, it is drawn from its reduced views once they are made: one decoded scan, their tiles held.
+  const memory = page.getByTestId('scan-memory');
+  await expect(memory).toHaveAttribute('data-building', 'no', { timeout: 60_000 });
+  await expect(memory).toHaveAttribute('data-decoded-scans', '1');
+  // 10000 px a side: levels 2 to 4 (3 × 3, 2 × 2 and 1 tile of 1024 px); level 1 is not kept.
+  await expect(memory).toHaveAttribute('data-reduced-tiles', '14');
   const [r, g, b] = await viewPixel(page, cx, cy);
   expect(near(r, 128, 8) && near(g, 128, 8) && near(b, 90, 8)).toBe(true);
   await page.screenshot({ path: test.info().outputPath('big-fitted.png') });
@@ -124,6 +130,35 @@ test('a generated 100-megapixel scan opens with progress shown, and pans and zoo
   expect(after[2]).toBeGreaterThan(60);
   expect(after[0]).toBeGreaterThan(centreAfter[0]);
   await page.screenshot({ path: test.info().outputPath('big-actual-size.png') });
+});
+
+test('a scan that replaces another is drawn from its own tiles, and the one it replaced is closed', async ({ page }) => {
+  test.setTimeout(120_000);
+  await openApp(page);
+  const memory = page.getByTestId('scan-memory');
+  // 3000 px a side: levels 0 (the bitmap itself) and 2 (one tile of 750 px); 4200 px: levels 2 (2 × 2) and 3 (1).
+  await openFile(page, 'first.png', 'image/png', gradientPng(3000, 3000));
+  await expect(page.getByTestId('scan-name')).toContainText('first.png — 3000 × 3000 px', { timeout: 60_000 });
+  await expect(memory).toHaveAttribute('data-building', 'no', { timeout: 60_000 });
+  await expect(memory).toHaveAttribute('data-decoded-scans', '1');
+  await expect(memory).toHaveAttribute('data-reduced-tiles', '1');
+  await openFile(page, 'second.png', 'image/png', gradientPng(4200, 4200));
+  await expect(page.getByTestId('scan-name')).toContainText('second.png — 4200 × 4200 px', { timeout: 60_000 });
+  await expect(memory).toHaveAttribute('data-building', 'no', { timeout: 60_000 });
+  // The first scan's bitmap and tile are closed (its bytes stay while undo can bring it back).
+  await expect(memory).toHaveAttribute('data-decoded-scans', '1');
+  await expect(memory).toHaveAttribute('data-reduced-tiles', '5');
+  await expect(memory).toContainText('67 MB at full resolution');
+  // Fitted, the view draws the second scan's level 3 tile: its centre has the gradient's middle colour.
+  const { cx, cy } = await viewCentre(page);
+  const [r, g] = await viewPixel(page, cx, cy);
+  expect(near(r, 128, 8) && near(g, 128, 8)).toBe(true);
+  // Undo brings the first scan back, decoded again from its bytes, with its own tile; the second is closed.
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('scan-name')).toContainText('first.png — 3000 × 3000 px');
+  await expect(memory).toHaveAttribute('data-building', 'no', { timeout: 60_000 });
+  await expect(memory).toHaveAttribute('data-decoded-scans', '1');
+  await expect(memory).toHaveAttribute('data-reduced-tiles', '1');
 });
 
 test('an 8-bit RGB TIFF opens with its colours', async ({ page }) => {

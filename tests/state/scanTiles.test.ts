@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { TILE_PX, chooseLevel, tileImageRect, tileLevels, visibleTiles } from '../../src/state/scanTiles';
+import { TILE_PX, chooseLevel, levelHeld, tileImageRect, tileLevels, visibleTiles } from '../../src/state/scanTiles';
 
 describe('tileLevels', () => {
   it('tileLevels(10000, 10000) halves down to a level that fits in one tile', () => {
@@ -14,14 +14,34 @@ describe('tileLevels', () => {
   });
 });
 
+describe('levelHeld', () => {
+  it('levelHeld: level 0 always, level 1 only as the coarsest, every coarser level', () => {
+    expect([0, 1, 2, 3, 4].map((k) => levelHeld(k, 5))).toEqual([true, false, true, true, true]);
+    expect([0, 1].map((k) => levelHeld(k, 2))).toEqual([true, true]);
+    expect(levelHeld(0, 1)).toBe(true);
+    expect(levelHeld(5, 5)).toBe(false);
+  });
+});
+
 describe('chooseLevel', () => {
   it('chooseLevel is 0 at 1:1 and when zoomed in, and coarser as the view zooms out', () => {
     expect(chooseLevel(1, 1, 5)).toBe(0);
     expect(chooseLevel(8, 1, 5)).toBe(0);
-    expect(chooseLevel(0.5, 1, 5)).toBe(1);
-    expect(chooseLevel(0.3, 1, 5)).toBe(1);
+    expect(chooseLevel(0.125, 1, 5)).toBe(3);
     expect(chooseLevel(0.25, 1, 5)).toBe(2);
     expect(chooseLevel(0.001, 1, 5)).toBe(4);
+  });
+  it('chooseLevel skips level 1 where it is not held: level 0 down to 1/2, level 2 below', () => {
+    expect(chooseLevel(0.5, 1, 5)).toBe(0);
+    expect(chooseLevel(0.51, 1, 5)).toBe(0);
+    expect(chooseLevel(0.49, 1, 5)).toBe(2);
+    expect(chooseLevel(0.3, 1, 5)).toBe(2);
+    // A scan of two levels holds its level 1 (the only reduced view it has).
+    expect(chooseLevel(0.3, 1, 2)).toBe(1);
+  });
+  it('chooseLevel never returns a level the pyramid does not hold (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-4, max: 64, noNaN: true }), fc.integer({ min: 1, max: 9 }), (scale, count) =>
+      levelHeld(chooseLevel(scale, 1, count), count)));
   });
   it('chooseLevel keeps full resolution on a high-density screen at 50%', () => {
     expect(chooseLevel(0.5, 2, 5)).toBe(0);
