@@ -40,10 +40,17 @@ export async function scanDataUrl(type: string, scan: { bitmap: ImageBitmap; byt
   return canvas.toDataURL('image/png');
 }
 
-/** The decoded scan to draw a PNG from: its bitmap and, when it has been cut, its tile pyramid (state/scanTilesPyramid). */
+/**
+ * The decoded scan to draw a PNG from: its bitmap and, when it has one, its tile pyramid (state/scanTilesPyramid):
+ * the sizes of its levels and `region`, which returns a level's rectangle [x0, x1) × [y0, y1) (level pixels) as a new
+ * bitmap of its own (the worker takes and closes it), made from the tiles without a second full copy of the scan.
+ */
 export interface FigureScanSource {
   bitmap: ImageBitmap;
-  pyramid: { tilePx: number; levels: { factor: number; widthPx: number; heightPx: number; cols: number; rows: number }[]; tiles: ImageBitmap[][] } | null;
+  pyramid: {
+    levels: { factor: number; widthPx: number; heightPx: number }[];
+    region: (level: number, x0: number, y0: number, x1: number, y1: number) => Promise<ImageBitmap>;
+  } | null;
 }
 
 /** The outcome of a PNG export. */
@@ -74,15 +81,7 @@ async function scanRegion(parts: SectionSvgParts, source: FigureScanSource, widt
     const bitmap = await createImageBitmap(source.bitmap, sx, sy, sw, sh, { resizeWidth: rw, resizeHeight: rh, resizeQuality: 'high' });
     return { ...base, regionW: rw, regionH: rh, tiles: [{ bitmap, x: 0, y: 0 }], originPx: [sx, sy], pxPerRegionPx: [sw / rw, sh / rh] };
   }
-  const lv = levels[choice.level];
-  const t = py.tilePx;
-  for (let row = Math.floor(choice.y0 / t); row <= Math.floor((choice.y1 - 1) / t); row++) {
-    for (let col = Math.floor(choice.x0 / t); col <= Math.floor((choice.x1 - 1) / t); col++) {
-      if (stopped()) break;
-      const tile = py.tiles[choice.level][row * lv.cols + col];
-      if (tile) tiles.push({ bitmap: await createImageBitmap(tile), x: col * t - choice.x0, y: row * t - choice.y0 });
-    }
-  }
+  if (!stopped()) tiles.push({ bitmap: await py.region(choice.level, choice.x0, choice.y0, choice.x1, choice.y1), x: 0, y: 0 });
   return { ...base, tiles, originPx: [choice.x0 * choice.factor, choice.y0 * choice.factor], pxPerRegionPx: [choice.factor, choice.factor] };
 }
 

@@ -6,8 +6,7 @@ import { renderSectionSvg, renderSectionSvgParts, type SectionSvgParts } from '.
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
-import { getTilePyramid } from './scanTilesPyramid';
-import { TILE_PX } from './scanTiles';
+import { getTilePyramid, pyramidRegion } from './scanTilesPyramid';
 import { selectAnalysis } from './selectors';
 
 /** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not shown in this browser. */
@@ -32,5 +31,7 @@ export function currentFigureParts(): { parts: SectionSvgParts; scan: FigureScan
   const bitmap = (doc.scan && getScan(doc.scan.id)?.bitmap) || null;
   if (!doc.scan || !bitmap) return { parts, scan: null };
   const pyramid = getTilePyramid(doc.scan.id);
-  return { parts, scan: { bitmap, pyramid: pyramid ? { tilePx: TILE_PX, levels: pyramid.levels, tiles: pyramid.tiles } : null } };
+  if (!pyramid) return { parts, scan: { bitmap, pyramid: null } };
+  const region = (level: number, x0: number, y0: number, x1: number, y1: number) => pyramidRegion(pyramid, level, x0, y0, x1, y1);
+  return { parts, scan: { bitmap, pyramid: { levels: pyramid.levels, region } } };
 }
