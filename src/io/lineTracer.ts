@@ -3,8 +3,10 @@
 // back per pointer position), so a large scan never stalls the page. Answers are synchronous — ready or
 // not yet — and `onReady` is called whenever something asked for has arrived.
 // The first preview from an anchor is progressive: while the full-resolution tiles and tree are computed, a
-// second worker searches the same window read at a reduced resolution (at most COARSE_PIXELS pixels, so tens of
-// milliseconds however long the stretch), and its path, mapped back to the image, is shown until the full one is ready. As soon
+// second worker searches the same window read at a reduced resolution (at most COARSE_PIXELS pixels, so a few
+// milliseconds however long the stretch: the tree is sent with the pointer position and answers it at once), and its
+// path, mapped back to the image, is shown until the full one is ready. Both workers are warmed up when the tracer
+// starts. As soon
 // as an anchor is placed, the tree around it is built ahead, towards where the line was heading, so the next
 // preview usually finds its tree waiting.
 import type { ImagePx } from '../core/model/projectDoc';
@@ -23,7 +25,7 @@ const PATHS_KEPT = 256;
 /** Trees the worker keeps; the same number as its session keeps. */
 const TREES_KEPT = 4;
 /** The rough search reads the window reduced to at most this many pixels (and by at least 2 in each direction). */
-export const COARSE_PIXELS = 60_000;
+export const COARSE_PIXELS = 16_000;
 
 /** A rough tree: its anchor and window (image px), and the window's image px per reduced pixel across and down. */
 interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: number }
@@ -52,14 +54,19 @@ export class ScanLineTracer {
   private coarseBuilding = false;
   private coarsePaths = new Map<string, ImagePx[]>();
   private coarseAsked = new Set<string>();
+  /** Placed stretches whose look-ahead trees were started. */
+  private aheadOf = new Set<string>();
+  /** The pointer position the wanted rough tree answers once built. */
+  private coarseFor: { key: string; to: ImagePx } | null = null;
   /** Bytes the worker reported holding after its latest tree. */
   bytesHeld = 0;
 
   constructor(private bitmap: ImageBitmap, private onReady: () => void) {
     this.worker = new Worker(new URL('./workers/traceLine.worker.ts', import.meta.url), { type: 'module' });
     this.worker.onmessage = (e: MessageEvent<TraceWorkerReply>) => this.receive(e.data);
+    this.post({ type: 'warm' });
     // The rough worker is started at once, so that the first preview does not wait for it to load.
-    this.coarse();
+    this.coarse().postMessage({ type: 'warm' } satisfies TraceWorkerRequest);
   }
 
   /** Stops the worker; later questions get no answers. */
@@ -103,6 +110,11 @@ export class ScanLineTracer {
     // Off the scan, or no length to follow: a straight stretch.
     if (!inside(from) || !inside(to) || Math.hypot(to[0] - from[0], to[1] - from[1]) < 1.5) return [from, to];
     if (this.closed) return [from, to];
+    // A placed anchor starts the trees around it, ahead of the pointer, whichever way its own stretch is found.
+    if (placed && !this.aheadOf.has(key)) {
+      this.aheadOf.add(key);
+      this.buildAhead(from, to);
+    }
     if (this.asked.has(key)) return placed ? null : this.roughStretch(from, to, key);
     const tree = [...this.trees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H));
     if (tree) {
@@ -117,7 +129,6 @@ export class ScanLineTracer {
         const tileKeys = await this.sendTiles(win);
         this.post({ type: 'once', key, from: [from[0], from[1]], to: [to[0], to[1]], win, tileKeys });
       });
-      this.buildAhead(from, to);
       return null;
     }
     this.wanted = { from, win };
@@ -135,6 +146,7 @@ export class ScanLineTracer {
     this.wanted = { from: to, win };
     this.pumpTree();
     this.coarseWanted = { from: to, win };
+    this.coarseFor = null;
     this.pumpCoarse();
   }
 
@@ -153,6 +165,7 @@ export class ScanLineTracer {
       return null;
     }
     this.coarseWanted = { from, win: traceWindow(from, to, W, H) };
+    this.coarseFor = { key, to };
     this.pumpCoarse();
     return null;
   }
@@ -169,7 +182,9 @@ export class ScanLineTracer {
   private pumpCoarse(): void {
     if (this.coarseBuilding || !this.coarseWanted || this.closed) return;
     const { from, win } = this.coarseWanted;
+    const answer = this.coarseFor;
     this.coarseWanted = null;
+    this.coarseFor = null;
     const step = Math.max(2, Math.sqrt((win.w * win.h) / COARSE_PIXELS));
     const cw = Math.max(1, Math.round(win.w / step));
     const ch = Math.max(1, Math.round(win.h / step));
@@ -183,7 +198,13 @@ export class ScanLineTracer {
       const whole = { x0: 0, y0: 0, w: cw, h: ch };
       worker.postMessage({ type: 'tile', key, tile: whole, crop: whole, bitmap } satisfies TraceWorkerRequest, [bitmap]);
       const c: [number, number] = [(from[0] - win.x0) / sx, (from[1] - win.y0) / sy];
-      worker.postMessage({ type: 'tree', id, from: c, win: whole, tileKeys: [key] } satisfies TraceWorkerRequest);
+      // The pointer position that asked is answered with the tree, in the same turn of the worker.
+      let path: { key: string; to: [number, number] } | undefined;
+      if (answer && windowCovers(win, answer.to, this.bitmap.width, this.bitmap.height, 2 * Math.max(sx, sy))) {
+        path = { key: answer.key, to: [(answer.to[0] - win.x0) / sx, (answer.to[1] - win.y0) / sy] };
+        this.coarseAsked.add(answer.key);
+      }
+      worker.postMessage({ type: 'tree', id, from: c, win: whole, tileKeys: [key], path } satisfies TraceWorkerRequest);
       // The tile served only this tree: the worker keeps the tree's own copy of its features.
       worker.postMessage({ type: 'drop', keys: [key] } satisfies TraceWorkerRequest);
       this.coarseTrees.push({ id, from, win, sx, sy });

@@ -11,6 +11,8 @@ import { pixelIndexAt, traceStretch, TRACE_TOLERANCE_PX } from './traceStretch';
 
 /** Trees kept (the latest anchors): enough for the stretch being previewed and the ones still being filled in. */
 export const TREES_KEPT = 4;
+/** Side of the made-up window the warm-up traces. */
+const WARM_SIDE_PX = 160;
 
 interface KeptTree { id: number; from: [number, number]; win: Raster; tree: PathTree; features: PixelFeatures; centres: CentreCache }
 
@@ -58,6 +60,30 @@ export class TraceSession {
     const t = this.trees.find((k) => k.id === id);
     if (!t) return null;
     return traceStretch(t.tree, t.features, t.from, to, TRACE_TOLERANCE_PX, t.centres) ?? [t.from, to];
+  }
+
+  /**
+   * Runs tile features, a tree and a path once over a small made-up window (a dark diagonal on paper) and forgets
+   * them: the engine then compiles the hot loops before the first real preview needs them.
+   */
+  warmUp(): void {
+    const side = WARM_SIDE_PX;
+    const rgba = new Uint8ClampedArray(side * side * 4).fill(235);
+    for (let i = 0; i < side; i++) {
+      for (let d = -1; d <= 1; d++) {
+        const j = Math.min(side - 1, Math.max(0, Math.round(i * 0.6) + d + 20));
+        rgba.fill(30, (j * side + i) * 4, (j * side + i) * 4 + 3);
+      }
+    }
+    const win = { x0: 0, y0: 0, w: side, h: side };
+    const key = 'warm-up';
+    for (let k = 0; k < 3; k++) {
+      this.putTile(key, win, rgba, win);
+      this.buildTree(-1 - k, [0.5, 20.5], win, [key]);
+      this.path(-1 - k, [side - 0.5, Math.round((side - 1) * 0.6) + 20.5]);
+    }
+    this.dropTiles([key]);
+    this.trees = this.trees.filter((t) => t.id >= 0);
   }
 
   /** Returns the bytes held by tiles and trees. */

@@ -2,14 +2,17 @@
 // pixel wider than the tile where the image allows) stores its features; 'drop' forgets tiles; 'tree'
 // builds an anchor's shortest-path tree over a window and answers 'treeDone'; 'path' answers the traced
 // stretch to a point (null when that tree is no longer kept); 'once' traces one placed stretch without
-// keeping a tree. Messages are handled in order.
+// keeping a tree; 'warm' runs the whole chain once on a small made-up window, so that the first real preview
+// does not pay for compiling it (cold, a first tile and tree took ten times as long). A 'tree' may carry the
+// pointer position whose path it answers as soon as it is built, saving a round trip. Messages are handled in order.
 import type { Raster } from '../../core/trace/raster';
 import { TraceSession } from '../../core/trace/traceSession';
 
 export type TraceWorkerRequest =
   | { type: 'tile'; key: string; tile: Raster; crop: Raster; bitmap: ImageBitmap }
   | { type: 'drop'; keys: string[] }
-  | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[] }
+  | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[]; path?: { key: string; to: [number, number] } }
+  | { type: 'warm' }
   | { type: 'path'; id: number; key: string; to: [number, number] }
   | { type: 'once'; key: string; from: [number, number]; to: [number, number]; win: Raster; tileKeys: string[] };
 
@@ -47,7 +50,8 @@ self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
         // Answered even on failure, so the page never waits for a tree that will not come.
         reply({ type: 'treeDone', id: m.id, bytesHeld: session.bytesHeld() });
       }
-    } else if (m.type === 'path') reply({ type: 'path', id: m.id, key: m.key, points: session.path(m.id, m.to) });
+      if (m.path) reply({ type: 'path', id: m.id, key: m.path.key, points: session.path(m.id, m.path.to) });
+    } else if (m.type === 'warm') session.warmUp(); else if (m.type === 'path') reply({ type: 'path', id: m.id, key: m.key, points: session.path(m.id, m.to) });
     else if (m.type === 'once') reply({ type: 'path', id: -1, key: m.key, points: session.traceOnce(m.from, m.to, m.win, m.tileKeys) });
   } catch (err) {
     reply({ type: 'error', message: err instanceof Error ? err.message : String(err) });
