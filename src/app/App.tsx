@@ -8,7 +8,8 @@ import { InterpretationPane } from '../panels/InterpretationPane';
 import { FileMenu } from '../panels/FileMenu';
 import { openScanFile, scanFileFromClipboard } from '../state/openScanFile';
 import { MessageBar } from './MessageBar';
-import { useKeyboardShortcuts } from './useKeyboardShortcuts';
+import { useKeys } from './useKeys';
+import { isTyping } from '../canvas/keyForTools';
 import { startApp } from './startApp';
 import { KeepWorkBoundary } from './KeepWorkBoundary';
 import { useSessionStore } from '../state/sessionStore';
@@ -16,13 +17,12 @@ import { useSessionStore } from '../state/sessionStore';
 export function App() {
   const [dropping, setDropping] = useState(false);
   const started = useSessionStore((s) => s.started);
-  useKeyboardShortcuts();
+  useKeys();
   useEffect(() => startApp(), []);
   useEffect(() => {
     // Ctrl/Cmd+V of an image (a screenshot, a figure copied from a report) opens it as the scan.
     const onPaste = (e: ClipboardEvent) => {
-      const t = e.target;
-      if (t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || (t instanceof HTMLElement && t.isContentEditable)) return;
+      if (isTyping(e.target)) return;
       const file = scanFileFromClipboard(e.clipboardData);
       if (!file) return;
       e.preventDefault();

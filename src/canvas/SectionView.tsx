@@ -1,12 +1,12 @@
 // The section view: a react-konva Stage filling its box. Wheel zooms about the cursor; dragging with the
-// space bar held or the middle button pans. The camera is the Stage's own scale and position. The box
+// space bar held (app/useKeys sets it) or the middle button pans. The camera is the Stage's own scale and position. The box
 // takes the keyboard focus when pressed (and by Tab), so that Enter and Space go to the tools from here
 // while a focused button or field elsewhere keeps its own (keyForTools).
 // Per-frame work stays out of React: the camera is set on the Stage from a store subscription (a pan
 // frame re-renders nothing), and the Stage's place on the page, which Konva would otherwise read with
 // getBoundingClientRect (a forced layout) on every pointer move, is read when the box changes size, the
 // page scrolls or resizes, or the pointer enters or presses in the box (viewBoxRect.ts).
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useRef } from 'react';
 import { Stage } from 'react-konva';
 import type Konva from 'konva';
 import { useSessionStore } from '../state/sessionStore';
@@ -18,9 +18,9 @@ import { OverlayLayer } from './OverlayLayer';
 import { GridLayer } from './GridLayer';
 import { CursorReadout } from './CursorReadout';
 import { usePinchZoom } from './usePinchZoom';
-import { toolMidGesture, toolPointerDown, useToolDispatch } from './toolDispatch';
+import { toolPointerDown, useToolDispatch } from './toolDispatch';
 import { cachedClientRect, invalidateViewRects } from './viewBoxRect';
-import { keyForTools } from './keyForTools';
+import { useToolSession } from '../state/toolSessionStore';
 
 const WHEEL_ZOOM_STEP = 1.0015;
 /** A trackpad pinch arrives as a wheel with ctrlKey and small deltas: a stronger step per unit. */
@@ -31,8 +31,8 @@ export function SectionView() {
   const stageRef = useRef<Konva.Stage>(null);
   useToolDispatch(boxRef);
   const viewport = useSessionStore((s) => s.viewport);
-  const [spaceHeld, setSpaceHeld] = useState(false);
-  const [panning, setPanning] = useState(false);
+  const spaceHeld = useToolSession((s) => s.spaceHeld);
+  const panning = useToolSession((s) => s.panning);
   const panStart = useRef<{ px: number; py: number; cx: number; cy: number } | null>(null);
   usePinchZoom(boxRef);
 
@@ -82,28 +82,14 @@ export function SectionView() {
   }, []);
 
   useEffect(() => {
-    const down = (e: KeyboardEvent) => {
-      if (e.code === 'Space' && keyForTools(e.target, boxRef.current, panStart.current !== null || toolMidGesture())) {
-        setSpaceHeld(true);
-        e.preventDefault();
-      }
-    };
-    const up = (e: KeyboardEvent) => {
-      if (e.code === 'Space') setSpaceHeld(false);
-    };
+    // Space is pressed and released through the page's keys (app/useKeys); a lost window lets go of both.
     const blur = () => {
-      setSpaceHeld(false);
-      setPanning(false);
+      useToolSession.getState().setSpaceHeld(false);
+      useToolSession.getState().setPanning(false);
       panStart.current = null;
     };
-    window.addEventListener('keydown', down);
-    window.addEventListener('keyup', up);
     window.addEventListener('blur', blur);
-    return () => {
-      window.removeEventListener('keydown', down);
-      window.removeEventListener('keyup', up);
-      window.removeEventListener('blur', blur);
-    };
+    return () => window.removeEventListener('blur', blur);
   }, []);
 
   const onWheel = useCallback((e: Konva.KonvaEventObject<WheelEvent>) => {
@@ -127,7 +113,7 @@ export function SectionView() {
       e.cancelBubble = true;
       const cam = useSessionStore.getState().camera;
       panStart.current = { px: e.evt.clientX, py: e.evt.clientY, cx: cam.x, cy: cam.y };
-      setPanning(true);
+      useToolSession.getState().setPanning(true);
     },
     [spaceHeld],
   );
@@ -141,7 +127,7 @@ export function SectionView() {
 
   const endPan = useCallback(() => {
     panStart.current = null;
-    setPanning(false);
+    useToolSession.getState().setPanning(false);
   }, []);
 
   const cursor = panning ? 'grabbing' : spaceHeld ? 'grab' : 'crosshair';

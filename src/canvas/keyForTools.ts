@@ -10,6 +10,16 @@ const CONTROLS = [
   '[role="tab"]', '[role="option"]', '[role="slider"]', '[role="separator"]',
 ].join(', ');
 
+/** Returns true when `target` takes typed text (a field, a list, an editable element): the page's keys are then not its own. */
+export function isTyping(target: EventTarget | null): boolean {
+  return (
+    target instanceof HTMLInputElement ||
+    target instanceof HTMLTextAreaElement ||
+    target instanceof HTMLSelectElement ||
+    (target instanceof HTMLElement && target.isContentEditable)
+  );
+}
+
 /** Returns true when a key pressed with focus on `target` belongs to the section view's tools (`view`: the section view's element). */
 export function keyForTools(target: EventTarget | null, view: Element | null, midGesture: boolean): boolean {
   if (!(target instanceof Element)) return true;

@@ -9,9 +9,8 @@ import { getScan } from '../state/scanCache';
 import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { useToolSession } from '../state/toolSessionStore';
-import { toolEntry, TOOLS } from '../tools/toolRegistry';
+import { toolEntry } from '../tools/toolRegistry';
 import { runTool, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
-import { keyForTools } from './keyForTools';
 import { cachedClientRect } from './viewBoxRect';
 
 /** Pointer tolerance for picking, in screen pixels. */
@@ -203,41 +202,12 @@ export function toolPointerDown(evt: PointerEvent): void {
   dispatchToolEvent({ type: 'pointerDown', p, button: evt.button, clicks: clickCount(evt, p), shift: evt.shiftKey, alt: evt.altKey });
 }
 
-/** True when a key belongs to a text field or select that has focus. */
-function isTyping(target: EventTarget | null): boolean {
-  return (
-    target instanceof HTMLInputElement ||
-    target instanceof HTMLTextAreaElement ||
-    target instanceof HTMLSelectElement ||
-    (target instanceof HTMLElement && target.isContentEditable)
-  );
+/** The section view's element while it is shown (for keyForTools), else null. */
+export function toolViewElement(): HTMLElement | null {
+  return boxElement;
 }
 
-/** Keys for the tools; the tool shortcuts (v, c, d, k, e, j, p, r) switch tools. */
-function onKey(e: KeyboardEvent): void {
-  if (isTyping(e.target) || e.ctrlKey || e.metaKey) return;
-  if (e.key === 'Escape') {
-    cancelTool();
-    useToolSession.getState().setHelpOpen(false);
-    return;
-  }
-  if (e.key === '?') {
-    useToolSession.getState().setHelpOpen(!useToolSession.getState().helpOpen);
-    return;
-  }
-  if (e.key === 'Enter' || e.key === 'Backspace' || e.key === 'Delete') {
-    // A focused button or link keeps its Enter (keyForTools); Backspace and Delete mean nothing to it.
-    if (e.key === 'Enter' && !keyForTools(e.target, boxElement, toolMidGesture())) return;
-    e.preventDefault();
-    dispatchToolEvent({ type: 'key', key: e.key });
-    return;
-  }
-  if (e.altKey || e.shiftKey) return;
-  const entry = TOOLS.find((t) => t.key === e.key);
-  if (entry) useSessionStore.getState().setTool(entry.tool.id);
-}
-
-/** Installs the window listeners that feed the tools (moves and releases anywhere, keys, blur). */
+/** Installs the window listeners that feed the tools (moves and releases anywhere, blur); keys come from app/useKeys. */
 export function useToolDispatch(boxRef: RefObject<HTMLElement | null>): void {
   useEffect(() => {
     boxElement = boxRef.current;
@@ -255,12 +225,10 @@ export function useToolDispatch(boxRef: RefObject<HTMLElement | null>): void {
     const blur = () => cancelTool();
     window.addEventListener('pointermove', move);
     window.addEventListener('pointerup', up);
-    window.addEventListener('keydown', onKey);
     window.addEventListener('blur', blur);
     return () => {
       window.removeEventListener('pointermove', move);
       window.removeEventListener('pointerup', up);
-      window.removeEventListener('keydown', onKey);
       window.removeEventListener('blur', blur);
       boxElement = null;
     };

@@ -1,5 +1,5 @@
 // Opening a scan and fitting the view: the first things a user does.
-import { useEffect, useRef, useSyncExternalStore } from 'react';
+import { useRef, useSyncExternalStore } from 'react';
 import { useDocStore } from '../state/docStore';
 import { formatNumber } from '../format/formatQuantity';
 import { getScan, scanCacheVersion, scanMemoryHeld, subscribeScans } from '../state/scanCache';
@@ -28,10 +28,6 @@ export function zoomToActualSize(): void {
   zoomByStep(1 / camera.scale);
 }
 
-function isTyping(target: EventTarget | null): boolean {
-  return target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement || target instanceof HTMLSelectElement || (target instanceof HTMLElement && target.isContentEditable);
-}
-
 function setShowGrid(showGrid: boolean): void {
   useDocStore.getState().apply((doc) => (doc.settings.showGrid === showGrid ? doc : { ...doc, settings: { ...doc.settings, showGrid } }));
 }
@@ -47,16 +43,6 @@ export function ScanControls() {
   const held = scanMemoryHeld();
   const mb = (bytes: number) => `${formatNumber(Math.round(bytes / 1048576))} MB`;
   const fileInput = useRef<HTMLInputElement>(null);
-  useEffect(() => {
-    // "1" shows the scan at actual size (one image pixel per screen pixel).
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key !== '1' || e.ctrlKey || e.metaKey || e.altKey || isTyping(e.target)) return;
-      e.preventDefault();
-      zoomToActualSize();
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, []);
   return (
     <section className="panel-section" aria-label="Scan">
       <h2>Scan</h2>

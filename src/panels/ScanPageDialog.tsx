@@ -1,5 +1,5 @@
 // The small dialog that asks which page of a multi-page TIFF, or which page of a PDF and at what
-// resolution, to open as the scan.
+// resolution, to open as the scan. Esc cancels it (the key table's `pageDialog` row, state/keyTable.ts).
 import { useEffect, useState } from 'react';
 import type { ScanChoiceRequest } from '../io/decodeScanChoice';
 import { useScanChoiceStore } from '../state/scanChoiceStore';
@@ -90,14 +90,6 @@ function DialogButtons({ disabled = false }: { disabled?: boolean }) {
 
 export function ScanPageDialog() {
   const request = useScanChoiceStore((s) => s.request);
-  useEffect(() => {
-    if (!request) return;
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key === 'Escape') useScanChoiceStore.getState().answer(null);
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [request]);
   if (!request) return null;
   const answer = useScanChoiceStore.getState().answer;
   return (

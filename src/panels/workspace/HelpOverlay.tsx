@@ -1,24 +1,23 @@
-// The keyboard shortcuts, shown on "?" (and from the tool bar's "?" button).
+// The keyboard shortcuts, shown on "?" (and from the tool bar's "?" button): the key table, as it is.
 import { useToolSession } from '../../state/toolSessionStore';
-import { TOOLS } from '../../tools/toolRegistry';
-import { GENERAL_KEYS } from './generalKeys';
+import { KEY_TABLE, type KeyRow } from '../../state/keyTable';
 
-/** The two tables of keys: each tool's key (from the tool registry), then the general keys. */
+function Row({ row }: { row: KeyRow }) {
+  return <tr><td><kbd>{row.label}</kbd></td><td>{row.toolLabel ? <><strong>{row.toolLabel}</strong> — </> : null}{row.what}</td></tr>;
+}
+
+/** The two tables of keys: each tool's key, then the rest, in the key table's order. */
 export function HelpKeyTables() {
   return (
     <div className="help-columns">
       <table>
         <tbody>
-          {TOOLS.map((t) => (
-            <tr key={t.tool.id}><td><kbd>{t.key.toUpperCase()}</kbd></td><td><strong>{t.label}</strong> — {t.hint}</td></tr>
-          ))}
+          {KEY_TABLE.filter((r) => r.toolId).map((r) => <Row key={r.toolId} row={r} />)}
         </tbody>
       </table>
       <table>
         <tbody>
-          {GENERAL_KEYS.map(([k, what]) => (
-            <tr key={k}><td><kbd>{k}</kbd></td><td>{what}</td></tr>
-          ))}
+          {KEY_TABLE.filter((r) => !r.toolId).map((r) => <Row key={`${r.label} ${r.when}`} row={r} />)}
         </tbody>
       </table>
     </div>
