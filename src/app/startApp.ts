@@ -7,6 +7,7 @@ import { claimEditing } from '../state/tabLock';
 import { startGesturePreparation } from '../state/gesturePreparation';
 import { useSessionStore } from '../state/sessionStore';
 import { startScanLifetime } from '../state/scanLifetime';
+import { startCrossingChecks } from '../state/crossingChecks';
 
 let started = false;
 
@@ -15,6 +16,8 @@ export function startApp(): void {
   if (started) return;
   started = true;
   startScanLifetime();
+  // Long lines are tested for self-crossing in a worker, so the page is not held while they are.
+  startCrossingChecks();
   void (async () => {
     // Another tab editing the kept work: this one shows it read-only, following what that tab keeps (and can take
     // over), and never writes over it.

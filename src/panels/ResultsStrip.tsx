@@ -4,6 +4,7 @@
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
+import { useCrossingChecks } from '../state/crossingChecks';
 import { formatArea, formatLength } from '../format/formatQuantity';
 import { liveResults } from './workspace/liveResults';
 import './workspace/workspace.css';
@@ -13,6 +14,7 @@ export function ResultsStrip() {
   const gestureStart = useDocStore((s) => s.gestureStart);
   const selectHorizon = useSessionStore((s) => s.selectHorizon);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
+  const checking = useCrossingChecks((s) => s.pending > 0);
   const shown = !(doc.horizons.length === 0 && !doc.calibration);
   // The strip keeps its place and height below the view even before there is anything to show, so the view's
   // size never changes while the user calibrates or draws.
@@ -43,6 +45,7 @@ export function ResultsStrip() {
               {live.regime && <span className="strip-aside" data-testid="strip-regime">{live.regime}</span>}
             </span>
             {live.note && <span className="strip-note" data-testid="strip-note">{live.note}</span>}
+            {checking && <span className="strip-note" data-testid="strip-crossing-check">Checking that the long lines do not cross themselves… (the numbers stand unless one does)</span>}
           </>
         ) : (
           <span className="strip-note" data-testid="strip-note">{live.message}</span>

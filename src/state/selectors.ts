@@ -4,34 +4,40 @@
 import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { analyseDoc, analyseDocGesture, prepareDocGesture, type DocGestureBase } from '../core/analysis/analyseDocGesture';
 import { activeScenario } from '../core/model/docToSection';
+import { crossingVerdictsVersion } from '../core/geometry/crossingVerdicts';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
 
 // docToSection reads the scenario, the horizons, the faults, the calibration and the units and nothing
 // else, so the result is memoised on those five objects: editing one scenario (or undoing to a document that
 // shares them) does not re-analyse the others.
-interface Entry { horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; result: DocAnalysis }
+// A self-crossing verdict that arrives from the worker (crossingChecks.ts) changes the result too: it is remembered
+// with the verdicts' version.
+interface Entry { horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; verdicts: number; result: DocAnalysis }
 const cache = new WeakMap<Scenario, Entry>();
 
 /** Returns the analysis of the document's active (or given) scenario, memoised on what it depends on. */
 export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysis {
   const scenario = activeScenario(doc, scenarioId);
   const hit = scenario ? cache.get(scenario) : undefined;
-  if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units) return hit.result;
+  const verdicts = crossingVerdictsVersion();
+  if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units && hit.verdicts === verdicts) return hit.result;
   const result = analyseDoc(doc, scenarioId);
-  if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, result });
+  if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, verdicts, result });
   return result;
 }
 
 // While a gesture moves only regionals, the gesture's start is prepared once and each step re-measures
 // only the moved regionals (analyseDocGesture); whatever that fast step cannot vouch for takes the full
 // analysis, so the result is always selectAnalysis's, to rounding.
-const bases = new WeakMap<ProjectDoc, DocGestureBase | null>();
+const bases = new WeakMap<ProjectDoc, { base: DocGestureBase | null; verdicts: number }>();
 const live = new WeakMap<ProjectDoc, DocAnalysis>();
 
 function gestureBase(start: ProjectDoc): DocGestureBase | null {
-  if (bases.has(start)) return bases.get(start) ?? null;
+  const verdicts = crossingVerdictsVersion();
+  const hit = bases.get(start);
+  if (hit && hit.verdicts === verdicts) return hit.base;
   const base = prepareDocGesture(start, selectAnalysis(start));
-  bases.set(start, base);
+  bases.set(start, { base, verdicts });
   return base;
 }
 
@@ -45,7 +51,7 @@ export function prepareForGesture(doc: ProjectDoc): void {
 
 /** True once the document has been prepared as a gesture's start (prepareForGesture, or a gesture from it). */
 export function preparedForGesture(doc: ProjectDoc): boolean {
-  return bases.has(doc);
+  return bases.get(doc)?.verdicts === crossingVerdictsVersion();
 }
 
 /**

@@ -1,6 +1,6 @@
 import { clipAndMeasure, type ClipAllocate } from '../geometry/clipAndMeasure';
 import type { ClippedPolyline, PinClip } from '../geometry/clipPolylineToPins';
-import { sweepSelfCrossing } from '../geometry/sweepSelfCrossing';
+import { crossingVerdict } from '../geometry/crossingVerdicts';
 import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
@@ -55,8 +55,9 @@ function pinProblems(clip: PinClip, who: string, what: string, name: string, pin
 
 function crossingProblem(c: ClippedPolyline, who: string, what: string, name: string, units?: LengthUnit): SectionProblem | null {
   // The sweep-line test with exact orientation signs (sweepSelfCrossing): touches and retraced stretches are not crossings.
-  const pair = sweepSelfCrossing(c.xs, c.zs);
-  if (pair === null) return null;
+  // A long line may be under test elsewhere (crossingVerdicts): it is measured meanwhile, and left out if it crosses.
+  const pair = crossingVerdict(c.xs, c.zs);
+  if (pair === null || pair === 'pending') return null;
   const [s, t] = pair;
   // Name the input segments (vertex i to i + 1), not clipped ones, so the user can find the spot;
   // the smaller end of a clipped segment's source lies on its input segment, in either direction.
