@@ -18,12 +18,13 @@ export type CentreCache = Map<number, [number, number] | null>;
  * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
  * normal of the path's local direction to the line centre found in `f` (centreAcross), and the fraction of them that
  * found a line there (the others keep their pixel centre). A path of one pixel comes back as that pixel's centre
- * (fraction 1); an empty path as no points (fraction 0).
+ * (fraction 1); an empty path as no points (fraction 0). `found` flags, per point, whether it was centred on a line.
  */
-export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number } {
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number; found: Uint8Array } {
   const pts = path.map((k) => rasterCentre(r, k));
   const n = pts.length;
-  if (n < 2) return { points: pts, onLine: n };
+  const on = new Uint8Array(n);
+  if (n < 2) return { points: pts, onLine: n, found: on.fill(1) };
   let found = 0;
   const out: [number, number][] = [];
   const size = r.w * r.h;
@@ -34,6 +35,7 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
     if (known !== undefined) {
       if (known) {
         found++;
+        on[i] = 1;
         out.push(known);
       } else out.push(pts[i]);
       continue;
@@ -56,9 +58,10 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
       continue;
     }
     found++;
+    on[i] = 1;
     const q: [number, number] = [pts[i][0] + o * nx, pts[i][1] + o * ny];
     cache?.set(key, q);
     out.push(q);
   }
-  return { points: out, onLine: found / n };
+  return { points: out, onLine: found / n, found: on };
 }
