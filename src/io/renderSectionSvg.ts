@@ -192,6 +192,12 @@ export interface SectionSvgParts {
   frame: SectionFrame;
 }
 
+/** The text cut to at most `max` characters, ending in "…" when it was cut. */
+function shortened(text: string, max: number): string {
+  const chars = Array.from(text);
+  return chars.length <= max ? text : `${chars.slice(0, max - 1).join('')}…`;
+}
+
 /** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. The scan, when given, is embedded once. */
 export function renderSectionSvg(input: SectionFigureInput): string {
   const parts = renderSectionSvgParts(input);
@@ -233,8 +239,9 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   // Title block: title, byline, then the headline result on a line of its own.
   const u = escapeXml(doc.units);
   out.push(`<g class="title-block"><rect x="30" y="14" width="${FIGURE_WIDTH - 60}" height="72" fill="#f3f5f7" stroke="#9aa5ad"/>`);
-  out.push(`<text x="42" y="40" font-size="22" font-weight="bold">${escapeXml(doc.title.slice(0, 100))}</text>`);
-  out.push(`<text x="${FIGURE_WIDTH - 42}" y="40" font-size="12" text-anchor="end">Author: ${escapeXml(doc.author.slice(0, 60) || '—')}   ·   Date: ${escapeXml(date)}   ·   Scenario: ${escapeXml(scenario.name.slice(0, 60))}</text>`);
+  // The title block holds only so much: a longer text is shortened with an ellipsis, so the figure shows it was cut.
+  out.push(`<text x="42" y="40" font-size="22" font-weight="bold">${escapeXml(shortened(doc.title, 100))}</text>`);
+  out.push(`<text x="${FIGURE_WIDTH - 42}" y="40" font-size="12" text-anchor="end">Author: ${escapeXml(shortened(doc.author, 60) || '—')}   ·   Date: ${escapeXml(date)}   ·   Scenario: ${escapeXml(shortened(scenario.name, 60))}</text>`);
   const ref = result ? `the reference at elevation ${formatNumber(result.referenceElevation)} ${u}` : 'the reference';
   const ciText = ad && isExactFit(ad) ? ` (${EXACT_FIT_TEXT})`
     : ad?.detachmentDepthCI95 ? ` (95%: ${formatInterval(ad.detachmentDepthCI95, u)})`

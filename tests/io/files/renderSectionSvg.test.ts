@@ -69,6 +69,17 @@ describe('renderSectionSvg', () => {
     expect(balanced(svg)).toBe(true);
   });
 
+  it('shortens a title or author too long for the title block with an ellipsis, never silently', () => {
+    const doc = sampleDoc();
+    doc.title = `${'T'.repeat(99)}XYZ`;
+    doc.author = 'A'.repeat(300);
+    const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: '2024-05-01' });
+    expect(svg).toContain(`>${'T'.repeat(99)}…</text>`);
+    expect(svg).toContain(`Author: ${'A'.repeat(59)}…`);
+    doc.title = 'Short title';
+    expect(renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' })).toContain('>Short title</text>');
+  });
+
   it('still draws an empty project and says why there are no results', () => {
     const doc = emptyProjectDoc();
     const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: 'd' });
