@@ -12,6 +12,7 @@
 import type { ImagePx } from '../core/model/projectDoc';
 import { pixelFeatures } from '../core/trace/pixelFeatures';
 import type { Raster } from '../core/trace/raster';
+import { roughToImage } from '../core/trace/roughToImage';
 import { snapToLine } from '../core/trace/snapToLine';
 import { tilesOver, traceWindow, windowCovers } from '../core/trace/traceWindow';
 import type { TraceWorkerReply, TraceWorkerRequest } from './workers/traceLine.worker';
@@ -225,11 +226,8 @@ export class ScanLineTracer {
       const tree = this.coarseTrees.find((t) => t.id === m.id);
       if (m.points && tree) {
         // Back to image pixels, with the ends exactly at the anchor and the pointer.
-        const pts: ImagePx[] = m.points.map(([u, v]) => [tree.win.x0 + u * tree.sx, tree.win.y0 + v * tree.sy]);
         const [a, b] = m.key.split('|').map((t) => t.split(',').map(Number) as ImagePx);
-        pts[0] = a;
-        pts[pts.length - 1] = b;
-        this.coarsePaths.set(m.key, pts);
+        this.coarsePaths.set(m.key, roughToImage(m.points, tree.win, tree.sx, tree.sy, a, b));
         while (this.coarsePaths.size > PATHS_KEPT) this.coarsePaths.delete(this.coarsePaths.keys().next().value as string);
       } else {
         this.coarseTrees = this.coarseTrees.filter((t) => t.id !== m.id);
