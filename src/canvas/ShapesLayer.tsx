@@ -243,17 +243,26 @@ const PinLines = memo(function PinLines() {
   );
 });
 
+/**
+ * Two canvases, drawn in this order: the fills and regionals, then the faults, horizons and pins over them. A regional
+ * drag changes only the first, so each move redraws (and the browser rasterises) the fills and regionals alone;
+ * the long horizon lines, most of a full redraw's cost, stay as they were drawn.
+ */
 export function ShapesLayer() {
   const ids = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
   const showFills = useDocStore((s) => s.doc.settings.showFills);
   const faultIds = useDocStore(useShallow((s) => s.doc.faults.map((f) => f.id)));
   return (
-    <Layer listening={false}>
-      {showFills && ids.map((id) => <FillShape key={`f-${id}`} id={id} />)}
-      {ids.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
-      {faultIds.map((id) => <FaultShape key={`k-${id}`} id={id} />)}
-      {ids.map((id) => <HorizonShape key={`h-${id}`} id={id} />)}
-      <PinLines />
-    </Layer>
+    <>
+      <Layer listening={false} name="fills-and-regionals">
+        {showFills && ids.map((id) => <FillShape key={`f-${id}`} id={id} />)}
+        {ids.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
+      </Layer>
+      <Layer listening={false} name="horizons-and-faults">
+        {faultIds.map((id) => <FaultShape key={`k-${id}`} id={id} />)}
+        {ids.map((id) => <HorizonShape key={`h-${id}`} id={id} />)}
+        <PinLines />
+      </Layer>
+    </>
   );
 }
