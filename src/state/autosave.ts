@@ -174,7 +174,12 @@ export async function restoreAutosave(): Promise<boolean> {
   if (!doc.scan && doc.horizons.length === 0 && doc.calibration === null && doc.title === empty.title) return false;
   // The untouched start-up demo is not work to bring back.
   if (!snap.dirty && doc.scan?.id.startsWith(DEMO_SCAN_ID)) return false;
-  const notShown = await bringBackScan(doc, snap.scan);
+  let notShown = await bringBackScan(doc, snap.scan);
+  // The journal holds the document, not the scan's bytes (too large for it): when the page went away before
+  // IndexedDB had them, the scan cannot come back from here, and the user is told to open it again.
+  if (doc.scan && !notShown && !getScan(doc.scan.id)) {
+    notShown = `The scan "${doc.scan.name}" was not yet kept in this browser when the page closed, so it cannot be shown. ${SCAN_NOT_SHOWN_WORDS}`;
+  }
   useDocStore.getState().replace(doc);
   // The camera is session state, not kept: frame the restored scan (or drawing) in the current viewport.
   fitViewToDoc(doc);

@@ -237,6 +237,31 @@ describe('the write-ahead journal', () => {
     expect(useDocStore.getState().doc.title).toBe('Later in IndexedDB');
   });
 
+  it('a journal entry whose scan never reached IndexedDB comes back with the lines, and says to open the scan again', async () => {
+    const { writeJournal, nextStamp } = await import('../../src/state/autosaveJournal');
+    // The page went away straight after a scan was opened and an edit made: only the journal has the document.
+    const doc = setProjectInfo({ ...sampleDoc(), scan: { ...scanRef, id: 'scan-not-kept' } }, { title: 'Scan opened just before' });
+    expect(writeJournal(doc, true, nextStamp())).toBe(true);
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Scan opened just before');
+    expect(useDocStore.getState().doc.scan?.id).toBe('scan-not-kept');
+    const message = useSessionStore.getState().message;
+    expect(message?.kind).toBe('error');
+    expect(message?.text).toContain('The scan "sheet.tif" was not yet kept in this browser');
+    expect(message?.text).toContain('open the image they were digitised on again (Open scan…)');
+  });
+
+  it('a journal entry newer than IndexedDB brings back the scan IndexedDB kept for it', async () => {
+    const { writeJournal, nextStamp } = await import('../../src/state/autosaveJournal');
+    decodeScan.mockResolvedValue(decodedAt(500, 250));
+    await keep();
+    expect(writeJournal(setProjectInfo({ ...sampleDoc(), scan: scanRef }, { title: 'Edited after the scan was kept' }), true, nextStamp())).toBe(true);
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Edited after the scan was kept');
+    expect(getScan(scanRef.id)?.bitmap).not.toBeNull();
+    expect(useSessionStore.getState().message).toBeNull();
+  });
+
   it('a document too large for the journal clears it, so an old entry cannot win', async () => {
     const { writeJournal, readJournal, nextStamp, JOURNAL_MAX_CHARS } = await import('../../src/state/autosaveJournal');
     expect(writeJournal(sampleDoc(), true, nextStamp())).toBe(true);
