@@ -1,7 +1,8 @@
 // Memory benchmark (a script, not a test): serves a build, opens three generated 100 MP scans one after
-// another in headless Chromium, and prints after each the page's JS heap (CDP Performance.getMetrics, after a
-// forced garbage collection) and the resident memory of all the browser's processes (Linux /proc, which is
-// where decoded bitmaps and tiles live: they are not JS heap).
+// another in headless Chromium, and prints after each (its reduced views made) the page's JS heap (CDP
+// Performance.getMetrics, after a forced garbage collection), the renderer's resident and private memory and that
+// of all the browser's processes (Linux /proc, which is where decoded bitmaps and tiles live: they are not JS heap),
+// and what the scan panel says it holds (decoded scans, reduced-view tiles).
 //   BENCH_DIST=/path/to/dist BENCH_PORT=4202 npx tsx scripts/benchScanMemory.ts [--mp 100] [--count 3]
 import { spawn, type ChildProcess } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
@@ -93,7 +94,18 @@ async function main(): Promise<void> {
       await cdp.send('HeapProfiler.collectGarbage');
       const { metrics } = (await cdp.send('Performance.getMetrics')) as { metrics: { name: string; value: number }[] };
       const heap = metrics.find((m) => m.name === 'JSHeapUsedSize')!.value / 1048576;
-      console.log(`${what.padEnd(34)} JS heap ${heap.toFixed(1).padStart(7)} MB   browser processes RSS ${treeRssMb(rootPid).toFixed(0).padStart(6)} MB`);
+      const browserCdp = await browser.newBrowserCDPSession();
+      const info = (await browserCdp.send('SystemInfo.getProcessInfo')) as { processInfo: { type: string; id: number }[] };
+      await browserCdp.detach();
+      let [rss, anon] = [0, 0];
+      for (const p of info.processInfo) {
+        if (p.type !== 'renderer') continue;
+        const status = readFileSync(`/proc/${p.id}/status`, 'utf8');
+        rss += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
+        anon += Number(/RssAnon:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
+      }
+      const held = await page.getByTestId('scan-memory').evaluate((el) => `${el.getAttribute('data-decoded-scans')} decoded, ${el.getAttribute('data-reduced-tiles')} tiles`).catch(() => 'no scan decoded');
+      console.log(`${what.padEnd(34)} JS heap ${heap.toFixed(1).padStart(7)} MB   renderer RSS ${rss.toFixed(0).padStart(6)} MB (private ${anon.toFixed(0).padStart(6)} MB)   browser processes RSS ${treeRssMb(rootPid).toFixed(0).padStart(6)} MB   panel: ${held}`);
     };
     await measure('after start-up (demo)');
     const side = Math.round(Math.sqrt(MP * 1e6));
@@ -107,11 +119,13 @@ async function main(): Promise<void> {
       })()`);
       await page.getByTestId('scan-name').filter({ hasText: name }).waitFor({ timeout: 300_000 });
       await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 300_000 });
+      await page.locator('[data-testid="scan-memory"][data-building="no"]').waitFor({ timeout: 300_000 });
       await page.evaluate('window.__scanFile = null');
       // Give deferred releases a moment to run (a timer, then a frame).
       await page.evaluate('new Promise((r) => setTimeout(() => requestAnimationFrame(() => r(null)), 50))');
       await measure(`after opening scan ${i} (${MP} MP)`);
     }
+    console.log(`(${MP} MP as RGBA: ${((side * side * 4) / 1048576).toFixed(0)} MB)`);
   } finally {
     await browser.close();
     server.kill();
