@@ -7,7 +7,7 @@ import type { ImportedFault, ImportedHorizon } from '../core/model/commands/impo
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanCoordinate } from './cleanCoordinate';
 import { parseCsvRows, toCsv } from './csvText';
-import { countLines, lineCountProblem, LIMITS } from '../core/model/limits';
+import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
 const NAME_COLUMNS = ['horizon', 'name', 'horizon_name', 'horizon name', 'layer'];
@@ -28,7 +28,7 @@ function parseNumber(s: string): number | null {
 /** Returns the horizons in a CSV text (section units), each bad row listed with its line number; never throws. */
 export function parseHorizonsCsv(text: string): HorizonImport {
   const problems: RowProblem[] = [];
-  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The CSV file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The CSV file cannot be imported: ${fileTooLargeMessage(text.length, MAX_IMPORT_BYTES)}.`, problems };
   const rows = parseCsvRows(text);
   let units: LengthUnit | null = null;
   let line = 0;

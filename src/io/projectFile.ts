@@ -4,14 +4,15 @@ import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { validateSection } from '../core/model/validateSection';
 import { jsonDepthProblem } from '../core/model/jsonDepthProblem';
+import { LIMITS } from '../core/model/limits';
 import { migrateProjectFile } from '../core/model/migrations/migrateProjectFile';
 import { sectionToProjectDoc } from '../core/model/migrations/sectionToProjectDoc';
 import { PROJECT_FILE_VERSION, PROJECT_FORMAT, type ProjectFile } from '../core/model/migrations/projectFileFormat';
 import { base64ToBytes, bytesToBase64 } from './base64';
 import { checkedText, contentCheck } from '../core/model/migrations/contentCheck';
 
-/** Largest project file opened, in bytes (a 200-megapixel scan fits; base64 adds a third). */
-export const MAX_PROJECT_FILE_BYTES = 600 * 1024 * 1024;
+/** Largest project or section file opened, in bytes: the one limit of limits.ts, as on the command line (the browser cannot hold a longer text). */
+export const MAX_PROJECT_FILE_BYTES = LIMITS.fileBytes;
 
 /** Words of the note given when a project file's scan is not stored in it (the open action rewords it when the scan is still cached). */
 export const SCAN_NOT_STORED_MARK = 'is not stored in this file';

@@ -8,7 +8,7 @@ import type { ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { XZ } from '../core/model/section';
 import { MAX_IMPORT_BYTES, pushProblem, type RowProblem } from './importTypes';
 import { pathDataToPolylines, TOO_MANY_POINTS, type Pt } from './svgPathData';
-import { LIMITS, countText, tooManyMessage } from '../core/model/limits';
+import { LIMITS, countText, fileTooLargeMessage, tooManyMessage } from '../core/model/limits';
 import { applyMatrix, IDENTITY, multiply, parseTransform, type Matrix } from './svgTransform';
 import { nestedViewport, rootViewportSize, type ViewportSize } from './svgViewport';
 
@@ -79,7 +79,7 @@ const SHAPES = new Set(['path', 'polyline', 'polygon', 'line']);
  */
 export function readSvgLines(text: string): SvgRead {
   const problems: RowProblem[] = [];
-  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The SVG file is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`, problems };
+  if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The SVG file cannot be imported: ${fileTooLargeMessage(text.length, MAX_IMPORT_BYTES)}.`, problems };
   const body = text.replace(/<!--[\s\S]*?-->/g, '').replace(/<!\[CDATA\[[\s\S]*?\]\]>/g, '');
   if (!/<svg[\s>]/i.test(body)) return { ok: false, message: 'The file is not an SVG drawing (no <svg> element).', problems };
   const stack: Frame[] = [{ ctm: IDENTITY, viewport: { width: 100, height: 100 }, hidden: false }];

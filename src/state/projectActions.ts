@@ -2,6 +2,7 @@
 // be opened leaves the open project exactly as it was.
 import { emptyProjectDoc, type ProjectDoc, type ScanRef } from '../core/model/projectDoc';
 import { downloadFile, safeFileName } from '../io/downloadFile';
+import { fileTooLargeMessage } from '../core/model/limits';
 import { MAX_PROJECT_FILE_BYTES, parseProjectText, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
 import { reopenScan } from '../io/reopenScan';
 import { useDocStore } from './docStore';
@@ -77,7 +78,8 @@ export function unsavedChangesMayGo(question: string): boolean {
 export async function openProjectFile(file: File): Promise<boolean> {
   const session = useSessionStore.getState();
   if (file.size > MAX_PROJECT_FILE_BYTES) {
-    session.showMessage('error', `${file.name} is ${(file.size / 1048576).toFixed(0)} MB; the largest project file opened is ${MAX_PROJECT_FILE_BYTES / 1048576} MB.`);
+    // Refused before a byte is read, in the words the command line uses.
+    session.showMessage('error', `${file.name} cannot be opened: ${fileTooLargeMessage(file.size, MAX_PROJECT_FILE_BYTES)}. Nothing was changed.`);
     return false;
   }
   session.setBusy(`Opening ${file.name} …`);

@@ -2,6 +2,7 @@
 import { parseHorizonsCsv } from '../../io/csvHorizons';
 import { parseHorizonsGeoJson } from '../../io/geojsonHorizons';
 import { MAX_IMPORT_BYTES, type HorizonImport } from '../../io/importTypes';
+import { fileTooLargeMessage } from '../../core/model/limits';
 import { readSvgLines, type SvgRead } from '../../io/svgHorizons';
 
 export type ImportKind = 'csv' | 'geojson' | 'svg';
@@ -14,7 +15,8 @@ export type PendingImport =
 export async function readImport(kind: ImportKind, file: File): Promise<PendingImport> {
   const fail = (message: string) => ({ ok: false as const, message, problems: [] });
   if (file.size > MAX_IMPORT_BYTES) {
-    const message = `${file.name} is larger than ${MAX_IMPORT_BYTES / 1048576} MB.`;
+    // Refused before a byte is read, in the words of every size limit (limits.ts).
+    const message = `${file.name} cannot be imported: ${fileTooLargeMessage(file.size, MAX_IMPORT_BYTES)}.`;
     return kind === 'svg' ? { kind, fileName: file.name, result: fail(message) } : { kind, fileName: file.name, result: fail(message) };
   }
   let text = '';
