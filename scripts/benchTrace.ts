@@ -207,6 +207,17 @@ function distanceToPolyline(pts: [number, number][], p: [number, number]): numbe
   return best;
 }
 
+/** Returns a click moved onto the line centre as the app moves it (features of a small window around it, radius 14 px), or the click itself where no line is found. */
+function snapClick(rgba: ArrayLike<number>, w: number, h: number, raw: [number, number]): [number, number] {
+  const r = 14;
+  const x0 = Math.max(0, Math.floor(raw[0] - r - 3));
+  const y0 = Math.max(0, Math.floor(raw[1] - r - 3));
+  const x1 = Math.min(w, Math.ceil(raw[0] + r + 3));
+  const y1 = Math.min(h, Math.ceil(raw[1] + r + 3));
+  const f = pixelFeatures(rgba, w, h, 0, 0, { x0, y0, w: x1 - x0, h: y1 - y0 });
+  return snapToLine(f, raw[0], raw[1], r) ?? raw;
+}
+
 /** The demo section: each horizon traced with the fewest evenly spaced clicks on its drawn line. */
 function demo(): void {
   const png = PNG.sync.read(readFileSync('public/demo/section.png'));
@@ -221,7 +232,7 @@ function demo(): void {
   const h = png.height;
   const rgba = png.data;
   const whole = { x0: 0, y0: 0, w, h };
-  console.log(`\nThe demo section (public/demo, ${w} × ${h} px): each horizon with the fewest evenly spaced clicks (plus one at each outcrop of an eroded horizon) whose trace stays within 1.5 px of the drawn line (max: away from the ends; at ends: within 4 px of the line's first and last point)`);
+  console.log(`\nThe demo section (public/demo, ${w} × ${h} px): each horizon with the fewest evenly spaced clicks (plus one at each outcrop of an eroded horizon), each 2 px below the line and snapped, whose trace stays within 1.5 px of the drawn line (max: away from the ends; at ends: within 4 px of the line's first and last point)`);
   console.log('Horizon                    clicks  RMS (px)  max (px)  at ends (px)  vertices');
   const traced: Section['horizons'] = [];
   for (const hz of section.horizons) {
@@ -238,7 +249,8 @@ function demo(): void {
       const at = new Set<number>();
       for (let i = 0; i < n; i++) at.add(Math.round(((truth.length - 1) * i) / (n - 1)));
       for (const i of outcrops) at.add(i);
-      const anchors = [...at].sort((a, b) => a - b).map((i) => truth[i]);
+      // Each click 2 px below the line, snapped as the app snaps it (radius 14 px: 7 screen px at 50 %).
+      const anchors = [...at].sort((a, b) => a - b).map((i) => snapClick(rgba, w, h, [truth[i][0], truth[i][1] + 2]));
       const pts: [number, number][] = [anchors[0]];
       for (let i = 1; i < anchors.length; i++) {
         const win = traceWindow(anchors[i - 1], anchors[i], w, h);

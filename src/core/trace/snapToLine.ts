@@ -2,13 +2,17 @@
 // (Fukunaga & Hostetler 1975; Comaniciu & Meer 2002) of the intensity-weighted centroid within a disc
 // around the point. Across a line the centroid of a symmetric profile is its centre, along the line the
 // disc stays balanced, and at a cross it settles where the arms meet. Without ink it uses colour edges,
-// so a click on a boundary between coloured units lands on the boundary.
+// so a click on a boundary between coloured units lands on the boundary. Where ink lines meet, the click lands
+// where their centres cross (junctionCentre).
 import { EDGE_CONTRAST, INK_CONTRAST } from './centreAcross';
+import { junctionCentre } from './junctionCentre';
 import type { PixelFeatures } from './pixelFeatures';
 
 const MAX_ITERATIONS = 30;
 /** Movement (image px) below which the centroid has settled. */
 const SETTLED_PX = 1e-3;
+/** Radius (image px) of the circle on which the arms of a junction are read. */
+const JUNCTION_RING_PX = 10;
 
 function median(values: Float32Array, f: PixelFeatures, cx: number, cy: number, radius: number): { med: number; peak: number } {
   const list: number[] = [];
@@ -71,6 +75,11 @@ export function snapToLine(f: PixelFeatures, x: number, y: number, radiusPx: num
     cy += my;
     if (Math.hypot(cx - x, cy - y) > radiusPx) return null;
     if (Math.hypot(mx, my) < SETTLED_PX) break;
+  }
+  // Where lines meet, the centroid sits inside the blob of their inks: the crossing of their centres is the point.
+  if (values === f.dark) {
+    const j = junctionCentre(f, cx, cy, Math.min(radiusPx, JUNCTION_RING_PX));
+    if (j && Math.hypot(j[0] - x, j[1] - y) <= radiusPx) return j;
   }
   return [cx, cy];
 }

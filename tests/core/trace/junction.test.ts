@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { renderScan, sineCurve, type ScanSpec, type SyntheticScan } from './syntheticScan';
+import { snapToLine } from '../../../src/core/trace/snapToLine';
 import { distanceStats, featuresOf, pointsOnCurve, traceThrough } from './traceHelpers';
 
 // A horizon that ends on another drawn line (a section's border, a fault, the land surface): the stretch ends on
@@ -35,5 +36,30 @@ describe('a traced stretch that ends where its line meets another', () => {
     // Beside the border its ink fills the profile across the horizon; a centroid there lies between the two lines.
     // (Centring every path pixel up to the anchor gave 0.54 px RMS and 1.6 px at worst on this scan.)
     expect(max).toBeLessThan(0.35);
+  });
+
+  it('snaps a click beside the junction to where the two centre lines cross, not into the ink blob', () => {
+    const curve = sineCurve(100, 5, 500, 0.8);
+    const spec: ScanSpec = { w: 400, h: 200, paper, angleRad: 0, noise: 3, seed: 5, layers: [{ kind: 'ink', curve, widthPx: 2.5, colour: ink }] };
+    const scan = renderScan(spec);
+    const borderX = 60;
+    endOnBorder(scan, borderX, 4);
+    const f = featuresOf(scan);
+    // The junction is the border's centre (x = 60) on the horizon's centre line; the click is 2 px off both.
+    const truth: [number, number] = [borderX, curve.f(borderX)];
+    const q = snapToLine(f, truth[0] + 2, truth[1] + 2, 14);
+    expect(q).not.toBeNull();
+    // (The centroid of the blob lay 1.7 px inside the horizon's arm.)
+    expect(Math.hypot(q![0] - truth[0], q![1] - truth[1])).toBeLessThan(0.5);
+  });
+
+  it('still lands on the centre of a plain line away from any junction', () => {
+    const curve = sineCurve(100, 5, 500, 0.8);
+    const spec: ScanSpec = { w: 400, h: 200, paper, angleRad: 0, noise: 3, seed: 5, layers: [{ kind: 'ink', curve, widthPx: 2.5, colour: ink }] };
+    const scan = renderScan(spec);
+    const f = featuresOf(scan);
+    const q = snapToLine(f, 200, curve.f(200) + 2.5, 14);
+    expect(q).not.toBeNull();
+    expect(distanceStats(scan, curve, [q!]).max).toBeLessThan(0.2);
   });
 });
