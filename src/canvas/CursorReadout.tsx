@@ -10,6 +10,7 @@ import { screenToImage } from '../state/camera';
 import { imageToSection } from '../core/calibration/mapPoints';
 import { CutoffReadout } from './CutoffReadout';
 import { DragReadout } from './DragReadout';
+import { cachedClientRect } from './viewBoxRect';
 import { formatFixed } from '../format/formatQuantity';
 import { stepDecimals } from '../format/niceTicks';
 import './cursorReadout.css';
@@ -43,7 +44,7 @@ export function CursorReadout() {
       el.textContent = `x ${formatFixed(x, dx)}  z ${formatFixed(z, dz)} ${unit}`;
     };
     const onMove = (e: PointerEvent) => {
-      const r = box.getBoundingClientRect();
+      const r = cachedClientRect(box);
       last = { x: e.clientX - r.left, y: e.clientY - r.top };
       show();
     };

@@ -10,6 +10,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { cutoffText } from '../tools/cutoffText';
 import { nearestCutoff } from '../tools/faultHits';
+import { cachedClientRect } from './viewBoxRect';
 import './dragReadout.css';
 
 /** How near the pointer must be to a cutoff, in screen pixels; and the label's offset from the pointer. */
@@ -37,13 +38,18 @@ export function CutoffReadout() {
     const box = el?.parentElement;
     if (!el || !box) return;
     const onMove = (e: PointerEvent) => {
-      const r = box.getBoundingClientRect();
+      // Nothing to show while a button is held (a drag): no reading of the page's layout then.
+      if (e.buttons !== 0) {
+        if (!el.hidden) el.hidden = true;
+        return;
+      }
+      const r = cachedClientRect(box);
       const x = e.clientX - r.left;
       const y = e.clientY - r.top;
       const camera = useSessionStore.getState().camera;
-      const text = e.buttons === 0 ? cutoffUnder(screenToImage(camera, x, y), camera.scale) : null;
+      const text = cutoffUnder(screenToImage(camera, x, y), camera.scale);
       if (!text) {
-        el.hidden = true;
+        if (!el.hidden) el.hidden = true;
         return;
       }
       el.textContent = text;

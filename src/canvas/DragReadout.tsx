@@ -5,6 +5,7 @@ import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { dragReadoutText } from '../tools/dragReadoutText';
+import { cachedClientRect } from './viewBoxRect';
 import './dragReadout.css';
 
 /** Offset of the label from the pointer, in screen pixels (right and above, clear of the handle). */
@@ -18,7 +19,9 @@ export function DragReadout() {
     const box = el?.parentElement;
     if (!el || !box) return;
     let pointer = { x: 0, y: 0 };
+    let frame = 0;
     const show = () => {
+      frame = 0;
       const { doc, gestureStart } = useDocStore.getState();
       const { activeTool, camera } = useSessionStore.getState();
       const text = gestureStart ? dragReadoutText(doc, gestureStart, activeTool, camera.scale) : null;
@@ -28,7 +31,7 @@ export function DragReadout() {
       }
       el.textContent = text;
       el.hidden = false;
-      const r = box.getBoundingClientRect();
+      const r = cachedClientRect(box);
       const x = Math.min(Math.max(pointer.x - r.left + OFFSET_X, 4), Math.max(4, r.width - el.offsetWidth - 4));
       const y = Math.min(Math.max(pointer.y - r.top + OFFSET_Y, 4), Math.max(4, r.height - el.offsetHeight - 4));
       el.style.transform = `translate(${Math.round(x)}px, ${Math.round(y)}px)`;
@@ -39,12 +42,15 @@ export function DragReadout() {
     // Capture phase: the pointer is known before the tool's own move handler edits the document.
     window.addEventListener('pointermove', onMove, true);
     window.addEventListener('pointerdown', onMove, true);
+    // Once a frame, not once a move: its size is read after its text changes, which lays out the page, and in the
+    // frame that layout is due anyway.
     const unsubscribe = useDocStore.subscribe((s, prev) => {
-      if (s.doc !== prev.doc || s.gestureStart !== prev.gestureStart) show();
+      if ((s.doc !== prev.doc || s.gestureStart !== prev.gestureStart) && !frame) frame = requestAnimationFrame(show);
     });
     return () => {
       window.removeEventListener('pointermove', onMove, true);
       window.removeEventListener('pointerdown', onMove, true);
+      cancelAnimationFrame(frame);
       unsubscribe();
     };
   }, []);
