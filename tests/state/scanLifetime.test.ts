@@ -8,7 +8,8 @@ import { emptyProjectDoc, type ScanRef } from '../../src/core/model/projectDoc';
 const reopenScan = vi.hoisted(() => vi.fn());
 vi.mock('../../src/io/reopenScan', () => ({ reopenScan }));
 const { useDocStore } = await import('../../src/state/docStore');
-const { getScan, heldScanIds, putScan } = await import('../../src/state/scanCache');
+const { getScan, heldScanIds, putScan, scanMemoryHeld } = await import('../../src/state/scanCache');
+const { heldPyramidIds } = await import('../../src/state/scanTilesPyramid');
 const { retainScansFor } = await import('../../src/state/scanLifetime');
 
 function fakeBitmap(width = 40, height = 20) {
@@ -62,5 +63,23 @@ describe('retainScansFor(doc store state)', () => {
     expect(heldScanIds()).toEqual([]);
     expect(a.close).toHaveBeenCalledTimes(1);
     expect(b.close).toHaveBeenCalledTimes(1);
+  });
+
+  it('a new bitmap under the same id closes the old one a task later, once the view has let it go', async () => {
+    const a = openScan('scan-a');
+    const again = fakeBitmap();
+    putScan('scan-a', { bitmap: again, bytes: new Blob(['scan-a'], { type: 'image/png' }) });
+    expect(a.close).not.toHaveBeenCalled();
+    await vi.waitFor(() => expect(a.close).toHaveBeenCalledTimes(1));
+    expect(again.close).not.toHaveBeenCalled();
+    expect(getScan('scan-a')?.bitmap).toBe(again);
+  });
+
+  it('scanMemoryHeld counts the decoded scans and their RGBA bytes; a released scan holds no pyramid', () => {
+    openScan('scan-a');
+    openScan('scan-b');
+    // 40 × 20 px each; scan-a is kept as bytes only (undo can bring it back).
+    expect(scanMemoryHeld()).toMatchObject({ decoded: 1, fullBytes: 40 * 20 * 4, tiles: 0, building: false });
+    expect(heldPyramidIds()).toEqual(['scan-b']);
   });
 });
