@@ -1,4 +1,5 @@
-// Axis ticks for exported figures: 1-2-5 steps, widened until the labels fit side by side.
+// Axis ticks for the exported section's distance and elevation axes: 1-2-5 steps, widened until the labels fit
+// side by side. (The area–depth graph has its own rule, shared with the pane: format/areaDepthAxes.ts.)
 import { niceStep, stepMultiples } from '../format/niceTicks';
 
 const nextStep = (s: number): number => {

@@ -3,10 +3,9 @@
 // area at the detachment depth with the 95% Fieller interval as a bar (or the word "unbounded").
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { isExactFit } from '../core/analysis/isExactFit';
-import { axisTicks } from './axisTicks';
+import { areaDepthAxes } from '../format/areaDepthAxes';
 import { escapeXml } from './escapeXml';
-import { areaUnit, EXACT_FIT_TEXT, formatInterval, formatNumber, largestMagnitude } from '../format/formatQuantity';
-import { minOf, maxOf } from '../core/stats/minMax';
+import { EXACT_FIT_TEXT, formatInterval, formatNumber } from '../format/formatQuantity';
 
 const RED = '#b3261e';
 const BLUE = '#1f6f8b';
@@ -39,30 +38,25 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   const ad = analysis.areaDepth;
   const zd = ad && !ad.noDetachment && ad.detachmentDepth !== null && Number.isFinite(ad.detachmentDepth) ? ad.detachmentDepth : null;
   const interval = ad && zd !== null ? intervalOf(analysis) : null;
-  const unit = areaUnit(analysis.units, largestMagnitude(analysis.horizons.map((r) => r.excessArea)));
+  // The pane's axes rule (format/areaDepthAxes.ts): the same data shows the same ticks in both.
+  const axes = areaDepthAxes(analysis.horizons.map((r) => ({ area: r.excessArea, depth: r.depth })), [ad], false, analysis.units)!;
+  const unit = axes.unit;
   const areas = analysis.horizons.map((r) => r.excessArea * unit.factor);
   const depths = analysis.horizons.map((r) => r.depth);
-  const aLo = minOf(areas, 0);
-  const aMax = maxOf(areas, 0);
-  const aHi = aMax > aLo ? aMax + 0.12 * (aMax - aLo) : aLo + 1;
-  const dLo = minOf(depths, 0);
-  const deepest = maxOf(depths, zd ?? -Infinity, dLo + 1);
-  // A long interval is drawn only to three times the deepest point (an arrow says it goes on).
-  const ciHi = interval && typeof interval !== 'string' ? interval.hi : -Infinity;
-  const bottom = Math.max(deepest, Math.min(ciHi, dLo + 3 * (deepest - dLo)));
-  const dHi = bottom + 0.08 * (bottom - dLo);
+  const [aLo, aHi] = [axes.area[0] * unit.factor, axes.area[1] * unit.factor];
+  const [dLo, dHi] = axes.depth;
   const L = x + 58, R = x + w - 14, T = y + 28, B = y + h - 38;
   const px = (a: number) => L + ((a - aLo) / (aHi - aLo)) * (R - L);
   const py = (d: number) => T + ((d - dLo) / (dHi - dLo)) * (B - T);
   parts.unshift(`<defs><clipPath id="ad-clip"><rect x="${L}" y="${T}" width="${R - L}" height="${B - T}"/></clipPath></defs>`);
   parts.push(`<rect x="${L}" y="${T}" width="${R - L}" height="${B - T}" fill="#fbfbfa" stroke="#c4cbd1"/>`);
   const aLabel = (a: number) => formatNumber(a);
-  for (const a of axisTicks(aLo, aHi, R - L, aLabel, 6)) {
-    parts.push(`<line x1="${px(a)}" y1="${B}" x2="${px(a)}" y2="${B + 4}" stroke="#5b6975"/><text x="${px(a)}" y="${B + 15}" font-size="9.5" text-anchor="middle" fill="#1d2731">${aLabel(a)}</text>`);
+  for (const a of axes.areaTicks) {
+    parts.push(`<line x1="${px(a)}" y1="${B}" x2="${px(a)}" y2="${B + 4}" stroke="#5b6975"/><text x="${px(a)}" y="${B + 15}" font-size="9.5" text-anchor="middle" fill="#1d2731" class="area-tick">${aLabel(a)}</text>`);
   }
   const dLabel = (d: number) => formatNumber(d);
-  for (const d of axisTicks(dLo, dHi, B - T, () => 'xx', 6, 6)) {
-    parts.push(`<line x1="${L - 4}" y1="${py(d)}" x2="${L}" y2="${py(d)}" stroke="#5b6975"/><text x="${L - 6}" y="${py(d) + 3}" font-size="9.5" text-anchor="end" fill="#1d2731">${dLabel(d)}</text>`);
+  for (const d of axes.depthTicks) {
+    parts.push(`<line x1="${L - 4}" y1="${py(d)}" x2="${L}" y2="${py(d)}" stroke="#5b6975"/><text x="${L - 6}" y="${py(d) + 3}" font-size="9.5" text-anchor="end" fill="#1d2731" class="depth-tick">${dLabel(d)}</text>`);
   }
   parts.push(`<line x1="${px(0)}" y1="${T}" x2="${px(0)}" y2="${B}" stroke="#8a949c" stroke-dasharray="3 3"/>`);
   parts.push(`<text x="${(L + R) / 2}" y="${B + 30}" font-size="10" text-anchor="middle" fill="#1d2731">excess area (${escapeXml(unit.label)})</text>`);

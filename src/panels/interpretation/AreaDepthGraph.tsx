@@ -4,11 +4,10 @@
 import { useMemo, useRef, useState } from 'react';
 import type { TwoSegmentFit } from '../../core/analysis/twoSegmentFit';
 import type { AreaDepthSeries, GraphPoint } from './areaDepthSeries';
-import { areaUnit, EXACT_FIT_TEXT, formatArea, formatInterval, formatLength, formatNumber, largestMagnitude } from '../../format/formatQuantity';
+import { EXACT_FIT_TEXT, formatArea, formatInterval, formatLength, formatNumber } from '../../format/formatQuantity';
 import { graphDomain } from './graphDomain';
 import { linearScale } from './linearScale';
 import { linspace, meanBand } from './meanBand';
-import { niceTicks } from '../../format/niceTicks';
 import { isExactFit } from '../../core/analysis/isExactFit';
 
 export interface GraphSeriesSpec {
@@ -41,12 +40,10 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
   const [hoverPoint, setHoverPoint] = useState<GraphPoint | null>(null);
   const H = height;
   const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly, units), [series, dataOnly, units]);
-  const unit = useMemo(() => areaUnit(units, largestMagnitude(series.flatMap((s) => s.series.points.map((p) => p.area)))), [series, units]);
   if (!domain) return <p className="hint">No horizons with a regional yet.</p>;
+  const { unit, areaTicks, depthTicks } = domain;
   const xs = linearScale(domain.area, [M.left, W - M.right]);
   const ys = linearScale(domain.depth, [M.top, H - M.bottom]);
-  const areaTicks = niceTicks(domain.area[0] * unit.factor, domain.area[1] * unit.factor, 5).values;
-  const depthTicks = niceTicks(domain.depth[0], domain.depth[1], 6).values;
   const depthsAcross = linspace(domain.depth[0], domain.depth[1], 48);
   const main = series[0];
 
