@@ -12,22 +12,25 @@ export const INK_CONTRAST = 0.15;
 export const EDGE_CONTRAST = 0.15;
 const STEP = 0.5;
 
-// Reused profile buffers (a point is centred many times per preview).
-let dark = new Float64Array(0);
-let edge = new Float64Array(0);
+/** The two profiles' buffers, held by the caller (a point is centred many times per preview; one pair serves a whole run). */
+export interface ProfileScratch { dark: Float64Array; edge: Float64Array }
+
+/** Returns profile buffers long enough for profiles of half-width `half` (image px). */
+export function profileScratch(half = PROFILE_HALF_PX): ProfileScratch {
+  const n = 2 * Math.round(half / STEP) + 1;
+  return { dark: new Float64Array(n), edge: new Float64Array(n) };
+}
 
 /**
  * Returns the signed offset (image px, along the unit normal (nx, ny)) of the line centre from (x, y): the centroid of
  * the darkness above the profile's brighter end when the profile shows an ink ridge, else of the edge strength above
  * its minimum when it shows a boundary; NaN when it shows neither. The offset is at most PROFILE_HALF_PX either way.
+ * `scratch` (profileScratch(half)) holds the profiles; without one, fresh buffers are made for this call.
  */
-export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number, ny: number, half = PROFILE_HALF_PX): number {
+export function centreAcross(f: PixelFeatures, x: number, y: number, nx: number, ny: number, half = PROFILE_HALF_PX, scratch?: ProfileScratch): number {
   const m = Math.round(half / STEP);
   const n = 2 * m + 1;
-  if (dark.length < n) {
-    dark = new Float64Array(n);
-    edge = new Float64Array(n);
-  }
+  const { dark, edge } = scratch && scratch.dark.length >= n ? scratch : profileScratch(half);
   let peak = -Infinity;
   for (let s = -m; s <= m; s++) {
     const o = s * STEP;

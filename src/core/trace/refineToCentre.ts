@@ -1,7 +1,7 @@
 // Moves each pixel of a traced path onto the centre of the line it follows, across the path's local
 // direction, so the vertices sit at sub-pixel precision on the ink (or on a colour boundary) rather than on
 // the pixel grid the search works on.
-import { centreAcross } from './centreAcross';
+import { centreAcross, profileScratch, PROFILE_HALF_PX } from './centreAcross';
 import type { PixelFeatures } from './pixelFeatures';
 import { rasterCentre, type Raster } from './raster';
 
@@ -28,6 +28,8 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
   let found = 0;
   const out: [number, number][] = [];
   const size = r.w * r.h;
+  // This call's own profile buffers: nothing shared between calls, so two runs cannot overwrite each other's.
+  const profiles = profileScratch();
   for (let i = 0; i < n; i++) {
     const ahead = Math.min(n - 1, i + DIRECTION_SPAN);
     const key = path[i] * size + path[ahead];
@@ -51,7 +53,7 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
     }
     const nx = -ty / len;
     const ny = tx / len;
-    const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny);
+    const o = centreAcross(f, pts[i][0], pts[i][1], nx, ny, PROFILE_HALF_PX, profiles);
     if (Number.isNaN(o)) {
       cache?.set(key, null);
       out.push(pts[i]);
