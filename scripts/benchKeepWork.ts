@@ -6,10 +6,10 @@
 //   npx tsx scripts/benchKeepWork.ts [-- --runs 3]      BENCH_DIST=folder serves that build (else it builds one)
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type Page } from '@playwright/test';
+import { freePort, startPreview } from './previewServer';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-keep/dist';
 const CHROMIUM = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
@@ -19,29 +19,12 @@ const RUNS = runsAt >= 0 ? Math.max(1, Number(process.argv[runsAt + 1])) : 3;
 const RELOAD_DELAYS = [0, 5, 10, 25, 50, 100, 200, 450];
 const KILL_DELAYS = [0, 5, 10, 25, 50, 100, 200, 300, 500];
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
 async function until(what: string, ok: () => Promise<boolean>): Promise<void> {
   for (let i = 0; i < 300; i++) {
     if (await ok().catch(() => false)) return;
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error(`benchKeepWork: ${what} did not happen`);
-}
-
-async function serve(port: number): Promise<ChildProcess> {
-  const server = spawn(process.execPath, ['node_modules/vite/bin/vite.js', 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', '--outDir', DIST], { stdio: 'ignore' });
-  await until('the preview server', async () => (await fetch(`http://127.0.0.1:${port}`)).ok);
-  return server;
 }
 
 // In the page: rename the first horizon as a user does (type, Enter), then run `after` d ms later (0: in the same task).
@@ -116,9 +99,8 @@ function summarise(what: string, results: Map<number, boolean[]>): void {
 
 async function main(): Promise<void> {
   if (!process.env.BENCH_DIST) execFileSync('npx', ['vite', 'build', '--outDir', DIST], { stdio: 'ignore' });
-  const port = await freePort();
-  const server = await serve(port);
-  const origin = `http://127.0.0.1:${port}/`;
+  const preview = await startPreview(DIST);
+  const origin = `${preview.url}/`;
   try {
     const browser = await chromium.launch({ executablePath: CHROMIUM, args: ARGS });
     const page = await (await browser.newContext()).newPage();
@@ -142,7 +124,7 @@ async function main(): Promise<void> {
     }
     summarise('Killed browser (SIGKILL)', kills);
   } finally {
-    server.kill();
+    preview.stop();
   }
 }
 

@@ -4,13 +4,14 @@
 // edits (renaming the horizon, which makes the analysis run again), beside the same edit on the demo section (the
 // floor: what an edit costs where the check is cheap), in the same page.
 //
-//   npx tsx scripts/benchSteepLimb.ts [--vertices 20000] [--edits 3]      BENCH_DIST=folder (default dist), BENCH_PORT
-import { spawn } from 'node:child_process';
+//   npx tsx scripts/benchSteepLimb.ts [--vertices 20000] [--edits 3]      BENCH_DIST=folder (default dist), BENCH_PORT (default: a free port)
 import { chromium, type Page } from '@playwright/test';
 import type { LineSection } from '../src/core/model/section';
+import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
+import { startPreview } from './previewServer';
 
 const DIST = process.env.BENCH_DIST || 'dist';
-const PORT = Number(process.env.BENCH_PORT || 4190);
+const PORT = process.env.BENCH_PORT ? Number(process.env.BENCH_PORT) : undefined;
 const flag = (name: string, fallback: number) => {
   const i = process.argv.indexOf(`--${name}`);
   return i >= 0 ? Number(process.argv[i + 1]) : fallback;
@@ -26,16 +27,6 @@ function steepLimbSection(n: number): LineSection {
   return { units: 'm', pins: [0, 3000], horizons: [{ name: 'Steep limb', line, regional: [[-100, -1000], [3100, -1000]] }] };
 }
 
-const LONG_TASKS = `(() => {
-  window.__tasks = [];
-  new PerformanceObserver((l) => { for (const e of l.getEntries()) window.__tasks.push([e.startTime, e.duration]); }).observe({ type: 'longtask', buffered: true });
-})()`;
-const now = (page: Page) => page.evaluate('performance.now()') as Promise<number>;
-/** The longest task (ms) that ended after `since`; 0 when none passed 50 ms. */
-async function longestSince(page: Page, since: number): Promise<number> {
-  await page.evaluate('new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)))');
-  return (await page.evaluate(`window.__tasks.filter((t) => t[0] + t[1] >= ${since}).reduce((m, t) => Math.max(m, t[1]), 0)`)) as number;
-}
 /** Waits until no task is running for a few frames (the page settled), by the page's own clock. */
 const settle = (page: Page) => page.evaluate('new Promise((r) => { let k = 0; const f = () => (++k > 10 ? r() : requestAnimationFrame(f)); requestAnimationFrame(f); })');
 
@@ -56,17 +47,13 @@ async function renameEdits(page: Page, base: string): Promise<number[]> {
 }
 
 async function main(): Promise<void> {
-  const server = spawn(process.execPath, ['node_modules/vite/bin/vite.js', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--outDir', DIST], { stdio: 'ignore' });
+  const preview = await startPreview(DIST, { port: PORT });
   try {
-    for (let i = 0; i < 150; i++) {
-      if (await fetch(`http://127.0.0.1:${PORT}`).then((r) => r.ok, () => false)) break;
-      await new Promise((r) => setTimeout(r, 200));
-    }
     const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ['--no-sandbox', '--disable-gpu'] });
     const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
     page.on('dialog', (d) => void d.accept());
     await page.addInitScript(LONG_TASKS);
-    await page.goto(`http://127.0.0.1:${PORT}/`);
+    await page.goto(`${preview.url}/`);
     await page.locator('[data-startup="done"]').waitFor({ timeout: 60_000 });
     const floor = await renameEdits(page, 'Demo horizon');
     const section = steepLimbSection(VERTICES);
@@ -85,7 +72,7 @@ async function main(): Promise<void> {
     console.log(`  floor (same edit, demo):   ${floor.map((x) => x.toFixed(0)).join(', ')} ms`);
     await browser.close();
   } finally {
-    server.kill();
+    preview.stop();
   }
 }
 

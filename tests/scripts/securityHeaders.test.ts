@@ -1,9 +1,8 @@
-import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { startPreview } from '../../scripts/previewServer';
 import { PAGE_CSP, SECURITY_HEADERS } from '../../securityHeaders';
 
 // The server of `npm start` (vite preview with this project's config) sends the security headers, framing
@@ -11,45 +10,20 @@ import { PAGE_CSP, SECURITY_HEADERS } from '../../securityHeaders';
 // (frame-ancestors) and RFC 7034 (X-Frame-Options).
 const root = join(import.meta.dirname, '..', '..');
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
-async function headersOf(url: string): Promise<Headers> {
-  let last: unknown;
-  for (let i = 0; i < 150; i++) {
-    try {
-      return (await fetch(url)).headers;
-    } catch (e) {
-      last = e;
-      await new Promise((r) => setTimeout(r, 200));
-    }
-  }
-  throw last;
-}
-
 describe('security headers', () => {
   it('vite preview (npm start) sends the CSP with frame-ancestors \'none\' and X-Frame-Options DENY', async () => {
     const dist = mkdtempSync(join(tmpdir(), 'foldroot-headers-'));
     writeFileSync(join(dist, 'index.html'), '<!doctype html><title>t</title>');
-    const port = await freePort();
-    const server = spawn(process.execPath, [join(root, 'node_modules/vite/bin/vite.js'), 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', '--outDir', dist], { cwd: root, stdio: 'ignore' });
+    const preview = await startPreview(dist);
     try {
-      const h = await headersOf(`http://127.0.0.1:${port}/`);
+      const h = (await fetch(`${preview.url}/`)).headers;
       expect(h.get('content-security-policy')).toContain("frame-ancestors 'none'");
       expect(h.get('content-security-policy')).toContain("default-src 'self'");
       expect(h.get('x-frame-options')).toBe('DENY');
       expect(h.get('x-content-type-options')).toBe('nosniff');
       for (const [k, v] of Object.entries(SECURITY_HEADERS)) expect(h.get(k)).toBe(v);
     } finally {
-      server.kill();
+      preview.stop();
     }
   }, 60_000);
 
