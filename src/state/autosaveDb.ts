@@ -4,7 +4,7 @@
 // the project files' migration (migrateKeptDoc), so work kept by an older version is not lost.
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import type { ProjectDoc } from '../core/model/projectDoc';
-import { packDoc, unpackDoc } from './autosavePack';
+import { packDoc, unpackDoc } from '../io/packedDoc';
 
 const DB_NAME = 'foldroot-autosave';
 const DB_VERSION = 1;
@@ -69,7 +69,7 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
 export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean; stamp?: number }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   const tx = db.transaction([STATE, SCANS], 'readwrite');
   const finished = done(tx);
-  // Lines packed into typed arrays (autosavePack): the browser copies each as one block.
+  // Lines packed into typed arrays (io/packedDoc): the browser copies each as one block.
   tx.objectStore(STATE).put({ savedAt: snap.savedAt, stamp: snap.stamp ?? Date.parse(snap.savedAt), doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
     // Other scans are dropped, except the one of a set-aside record (setAsideKept).

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { packDoc, packPoints, unpackDoc, unpackPoints } from '../../src/state/autosavePack';
+import { packDoc, packPoints, unpackDoc, unpackPoints } from '../../src/io/packedDoc';
 import { sampleDoc } from '../io/files/sampleDoc';
 
-describe('autosavePack', () => {
+describe('packedDoc', () => {
   it('packs a line as u0, v0, u1, v1, … and unpacks it to the same pairs', () => {
     const line: [number, number][] = [[1.5, -2], [3, 4.25], [-0, 1e-300]];
     const flat = packPoints(line);

@@ -1,7 +1,9 @@
-// The document as the autosave keeps it: every line's vertices in one Float64Array ([u0, v0, u1, v1, …])
-// instead of an array of [u, v] pairs. The browser copies a typed array into IndexedDB as one block, where
-// a million small arrays took a third of a second of the page's time after every edit of a big document;
-// and a line that did not change since the last write (most of them, after most edits) is not packed again.
+// The document with every line's vertices in one Float64Array ([u0, v0, u1, v1, …]) instead of an array of
+// [u, v] pairs. Two uses: the autosave (state/autosaveDb), where the browser copies a typed array into
+// IndexedDB as one block (a million small arrays took a third of a second of the page's time after every
+// edit of a big document) and a line unchanged since the last write is not packed again; and opening a file
+// off the main thread (workers/openProject.worker.ts), where the lines cross from the worker as transferred
+// buffers, not copied pair by pair, and are unpacked a few lines a task (unpackDocInSteps).
 import type { ImagePx, ProjectDoc } from '../core/model/projectDoc';
 
 const packed = new WeakMap<readonly ImagePx[], Float64Array>();
@@ -19,10 +21,11 @@ export function packPoints(points: readonly ImagePx[]): Float64Array {
   return flat;
 }
 
-/** Returns the [u, v] pairs of a packed line (an odd last number is dropped). */
+/** Returns the [u, v] pairs of a packed line (an odd last number is dropped); packPoints of the result gives `flat` back without packing again. */
 export function unpackPoints(flat: Float64Array): ImagePx[] {
   const out = new Array<ImagePx>(flat.length >> 1);
   for (let i = 0; i < out.length; i++) out[i] = [flat[2 * i], flat[2 * i + 1]];
+  packed.set(out, flat);
   return out;
 }
 
@@ -45,14 +48,55 @@ export function packDoc(doc: ProjectDoc): PackedDoc {
   };
 }
 
+/** Returns the buffers of a packed document's lines, once each: the transfer list for postMessage (they are detached after it). */
+export function packedDocBuffers(doc: PackedDoc): ArrayBuffer[] {
+  const out = new Set<ArrayBuffer>();
+  const add = (x: unknown) => x instanceof Float64Array && out.add(x.buffer as ArrayBuffer);
+  for (const h of doc.horizons) add(h.pointsPx);
+  for (const f of doc.faults ?? []) add(f.pointsPx);
+  for (const s of doc.scenarios) for (const r of Object.values(s.regionals)) add(r);
+  return [...out];
+}
+
 /**
  * Returns a stored document with its lines unpacked, ready for the schema check: lines that are not packed
  * (kept before packing was used, or damaged) are left as they are for the check to judge.
  */
 export function unpackDoc(stored: unknown): unknown {
+  const unpack = (x: unknown) => (x instanceof Float64Array ? unpackPoints(x) : x);
+  return unpackWith(stored, unpack);
+}
+
+/**
+ * Returns what unpackDoc returns, unpacking about `perStep` vertices at a time and awaiting `step(done, total)`
+ * (vertices unpacked so far, of all) between: the caller yields to the page there, so that a document of a
+ * million vertices does not hold the main thread in one task.
+ */
+export async function unpackDocInSteps(stored: unknown, perStep: number, step: (done: number, total: number) => Promise<void>): Promise<unknown> {
+  // The lines in the order unpackWith meets them, each unpacked ahead; the second pass only picks them up.
+  const flats: Float64Array[] = [];
+  unpackWith(stored, (x) => (x instanceof Float64Array && flats.push(x), x));
+  let total = 0;
+  for (const f of flats) total += f.length >> 1;
+  const lines = new Map<Float64Array, ImagePx[]>();
+  let done = 0;
+  let sinceStep = 0;
+  for (const f of flats) {
+    if (!lines.has(f)) lines.set(f, unpackPoints(f));
+    done += f.length >> 1;
+    sinceStep += f.length >> 1;
+    if (sinceStep >= perStep) {
+      sinceStep = 0;
+      await step(done, total);
+    }
+  }
+  return unpackWith(stored, (x) => (x instanceof Float64Array ? lines.get(x) : x));
+}
+
+/** The stored document with each line replaced by `line(it)`; the shape is not checked (the schema does that). */
+function unpackWith(stored: unknown, line: (x: unknown) => unknown): unknown {
   if (typeof stored !== 'object' || stored === null) return stored;
   const d = stored as { horizons?: unknown; faults?: unknown; scenarios?: unknown };
-  const line = (x: unknown) => (x instanceof Float64Array ? unpackPoints(x) : x);
   const lines = (list: unknown[]) => list.map((h: unknown) => (typeof h === 'object' && h !== null ? { ...h, pointsPx: line((h as { pointsPx?: unknown }).pointsPx) } : h));
   return {
     ...d,
