@@ -18,6 +18,7 @@ import { joinedLinePx, type JoinedLinePx } from './joinedLinePx';
 import { pieceEndsOffFault } from '../tools/faultHits';
 import { FAULT_DASH, FAULT_WIDTH } from '../tools/faultStyle';
 import { pinLinePx } from './pinLinePx';
+import { useShapesInSteps } from './useShapesInSteps';
 
 export const FILL_ABOVE = fillRgba(EXCESS_FILL.above);
 export const FILL_BELOW = fillRgba(EXCESS_FILL.below);
@@ -249,7 +250,10 @@ const PinLines = memo(function PinLines() {
  * the long horizon lines, most of a full redraw's cost, stay as they were drawn.
  */
 export function ShapesLayer() {
-  const ids = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
+  const allIds = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
+  const lines = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.pointsPx)));
+  // A big document's horizons are drawn a few a task as it opens (useShapesInSteps), not all in one commit.
+  const ids = useShapesInSteps(allIds, lines);
   const showFills = useDocStore((s) => s.doc.settings.showFills);
   const faultIds = useDocStore(useShallow((s) => s.doc.faults.map((f) => f.id)));
   return (
