@@ -2,7 +2,7 @@
 // and prints, for each piece of work a geologist feels, what it took beside the floor for the same work measured
 // in the same page, their ratio and the longest main-thread task it caused (PerformanceObserver 'longtask').
 //
-//   npm run bench:ui [-- --scans 1,25,100,200 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
+//   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
 //                       --trace-mp 200 --no-trace --only-trace]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
@@ -10,8 +10,9 @@
 // - pan: frame intervals while panning a 1 MP and the largest scan (fitted, and at 1:1); floor: the page's idle
 //   frame interval. Twice: frame rate capped at the display's, and uncapped (a frame then takes what its work takes).
 // - open scan at each size: drop → shown; floor: createImageBitmap of the same file in the same page.
-// - export PNG (largest size) at each scan size: click → download; floor: drawing the scan at the figure's size
-//   and encoding that canvas as PNG in the same page.
+// - export PNG at each offered size (--png-sizes screen,a4-150,a4-300,a3-300) and scan size: click → download;
+//   floor: drawing the scan at the PNG's size and encoding that canvas as PNG in the same page; with the longest
+//   main-thread task and the main thread's heap peak against the PNG's pixel bytes.
 // - big documents (12 horizons × each --vertices): opening the section file, the first move of a regional drag,
 //   single and Shift (every regional) drags waiting for the numbers, a continuous drag at 60 moves a second, the
 //   autosave task after the edit; floor: one 16.7 ms frame.
@@ -31,7 +32,7 @@ import { fitCamera } from '../src/state/camera';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
 const VITE = 'node_modules/vite/bin/vite.js';
-const ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const ARGS = ['--no-sandbox', '--disable-gpu', '--enable-precise-memory-info', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 const UNCAPPED = ['--disable-frame-rate-limit', '--disable-gpu-vsync'];
 const FRAME_MS = 1000 / 60;
 
@@ -220,20 +221,39 @@ const exportFloor = (page: Page, w: number, h: number) => page.evaluate(`(async 
   return ms;
 })()`) as Promise<number>;
 
-/** Exports the figure as PNG at the largest size; returns click → download (ms) and the longest task. */
-async function exportPng(page: Page): Promise<{ ms: number; longest: number; bytes: number }> {
+/** The PNG sizes the export offers (src/io/exportFigure.ts PNG_SIZES), or those --png-sizes names. */
+const PNG_SIZES = [['screen', 1400, 990], ['a4-150', 1754, 1240], ['a4-300', 3508, 2480], ['a3-300', 4961, 3508]] as const;
+const WANTED_SIZES = flag('png-sizes')?.split(',');
+const EXPORT_SIZES = PNG_SIZES.filter(([id]) => !WANTED_SIZES || WANTED_SIZES.includes(id));
+
+/**
+ * Exports the figure as PNG at one offered size; returns click → download (ms), the longest task, and the main
+ * thread's JavaScript heap peak over its level before the export (bytes; sampled every 5 ms, after a collection).
+ */
+async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; longest: number; bytes: number; heapPeak: number }> {
   await page.getByTestId('menu-export').click();
-  await page.getByTestId('png-size').selectOption('a3-300');
+  await page.getByTestId('png-size').selectOption(sizeId);
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('HeapProfiler.collectGarbage').catch(() => undefined);
+  await cdp.detach();
+  await page.evaluate(`(() => {
+    const base = performance.memory.usedJSHeapSize;
+    window.__heap = { base, peak: base };
+    window.__heapTimer = setInterval(() => { const u = performance.memory.usedJSHeapSize; if (u > window.__heap.peak) window.__heap.peak = u; }, 5);
+  })()`);
   const t0 = await now(page);
-  const [download] = await Promise.all([page.waitForEvent('download', { timeout: 120_000 }), page.getByTestId('export-png').click()]);
+  const [download] = await Promise.all([page.waitForEvent('download', { timeout: 300_000 }), page.getByTestId('export-png').click()]);
   const ms = (await now(page)) - t0;
+  const heapPeak = (await page.evaluate(`(() => { clearInterval(window.__heapTimer); const u = performance.memory.usedJSHeapSize; return Math.max(window.__heap.peak, u) - window.__heap.base; })()`)) as number;
   const path = await download.path();
   check(path, 'the PNG export produced no file');
-  const { statSync } = await import('node:fs');
-  const bytes = statSync(path).size;
-  check(bytes > 1000, 'the PNG export produced an empty file');
+  const { readFileSync } = await import('node:fs');
+  const head = readFileSync(path).subarray(0, 24);
+  check(head.length === 24 && head.subarray(1, 4).toString('latin1') === 'PNG', 'the PNG export produced no PNG');
+  const size = PNG_SIZES.find(([id]) => id === sizeId)!;
+  check(head.readUInt32BE(16) === size[1] && head.readUInt32BE(20) === size[2], `the PNG export is not ${size[1]} × ${size[2]} px`);
   await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
-  return { ms, longest: await longestSince(page, t0), bytes };
+  return { ms, longest: await longestSince(page, t0), bytes: readFileSync(path).length, heapPeak };
 }
 
 /** The page's frame intervals (ms) over `frames` frames with nothing happening: the floor of a pan frame. */
@@ -574,9 +594,7 @@ async function scans(page: Page): Promise<void> {
     const openLongest: number[] = [];
     const reduced: number[] = [];
     const floor: number[] = [];
-    const exp: number[] = [];
-    const expLongest: number[] = [];
-    const expFloor: number[] = [];
+    const exp = EXPORT_SIZES.map(() => ({ ms: [] as number[], longest: [] as number[], floor: [] as number[], heap: [] as number[] }));
     await makeScan(page, side, `bench-${mp}mp.jpg`);
     // The heavy sizes once: a 100 MP scan takes seconds per step on a shared machine.
     const runs = mp >= 100 ? 1 : RUNS;
@@ -600,14 +618,23 @@ async function scans(page: Page): Promise<void> {
           report({ work: `renderer memory with a ${mp} MP scan open`, ms: m.rss, floor: rgba, unit: 'MB', note: `floor: its RGBA size; target ≤ 1.5× (${(1.5 * rgba).toFixed(0)} MB)${over}` });
         }
       }
-      const e = await exportPng(page);
-      exp.push(e.ms);
-      expLongest.push(e.longest);
-      expFloor.push(await exportFloor(page, 4961, 3508));
+      for (const [k, [id, w, h]] of EXPORT_SIZES.entries()) {
+        const e = await exportPng(page, id);
+        exp[k].ms.push(e.ms);
+        exp[k].longest.push(e.longest);
+        exp[k].heap.push(e.heapPeak);
+        exp[k].floor.push(await exportFloor(page, w, h));
+      }
     }
     report({ work: `open a ${mp} MP scan (${side} × ${side} JPEG)`, ms: median(open), floor: median(floor), longest: median(openLongest), note: `floor: createImageBitmap of the file; target ≤ 1.3×${runs < RUNS ? '; 1 run' : ''}` });
     report({ work: `  … and its reduced views made (${mp} MP)`, ms: median(reduced), floor: median(floor), longest: median(openLongest), note: 'after it is shown, in slices; the view zooms out smoothly from then' });
-    report({ work: `export PNG 4961 × 3508 with a ${mp} MP scan`, ms: median(exp), floor: median(expFloor), longest: median(expLongest), note: runs < RUNS ? '1 run' : '' });
+    for (const [k, [, w, h]] of EXPORT_SIZES.entries()) {
+      const pixelMb = (w * h * 4) / 1048576;
+      report({
+        work: `export PNG ${w} × ${h} with a ${mp} MP scan`, ms: median(exp[k].ms), floor: median(exp[k].floor), longest: median(exp[k].longest),
+        note: `heap peak +${(median(exp[k].heap) / 1048576).toFixed(1)} MB (target < 2 × ${pixelMb.toFixed(1)} MB pixels)${runs < RUNS ? '; 1 run' : ''}`,
+      });
+    }
     if (mp === 1 || mp === big) {
       const fitted = await panFrames(page);
       const idle = await idleFrames(page, 60);

@@ -1,10 +1,10 @@
 // The annotated section as SVG or PNG, drawn from renderSectionSvg. The SVG inlines the scan once as a
-// data: URL. The PNG is drawn in a worker from the same figure markup (io/paintFigureSvg), in three layers:
+// data: URL, written into the file piece by piece. The PNG is drawn in a worker from the same figure markup (io/paintFigureSvg), in three layers:
 // the figure below the scan, the scan region the panel shows, taken from the scan's tile pyramid at about the
 // PNG's resolution and drawn through the calibration's matrix (the scan's file never passes through a string),
 // and the figure above it; then encoded there. The figure of the open project is put together in
 // state/currentFigureSvg.
-import { FIGURE_HEIGHT, FIGURE_WIDTH, type SectionSvgParts } from './renderSectionSvg';
+import { FIGURE_HEIGHT, FIGURE_WIDTH, scanImageOpen, type SectionSvgParts } from './renderSectionSvg';
 import { figureScanRegion } from './figureScanRegion';
 import type { FigurePngReply, FigurePngRequest, FigureScanRegion, PngStep } from './figurePngProtocol';
 
@@ -27,17 +27,37 @@ function blobToDataUrl(blob: Blob): Promise<string> {
   });
 }
 
+/** Bytes of the scan read at a time for the SVG: a multiple of 3, so that the pieces' base64 joins into one. */
+const BASE64_PIECE = 3 * 1024 * 1024;
+
 /**
- * Returns a scan of the given MIME type as a data: URL the SVG can embed: its original bytes for PNG, JPEG and
- * WebP, else its decoded bitmap re-encoded as PNG (the browser cannot show TIFF or PDF in an SVG).
+ * Returns a scan of the given MIME type as the pieces of a data: URL the SVG can embed (joined, they are the URL):
+ * its original bytes for PNG, JPEG and WebP, else its decoded bitmap re-encoded as PNG (the browser cannot show
+ * TIFF or PDF in an SVG). Read a piece at a time by the browser, so a scan file of hundreds of megabytes never
+ * becomes one string (a string that long is more than the browser allows).
  */
-export async function scanDataUrl(type: string, scan: { bitmap: ImageBitmap; bytes: Blob }): Promise<string> {
-  if (/^image\/(png|jpeg|webp)$/.test(type)) return blobToDataUrl(new Blob([scan.bytes], { type }));
-  const canvas = document.createElement('canvas');
-  canvas.width = scan.bitmap.width;
-  canvas.height = scan.bitmap.height;
-  canvas.getContext('2d')?.drawImage(scan.bitmap, 0, 0);
-  return canvas.toDataURL('image/png');
+export async function scanDataUrlPieces(type: string, scan: { bitmap: ImageBitmap; bytes: Blob }): Promise<string[]> {
+  let bytes: Blob;
+  let mime = type;
+  if (/^image\/(png|jpeg|webp)$/.test(type)) bytes = scan.bytes;
+  else {
+    const canvas = new OffscreenCanvas(scan.bitmap.width, scan.bitmap.height);
+    canvas.getContext('2d')?.drawImage(scan.bitmap, 0, 0);
+    bytes = await canvas.convertToBlob({ type: 'image/png' });
+    mime = 'image/png';
+  }
+  const pieces = [`data:${mime};base64,`];
+  for (let at = 0; at < bytes.size; at += BASE64_PIECE) {
+    const url = await blobToDataUrl(bytes.slice(at, at + BASE64_PIECE, mime));
+    pieces.push(url.slice(url.indexOf(',') + 1));
+  }
+  return pieces;
+}
+
+/** Returns the figure as an SVG file: its parts with the scan embedded once from the data: URL's pieces (none: drawn without it). */
+export function sectionSvgBlob(parts: SectionSvgParts, scanUrlPieces: string[] | null): Blob {
+  const image = parts.scan && scanUrlPieces ? [scanImageOpen(parts.scan), ...scanUrlPieces, '"/>'] : [];
+  return new Blob([parts.head, parts.under, parts.panelOpen, ...image, parts.over, '</svg>'], { type: 'image/svg+xml' });
 }
 
 /**
@@ -85,6 +105,15 @@ async function scanRegion(parts: SectionSvgParts, source: FigureScanSource, widt
   return { ...base, tiles, originPx: [choice.x0 * choice.factor, choice.y0 * choice.factor], pxPerRegionPx: [choice.factor, choice.factor] };
 }
 
+/** A worker started ahead of the next export (its script loaded and compiled while the user picks a size). */
+let spare: Worker | null = null;
+const newWorker = () => new Worker(new URL('./workers/figurePng.worker.ts', import.meta.url), { type: 'module' });
+
+/** Starts the PNG worker ahead of an export (e.g. when the export menu opens); one is kept at most. */
+export function prepareFigurePng(): void {
+  spare ??= newWorker();
+}
+
 /**
  * Starts a PNG of the figure at width × height pixels, drawn and encoded in a worker (io/workers/figurePng.worker.ts):
  * its part below the scan, the scan region it shows through the figure's matrix (clipped to the panel) when there is
@@ -119,7 +148,8 @@ export function startFigurePng(parts: SectionSvgParts, scan: FigureScanSource | 
         under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>`,
         figure: { width: FIGURE_WIDTH, height: FIGURE_HEIGHT }, panel: parts.panel, width, height, scan: region,
       };
-      const w = new Worker(new URL('./workers/figurePng.worker.ts', import.meta.url), { type: 'module' });
+      const w = spare ?? newWorker();
+      spare = null;
       worker = w;
       w.onmessage = (e: MessageEvent<FigurePngReply>) => {
         const m = e.data;

@@ -198,13 +198,16 @@ function shortened(text: string, max: number): string {
   return chars.length <= max ? text : `${chars.slice(0, max - 1).join('')}…`;
 }
 
+/** Returns the scan's `<image>` element up to its `href` value (the caller writes the URL, escaped, then `"/>`): one element, one embedding. */
+export function scanImageOpen(scan: NonNullable<SectionSvgParts['scan']>): string {
+  return `<image class="scan" x="0" y="0" width="${scan.widthPx}" height="${scan.heightPx}" transform="matrix(${scan.matrix.join(' ')})" preserveAspectRatio="none" opacity="${scan.opacity}" href="`;
+}
+
 /** Returns the annotated section figure as an SVG document string (FIGURE_WIDTH × FIGURE_HEIGHT units); sections without results still show the drawing and say why. The scan, when given, is embedded once. */
 export function renderSectionSvg(input: SectionFigureInput): string {
   const parts = renderSectionSvgParts(input);
   const { scan } = parts;
-  const image = scan && input.scanDataUrl
-    ? `<image class="scan" x="0" y="0" width="${scan.widthPx}" height="${scan.heightPx}" transform="matrix(${scan.matrix.join(' ')})" preserveAspectRatio="none" opacity="${scan.opacity}" href="${escapeXml(input.scanDataUrl)}"/>`
-    : '';
+  const image = scan && input.scanDataUrl ? `${scanImageOpen(scan)}${escapeXml(input.scanDataUrl)}"/>` : '';
   return `${parts.head}${parts.under}${parts.panelOpen}${image}${parts.over}</svg>`;
 }
 

@@ -6,8 +6,8 @@ import { useSessionStore } from '../state/sessionStore';
 import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
-import { startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
-import { currentFigureParts, currentFigureSvg } from '../state/currentFigureSvg';
+import { prepareFigurePng, startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
+import { currentFigureParts, currentFigureSvgBlob } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
@@ -31,6 +31,19 @@ function exportText(text: string | null, type: string, ext: string, empty: strin
     return;
   }
   downloadFile(new Blob([text], { type }), safeFileName(doc.title, ext));
+}
+
+/** Exports the figure as SVG, the scan embedded once (written piece by piece: a scan file of any size). */
+async function exportSvg(): Promise<void> {
+  const session = useSessionStore.getState();
+  session.setBusy('SVG: embedding the scan …');
+  try {
+    downloadFile(await currentFigureSvgBlob(), safeFileName(useDocStore.getState().doc.title, '.svg'));
+  } catch (e) {
+    session.showMessage('error', `The SVG could not be written: ${e instanceof Error ? e.message : String(e)}`);
+  } finally {
+    session.setBusy(null);
+  }
 }
 
 /** The PNG export under way, if any: one at a time. */
@@ -144,7 +157,7 @@ export function FileMenu() {
         )}
       </div>
       <div className="menu">
-        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={toggle('export')} data-testid="menu-export">Export ▾</button>
+        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={() => { if (menu !== 'export') prepareFigurePng(); setMenu((m) => (m === 'export' ? null : 'export')); }} data-testid="menu-export">Export ▾</button>
         {menu === 'export' && (
           <div className="menu-list" role="menu">
             <button type="button" role="menuitem" data-testid="export-project-info" onClick={choose(() => setInfo(true))}>Title and author… <span className="hint">for the figure and report</span></button>
@@ -158,7 +171,7 @@ export function FileMenu() {
                 {[2, 3, 5, 10].map((v) => <option key={v} value={String(v)}>vertical exaggeration {v}×</option>)}
               </select>
             </label>
-            <button type="button" role="menuitem" data-testid="export-svg" onClick={choose(() => void currentFigureSvg().then((svg) => exportText(svg, 'image/svg+xml', '.svg', '')))}>Section figure as SVG</button>
+            <button type="button" role="menuitem" data-testid="export-svg" onClick={choose(() => void exportSvg())}>Section figure as SVG</button>
             <label className="menu-field">
               PNG size
               <select data-testid="png-size" value={pngSize} onChange={(e) => setPngSize(e.currentTarget.value)}>

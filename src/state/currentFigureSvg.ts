@@ -1,26 +1,20 @@
 // The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg
-// (whole, as SVG; or in parts, for a PNG that draws the decoded scan itself).
-import type { ProjectDoc } from '../core/model/projectDoc';
-import { scanDataUrl, type FigureScanSource } from '../io/exportFigure';
-import { renderSectionSvg, renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
+// (in parts: written out as the SVG file with the scan embedded once, or handed to the PNG worker with the scan region).
+import { scanDataUrlPieces, sectionSvgBlob, type FigureScanSource } from '../io/exportFigure';
+import { renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
 import { getTilePyramid, pyramidRegion } from './scanTilesPyramid';
 import { selectAnalysis } from './selectors';
 
-/** Returns the document's scan as a data: URL for the figure, or null when there is no scan or it is not shown in this browser. */
-export async function docScanDataUrl(doc: ProjectDoc): Promise<string | null> {
-  const cached = getScan(doc.scan?.id);
-  if (!doc.scan || !cached?.bitmap) return null;
-  return scanDataUrl(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes });
-}
-
-/** Returns the figure of the open project as an SVG string (today's date in the title block), at the vertical exaggeration chosen for figures. */
-export async function currentFigureSvg(): Promise<string> {
+/** Returns the figure of the open project as an SVG file, the scan embedded once piece by piece (a scan file of any size). */
+export async function currentFigureSvgBlob(): Promise<Blob> {
   const doc = useDocStore.getState().doc;
-  const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
-  return renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: await docScanDataUrl(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
+  const { parts } = currentFigureParts();
+  const cached = getScan(doc.scan?.id);
+  const pieces = doc.scan && cached?.bitmap ? await scanDataUrlPieces(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes }) : null;
+  return sectionSvgBlob(parts, pieces);
 }
 
 /** Returns the figure of the open project in its parts below and above the scan, with the decoded scan (and its tile pyramid when cut) to draw between them (null when none is shown). */

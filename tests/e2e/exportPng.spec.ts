@@ -171,3 +171,28 @@ test('a PNG export shows its progress, stops on Cancel without a download or a c
   await expect(page.getByTestId('busy')).toHaveCount(0);
   expect(pngs, 'PNG downloads: only the second export').toHaveLength(1);
 });
+
+test('the SVG embeds the scan file once, its bytes exactly, when the file is read in several pieces', async ({ page }) => {
+  // Noise does not compress: a PNG of about 4.6 MB, more than one 3 MiB piece of the SVG writer.
+  const [w, h] = [1400, 1100];
+  const png = new PNG({ width: w, height: h });
+  let seed = 7;
+  for (let i = 0; i < png.data.length; i++) {
+    seed = (seed * 1103515245 + 12345) >>> 0;
+    png.data[i] = i % 4 === 3 ? 255 : seed >>> 24;
+  }
+  const scan = PNG.sync.write(png);
+  expect(scan.length).toBeGreaterThan(2 * 3 * 1024 * 1024 * 0.7);
+  const base = sectionToProjectDoc(SECTION, 'Noise scan');
+  const doc: ProjectDoc = { ...base, scan: { id: 'noise-scan', name: 'noise.png', widthPx: w, heightPx: h, type: 'image/png' } };
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  await page.getByTestId('open-project').setInputFiles({ name: 'noise.foldroot.json', mimeType: 'application/json', buffer: Buffer.from(serializeProject(doc, { type: 'image/png', name: 'noise.png', bytes: new Uint8Array(scan) })) });
+  await expect(page.getByTestId('scan-name')).toContainText(`noise.png — ${w} × ${h} px`);
+  await page.getByTestId('menu-export').click();
+  const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');
+  const hrefs = [...svg.matchAll(/href="data:image\/png;base64,([^"]*)"/g)];
+  expect(hrefs).toHaveLength(1);
+  expect(Buffer.from(hrefs[0][1], 'base64').equals(scan)).toBe(true);
+});

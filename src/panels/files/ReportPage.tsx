@@ -4,7 +4,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { createPortal } from 'react-dom';
 import { SECTION_CAUTION } from '../../core/analysis/caution';
-import { currentFigureSvg } from '../../state/currentFigureSvg';
+import { currentFigureSvgBlob } from '../../state/currentFigureSvg';
 import { formatInterval, formatNumber, formatR2 } from '../../format/formatQuantity';
 import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
 import { renderAreaDepthSvg } from '../../io/renderAreaDepthSvg';
@@ -19,8 +19,8 @@ import { ReportHorizonTable } from './ReportHorizonTable';
 import { regimeText } from '../interpretation/regimeText';
 import { tableAreaUnit } from '../../format/horizonColumns';
 
-function useSvgUrl(svg: string | null): string | null {
-  const url = useMemo(() => (svg ? URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' })) : null), [svg]);
+function useSvgUrl(svg: string | Blob | null): string | null {
+  const url = useMemo(() => (svg ? URL.createObjectURL(typeof svg === 'string' ? new Blob([svg], { type: 'image/svg+xml' }) : svg) : null), [svg]);
   useEffect(() => () => { if (url) URL.revokeObjectURL(url); }, [url]);
   return url;
 }
@@ -37,10 +37,11 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
   const doc = useDocStore((s) => s.doc);
   const analysis = selectAnalysis(doc);
   const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
-  const [figure, setFigure] = useState<string | null>(null);
+  const [figure, setFigure] = useState<Blob | null>(null);
   useEffect(() => {
     let live = true;
-    void currentFigureSvg().then((svg) => live && setFigure(svg));
+    // The figure as a file (the scan embedded piece by piece): a scan of any size, never one long string.
+    void currentFigureSvgBlob().then((svg) => live && setFigure(svg));
     return () => { live = false; };
   }, [doc]);
   const figureUrl = useSvgUrl(figure);
