@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { packDoc, packPoints, unpackDoc, unpackPoints } from '../../src/io/packedDoc';
-import { sampleDoc } from '../io/files/sampleDoc';
+import { sampleDoc } from './sampleDoc';
 
 describe('packedDoc', () => {
   it('packs a line as u0, v0, u1, v1, … and unpacks it to the same pairs', () => {

@@ -7,7 +7,7 @@ import { parseProjectText, serializeProject } from '../../src/io/projectFile';
 import { readProjectFile, type OpenProgress } from '../../src/io/readProjectFile';
 import { packPoints } from '../../src/io/packedDoc';
 import { useDocStore } from '../../src/state/docStore';
-import { sampleDoc } from './files/sampleDoc';
+import { sampleDoc } from './sampleDoc';
 
 const { openProjectFile } = await import('../../src/state/projectActions');
 

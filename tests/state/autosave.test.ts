@@ -9,7 +9,7 @@ import { readFileSync } from 'node:fs';
 import { migrateProjectFile } from '../../src/core/model/migrations/migrateProjectFile';
 import { SCHEMA_VERSION } from '../../src/core/model/projectDoc';
 import { useDocStore } from '../../src/state/docStore';
-import { sampleDoc } from '../io/files/sampleDoc';
+import { sampleDoc } from '../io/sampleDoc';
 
 // Decoding needs a browser (createImageBitmap, workers, pdf.js); here it answers as the test says.
 const decodeScan = vi.hoisted(() => vi.fn(async (..._args: unknown[]): Promise<unknown> => ({ ok: false, message: 'cannot decode in tests' })));

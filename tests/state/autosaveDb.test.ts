@@ -1,7 +1,7 @@
 import { IDBFactory } from 'fake-indexeddb';
 import { describe, expect, it } from 'vitest';
 import { clearSnapshot, isQuotaError, openAutosaveDb, readSnapshot, writeSnapshot } from '../../src/state/autosaveDb';
-import { sampleDoc } from '../io/files/sampleDoc';
+import { sampleDoc } from '../io/sampleDoc';
 
 describe('autosave database (fake-indexeddb)', () => {
   it('returns null before anything is kept', async () => {

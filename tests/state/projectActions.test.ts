@@ -6,7 +6,7 @@ import type { DecodeResult } from '../../src/io/decodeScan';
 import type { AskScanChoice } from '../../src/io/decodeScanChoice';
 import { serializeProject } from '../../src/io/projectFile';
 import { useDocStore } from '../../src/state/docStore';
-import { SAMPLE_SECTION, sampleDoc } from '../io/files/sampleDoc';
+import { SAMPLE_SECTION, sampleDoc } from '../io/sampleDoc';
 
 // Decoding needs a browser (createImageBitmap, workers, pdf.js); here it answers as the test says.
 const decodeScan = vi.hoisted(() => vi.fn(async (..._args: unknown[]): Promise<unknown> => ({ ok: false, message: 'cannot decode in tests' })));

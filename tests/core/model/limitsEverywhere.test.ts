@@ -12,7 +12,7 @@ import { LIMITS } from '../../../src/core/model/limits';
 import { checkProjectDoc } from '../../../src/core/model/projectSchema';
 import { validateSection } from '../../../src/core/model/validateSection';
 import { parseProjectText, serializeProject } from '../../../src/io/projectFile';
-import { sampleDoc, SAMPLE_SECTION } from '../../io/files/sampleDoc';
+import { sampleDoc, SAMPLE_SECTION } from '../../io/sampleDoc';
 
 const long = (n: number) => 'N'.repeat(n);
 

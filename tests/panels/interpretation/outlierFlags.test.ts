@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { leastSquares } from '../../../src/core/stats/leastSquares';
+import type { GraphPoint } from '../../../src/panels/interpretation/areaDepthSeries';
+import { outlierFlags } from '../../../src/panels/interpretation/outlierFlags';
+
+// On the synthetic line A = 1000·(3000 − h) of docs/method.md §Check values (our own example), with one point moved off.
+function points(offsets: number[], projected: number[] = []): GraphPoint[] {
+  return [500, 1000, 1500, 2000, 2500, 2800].map((h, i) => ({
+    id: `h${i}`, name: `H${i}`, depth: h, area: 1000 * (3000 - h) + (offsets[i] ?? 0), included: true, residual: null,
+    projectedAreaShare: projected[i] ?? 0,
+  }));
+}
+
+function flags(p: GraphPoint[]) {
+  return outlierFlags(p, leastSquares(p.map((q) => q.depth), p.map((q) => q.area)));
+}
+
+describe('outlierFlags(points, fit)', () => {
+  it('flags nothing for points on the line (up to tiny scatter)', () => {
+    expect(flags(points([1000, -800, 500, -900, 700, -500]))).toEqual([]);
+  });
+
+  it('flags a shallow point with too little area as possible growth strata or erosion', () => {
+    const f = flags(points([-700_000]));
+    const worst = [...f].sort((a, b) => Math.abs(b.residual) - Math.abs(a.residual))[0];
+    expect(worst.id).toBe('h0');
+    expect(worst.residual).toBeLessThan(0);
+    expect(worst.reasons.join(' ')).toMatch(/growth strata/);
+    expect(worst.reasons.join(' ')).toMatch(/erosion/);
+    expect(f.map((x) => x.id)).not.toContain('h3');
+  });
+
+  it('flags a shallow point with too much area as a possible upper detachment', () => {
+    const f = flags(points([600_000]));
+    expect(f.map((x) => x.id)).toContain('h0');
+    expect(f.find((x) => x.id === 'h0')!.reasons.join(' ')).toMatch(/upper detachment/);
+  });
+
+  it('offers thickness change (not growth strata) for a deep point, and erosion when it is projected', () => {
+    const f = flags(points([0, 0, 0, 0, -500_000], [0, 0, 0, 0, 0.4]));
+    const deep = f.find((x) => x.id === 'h4')!;
+    expect(deep.reasons.join(' ')).toMatch(/thickness change/);
+    expect(deep.reasons.join(' ')).toMatch(/erosion/);
+    expect(deep.reasons.join(' ')).not.toMatch(/growth/);
+  });
+
+  it('ignores excluded points and fits with fewer than three points', () => {
+    const p = points([-700_000]);
+    p[0].included = false;
+    const inc = p.filter((q) => q.included);
+    expect(outlierFlags(p, leastSquares(inc.map((q) => q.depth), inc.map((q) => q.area)))).toEqual([]);
+    const two = points([]).slice(0, 2);
+    expect(outlierFlags(two, leastSquares([500, 1000], [2.5e6, 2e6]))).toEqual([]);
+  });
+});
