@@ -22,13 +22,14 @@
 //   floor: one 16.7 ms frame. Then the renderer's memory with the scan open, before tracing and after the
 //   stretch is placed: the difference is what tracing holds.
 // The script fails loudly (exit 1) when what it meant to open is not open or a measurement saw nothing.
-import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
+import { execFileSync } from 'node:child_process';
 import { chromium, type Page } from '@playwright/test';
 import { forwardSection } from '../src/core/forward/forwardSection';
 import { sectionToProjectDoc } from '../src/core/model/migrations/sectionToProjectDoc';
 import type { LineSection as Section } from '../src/core/model/section';
 import { fitCamera } from '../src/state/camera';
+import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
+import { startPreview } from './previewServer';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
 const VITE = 'node_modules/vite/bin/vite.js';
@@ -84,46 +85,7 @@ function printRow(r: Row): void {
   console.log(`  ${r.work.padEnd(52)} ${r.ms.toFixed(1).padStart(9)} ${unit}   floor ${r.floor.toFixed(1).padStart(8)} ${unit}   ${ratio.padStart(7)}${longest}${r.note ? `   ${r.note}` : ''}`);
 }
 
-/** Returns a port free on this machine now (others may be serving their own builds). */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
-async function serve(port: number): Promise<ChildProcess> {
-  const server = spawn(process.execPath, [VITE, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', '--outDir', DIST], { stdio: 'ignore' });
-  for (let i = 0; i < 100; i++) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${port}`)).ok) return server;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  server.kill();
-  throw new Error(`The preview server did not start on port ${port}`);
-}
-
-// In the page before the app: every long task (over 50 ms) with its start, kept for the whole run. Strings, not
-// functions, throughout: tsx would wrap inner functions in a helper that does not exist in the page.
-const LONG_TASKS = `(() => {
-  window.__tasks = [];
-  new PerformanceObserver((l) => { for (const e of l.getEntries()) window.__tasks.push([e.startTime, e.duration]); }).observe({ type: 'longtask', buffered: true });
-})()`;
-
-const now = (page: Page) => page.evaluate('performance.now()') as Promise<number>;
-/** The longest main-thread task that started at or after `since` (page ms); 0 when none passed 50 ms. */
-async function longestSince(page: Page, since: number): Promise<number> {
-  // A long task is reported once it ends; give the observer a frame to deliver it.
-  await page.evaluate('new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)))');
-  return (await page.evaluate(`window.__tasks.filter((t) => t[0] + t[1] >= ${since}).reduce((m, t) => Math.max(m, t[1]), 0)`)) as number;
-}
+// Long tasks: the page keeps every task over 50 ms from before the app loads (scripts/pageTasks.ts).
 
 /**
  * Memory (MB) of the browser's renderer processes (their ids from the browser, sizes from Linux /proc), after a
@@ -814,13 +776,12 @@ async function main(): Promise<void> {
     console.log(`Building into ${DIST} …`);
     execFileSync(process.execPath, [VITE, 'build', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'], { stdio: 'inherit' });
   }
-  const port = Number(process.env.BENCH_PORT) || (await freePort());
-  const server = await serve(port);
+  const preview = await startPreview(DIST, { port: Number(process.env.BENCH_PORT) || undefined });
   try {
-    await run(`http://127.0.0.1:${port}`, false);
-    if (WITH_UNCAPPED && !ONLY_TRACE) await run(`http://127.0.0.1:${port}`, true);
+    await run(preview.url, false);
+    if (WITH_UNCAPPED && !ONLY_TRACE) await run(preview.url, true);
   } finally {
-    server.kill();
+    preview.stop();
   }
   console.log(`\n${rows.length} rows measured.`);
   if (WITH_TRACE && !ONLY_TRACE) execFileSync(process.execPath, ['--import', 'tsx', 'scripts/benchTrace.ts'], { stdio: 'inherit' });
