@@ -1,6 +1,7 @@
 import type { LineFit } from '../../core/stats/leastSquares';
 import type { GraphPoint } from './areaDepthSeries';
 import { maxOf } from '../../core/stats/minMax';
+import { isExactFit } from '../../core/analysis/isExactFit';
 
 // Points far off the area–depth line, with the usual geological reasons (Epard & Groshong 1993;
 // Groshong 2006 ch. 11, as summarised in docs/method.md §Non-linear graphs). "Far" is an internally
@@ -15,9 +16,12 @@ const EROSION = 'erosion: part of the crest may be missing or projected too low;
 const UPPER = 'upper detachment: horizons above a second, shallower detachment carry extra area; try the second segment';
 const THICKNESS = 'thickness change: a unit that thins or thickens across the fold (e.g. ductile flow into the core) moves its area off the line';
 
-/** Included points flagged as far off the line, each with its likely reasons in plain words; none when the fit has fewer than 3 points. */
+/**
+ * Included points flagged as far off the line, each with its likely reasons in plain words; none when the fit has
+ * fewer than 3 points, or is exact (its residuals are rounding, whose studentized values mean nothing).
+ */
 export function outlierFlags(points: readonly GraphPoint[], fit: LineFit | null): OutlierFlag[] {
-  if (!fit || fit.n < 3) return [];
+  if (!fit || fit.n < 3 || isExactFit(fit)) return [];
   const inc = points.filter((p) => p.included);
   const largest = maxOf(inc.map((p) => Math.abs(p.area)));
   const byDepth = [...inc].sort((a, b) => a.depth - b.depth);

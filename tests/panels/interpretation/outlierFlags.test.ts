@@ -16,6 +16,22 @@ function flags(p: GraphPoint[]) {
 }
 
 describe('outlierFlags(points, fit)', () => {
+  it('flags nothing on an exact line whose residuals are only rounding (r² = 1 to 12 digits)', () => {
+    // Twelve points of A = 1000·(3000 − h) read back with rounding-sized offsets (about 1e-15 of the areas), one of
+    // them larger: its studentized residual is about 3, so without the exact-fit rule it would be called far off.
+    const p: GraphPoint[] = Array.from({ length: 12 }, (_, i) => {
+      const h = 300 + 200 * i;
+      const noise = i === 5 ? 4e-9 : (i % 2 ? 1 : -1) * 1e-10;
+      return { id: `h${i}`, name: `H${i}`, depth: h, area: 1000 * (3000 - h) + noise, included: true, residual: null, projectedAreaShare: 0 };
+    });
+    const fit = leastSquares(p.map((q) => q.depth), p.map((q) => q.area));
+    if (!fit) throw new Error('the fit needs two depths');
+    const k = 5;
+    const leverage = 1 / fit.n + ((p[k].depth - fit.xMean) ** 2) / fit.sxx;
+    expect(Math.abs(fit.residuals[k] / (fit.s * Math.sqrt(1 - leverage)))).toBeGreaterThan(2);
+    expect(outlierFlags(p, fit)).toEqual([]);
+  });
+
   it('flags nothing for points on the line (up to tiny scatter)', () => {
     expect(flags(points([1000, -800, 500, -900, 700, -500]))).toEqual([]);
   });
