@@ -2,9 +2,11 @@
 // browser's rendering of the exported SVG (the reference: Chromium's own SVG renderer, drawn on the page's
 // canvas); while it runs it shows its progress and a Cancel button that stops it without a download and
 // without touching the project; run again, it downloads a PNG of the asked size.
-import { readFileSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { PNG } from 'pngjs';
+import { calibratedProject } from './calibratedProject';
+import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { serializeProject } from '../../src/io/projectFile';
@@ -42,22 +44,10 @@ function syntheticScan(): Buffer {
 }
 
 function project(): string {
-  const base = sectionToProjectDoc(SECTION, 'Worker figure');
-  const corners: XZ[] = [[-200, 1000], [1300, 1000], [-200, -100]];
-  const doc: ProjectDoc = {
-    ...base,
-    scan: { id: 'synthetic-scan', name: 'synthetic.png', widthPx: W, heightPx: H, type: 'image/png' },
-    calibration: { kind: 'affine', points: corners.map((q) => { const [u, v] = toPx(q); return { u, v, x: q[0], z: q[1] }; }) },
-    horizons: base.horizons.map((h, i) => ({ ...h, pointsPx: SECTION.horizons[i].line!.map(toPx) })),
-    scenarios: [{ ...base.scenarios[0], pinsPx: [toPx([0, 300]), toPx([1000, 450])], regionals: Object.fromEntries(base.horizons.map((h, i) => [h.id, SECTION.horizons[i].regional.map(toPx)])) }],
-  };
-  return serializeProject(doc, { type: 'image/png', name: 'synthetic.png', bytes: new Uint8Array(syntheticScan()) });
+  const scan = { id: 'synthetic-scan', name: 'synthetic.png', widthPx: W, heightPx: H, bytes: new Uint8Array(syntheticScan()) };
+  return calibratedProject(SECTION, 'Worker figure', scan, toPx, [[-200, 1000], [1300, 1000], [-200, -100]], [[0, 300], [1000, 450]]);
 }
 
-async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
-  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
-  return readFileSync((await dl.path())!);
-}
 
 async function openProject(page: Page): Promise<void> {
   page.on('dialog', (d) => void d.accept());

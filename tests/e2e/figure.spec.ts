@@ -1,14 +1,13 @@
 // The exported figure of a rotated scan is drawn in section coordinates: the scan's own vertical
 // lines (drawn on it along the pins) come out vertical in the PNG, the pins and detachment are
 // vertical and horizontal in the SVG, and the chosen true scale is stated on the figure.
-import { readFileSync, writeFileSync } from 'node:fs';
-import type { Page } from '@playwright/test';
+import { writeFileSync } from 'node:fs';
 import { PNG } from 'pngjs';
+import { calibratedProject } from './calibratedProject';
+import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
-import { serializeProject } from '../../src/io/projectFile';
-import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
-import type { ImagePx, ProjectDoc } from '../../src/core/model/projectDoc';
+import type { ImagePx } from '../../src/core/model/projectDoc';
 import type { Section, XZ } from '../../src/core/model/section';
 
 const SECTION: Section = {
@@ -47,22 +46,11 @@ function rotatedScan(): Buffer {
 }
 
 function rotatedProject(): string {
-  const base = sectionToProjectDoc(SECTION, 'Turned scan');
+  const scan = { id: 'turned-scan', name: 'turned.png', widthPx: W, heightPx: H, bytes: new Uint8Array(rotatedScan()) };
   const corners: XZ[] = [[-200, 1000], [1300, 1000], [-200, -300], [1300, -300], [500, 400], [0, 0]];
-  const doc: ProjectDoc = {
-    ...base,
-    scan: { id: 'turned-scan', name: 'turned.png', widthPx: W, heightPx: H, type: 'image/png' },
-    calibration: { kind: 'affine', points: corners.map((q) => { const [u, v] = toPx(q); return { u, v, x: q[0], z: q[1] }; }) },
-    horizons: base.horizons.map((h, i) => ({ ...h, pointsPx: SECTION.horizons[i].line!.map(toPx) })),
-    scenarios: [{ ...base.scenarios[0], pinsPx: [toPx([0, 300]), toPx([1000, 450])], regionals: Object.fromEntries(base.horizons.map((h, i) => [h.id, SECTION.horizons[i].regional.map(toPx)])) }],
-  };
-  return serializeProject(doc, { type: 'image/png', name: 'turned.png', bytes: new Uint8Array(rotatedScan()) });
+  return calibratedProject(SECTION, 'Turned scan', scan, toPx, corners, [[0, 300], [1000, 450]]);
 }
 
-async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
-  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
-  return readFileSync((await dl.path())!);
-}
 
 test('a rotated scan exports at true scale with vertical pins, a level detachment and true axes', async ({ page }) => {
   await gotoStarted(page);

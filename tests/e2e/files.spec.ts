@@ -3,6 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { PNG } from 'pngjs';
 import fc from 'fast-check';
+import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { gradientPng } from './pngFixture';
@@ -33,10 +34,6 @@ async function ready(page: Page, fresh = false): Promise<void> {
   }
 }
 
-async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
-  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
-  return readFileSync((await dl.path())!);
-}
 
 async function saveProject(page: Page): Promise<{ doc: ProjectDoc; scan: { dataBase64: string } | null }> {
   const bytes = await download(page, async () => {

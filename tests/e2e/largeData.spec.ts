@@ -1,7 +1,7 @@
 // Large data through the real file inputs: the page keeps showing the project, exports still work and
 // the limits answer with a message. Expected counts follow from the generated files.
-import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
+import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 
@@ -32,10 +32,6 @@ function horizonNames(page: Page): Promise<string[]> {
   return page.getByTestId('horizon-list').getByLabel('Horizon name').evaluateAll((els) => els.map((e) => (e as HTMLInputElement).value));
 }
 
-async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
-  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
-  return readFileSync((await dl.path())!);
-}
 
 test('a horizon of 150,000 vertices opens, exports as SVG and PNG, and is drawn in the report figure', async ({ page }) => {
   test.setTimeout(120_000);

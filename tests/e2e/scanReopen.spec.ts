@@ -1,9 +1,9 @@
 // Reopening a saved scan: a project file opened again, and the work kept in the browser restored after a
 // reload, bring a PDF page back at the page and pixel size its lines were digitised on, without asking; a
 // scan that no longer decodes to that size is not shown under the lines, and the user is told why.
-import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { PNG } from 'pngjs';
+import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { viewPixel } from './canvasPixels';
@@ -60,10 +60,6 @@ async function expectRectangleInView(page: Page): Promise<void> {
   }
 }
 
-async function download(page: Page, click: () => Promise<void>): Promise<Buffer> {
-  const [dl] = await Promise.all([page.waitForEvent('download'), click()]);
-  return readFileSync((await dl.path())!);
-}
 
 async function saveProject(page: Page): Promise<SavedFile> {
   const bytes = await download(page, async () => {
