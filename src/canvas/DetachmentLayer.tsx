@@ -5,6 +5,7 @@ import { Label, Layer, Line, Tag, Text } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { selectLiveAnalysis } from '../state/selectors';
+import { useCrossingChecks } from '../state/crossingChecks';
 import { sectionToImage } from '../core/calibration/mapPoints';
 import { EXACT_FIT_TEXT, formatInterval, formatLength } from '../format/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
@@ -20,6 +21,8 @@ export function DetachmentLayer() {
   const doc = useDocStore((s) => s.doc);
   const gestureStart = useDocStore((s) => s.gestureStart);
   const scale = useSessionStore((s) => s.camera.scale);
+  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
+  const answered = useCrossingChecks((s) => s.answered);
   const shapes = useMemo(() => {
     if (!doc.settings.showDetachment) return null;
     const { docSection, outcome } = selectLiveAnalysis(doc, gestureStart);
@@ -42,7 +45,8 @@ export function DetachmentLayer() {
       // covers the least of the section there; only the faint 95% band runs under it.
       anchor: sectionToImage(docSection.fit, trace.atLeftPin),
     };
-  }, [doc, gestureStart]);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- `answered` stands for the verdicts selectLiveAnalysis reads
+  }, [doc, gestureStart, answered]);
   if (!shapes) return <Layer listening={false} />;
   const k = 1 / scale;
   return (

@@ -13,6 +13,7 @@ import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
 import { toCsv } from './csvText';
 import { columnsOf, csvHeader, dataCell } from '../format/horizonColumns';
 import type { UncertaintyReport } from './uncertaintyReport';
+import { leftOutText } from '../format/leftOutText';
 
 /** Returns every horizon of the document in section units, a horizon cut by faults with its pieces (empty when the document has no usable calibration). */
 export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
@@ -57,7 +58,9 @@ export function sectionFileText(analysis: DocAnalysis): { ok: true; text: string
   if (!ds.ok) return { ok: false, message: `No section file yet: ${ds.message}` };
   if (ds.section.horizons.length === 0) return { ok: false, message: 'No section file yet: no horizon has a regional.' };
   // validateSection (the command line's reader) ignores keys it does not know, so the caution rides along.
-  return { ok: true, text: JSON.stringify({ ...cleanSection(ds.section), caution: SECTION_CAUTION }, null, 1) };
+  // The horizons left out of the analysis are not in it; the file says which and why.
+  const leftOut = analysis.leftOut.length ? { leftOut: analysis.leftOut.map((h) => ({ name: h.name, reason: h.reason })) } : {};
+  return { ok: true, text: JSON.stringify({ ...cleanSection(ds.section), ...leftOut, caution: SECTION_CAUTION }, null, 1) };
 }
 
 // Ten significant digits, and a magnitude below 1e-9 (rounding residue of an exact fit) written as 0, never "-0".
@@ -92,6 +95,8 @@ export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: 
     if (uncertainty.status === 'none') rows.push(['# monte carlo', uncertainty.lines[0]]);
     for (const [name, v] of uncertainty.rows) rows.push([name, typeof v === 'number' ? r(v) : v, null, null]);
   }
+  // A horizon left out for a problem of its own (a line that crosses itself, a regional short of a pin), as the pane says.
+  for (const h of analysis.leftOut) rows.push(['# left out', leftOutText(h)]);
   for (const n of a.notes) rows.push(['# note', n]);
   rows.push(['# caution', SECTION_CAUTION]);
   return toCsv(rows);

@@ -6,6 +6,7 @@
 // user string is escaped (escapeXml), so a hostile name stays text.
 import { piecesOfPoints } from '../core/model/piecesOfPoints';
 import { SECTION_CAUTION } from '../core/analysis/caution';
+import { leftOutText } from '../format/leftOutText';
 import { imageToSection } from '../core/calibration/mapPoints';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { toCoordinateArrays } from '../core/geometry/toCoordinateArrays';
@@ -389,6 +390,14 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     out.push(`<text class="vertical-exaggeration" x="${PANEL.x + w + 60}" y="${by + 8}" font-size="12">${veText}${doc.scan ? '' : ' · drawn without a scan'}</text>`);
     out.push(`<text x="${PANEL.x + PANEL.w}" y="${by + 8}" font-size="12" text-anchor="end">Distance along the section x (${u})</text>`);
   } else out.push(`<text x="${PANEL.x}" y="${by + 8}" font-size="12">Not calibrated: no scale, no vertical exaggeration.</text>`);
+  // Horizons left out of the analysis for a problem of their own (a line that crosses itself), as the pane names them.
+  if (analysis.leftOut.length > 0) {
+    const text = `Left out of the analysis: ${analysis.leftOut.map(leftOutText).join('; ')}`;
+    const lines = wrap(text, 150);
+    // Two lines at most above the caution; a longer list says it goes on (the pane and the report give it all).
+    const shown = lines.length > 2 ? [lines[0], `${lines[1]} …`] : lines;
+    shown.forEach((line, i) => out.push(`<text class="left-out" x="${PANEL.x}" y="${by + 40 + i * 15}" font-size="11.5" fill="#8a2b00">${escapeXml(line)}</text>`));
+  }
   const legend = legendRows(doc, drawn, 1030, PANEL.y);
   out.push(legend.svg);
   const insetTop = legend.bottom + 14;

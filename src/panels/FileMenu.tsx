@@ -1,6 +1,7 @@
 // Project save/open, imports and exports (files and reports), and the autosave banners.
 import { useEffect, useRef, useState } from 'react';
 import { selectAnalysis } from '../state/selectors';
+import { afterLinesChecked } from '../state/linesChecked';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { useTabStore } from '../state/tabLock';
@@ -35,6 +36,7 @@ function exportText(text: string | null, type: string, ext: string, empty: strin
 
 /** Exports the figure as SVG, the scan embedded once (written piece by piece: a scan file of any size). */
 async function exportSvg(): Promise<void> {
+  if (!(await afterLinesChecked('The SVG'))) return;
   const session = useSessionStore.getState();
   session.setBusy('SVG: embedding the scan …');
   try {
@@ -50,6 +52,8 @@ async function exportSvg(): Promise<void> {
 let pngJob: FigurePngJob | null = null;
 
 async function exportPng(sizeId: string): Promise<void> {
+  if (pngJob) return;
+  if (!(await afterLinesChecked('The PNG'))) return;
   if (pngJob) return;
   const size = PNG_SIZES.find((s) => s.id === sizeId) ?? PNG_SIZES[0];
   const session = useSessionStore.getState();
@@ -69,6 +73,20 @@ async function exportPng(sizeId: string): Promise<void> {
     pngJob = null;
     session.setBusy(null);
   }
+}
+
+/** The results table (CSV) of the active scenario, once its long lines are checked. */
+async function exportResultsCsv(): Promise<void> {
+  if (!(await afterLinesChecked('The results table'))) return;
+  const { doc } = useDocStore.getState();
+  exportText(resultsCsv(doc, selectAnalysis(doc), currentUncertainty(doc)), 'text/csv', '-results.csv', 'No results to export yet: place the pins and draw regionals for at least one horizon.');
+}
+
+/** The section file for the command line (the horizons the analysis keeps, and which it leaves out), once the long lines are checked. */
+async function exportSectionFile(): Promise<void> {
+  if (!(await afterLinesChecked('The section file'))) return;
+  const r = sectionFileText(selectAnalysis(useDocStore.getState().doc));
+  exportText(r.ok ? r.text : null, 'application/json', '-section.json', r.ok ? '' : r.message);
 }
 
 function horizonsOrNull(kind: 'csv' | 'geojson'): string | null {
@@ -181,18 +199,15 @@ export function FileMenu() {
             <button type="button" role="menuitem" data-testid="export-png" onClick={choose(() => void exportPng(pngSize))}>Section figure as PNG</button>
             <hr />
             <button type="button" role="menuitem" data-testid="export-results-csv"
-              onClick={choose(() => exportText(resultsCsv(useDocStore.getState().doc, selectAnalysis(useDocStore.getState().doc), currentUncertainty(useDocStore.getState().doc)), 'text/csv', '-results.csv', 'No results to export yet: place the pins and draw regionals for at least one horizon.'))}>Results table (CSV)</button>
+              onClick={choose(() => void exportResultsCsv())}>Results table (CSV)</button>
             <button type="button" role="menuitem" data-testid="export-horizons-csv" onClick={choose(() => exportText(horizonsOrNull('csv'), 'text/csv', '-horizons.csv', 'No calibrated horizons to export yet.'))}>Horizons (CSV)</button>
             <button type="button" role="menuitem" data-testid="export-horizons-geojson" onClick={choose(() => exportText(horizonsOrNull('geojson'), 'application/geo+json', '-horizons.geojson', 'No calibrated horizons to export yet.'))}>Horizons (GeoJSON)</button>
             <button type="button" role="menuitem" data-testid="export-section-file"
-              onClick={choose(() => {
-                const r = sectionFileText(selectAnalysis(useDocStore.getState().doc));
-                exportText(r.ok ? r.text : null, 'application/json', '-section.json', r.ok ? '' : r.message);
-              })}>Section file for the command line</button>
+              onClick={choose(() => void exportSectionFile())}>Section file for the command line</button>
           </div>
         )}
       </div>
-      <button type="button" onClick={() => { setMenu(null); setReport(true); }} data-testid="open-report">Report</button>
+      <button type="button" onClick={() => { setMenu(null); void afterLinesChecked('The report', 'all').then((ok) => ok && setReport(true)); }} data-testid="open-report">Report</button>
       {readOnly
         // A read-only tab keeps nothing and saves nothing: it says whose work it shows, never "Saved".
         ? <span className="autosave-state read-only" data-testid="autosave-status" title="Another tab of this browser edits this project; this tab shows what that tab keeps">

@@ -154,7 +154,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
         {analysis && (
           <section className="interp-section">
             <h3>Results per horizon</h3>
-            <HorizonTable analysis={analysis} horizonIds={sa.horizonIds} flagged={new Set(flags.map((f) => f.id))} scenarioName={scenario.name} onToggle={toggle} />
+            <HorizonTable analysis={analysis} horizonIds={sa.horizonIds} flagged={new Set(flags.map((f) => f.id))} onToggle={toggle} />
           </section>
         )}
         <details className="interp-section" open>
@@ -170,7 +170,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
         {docSection.ok && analysis && (
           <details className="interp-section" data-testid="monte-carlo-section">
             <summary>Uncertainty (Monte Carlo)</summary>
-            <MonteCarloPanel scenarioId={scenario.id} section={docSection.section} referenceElevation={analysis.referenceElevation} />
+            <MonteCarloPanel scenarioId={scenario.id} section={docSection.section} />
           </details>
         )}
         {analysis && <p className="hint">Reference elevation for depths: {formatLength(analysis.referenceElevation, u)} ({scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).</p>}

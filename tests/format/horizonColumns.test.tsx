@@ -52,7 +52,7 @@ function htmlTable(html: string, label: (c: HorizonColumn) => string): Table {
 
 function pane(): Table & { checked: boolean[] } {
   const html = renderToStaticMarkup(
-    <HorizonTable analysis={a} horizonIds={a.horizons.map((_, i) => `h${i}`)} flagged={new Set()} scenarioName="Base" onToggle={() => {}} initialAll />,
+    <HorizonTable analysis={a} horizonIds={a.horizons.map((_, i) => `h${i}`)} flagged={new Set()} onToggle={() => {}} initialAll />,
   );
   const table = html.slice(html.indexOf('data-testid="horizon-table"'), html.indexOf('</table>'));
   // The pane's name cell is "Horizon (in fit)" with the box; a header note sits in a span after the label.
@@ -73,7 +73,7 @@ function clipboard(): Table {
 
 function csv(): Table {
   const doc = emptyProjectDoc();
-  const da = { outcome: out, docSection: { ok: true, section } } as unknown as DocAnalysis;
+  const da = { outcome: out, docSection: { ok: true, section }, leftOut: [] } as unknown as DocAnalysis;
   const rows = parseCsvRows(resultsCsv(doc, da)!);
   const h = rows.findIndex((r) => r[0] === 'name');
   return { keys: byHeader(rows[h], (c) => csvHeader(c, a.units)), rows: rows.slice(h + 1, h + 1 + a.horizons.length) };

@@ -18,6 +18,9 @@ import { reportScenarioRows } from './reportScenarioRows';
 import { ReportHorizonTable } from './ReportHorizonTable';
 import { regimeText } from '../interpretation/regimeText';
 import { tableAreaUnit } from '../../format/horizonColumns';
+import { leftOutText } from '../../format/leftOutText';
+import { useCrossingChecks } from '../../state/crossingChecks';
+import { afterLinesChecked } from '../../state/linesChecked';
 
 function useSvgUrl(svg: string | Blob | null): string | null {
   const url = useMemo(() => (svg ? URL.createObjectURL(typeof svg === 'string' ? new Blob([svg], { type: 'image/svg+xml' }) : svg) : null), [svg]);
@@ -35,6 +38,8 @@ const REFERENCES = [
 
 export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEditInfo: () => void }) {
   const doc = useDocStore((s) => s.doc);
+  // A self-crossing verdict changes the analysis of the same document: read it again when one comes back.
+  const answered = useCrossingChecks((s) => s.answered);
   const analysis = selectAnalysis(doc);
   const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
   const [figure, setFigure] = useState<Blob | null>(null);
@@ -43,7 +48,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
     // The figure as a file (the scan embedded piece by piece): a scan of any size, never one long string.
     void currentFigureSvgBlob().then((svg) => live && setFigure(svg));
     return () => { live = false; };
-  }, [doc]);
+  }, [doc, answered]);
   const figureUrl = useSvgUrl(figure);
   const graphUrl = useSvgUrl(useMemo(() => renderAreaDepthSvg(result), [result]));
   const u = doc.units;
@@ -60,7 +65,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
   return createPortal(
     <div className="report-page" data-testid="report-page" role="dialog" aria-label="Report">
       <div className="report-tools no-print">
-        <button type="button" className="primary" onClick={() => window.print()} data-testid="report-print">Print or save as PDF</button>
+        <button type="button" className="primary" onClick={() => void afterLinesChecked('Printing the report', 'all').then((ok) => ok && window.print())} data-testid="report-print">Print or save as PDF</button>
         <button type="button" onClick={onEditInfo} data-testid="report-edit-info">Title and author…</button>
         <button type="button" onClick={onClose} data-testid="report-close">Close report</button>
       </div>
@@ -85,6 +90,11 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
           <ReportHorizonTable analysis={result} />
         ) : (
           <p data-testid="report-no-results">No results yet: {analysis.docSection.ok ? 'the section has input problems or fewer than two horizons with regionals.' : analysis.docSection.message}</p>
+        )}
+        {analysis.leftOut.length > 0 && (
+          <ul className="report-notes" data-testid="report-left-out">
+            {analysis.leftOut.map((h) => <li key={h.id}>Left out of the analysis: {leftOutText(h)}</li>)}
+          </ul>
         )}
         {result && chamberlinNote(result) && <p data-testid="report-chamberlin-note">{chamberlinNote(result)!.text} Layer-parallel strain: {STRAIN_SIGN_TEXT}.</p>}
         {result && <p data-testid="report-reference">Depths are measured below the reference level at elevation {refText}.</p>}

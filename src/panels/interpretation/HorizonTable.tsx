@@ -2,6 +2,10 @@
 import { useState } from 'react';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { useSessionStore } from '../../state/sessionStore';
+import { useDocStore } from '../../state/docStore';
+import { selectAnalysis } from '../../state/selectors';
+import { afterLinesChecked } from '../../state/linesChecked';
+import { activeScenario } from '../../core/model/docToSection';
 import { columnHeader, columnsOf, HORIZON_COLUMNS, screenCell, tableAreaUnit } from '../../format/horizonColumns';
 import { resultsTsv } from './resultsTsv';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
@@ -12,24 +16,31 @@ interface Props {
   analysis: SectionAnalysis;
   horizonIds: string[];
   flagged: Set<string>;
-  scenarioName: string;
   onToggle: (horizonId: string, included: boolean) => void;
   /** Whether "All columns" starts ticked. */
   initialAll?: boolean;
 }
 
-export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onToggle, initialAll = false }: Props) {
+export function HorizonTable({ analysis, horizonIds, flagged, onToggle, initialAll = false }: Props) {
   const [all, setAll] = useState(initialAll);
   const u = analysis.units;
   const note = chamberlinNote(analysis);
   const unit = tableAreaUnit(analysis);
-  const copy = () => {
-    const text = resultsTsv(analysis, scenarioName);
+  const copy = async () => {
     const { showMessage } = useSessionStore.getState();
     if (!navigator.clipboard) {
       showMessage('error', 'The clipboard is not available in this browser window.');
       return;
     }
+    // The table as the pane shows it once every long line is checked for crossing itself (linesChecked.ts), read again then.
+    if (!(await afterLinesChecked('Copying the table'))) return;
+    const doc = useDocStore.getState().doc;
+    const now = selectAnalysis(doc);
+    if (!now.outcome?.ok) {
+      showMessage('error', 'No results to copy: the section has input problems.');
+      return;
+    }
+    const text = resultsTsv(now.outcome.analysis, activeScenario(doc).name, now.leftOut);
     navigator.clipboard.writeText(text).then(
       () => showMessage('info', 'Results table copied as tab-separated text (paste into a spreadsheet).'),
       () => showMessage('error', 'Could not copy to the clipboard: the browser refused. Allow clipboard access and try again.'),
@@ -85,7 +96,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, scenarioName, onTo
         </tbody>
       </table>
       <div className="button-row">
-        <button type="button" onClick={copy} data-testid="copy-table">Copy table (tab-separated)</button>
+        <button type="button" onClick={() => void copy()} data-testid="copy-table">Copy table (tab-separated)</button>
       </div>
     </div>
   );

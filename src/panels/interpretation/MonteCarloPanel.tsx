@@ -6,6 +6,8 @@ import type { Section } from '../../core/model/section';
 import { isStale, sectionKey } from '../../core/model/sectionKey';
 import { useDocStore } from '../../state/docStore';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
+import { afterLinesChecked } from '../../state/linesChecked';
+import { selectAnalysis } from '../../state/selectors';
 import type { MonteCarloRecord } from '../../core/analysis/monteCarloRecord';
 import { Histogram } from './Histogram';
 import { formatLength, formatPercent } from '../../format/formatQuantity';
@@ -46,12 +48,11 @@ function recordOf(m: MonteCarloDone, section: Section, options: MonteCarloOption
 
 interface Props {
   scenarioId: string;
+  /** The section as the pane shows it (whether a result is out of date); a run takes the section anew once its lines are checked. */
   section: Section;
-  /** The reference elevation of the analysis of `section` (depths are below it). */
-  referenceElevation: number;
 }
 
-export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Props) {
+export function MonteCarloPanel({ scenarioId, section }: Props) {
   const [fields, setFields] = useState<Fields>(DEFAULTS);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
   // The last result of this scenario lives in the session store (the report reads it too), with the key of its section.
@@ -75,7 +76,7 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
     worker.current = null;
     setProgress(null);
   };
-  const run = () => {
+  const run = async () => {
     const options = toOptions(fields);
     if (typeof options === 'string') {
       setError(options);
@@ -83,8 +84,16 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
     }
     stop();
     setError(null);
+    // Not on a line that may yet be found to cross itself: wait for the checks, then take the section as the pane has it.
+    if (!(await afterLinesChecked('The Monte Carlo run'))) return;
+    const now = selectAnalysis(useDocStore.getState().doc, scenarioId);
+    if (!now.docSection.ok || !now.outcome?.ok) {
+      setError('The section can no longer be analysed: see the messages above.');
+      return;
+    }
+    if (worker.current) return;
     // What this run analyses, fixed now: the section may change while it runs.
-    const ran = { section, referenceElevation, fields, scenarioId, opened: useDocStore.getState().opened };
+    const ran = { section: now.docSection.section, referenceElevation: now.outcome.analysis.referenceElevation, fields, scenarioId, opened: useDocStore.getState().opened };
     const w = new Worker(new URL('./monteCarlo.worker.ts', import.meta.url), { type: 'module' });
     worker.current = w;
     setProgress({ done: 0, total: options.runs });
@@ -103,7 +112,7 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
       setError('The Monte Carlo worker could not run.');
       stop();
     };
-    w.postMessage({ section, options });
+    w.postMessage({ section: ran.section, options });
   };
   const field = (key: keyof Fields, label: string, unit: string, testId: string) => (
     <label className="mc-field">
@@ -130,7 +139,7 @@ export function MonteCarloPanel({ scenarioId, section, referenceElevation }: Pro
         Perturb every vertex and re-measure (slower; the default draws each horizon's area change directly, which is exact in distribution)
       </label>
       <div className="button-row">
-        <button type="button" className="primary" onClick={run} disabled={running} data-testid="mc-run">Run</button>
+        <button type="button" className="primary" onClick={() => void run()} disabled={running} data-testid="mc-run">Run</button>
         <button type="button" onClick={stop} disabled={!running} data-testid="mc-cancel">Cancel</button>
         {running && (
           <span className="mc-progress">

@@ -3,6 +3,7 @@
 import { useMemo, useState } from 'react';
 import { useDocStore } from '../../state/docStore';
 import { selectLiveAnalysis } from '../../state/selectors';
+import { useCrossingChecks } from '../../state/crossingChecks';
 import { scenarioCreate } from '../../core/model/commands/scenarioCreate';
 import { scenarioDelete } from '../../core/model/commands/scenarioDelete';
 import { scenarioDuplicate } from '../../core/model/commands/scenarioDuplicate';
@@ -22,9 +23,12 @@ export function ScenarioPanel() {
   const gestureStart = useDocStore((s) => s.gestureStart);
   const apply = useDocStore((s) => s.apply);
   const [renaming, setRenaming] = useState<{ id: string; name: string } | null>(null);
+  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
+  const answered = useCrossingChecks((s) => s.answered);
   const rows = useMemo(
     () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, s.id)) })),
-    [doc, gestureStart],
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- `answered` stands for the verdicts selectLiveAnalysis reads
+    [doc, gestureStart, answered],
   );
   // One reference for every scenario: the base case's (the first scenario that can be
   // analysed), normally its highest regional. Depths below each scenario's own reference differ by the

@@ -12,11 +12,14 @@ import { formatLength, formatNumber } from '../../format/formatQuantity';
 import { useDocStore } from '../../state/docStore';
 import { sectionKey } from '../../core/model/sectionKey';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
+import { useCrossingChecks } from '../../state/crossingChecks';
 
 export function SensitivityPanel({ scenarioId, section: current }: { scenarioId: string; section: Section }) {
   // The sweeps re-prepare the whole section: while a regional or pin is dragged they keep the section
   // of the gesture's start, and follow once it ends.
   const gesture = useDocStore((s) => s.gestureStart !== null);
+  // While a long line is being checked for crossing itself the section may yet lose it: no sweep on it until then.
+  const checking = useCrossingChecks((s) => s.pending > 0);
   const [held, setHeld] = useState(current);
   if (!gesture && held !== current) setHeld(current);
   const section = gesture ? held : current;
@@ -25,13 +28,14 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
   const [pivot, setPivot] = useState<'left' | 'right'>('left');
   const u = section.units;
   const sweep = useMemo(() => {
+    if (checking) return null;
     const prep = prepareSection(section);
     if (!prep.ok) return null;
     const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);
     // Tilt entered in units per 1000 units (m per km), swept as dz/dx.
     const tilts = linspace(-Math.abs(tiltRange), Math.abs(tiltRange), 41);
     return { offsets, tilts, result: regionalSensitivity(prep.prepared, { offsets, tilts: tilts.map((t) => t / 1000), tiltPivot: pivot }), width: prep.prepared.pinWidth };
-  }, [section, offsetRange, tiltRange, pivot]);
+  }, [section, offsetRange, tiltRange, pivot, checking]);
   const setAmplification = useUncertaintyStore((st) => st.setAmplification);
   // Kept for the report with the key of the section it belongs to (not while a gesture holds the section).
   useEffect(() => {
@@ -39,6 +43,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
     const base = sweep.result.base;
     setAmplification(scenarioId, { sectionKey: sectionKey(section), amplification: sweep.result.amplification, pinWidth: sweep.width, displacement: base && !base.noDetachment ? base.displacement : null });
   }, [sweep, gesture, scenarioId, section, setAmplification]);
+  if (checking) return <p className="hint" data-testid="sensitivity-checking">Checking lines… the sweeps wait until the long lines are known not to cross themselves.</p>;
   if (!sweep) return <p className="hint">Sensitivity needs a section the engine can analyse.</p>;
   const amp = sweep.result.amplification;
   const ampText = amp === null

@@ -1,6 +1,7 @@
 import type { AnalysisOutcome } from '../../core/analysis/analyseSection';
 import type { DocSection } from '../../core/model/docToSection';
 import type { LeftOutHorizon } from '../../core/analysis/analyseDocSection';
+import { leftOutText } from '../../format/leftOutText';
 
 // What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
 // called a poor fit: our threshold, a common rule of thumb for area–depth lines.
@@ -15,7 +16,7 @@ export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | n
   const out: Diagnostic[] = docSection.skipped.map((s) => ({ level: 'info' as const, text: `Horizon "${s.name}" is left out: ${s.reason}.` }));
   for (const f of docSection.skippedFaults) out.push({ level: 'info', text: `Fault "${f.name}" is left out: ${f.reason}.` });
   // The others are analysed without them (selectors: analyseLenient); the reason is the engine's.
-  for (const h of leftOut) out.push({ level: 'warning', text: `left out: ${h.name} — ${h.reason}` });
+  for (const h of leftOut) out.push({ level: 'warning', text: `left out: ${leftOutText(h)}` });
   if (!outcome) return [...out, { level: 'info', text: 'Draw a regional for at least two horizons to see the area–depth line.' }];
   if (!outcome.ok) return [...out, ...outcome.problems.map((p) => ({ level: 'error' as const, text: p.message }))];
   const a = outcome.analysis;

@@ -2,6 +2,7 @@
 import { useMemo } from 'react';
 import { useDocStore } from '../../state/docStore';
 import { selectLiveAnalysis } from '../../state/selectors';
+import { useCrossingChecks } from '../../state/crossingChecks';
 import type { DocAnalysis } from '../../core/analysis/analyseDocSection';
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { areaDepthSeries, type AreaDepthSeries } from './areaDepthSeries';
@@ -16,7 +17,10 @@ export interface ScenarioAnalysis extends DocAnalysis {
 export function useScenarioAnalysis(scenarioId?: string): ScenarioAnalysis {
   const doc = useDocStore((s) => s.doc);
   const gestureStart = useDocStore((s) => s.gestureStart);
-  return useMemo(() => scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, scenarioId)), [doc, gestureStart, scenarioId]);
+  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
+  const answered = useCrossingChecks((s) => s.answered);
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- `answered` stands for the verdicts selectLiveAnalysis reads
+  return useMemo(() => scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, scenarioId)), [doc, gestureStart, scenarioId, answered]);
 }
 
 /** The same, for a selector result already at hand. */
