@@ -26,14 +26,20 @@ export function crossingKey(xs: ArrayLike<number>, zs: ArrayLike<number>): strin
   const n = Math.min(xs.length, zs.length);
   let a = 0x811c9dc5;
   let b = 0x9e3779b9;
+  // Measured hot path (every analysis of a long line keys it): x then z of each vertex, written out rather than in an
+  // inner loop over the two arrays, which ran at a third of the speed while the page was still cold.
   for (let i = 0; i < n; i++) {
-    for (let k = 0; k < 2; k++) {
-      bits[0] = k === 0 ? xs[i] : zs[i];
-      a = Math.imul(a ^ words[0], 0x01000193);
-      a = Math.imul(a ^ words[1], 0x01000193);
-      b = Math.imul(b + words[0], 0x85ebca6b) ^ (b >>> 13);
-      b = Math.imul(b + words[1], 0xc2b2ae35) ^ (b >>> 16);
-    }
+    bits[0] = xs[i];
+    let lo = words[0], hi = words[1];
+    a = Math.imul(Math.imul(a ^ lo, 0x01000193) ^ hi, 0x01000193);
+    b = Math.imul(b + lo, 0x85ebca6b) ^ (b >>> 13);
+    b = Math.imul(b + hi, 0xc2b2ae35) ^ (b >>> 16);
+    bits[0] = zs[i];
+    lo = words[0];
+    hi = words[1];
+    a = Math.imul(Math.imul(a ^ lo, 0x01000193) ^ hi, 0x01000193);
+    b = Math.imul(b + lo, 0x85ebca6b) ^ (b >>> 13);
+    b = Math.imul(b + hi, 0xc2b2ae35) ^ (b >>> 16);
   }
   return `${n}:${(a >>> 0).toString(36)}:${(b >>> 0).toString(36)}`;
 }
