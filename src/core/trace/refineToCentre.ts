@@ -12,19 +12,21 @@ const DIRECTION_SPAN = 3;
  * Centres already found, by path pixel and the pixel DIRECTION_SPAN ahead of it (the one behind is fixed by the
  * tree): paths to nearby pointer positions share all but their last pixels, so a preview re-centres only those.
  */
-export type CentreCache = Map<number, [number, number] | null>;
+export type CentreCache = Map<number, { point: [number, number]; widthPx: number } | null>;
 
 /**
  * Returns the image points of a path of window pixel indices (`path`, over window `r`), each moved along the
  * normal of the path's local direction to the line centre found in `f` (centreAcross), and the fraction of them that
  * found a line there (the others keep their pixel centre). A path of one pixel comes back as that pixel's centre
- * (fraction 1); an empty path as no points (fraction 0). `found` flags, per point, whether it was centred on a line.
+ * (fraction 1); an empty path as no points (fraction 0). `found` flags, per point, whether it was centred on a line;
+ * `widthPx` holds the width of the line read there (NaN where none was found).
  */
-export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number; found: Uint8Array } {
+export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatures, cache?: CentreCache): { points: [number, number][]; onLine: number; found: Uint8Array; widthPx: Float32Array } {
   const pts = path.map((k) => rasterCentre(r, k));
   const n = pts.length;
   const on = new Uint8Array(n);
-  if (n < 2) return { points: pts, onLine: n, found: on.fill(1) };
+  const widthPx = new Float32Array(n).fill(NaN);
+  if (n < 2) return { points: pts, onLine: n, found: on.fill(1), widthPx };
   let found = 0;
   const out: [number, number][] = [];
   const size = r.w * r.h;
@@ -38,7 +40,8 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
       if (known) {
         found++;
         on[i] = 1;
-        out.push(known);
+        widthPx[i] = known.widthPx;
+        out.push(known.point);
       } else out.push(pts[i]);
       continue;
     }
@@ -61,9 +64,10 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
     }
     found++;
     on[i] = 1;
+    widthPx[i] = profiles.widthPx;
     const q: [number, number] = [pts[i][0] + o * nx, pts[i][1] + o * ny];
-    cache?.set(key, q);
+    cache?.set(key, { point: q, widthPx: profiles.widthPx });
     out.push(q);
   }
-  return { points: out, onLine: found / n, found: on };
+  return { points: out, onLine: found / n, found: on, widthPx };
 }

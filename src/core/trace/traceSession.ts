@@ -90,7 +90,7 @@ export class TraceSession {
   bytesHeld(): number {
     let b = 0;
     for (const t of this.tiles.values()) b += t.dark.byteLength + t.edge.byteLength;
-    for (const t of this.trees) b += t.tree.dist.byteLength + t.tree.pred.byteLength + t.features.dark.byteLength + t.features.edge.byteLength + t.centres.size * 48;
+    for (const t of this.trees) b += t.tree.dist.byteLength + t.tree.pred.byteLength + t.features.dark.byteLength + t.features.edge.byteLength + t.centres.size * 80;
     return b;
   }
 }

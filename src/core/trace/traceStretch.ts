@@ -12,6 +12,11 @@ export const TRACE_TOLERANCE_PX = 0.3;
 export const MIN_ON_LINE = 0.6;
 /** Path points nearer an anchor than this (image px, the profile's reach plus one) are left out: see traceStretch. */
 export const NEAR_ANCHOR_PX = PROFILE_HALF_PX + 1;
+/** A centre on a line wider than WIDE_FACTOR × the stretch's median width + WIDE_SLACK_PX is another line's, or two merged. */
+export const WIDE_FACTOR = 1.5;
+export const WIDE_SLACK_PX = 0.5;
+/** Centres this many path points from a pixel where no line was found are left out: the end of a dash or of a gap's ink. */
+export const RUN_END_POINTS = 2;
 
 /** Returns the window pixel index holding image point (x, y), or −1 outside the window. */
 export function pixelIndexAt(f: { x0: number; y0: number; w: number; h: number }, x: number, y: number): number {
@@ -31,8 +36,9 @@ export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [n
   if (target < 0) return null;
   const path = pathToSource(tree, target);
   if (path.length === 0) return null;
-  const { points, onLine, found } = refineToCentre(path, f, f, cache);
+  const { points, onLine, found, widthPx } = refineToCentre(path, f, f, cache);
   if (onLine < MIN_ON_LINE) return [[from[0], from[1]], [to[0], to[1]]];
+  const keep = ownLineCentres(found, widthPx);
   // The ends are the anchors themselves (already on the line centre when snapped). Between them only the points
   // centred on a line are kept, and none within NEAR_ANCHOR_PX of an anchor: there the profile across the path
   // reaches the anchor's own junction (a horizon ending on a border or another line, the land surface at an
@@ -41,9 +47,41 @@ export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [n
   const pts: [number, number][] = [[from[0], from[1]]];
   for (let i = 1; i < points.length - 1; i++) {
     const [x, y] = points[i];
-    if (!found[i] || Math.hypot(x - from[0], y - from[1]) < NEAR_ANCHOR_PX || Math.hypot(x - to[0], y - to[1]) < NEAR_ANCHOR_PX) continue;
+    if (!keep[i] || Math.hypot(x - from[0], y - from[1]) < NEAR_ANCHOR_PX || Math.hypot(x - to[0], y - to[1]) < NEAR_ANCHOR_PX) continue;
     pts.push(points[i]);
   }
   pts.push([to[0], to[1]]);
   return simplifyPolyline(pts, tol);
+}
+
+/**
+ * Returns, per path point, whether its centre is kept: found on a line (`found`) no wider than the stretch's own
+ * (WIDE_FACTOR × the median width of the found centres + WIDE_SLACK_PX), and at least RUN_END_POINTS points from
+ * any point that is not. Where a horizon meets a heavier line at a shallow angle (the land surface where it crops
+ * out) the search runs along the heavier line for a few pixels, or through the blob where the two inks merge:
+ * those centres are wider than the horizon's and left out, and the line runs straight from the anchor to the
+ * first centre on the horizon itself. At the ends of a dash the profile cuts the square end of the ink and its
+ * centroid leans off the line; the runs are trimmed there.
+ */
+export function ownLineCentres(found: Uint8Array, widthPx: Float32Array): Uint8Array {
+  const n = found.length;
+  const widths: number[] = [];
+  for (let i = 0; i < n; i++) if (found[i]) widths.push(widthPx[i]);
+  widths.sort((a, b) => a - b);
+  const limit = widths.length > 0 ? WIDE_FACTOR * widths[widths.length >> 1] + WIDE_SLACK_PX : Infinity;
+  const own = new Uint8Array(n);
+  for (let i = 0; i < n; i++) own[i] = found[i] && widthPx[i] <= limit ? 1 : 0;
+  // Trim each run of own centres by RUN_END_POINTS at each end (a path end is not a run end: the anchors are kept).
+  const keep = new Uint8Array(n);
+  let lastGap = -Infinity;
+  for (let i = 0; i < n; i++) {
+    if (!own[i]) lastGap = i;
+    keep[i] = own[i] && i - lastGap > RUN_END_POINTS ? 1 : 0;
+  }
+  let nextGap = Infinity;
+  for (let i = n - 1; i >= 0; i--) {
+    if (!own[i]) nextGap = i;
+    if (nextGap - i <= RUN_END_POINTS) keep[i] = 0;
+  }
+  return keep;
 }

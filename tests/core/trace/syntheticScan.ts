@@ -10,7 +10,13 @@ export interface Curve { f: (u: number) => number; df: (u: number) => number; d2
 
 export type Layer =
   | { kind: 'fill'; /** Colour below the curve (larger v). */ below: Curve; colour: [number, number, number] }
-  | { kind: 'ink'; curve: Curve; widthPx: number; colour: [number, number, number] };
+  | {
+      kind: 'ink'; curve: Curve; widthPx: number; colour: [number, number, number];
+      /** Frame u range the line is drawn over (ends cut square to the line); the whole width when absent. */
+      spanU?: [number, number];
+      /** Dashes: lengths drawn and left out, in frame u along the line, starting at the span's start (or u = 0). */
+      dashU?: [number, number];
+    };
 
 export interface ScanSpec { w: number; h: number; paper: [number, number, number]; angleRad: number; noise: number; seed: number; layers: Layer[] }
 
@@ -40,6 +46,13 @@ export function fromFrame(spec: ScanSpec, u: number, v: number): [number, number
 
 /** Signed distance from frame point (u, v) to the curve: positive below it (larger v). */
 export function signedDistance(curve: Curve, u: number, v: number): number {
+  const t = footOnCurve(curve, u, v);
+  const d = Math.hypot(t - u, curve.f(t) - v);
+  return v >= curve.f(u) ? d : -d;
+}
+
+/** Returns the u of the foot of the perpendicular from frame point (u, v) to the curve (Newton's method). */
+export function footOnCurve(curve: Curve, u: number, v: number): number {
   let t = u;
   for (let it = 0; it < 8; it++) {
     const e = curve.f(t) - v;
@@ -50,8 +63,7 @@ export function signedDistance(curve: Curve, u: number, v: number): number {
     t -= step;
     if (Math.abs(step) < 1e-9) break;
   }
-  const d = Math.hypot(t - u, curve.f(t) - v);
-  return v >= curve.f(u) ? d : -d;
+  return t;
 }
 
 /** Returns the distance (image px) from image point (x, y) to the curve drawn on the scan. */
@@ -82,6 +94,8 @@ export function renderScan(spec: ScanSpec): SyntheticScan {
         } else {
           const dv = Math.abs(v - layer.curve.f(u));
           if (dv > layer.widthPx * 3 + 3) continue;
+          // Ends cut square to the line, as a pen or a renderer's dashes end: by the foot of the perpendicular.
+          if ((layer.spanU || layer.dashU) && !inkDrawnAt(layer, footOnCurve(layer.curve, u, v))) continue;
           const d = Math.abs(signedDistance(layer.curve, u, v));
           const a = Math.min(1, Math.max(0, layer.widthPx / 2 + 0.5 - d));
           if (a <= 0) continue;
@@ -94,6 +108,16 @@ export function renderScan(spec: ScanSpec): SyntheticScan {
     }
   }
   return { w, h, rgba, spec };
+}
+
+/** Returns whether an ink layer is drawn at frame u: inside its span and on a dash. */
+function inkDrawnAt(layer: { spanU?: [number, number]; dashU?: [number, number] }, u: number): boolean {
+  const start = layer.spanU ? layer.spanU[0] : 0;
+  if (layer.spanU && (u < layer.spanU[0] || u > layer.spanU[1])) return false;
+  if (!layer.dashU) return true;
+  const period = layer.dashU[0] + layer.dashU[1];
+  const along = (((u - start) % period) + period) % period;
+  return along < layer.dashU[0];
 }
 
 /** A sine curve v = base + amp · sin(2π u / wavelength + phase). */
