@@ -6,6 +6,7 @@ import { autosaveNow, followKeptWork, restoreAutosave, startAutosave } from '../
 import { claimEditing } from '../state/tabLock';
 import { startGesturePreparation } from '../state/gesturePreparation';
 import { useSessionStore } from '../state/sessionStore';
+import { useAutosaveStatus } from '../state/autosaveStatus';
 import { startScanLifetime } from '../state/scanLifetime';
 import { startCrossingChecks } from '../state/crossingChecks';
 
@@ -20,8 +21,13 @@ export function startApp(): void {
   startCrossingChecks();
   void (async () => {
     // Another tab editing the kept work: this one shows it read-only, following what that tab keeps (and can take
-    // over), and never writes over it.
-    await claimEditing(autosaveNow, followKeptWork);
+    // over, or takes over on its own when that tab closes, reading what it kept first), and never writes over it.
+    // On taking over, the work comes from the other tab, not from a last session: no "brought back" banner (nor its
+    // "Start fresh", which would clear that work).
+    await claimEditing(autosaveNow, followKeptWork, async () => {
+      await restoreAutosave();
+      useAutosaveStatus.setState({ restoredFrom: null });
+    });
     const restored = await restoreAutosave();
     if (!restored) await openDemo();
     startAutosave();

@@ -2,7 +2,10 @@
 // is open; a tab that opens while another holds it shows the kept work read-only and says so, offering to
 // take over. Taking over asks the editing tab (BroadcastChannel) to write what it has and let go; only then
 // does the new tab read the kept work and start editing. So neither tab writes over the other's newer work
-// without the user having chosen it. Browsers without Web Locks edit as before (there is no way to know).
+// without the user having chosen it. A read-only tab also waits in the lock's queue: when the editing tab closes
+// (the browser lets its lock go with the page), the first tab in the queue reads the work that tab kept last and
+// edits from then on, and says so. The lock is held by one tab at a time, so two tabs never edit at once.
+// Browsers without Web Locks edit as before (there is no way to know).
 import { create } from 'zustand';
 import { useDocStore } from './docStore';
 
@@ -17,9 +20,14 @@ export interface TabState {
   why: 'other-tab' | 'taken-over' | null;
   /** In a read-only tab: when the work now shown was kept by the editing tab (ISO time), or null before the first. */
   shownKeptAt: string | null;
+  /** Said once this tab took over editing on its own, because the editing tab closed (until dismissed). */
+  notice: string | null;
 }
 
-export const useTabStore = create<TabState>()(() => ({ role: 'starting', why: null, shownKeptAt: null }));
+export const useTabStore = create<TabState>()(() => ({ role: 'starting', why: null, shownKeptAt: null, notice: null }));
+
+/** What a tab says when it took over editing because the editing tab closed. */
+export const OTHER_TAB_CLOSED = 'The other tab closed; this tab edits now. It has loaded the work that tab kept last.';
 
 function setRole(role: TabRole, why: TabState['why']): void {
   useTabStore.setState({ role, why, shownKeptAt: null });
@@ -32,6 +40,12 @@ let channel: BroadcastChannel | null = null;
 let beforeRelease: () => Promise<void> = async () => undefined;
 /** What a read-only tab does when the editing tab says it kept a change (read the kept work and show it). */
 let onOtherTabKept: () => Promise<void> = async () => undefined;
+/** What a tab does when it gets the lock after being read-only (read the work the editing tab kept last). */
+let reloadKept: () => Promise<void> = async () => undefined;
+/** Resolves once this read-only tab has the lock, has reloaded the kept work and edits (null: not waiting). */
+let handover: Promise<void> | null = null;
+/** This tab asked for the lock ("Edit here instead"), rather than getting it because the editing tab closed. */
+let asked = false;
 
 function locks(): LockManager | null {
   return typeof navigator !== 'undefined' && navigator.locks ? navigator.locks : null;
@@ -59,8 +73,36 @@ function listen(): void {
       setRole('read-only', 'taken-over');
       release?.();
       release = null;
+      void waitToEdit();
     })();
   };
+}
+
+/**
+ * Queues this read-only tab for the lock (once): when it comes (the editing tab closed, or let go when asked),
+ * the kept work is read first, then this tab edits. Resolves then.
+ */
+function waitToEdit(): Promise<void> {
+  const lm = locks();
+  if (!lm) return Promise.resolve();
+  handover ??= new Promise<void>((resolve) => {
+    void lm.request(LOCK, () => {
+      void (async () => {
+        const closed = !asked;
+        asked = false;
+        try {
+          await reloadKept();
+        } finally {
+          setRole('editing', null);
+          if (closed) useTabStore.setState({ notice: OTHER_TAB_CLOSED });
+          handover = null;
+          resolve();
+        }
+      })();
+      return hold();
+    });
+  });
+  return handover;
 }
 
 /** Tells the other tabs that this (editing) tab has just kept a change in the browser, so a read-only tab can show it. */
@@ -70,11 +112,13 @@ export function announceKept(): void {
 
 /**
  * Tries to become the editing tab without waiting; returns the role this tab has. `flush` writes pending changes
- * before another tab takes over; `follow` shows the work kept by the editing tab while this one is read-only.
+ * before another tab takes over; `follow` shows the work kept by the editing tab while this one is read-only;
+ * `reload` reads the kept work when this tab takes over (when asked, or on its own once the editing tab closes).
  */
-export async function claimEditing(flush: () => Promise<void>, follow: () => Promise<void> = async () => undefined): Promise<TabRole> {
+export async function claimEditing(flush: () => Promise<void>, follow: () => Promise<void> = async () => undefined, reload: () => Promise<void> = async () => undefined): Promise<TabRole> {
   beforeRelease = flush;
   onOtherTabKept = follow;
+  reloadKept = reload;
   listen();
   const lm = locks();
   if (!lm) {
@@ -88,23 +132,19 @@ export async function claimEditing(flush: () => Promise<void>, follow: () => Pro
     });
   });
   if (got) setRole('editing', null);
-  else setRole('read-only', 'other-tab');
+  else {
+    setRole('read-only', 'other-tab');
+    void waitToEdit();
+  }
   return got ? 'editing' : 'read-only';
 }
 
-/** Asks the editing tab to write its work and let go, waits for the lock, then runs `reload` (read the kept work) and makes this tab the editing one. */
-export async function takeOverEditing(reload: () => Promise<void>): Promise<void> {
-  const lm = locks();
-  if (!lm || useTabStore.getState().role === 'editing') return;
+/** Asks the editing tab to write its work and let go, and resolves once this tab has the lock, has read the kept work and edits. */
+export async function takeOverEditing(): Promise<void> {
+  if (!locks() || useTabStore.getState().role !== 'read-only') return;
   listen();
-  const acquired = new Promise<void>((resolve) => {
-    void lm.request(LOCK, () => {
-      resolve();
-      return hold();
-    });
-  });
+  asked = true;
+  const done = waitToEdit();
   channel?.postMessage({ type: 'take-over' });
-  await acquired;
-  await reload();
-  setRole('editing', null);
+  await done;
 }

@@ -1,6 +1,7 @@
 // Work kept in the browser survives a reload straight after an edit, and two tabs never overwrite each
 // other's work silently: the second tab shows the work read-only, following the first tab's kept edits and
-// saying it saves nothing, until the user takes over editing there.
+// saying it saves nothing, until the user takes over editing there, or the editing tab closes and the first tab
+// waiting takes over on its own, with the work that tab kept last.
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
@@ -98,4 +99,50 @@ test('a read-only tab follows the editing tab\'s kept edits and never claims to 
   await expect(page.locator('[data-startup="done"]')).toHaveCount(1, { timeout: 30_000 });
   await expect(firstName(page)).toHaveValue('Newer work in the editing tab');
   await expect(secondName(page)).toHaveValue('Second horizon renamed');
+});
+
+test('when the editing tab closes, one waiting tab takes over on its own with that tab\'s last kept work, and says so', async ({ page, context }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await rename(page, 'Tab A first');
+  const others: Page[] = [];
+  for (let k = 0; k < 2; k++) {
+    const other = await context.newPage();
+    other.on('dialog', (d) => void d.accept());
+    await gotoStarted(other);
+    await expect(other.getByTestId('read-only-banner')).toContainText('open for editing in another tab');
+    others.push(other);
+  }
+  // The last edit of the editing tab, then it closes without anyone taking over.
+  await rename(page, 'Tab A last edit');
+  await expect(page.getByTestId('autosave-status')).toContainText('kept in browser');
+  await page.close();
+
+  // Exactly one of the two waiting tabs edits now; the other stays read-only (the lock is one tab's at a time).
+  const tookOver = (p: Page) => p.getByTestId('took-over-banner');
+  await expect.poll(async () => (await tookOver(others[0]).count()) + (await tookOver(others[1]).count()), { timeout: 30_000 }).toBe(1);
+  const [editor, waiter] = (await tookOver(others[0]).count()) === 1 ? others : [others[1], others[0]];
+  await expect(tookOver(editor)).toHaveText(/^The other tab closed; this tab edits now\. It has loaded the work that tab kept last\./);
+  await expect(editor.getByTestId('read-only-banner')).toHaveCount(0);
+  // The work is the other tab's, not a last session brought back: no "Start fresh" that would clear it.
+  await expect(editor.getByTestId('restore-banner')).toHaveCount(0);
+  await expect(firstName(editor)).toHaveValue('Tab A last edit');
+  await editor.screenshot({ path: '/work/wt/shots/hostile-tab-takeover.png' });
+  await expect(waiter.getByTestId('read-only-banner')).toContainText('open for editing in another tab');
+
+  // It edits and keeps its edits; the tab still waiting follows them and cannot edit over them.
+  await rename(editor, 'Edited in the tab that took over');
+  await expect(editor.getByTestId('autosave-status')).toContainText('kept in browser');
+  await expect(firstName(waiter)).toHaveValue('Edited in the tab that took over');
+  await rename(waiter, 'Not while read-only');
+  await expect(firstName(waiter)).toHaveValue('Edited in the tab that took over');
+  await tookOver(editor).getByTestId('took-over-dismiss').click();
+  await expect(tookOver(editor)).toHaveCount(0);
+
+  // And when that one closes too, the last tab takes over with its work.
+  await editor.close();
+  await expect(tookOver(waiter)).toBeVisible({ timeout: 30_000 });
+  await expect(firstName(waiter)).toHaveValue('Edited in the tab that took over');
+  await rename(waiter, 'The last tab edits');
+  await expect(firstName(waiter)).toHaveValue('The last tab edits');
 });

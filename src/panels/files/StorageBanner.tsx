@@ -2,22 +2,27 @@
 import { saveProjectFile } from '../../state/projectActions';
 import { downloadKeptAside, startFresh } from '../../state/autosave';
 import { useAutosaveStatus } from '../../state/autosaveStatus';
-import { restoreAutosave } from '../../state/autosave';
 import { takeOverEditing, useTabStore } from '../../state/tabLock';
 
 export function StorageBanner() {
   const { restoredFrom, quotaFull, failure, keptAside } = useAutosaveStatus();
-  const { role, why } = useTabStore();
+  const { role, why, notice } = useTabStore();
   const readOnly = role === 'read-only';
-  if (!restoredFrom && !quotaFull && !failure && !keptAside && !readOnly) return null;
+  if (!restoredFrom && !quotaFull && !failure && !keptAside && !readOnly && !notice) return null;
   return (
     <div className="storage-banners">
+      {notice && !readOnly && (
+        <div className="storage-banner" role="status" data-testid="took-over-banner">
+          <span>{notice}</span>
+          <button type="button" onClick={() => useTabStore.setState({ notice: null })} data-testid="took-over-dismiss">Dismiss</button>
+        </div>
+      )}
       {readOnly && (
         <div className="storage-banner error" role="alert" data-testid="read-only-banner">
           <span>{why === 'taken-over'
             ? 'Another tab took over editing this project. This tab only shows it, following that tab\'s changes as they are kept; it saves nothing, and edits here are not possible, so neither tab overwrites the other.'
             : 'This project is open for editing in another tab of this browser. This tab only shows it, following that tab\'s changes as they are kept; it saves nothing, and edits here are not possible, so neither tab overwrites the other\'s work.'}</span>
-          <button type="button" className="primary" data-testid="take-over" onClick={() => void takeOverEditing(async () => { await restoreAutosave(); })}>Edit here instead</button>
+          <button type="button" className="primary" data-testid="take-over" onClick={() => void takeOverEditing()}>Edit here instead</button>
           <button type="button" data-testid="read-only-download" onClick={() => void saveProjectFile()}>Download this copy</button>
         </div>
       )}
