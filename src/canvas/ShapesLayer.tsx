@@ -11,8 +11,9 @@ import { activeScenario } from '../core/model/docToSection';
 import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
-import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix } from './decimatePolyline';
-import { clippedHorizonPx, excessFillSides } from './excessFillGeometry';
+import type { FittedCalibration } from '../core/calibration/fitCalibration';
+import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix, type DecimatedPrefix } from './decimatePolyline';
+import { clippedHorizonPx, excessFillSides, type ClippedHorizonPx } from './excessFillGeometry';
 import { EXCESS_FILL, fillRgba } from '../core/model/horizonPalette';
 import { joinedLinePx, type JoinedLinePx } from './joinedLinePx';
 import { pieceEndsOffFault } from '../tools/faultHits';
@@ -177,6 +178,29 @@ function clipTo(poly: number[]) {
   };
 }
 
+// The horizon's side of a fill and its decimated prefix outlive the component that drew them: a fill moves to the
+// moving canvas when its regional starts to move and back at the release (a remount), and finds them here.
+const headCache = new WeakMap<readonly ImagePx[], { pins: [number, number]; frame: FittedCalibration; head: ClippedHorizonPx | null }>();
+const prefixCache = new WeakMap<ClippedHorizonPx, { decimation: Decimation; prefix: DecimatedPrefix }>();
+
+/** Returns the horizon's line clipped to the pins for its fill, from the cache when the line, pins and calibration are the same. */
+function cachedHead(line: readonly ImagePx[], pins: [number, number], frame: FittedCalibration): ClippedHorizonPx | null {
+  const kept = headCache.get(line);
+  if (kept && kept.frame === frame && kept.pins[0] === pins[0] && kept.pins[1] === pins[1]) return kept.head;
+  const head = clippedHorizonPx(line as ImagePx[], pins, frame);
+  headCache.set(line, { pins, frame, head });
+  return head;
+}
+
+/** Returns the head's decimated prefix, from the cache when the decimation is the same. */
+function cachedPrefix(head: ClippedHorizonPx, d: Decimation): DecimatedPrefix {
+  const kept = prefixCache.get(head);
+  if (kept && kept.decimation.scale === d.scale && kept.decimation.columns[0] === d.columns[0] && kept.decimation.columns[1] === d.columns[1]) return kept.prefix;
+  const prefix = decimatePrefix(head.loopHead, d.scale, d.columns);
+  prefixCache.set(head, { decimation: d, prefix });
+  return prefix;
+}
+
 const FillShape = memo(function FillShape({ id }: { id: string }) {
   const regional = useDocStore((s) => activeScenario(s.doc).regionals[id]);
   const h = useDocStore((s) => s.doc.horizons.find((k) => k.id === id));
@@ -187,11 +211,11 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
   // A horizon in pieces is filled along its joined line (the line the analysis measures).
   const joined = useJoinedLine(h?.joins.length ? h : undefined);
-  const head = useMemo(() => (h && pins ? clippedHorizonPx(joined ? joined.points : h.pointsPx, pins, frame) : null), [h, joined, pins, frame]);
+  const head = useMemo(() => (h && pins ? cachedHead(joined ? joined.points : h.pointsPx, pins, frame) : null), [h, joined, pins, frame]);
   const geometry = useMemo(() => (head && regional && pins ? excessFillSides(regional, pins, frame, head) : null), [regional, pins, frame, head]);
   // The loop follows the horizon between the pins: as long, and decimated the same way.
   const decimation = useDecimation(head && geometry ? (head.loopHead.length + geometry.loopTail.length) / 2 : 0);
-  const prefix = useMemo(() => (head && decimation ? decimatePrefix(head.loopHead, decimation.scale, decimation.columns) : null), [head, decimation]);
+  const prefix = useMemo(() => (head && decimation ? cachedPrefix(head, decimation) : null), [head, decimation]);
   const loop = useMemo(() => {
     if (!head || !geometry) return [];
     if (prefix && decimation) return decimateAfterPrefix(prefix, geometry.loopTail, decimation.scale, decimation.columns);
@@ -244,10 +268,27 @@ const PinLines = memo(function PinLines() {
   );
 });
 
+const NO_IDS: string[] = [];
+
+/** Returns the ids of the horizons whose regional the gesture in progress has moved, in document order (none outside a gesture). */
+function useMovingRegionalIds(): string[] {
+  return useDocStore(useShallow((s) => {
+    if (!s.gestureStart) return NO_IDS;
+    const now = activeScenario(s.doc).regionals;
+    const was = activeScenario(s.gestureStart).regionals;
+    if (now === was) return NO_IDS;
+    const moved = s.doc.horizons.filter((h) => now[h.id] !== was[h.id]).map((h) => h.id);
+    return moved.length ? moved : NO_IDS;
+  }));
+}
+
 /**
- * Two canvases, drawn in this order: the fills and regionals, then the faults, horizons and pins over them. A regional
- * drag changes only the first, so each move redraws (and the browser rasterises) the fills and regionals alone;
- * the long horizon lines, most of a full redraw's cost, stay as they were drawn.
+ * Three canvases, drawn in this order: the fills and regionals that stand still, those whose regional is being
+ * dragged, then the faults, horizons and pins over them. A regional drag changes only the second: each move redraws
+ * (and the browser rasterises) the one or few fills and regionals that move, and the others, like the long horizon
+ * lines, stay as they were drawn. A fill moves to the second canvas at the drag's first move and back at the
+ * release (its clipped line and decimation are kept, so neither is made again); meanwhile it lies over the still
+ * regionals rather than under them.
  */
 export function ShapesLayer() {
   const allIds = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));
@@ -256,11 +297,19 @@ export function ShapesLayer() {
   const ids = useShapesInSteps(allIds, lines);
   const showFills = useDocStore((s) => s.doc.settings.showFills);
   const faultIds = useDocStore(useShallow((s) => s.doc.faults.map((f) => f.id)));
+  const movingIds = useMovingRegionalIds();
+  const moving = useMemo(() => new Set(movingIds), [movingIds]);
+  const still = useMemo(() => (moving.size ? ids.filter((id) => !moving.has(id)) : ids), [ids, moving]);
+  const moved = useMemo(() => ids.filter((id) => moving.has(id)), [ids, moving]);
   return (
     <>
       <Layer listening={false} name="fills-and-regionals">
-        {showFills && ids.map((id) => <FillShape key={`f-${id}`} id={id} />)}
-        {ids.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
+        {showFills && still.map((id) => <FillShape key={`f-${id}`} id={id} />)}
+        {still.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
+      </Layer>
+      <Layer listening={false} name="moving-fills-and-regionals">
+        {showFills && moved.map((id) => <FillShape key={`f-${id}`} id={id} />)}
+        {moved.map((id) => <RegionalShape key={`r-${id}`} id={id} />)}
       </Layer>
       <Layer listening={false} name="horizons-and-faults">
         {faultIds.map((id) => <FaultShape key={`k-${id}`} id={id} />)}
