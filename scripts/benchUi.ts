@@ -52,7 +52,7 @@ const ONLY_TRACE = process.argv.includes('--only-trace');
 const TRACE_MP = Number(flag('trace-mp') ?? 200);
 /** A folder for screenshots of the tracing rows' first previews (optional). */
 const SHOTS = flag('shots');
-/** A folder for a CPU profile of each continuous drag (`drag-12x<n>.cpuprofile`, opened by Chrome's DevTools); a summary is printed. */
+/** A folder for a CPU profile of each big-document open and continuous drag (`open-12x<n>.cpuprofile`, `drag-12x<n>.cpuprofile`, opened by Chrome's DevTools); a summary is printed. */
 const PROFILE = flag('profile');
 
 class BenchFailure extends Error {}
@@ -302,6 +302,12 @@ async function openBigSection(page: Page, section: Section, vertices: number): P
     JSON.parse(await window.__docFile.text());
     return performance.now() - t;
   })()`)) as number;
+  const cdp = PROFILE ? await page.context().newCDPSession(page) : null;
+  if (cdp) {
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    await cdp.send('Profiler.start');
+  }
   const t0 = await now(page);
   await page.evaluate(`(() => {
     const input = document.querySelector('[data-testid="open-project"]');
@@ -315,7 +321,19 @@ async function openBigSection(page: Page, section: Section, vertices: number): P
   await page.getByTestId('strip-detachment-depth').filter({ hasText: /^[\d,]+ m$/ }).waitFor({ timeout: 120_000 });
   await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
   const ms = (await now(page)) - t0;
+  // Work the app defers until after the first drawing (the sensitivity sweeps) still belongs to the open: the
+  // longest task is read once the sweeps are shown (or after 20 s without them).
+  await page.getByTestId('sensitivity-amplification').waitFor({ state: 'attached', timeout: 20_000 }).catch(() => undefined);
   const longest = await longestSince(page, t0);
+  if (cdp && PROFILE) {
+    const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+    await cdp.detach();
+    const { writeFileSync, mkdirSync } = await import('node:fs');
+    mkdirSync(PROFILE, { recursive: true });
+    writeFileSync(`${PROFILE}/open-12x${vertices}.cpuprofile`, JSON.stringify(profile));
+    console.log(`  open 12 × ${vertices}: longest task ${longest.toFixed(0)} ms`);
+    printProfile(profile, 1);
+  }
   const names = (await page.evaluate('[...document.querySelectorAll("[data-testid^=horizon-show-]")].map((b) => b.getAttribute("aria-label"))')) as string[];
   check(names.length === section.horizons.length && section.horizons.every((h) => names.includes(`Show ${h.name}`)),
     `the section file of 12 × ${vertices} vertices did not open (horizons shown: ${names.join(', ').slice(0, 200)})`);
@@ -354,8 +372,24 @@ async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number)
     const t = await now(page);
     // The first move may wait for a busy page (a big document just opened); later ones get 2 s.
     await page.evaluate(`window.__arm(${k === 0 ? 20_000 : 2000})`);
+    const cdp = PROFILE && k === 0 ? await page.context().newCDPSession(page) : null;
+    if (cdp) {
+      await cdp.send('Profiler.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+      await cdp.send('Profiler.start');
+    }
     await page.mouse.move(grip.gx, y);
     const r = (await page.evaluate('window.__drag.done.then(() => ({ t0: window.__drag.t0, t1: window.__drag.t1, t2: window.__drag.t2 }))')) as { t0: number; t1: number; t2: number };
+    if (cdp && PROFILE) {
+      const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+      await cdp.detach();
+      const { writeFileSync, mkdirSync } = await import('node:fs');
+      mkdirSync(PROFILE, { recursive: true });
+      const name = `first-move${shift ? '-shift' : ''}-${Math.round(grip.gx)}x${Math.round(grip.gy)}-${Math.round(performance.now())}`;
+      writeFileSync(`${PROFILE}/${name}.cpuprofile`, JSON.stringify(profile));
+      console.log(`  first move${shift ? ' (Shift)' : ''}: ${(r.t2 - r.t0).toFixed(1)} ms (${name})`);
+      printProfile(profile, 1);
+    }
     if (r.t0 && r.t1) toFrame.push(r.t2 - r.t0);
     if (k === 0) {
       check(r.t1, 'the first move of the regional drag did not change the detachment depth in the strip');
@@ -416,7 +450,7 @@ function printProfile(profile: CpuProfile, moves: number): void {
   }
   const top = (m: Map<string, number>, k: number) => [...m].sort((a, b) => b[1] - a[1]).slice(0, k);
   const span = (profile.endTime - profile.startTime) / 1000;
-  console.log(`    profile: ${span.toFixed(0)} ms over ${moves} moves; ms a move of its own (self) and with callees (total):`);
+  console.log(`    profile: ${span.toFixed(0)} ms over ${moves} move(s); ms a move of its own (self) and with callees (total):`);
   for (const [l, ms] of top(self, 14)) console.log(`      self  ${(ms / moves).toFixed(2).padStart(6)}  ${l}`);
   for (const [l, ms] of top(total, 30)) console.log(`      total ${(ms / moves).toFixed(2).padStart(6)}  ${l}`);
 }

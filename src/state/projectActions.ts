@@ -7,6 +7,7 @@ import { MAX_PROJECT_FILE_BYTES, SCAN_NOT_STORED_MARK, serializeProject, type Sc
 import { readProjectFile, type OpenProgress } from '../io/readProjectFile';
 import { reopenScan } from '../io/reopenScan';
 import { useDocStore } from './docStore';
+import { selectAnalysis } from './selectors';
 import { getScan, putScan, type CachedScan } from './scanCache';
 import { useSessionStore } from './sessionStore';
 
@@ -125,6 +126,12 @@ export async function openProjectFile(file: File): Promise<boolean> {
       return false;
     }
     if (decodedScan && doc.scan) putScan(doc.scan.id, decodedScan);
+    // The first analysis of a big document takes a few hundred milliseconds: it runs in a task of its own before
+    // the document is drawn (the views then read the remembered result), not inside the drawing's task.
+    session.setBusy(`Opening ${file.name} … measuring`);
+    await nextTask();
+    selectAnalysis(doc);
+    await nextTask();
     useDocStore.getState().replace(doc);
     fitViewToDoc(doc);
     const said = [`Opened ${file.name}.`, ...openNotes(opened.notes, doc, Boolean(scan))];
@@ -158,4 +165,9 @@ export function newProject(): void {
   const doc = emptyProjectDoc();
   useDocStore.getState().replace(doc);
   fitViewToDoc(doc);
+}
+
+/** Resolves in a later task, so that the page can draw and handle input in between. */
+function nextTask(): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, 0));
 }

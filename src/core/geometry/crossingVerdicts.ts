@@ -49,15 +49,17 @@ export function setCrossingDeferral(defer: CrossingDeferral | null, minVertices 
   deferral = defer ? { defer, minVertices } : null;
 }
 
-/** Records the verdict for a key handed out by the deferral, and bumps crossingVerdictsVersion. */
+/** Records the verdict for a key handed out by the deferral, and bumps crossingVerdictsVersion when the line crosses itself. */
 export function recordCrossingVerdict(key: string, verdict: CrossingVerdict): void {
   pending.delete(key);
   if (verdicts.size >= KEEP) verdicts.delete(verdicts.keys().next().value as string);
   verdicts.set(key, verdict);
-  version++;
+  // While pending the line was measured as not crossing itself: only a crossing makes those results out of date
+  // (a big document's every line coming back clear would otherwise re-run its whole analysis for nothing).
+  if (verdict !== null) version++;
 }
 
-/** Bumped whenever a deferred verdict arrives: results computed while it was pending are out of date. */
+/** Bumped whenever a deferred verdict that finds a crossing arrives: results computed while it was pending are out of date. */
 export function crossingVerdictsVersion(): number {
   return version;
 }

@@ -2,7 +2,7 @@
 // the amplification 1 + W0/D (docs/method.md §Sensitivity to the regional) written on the plot. Elevation, not depth: a depth needs a
 // reference, and the highest regional moves with the offset, so a depth curve would disagree with the
 // main pane's depth for the same shift; the elevation has no such ambiguity.
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { Section } from '../../core/model/section';
 import { prepareSection } from '../../core/analysis/prepareSection';
 import { regionalSensitivity } from '../../core/analysis/sensitivity';
@@ -27,15 +27,28 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
   const [tiltRange, setTiltRange] = useState(5);
   const [pivot, setPivot] = useState<'left' | 'right'>('left');
   const u = section.units;
-  const sweep = useMemo(() => {
-    if (checking) return null;
-    const prep = prepareSection(section);
-    if (!prep.ok) return null;
-    const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);
-    // Tilt entered in units per 1000 units (m per km), swept as dz/dx.
-    const tilts = linspace(-Math.abs(tiltRange), Math.abs(tiltRange), 41);
-    return { offsets, tilts, result: regionalSensitivity(prep.prepared, { offsets, tilts: tilts.map((t) => t / 1000), tiltPivot: pivot }), width: prep.prepared.pinWidth };
+  // The sweeps re-prepare the whole section (a big document's lines take a few hundred milliseconds): they are
+  // made after the document is first drawn, in a task of their own, and the panel says so meanwhile.
+  const [made, setMade] = useState<{ section: Section; offsetRange: number; tiltRange: number; pivot: 'left' | 'right'; sweep: Sweep | null } | null>(null);
+  useEffect(() => {
+    if (checking) return;
+    // A frame, then a task: after the browser has drawn. A page not drawing (a hidden tab) gets no frames, so a
+    // fallback timer starts the task too.
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const make = () => {
+      if (timer !== undefined) return;
+      timer = setTimeout(() => setMade({ section, offsetRange, tiltRange, pivot, sweep: sweepOf(section, offsetRange, tiltRange, pivot) }), 0);
+    };
+    const frame = requestAnimationFrame(make);
+    const fallback = setTimeout(make, 250);
+    return () => {
+      cancelAnimationFrame(frame);
+      clearTimeout(fallback);
+      clearTimeout(timer);
+    };
   }, [section, offsetRange, tiltRange, pivot, checking]);
+  const ready = made !== null && made.section === section && made.offsetRange === offsetRange && made.tiltRange === tiltRange && made.pivot === pivot;
+  const sweep = ready ? made.sweep : null;
   const setAmplification = useUncertaintyStore((st) => st.setAmplification);
   // Kept for the report with the key of the section it belongs to (not while a gesture holds the section).
   useEffect(() => {
@@ -44,6 +57,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
     setAmplification(scenarioId, { sectionKey: sectionKey(section), amplification: sweep.result.amplification, pinWidth: sweep.width, displacement: base && !base.noDetachment ? base.displacement : null });
   }, [sweep, gesture, scenarioId, section, setAmplification]);
   if (checking) return <p className="hint" data-testid="sensitivity-checking">Checking lines… the sweeps wait until the long lines are known not to cross themselves.</p>;
+  if (!ready) return <p className="hint" data-testid="sensitivity-computing">Computing the sweeps…</p>;
   if (!sweep) return <p className="hint">Sensitivity needs a section the engine can analyse.</p>;
   const amp = sweep.result.amplification;
   const ampText = amp === null
@@ -82,4 +96,16 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
       />
     </div>
   );
+}
+
+interface Sweep { offsets: number[]; tilts: number[]; result: ReturnType<typeof regionalSensitivity>; width: number }
+
+/** The offset and tilt sweeps of the section (null when the engine cannot prepare it). */
+function sweepOf(section: Section, offsetRange: number, tiltRange: number, pivot: 'left' | 'right'): Sweep | null {
+  const prep = prepareSection(section);
+  if (!prep.ok) return null;
+  const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);
+  // Tilt entered in units per 1000 units (m per km), swept as dz/dx.
+  const tilts = linspace(-Math.abs(tiltRange), Math.abs(tiltRange), 41);
+  return { offsets, tilts, result: regionalSensitivity(prep.prepared, { offsets, tilts: tilts.map((t) => t / 1000), tiltPivot: pivot }), width: prep.prepared.pinWidth };
 }

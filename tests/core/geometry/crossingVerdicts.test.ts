@@ -5,7 +5,7 @@
 import { lineString } from '@turf/helpers';
 import kinks from '@turf/kinks';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { crossingKey, crossingVerdict, recordCrossingVerdict, setCrossingDeferral } from '../../../src/core/geometry/crossingVerdicts';
+import { crossingKey, crossingVerdict, crossingVerdictsVersion, recordCrossingVerdict, setCrossingDeferral } from '../../../src/core/geometry/crossingVerdicts';
 import { sweepSelfCrossing } from '../../../src/core/geometry/sweepSelfCrossing';
 import { prepareHorizon } from '../../../src/core/analysis/prepareHorizon';
 
@@ -58,7 +58,10 @@ describe('crossingVerdicts', () => {
     expect(prepare({ xs: [...l.xs], zs: [...l.zs] }).ok).toBe(true);
     expect(defer).toHaveBeenCalledTimes(1);
     const [key, xs, zs] = defer.mock.calls[0] as [string, Float64Array, Float64Array];
+    const version = crossingVerdictsVersion();
     recordCrossingVerdict(key, sweepSelfCrossing(xs, zs));
+    // A crossing changes what was measured meanwhile: results remembered by the version are out of date.
+    expect(crossingVerdictsVersion()).toBeGreaterThan(version);
     // The verdict belongs to the content: a fresh copy of the same line gets it without being handed out again.
     const after = prepare({ xs: [...l.xs], zs: [...l.zs] });
     expect(after.ok).toBe(false);
@@ -72,7 +75,10 @@ describe('crossingVerdicts', () => {
     const l = limb(3000, false);
     expect(prepare(l).ok).toBe(true);
     const [key, xs, zs] = defer.mock.calls[0] as [string, Float64Array, Float64Array];
+    const version = crossingVerdictsVersion();
     recordCrossingVerdict(key, sweepSelfCrossing(xs, zs));
+    // Measured meanwhile as not crossing, which it does not: what was computed then stands, the version with it.
+    expect(crossingVerdictsVersion()).toBe(version);
     expect(prepare(l).ok).toBe(true);
     const short = limb(1000, true);
     expect(kinked(short)).toBe(true);
