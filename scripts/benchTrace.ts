@@ -7,7 +7,8 @@
 // preview latency of a 3,000 px stretch (first computation of its tiles and tree, then each later pointer
 // position) and the memory tracing holds; last, the demo section's six horizons traced the same way against
 // the exact lines its scan was drawn from (the forward model's, not section.json, whose vertices carry the
-// demo's hand-digitising jitter). Run alone (npm run bench:trace; `-- --demo` for the demo part only) or from bench:ui.
+// demo's hand-digitising jitter), and again as a user with the live preview clicks: where the preview would leave
+// the line, the whole traced line (not only its vertices) within 1.5 px. Run alone (npm run bench:trace; `-- --demo` for the demo part only) or from bench:ui.
 import { readFileSync } from 'node:fs';
 import { PNG } from 'pngjs';
 import { analyseSection } from '../src/core/analysis/analyseSection';
@@ -283,6 +284,106 @@ function demo(): void {
   const truthDepth = depthOf(section);
   const tracedDepth = depthOf({ ...section, horizons: traced });
   console.log(`Detachment depth: from the demo's own lines ${truthDepth.toFixed(1)} m, from the traced lines ${tracedDepth.toFixed(1)} m (${(((tracedDepth - truthDepth) / truthDepth) * 100).toFixed(3)} %)`);
+
+  // The way a geologist works with the live preview: from each anchor the pointer goes on along the line, and the
+  // next click is placed at the farthest point (in steps of FOLLOW_STEP_PX along the line) up to which the stretch
+  // still stays within 1.5 px of the drawn line, measured along the traced line itself (its straight runs between
+  // vertices too), not only at its vertices. The pointer goes on a little past a place where the preview leaves the
+  // line (FOLLOW_PAST steps), as a user does to see whether it comes back. An eroded horizon is traced again with a
+  // click at each outcrop as well.
+  console.log(`\nThe demo again, each click where the preview would leave the line (steps of ${FOLLOW_STEP_PX} px along it; the whole traced line within 1.5 px, every 1 px along it, ends as above)`);
+  console.log('Horizon                    clicks  RMS (px)  max along the line (px)  vertices  clicks placed');
+  const followed: Section['horizons'] = [];
+  for (const hz of section.horizons) {
+    const truth = hz.line!.map(([x, z]) => toImage(x, z));
+    const digitised = handDigitised.horizons.find((k) => k.name === hz.name);
+    const outcrops = (digitised?.projected ?? []).flatMap((run) => run.map((i) => nearestIndex(truth, toImage(digitised!.line![i][0], digitised!.line![i][1]))));
+    const r = followPreview(rgba, w, h, truth, []);
+    followed.push({ ...hz, line: r.pts.map(([u, v]) => toSection(u, v)) });
+    console.log(`${hz.name.padEnd(27)}${String(r.clicks).padStart(6)}  ${r.rms.toFixed(3).padStart(8)}  ${r.max.toFixed(3).padStart(23)}  ${String(r.pts.length).padStart(8)}  at u ${r.placed.map((p) => p[0].toFixed(0)).join(', ')}`);
+    if (outcrops.length === 0) continue;
+    // An eroded horizon again, with a click at each outcrop as well (where its projected run starts and ends).
+    const o = followPreview(rgba, w, h, truth, outcrops);
+    console.log(`${'  and a click at each outcrop'.padEnd(27)}${String(o.clicks).padStart(6)}  ${o.rms.toFixed(3).padStart(8)}  ${o.max.toFixed(3).padStart(23)}  ${String(o.pts.length).padStart(8)}  at u ${o.placed.map((p) => p[0].toFixed(0)).join(', ')}`);
+  }
+  const followedDepth = depthOf({ ...section, horizons: followed });
+  console.log(`Detachment depth from these lines: ${followedDepth.toFixed(1)} m (${(((followedDepth - truthDepth) / truthDepth) * 100).toFixed(3)} %)`);
+}
+
+/** Step along the line between the pointer positions tried, in image px. */
+const FOLLOW_STEP_PX = 100;
+/** Steps the pointer goes on past a position where the preview leaves the line. */
+const FOLLOW_PAST = 2;
+
+/** Largest distance (image px) from the truth of the traced line `pts`, every 1 px along it, leaving out points where `skip` holds. */
+function lineMax(pts: [number, number][], truth: [number, number][], skip: (p: [number, number]) => boolean): number {
+  let max = 0;
+  for (let i = 0; i + 1 < pts.length; i++) {
+    const [a, b] = [pts[i], pts[i + 1]];
+    const steps = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1])));
+    for (let k = 0; k <= steps; k++) {
+      const p: [number, number] = [a[0] + ((b[0] - a[0]) * k) / steps, a[1] + ((b[1] - a[1]) * k) / steps];
+      if (!skip(p)) max = Math.max(max, distanceToPolyline(truth, p));
+    }
+  }
+  return max;
+}
+
+/** Traces a demo horizon clicking where the preview would leave the line (see demo()); returns the clicks, the vertices' RMS and the line's largest distance. */
+function followPreview(rgba: ArrayLike<number>, w: number, h: number, truth: [number, number][], outcrops: number[]): { clicks: number; rms: number; max: number; pts: [number, number][]; placed: [number, number][] } {
+  const session = new TraceSession();
+  const whole = { x0: 0, y0: 0, w, h };
+  const [first, last] = [truth[0], truth[truth.length - 1]];
+  const nearEnd = (p: [number, number]) => Math.min(Math.hypot(p[0] - first[0], p[1] - first[1]), Math.hypot(p[0] - last[0], p[1] - last[1])) < 4;
+  const arc = [0];
+  for (let i = 1; i < truth.length; i++) arc.push(arc[i - 1] + Math.hypot(truth[i][0] - truth[i - 1][0], truth[i][1] - truth[i - 1][1]));
+  const clickAt = (i: number) => snapClick(rgba, w, h, [truth[i][0], truth[i][1] + 2]);
+  const trace = (a: [number, number], b: [number, number]) => {
+    const win = traceWindow(a, b, w, h);
+    const tiles = tilesOver(win, w, h);
+    for (const t of tiles) session.putTile(t.key, t, rgba, whole);
+    return session.traceOnce(a, b, win, tiles.map((t) => t.key));
+  };
+  const forced = [...new Set([...outcrops, truth.length - 1])].sort((a, b) => a - b);
+  let at = 0;
+  let anchor = clickAt(0);
+  let clicks = 1;
+  const pts: [number, number][] = [anchor];
+  const placed: [number, number][] = [anchor];
+  for (const stop of forced) {
+    while (at < stop) {
+      // The farthest point, FOLLOW_STEP_PX at a time, at which the preview follows: the pointer goes on while it does,
+      // and FOLLOW_PAST steps past a place where it leaves the line, to see whether it comes back; shorter steps when
+      // even the first does not follow.
+      let best: { i: number; q: [number, number]; stretch: [number, number][] } | null = null;
+      for (let step = FOLLOW_STEP_PX; !best && step >= 12; step /= 2) {
+        let misses = 0;
+        for (let s = arc[at] + step; misses <= FOLLOW_PAST; s += step) {
+          let i = at + 1;
+          while (i < stop && arc[i] < s) i++;
+          const q = clickAt(i);
+          const stretch = trace(anchor, q);
+          if (lineMax(stretch, truth, nearEnd) <= 1.5) [best, misses] = [{ i, q, stretch }, 0];
+          else misses++;
+          if (i >= stop) break;
+        }
+      }
+      // Nothing follows even a short way: the click goes a short step on, and its stretch is kept as it is.
+      if (!best) {
+        let i = at + 1;
+        while (i < stop && arc[i] < arc[at] + 12) i++;
+        const q = clickAt(i);
+        best = { i, q, stretch: trace(anchor, q) };
+      }
+      for (let k = 1; k < best.stretch.length; k++) pts.push(best.stretch[k]);
+      [at, anchor] = [best.i, best.q];
+      clicks++;
+      placed.push(anchor);
+    }
+  }
+  let s2 = 0;
+  for (const p of pts) s2 += distanceToPolyline(truth, p) ** 2;
+  return { clicks, rms: Math.sqrt(s2 / pts.length), max: lineMax(pts, truth, nearEnd), pts, placed };
 }
 
 if (!process.argv.includes('--demo')) main();
