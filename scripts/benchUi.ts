@@ -722,7 +722,7 @@ async function tracing(page: Page): Promise<void> {
   const log = (await page.evaluate('window.__previewLog')) as [number, number][];
   const firstFollowing = log.find((e) => e[1] > 2)!;
   const settled = log[log.length - 1];
-  report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: first that follows`, ms: firstFollowing[0] - t0, floor: FRAME_MS, longest: await longestSince(page, t0), note: `${firstFollowing[1]} points; the rough search (window read at ≤ 16,000 px)` });
+  report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: first that follows`, ms: firstFollowing[0] - t0, floor: FRAME_MS, longest: await longestSince(page, t0), note: `${firstFollowing[1]} points; the rough search (window reduced to about 16,000 px, the darkest pixel of each block)` });
   report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: full resolution`, ms: settled[0] - t0, floor: FRAME_MS, note: `${settled[1]} points; tiles and tree in the worker` });
   // Later pointer positions: a few image pixels along the line each, waiting for the redrawn preview.
   const later: number[] = [];

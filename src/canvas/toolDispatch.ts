@@ -40,7 +40,8 @@ let toolId = useSessionStore.getState().activeTool;
 let toolState: { name: string } = toolEntry(toolId).tool.initial;
 let dragging = false;
 
-// One line tracer for the scan shown, made when a tool first asks and replaced when the scan changes.
+// One line tracer for the scan shown, made when a tool that follows lines is chosen (or a tool first asks) and
+// replaced when the scan changes.
 let tracer: { bitmap: ImageBitmap; tracer: ScanLineTracer } | null = null;
 let tracedPending = false;
 
@@ -167,6 +168,9 @@ useSessionStore.subscribe((s) => {
   toolId = s.activeTool;
   toolState = toolEntry(toolId).tool.initial;
   useToolSession.setState({ stateName: toolState.name });
+  // A tool that follows drawn lines starts the tracer (its workers load and warm up) as soon as it is chosen, so
+  // the first click's preview does not wait for them.
+  if (toolEntry(toolId).tracesLines) scanTracer(useDocStore.getState().doc);
 });
 
 function imagePoint(box: HTMLElement, clientX: number, clientY: number): [number, number] {

@@ -2,16 +2,18 @@
 // stretches are computed in a worker (feature tiles, one shortest-path tree per anchor, the path read
 // back per pointer position), so a large scan never stalls the page. Answers are synchronous — ready or
 // not yet — and `onReady` is called whenever something asked for has arrived.
-// The first preview from an anchor is progressive: while the full-resolution tiles and tree are computed, a
-// second worker searches the same window read at a reduced resolution (at most COARSE_PIXELS pixels, so a few
-// milliseconds however long the stretch: the tree is sent with the pointer position and answers it at once), and its
-// path, mapped back to the image, is shown until the full one is ready. Both workers are warmed up when the tracer
-// starts. As soon
-// as an anchor is placed, the tree around it is built ahead, towards where the line was heading, so the next
-// preview usually finds its tree waiting.
+// The first preview from an anchor is progressive: at once a straight segment; while the full-resolution tiles and
+// tree are computed, a second worker searches the same window reduced to about COARSE_PIXELS pixels (so a few
+// milliseconds however long the stretch: the tree is sent with the pointer position and answers it at once), and
+// its path, mapped back to the image, is shown until the full one is ready. The window is read whole (the browser
+// reduces it first only past ROUGH_READ_PIXELS) and the worker keeps the darkest pixel of each block
+// (core/trace/poolDarkest): the browser's own resize sampled a 3 px line away in whole columns, and the rough path
+// ran straight. Both workers are warmed up when the tracer starts. As soon as an anchor is placed, the tree around
+// it is built ahead, towards where the line was heading, so the next preview usually finds its tree waiting.
 import type { ImagePx } from '../core/model/projectDoc';
 import { pixelFeatures } from '../core/trace/pixelFeatures';
 import type { Raster } from '../core/trace/raster';
+import { roughReduction } from '../core/trace/roughReduction';
 import { roughToImage } from '../core/trace/roughToImage';
 import { snapToLine } from '../core/trace/snapToLine';
 import { tilesOver, traceWindow, windowCovers } from '../core/trace/traceWindow';
@@ -25,8 +27,13 @@ export const MAX_SNAP_RADIUS_PX = 24;
 const PATHS_KEPT = 256;
 /** Trees the worker keeps; the same number as its session keeps. */
 const TREES_KEPT = 4;
-/** The rough search reads the window reduced to at most this many pixels (and by at least 2 in each direction). */
+/** The rough search reduces the window to about this many pixels (and by at least 2 in each direction). */
 export const COARSE_PIXELS = 16_000;
+/**
+ * A rough window is read at full resolution up to this many pixels (a 3,000 px stretch's window is 1.4 MP); a larger
+ * one is first reduced by the browser to about this.
+ */
+export const ROUGH_READ_PIXELS = 4_000_000;
 
 /** A rough tree: its anchor and window (image px), and the window's image px per reduced pixel across and down. */
 interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: number }
@@ -179,25 +186,23 @@ export class ScanLineTracer {
     return this.coarseWorker;
   }
 
-  /** Sends the wanted rough tree when no other is being built: the window read reduced (COARSE_PIXELS), as one tile. */
+  /** Sends the wanted rough tree when no other is being built: the window read whole, reduced by blocks in the worker, as one tile. */
   private pumpCoarse(): void {
     if (this.coarseBuilding || !this.coarseWanted || this.closed) return;
     const { from, win } = this.coarseWanted;
     const answer = this.coarseFor;
     this.coarseWanted = null;
     this.coarseFor = null;
-    const step = Math.max(2, Math.sqrt((win.w * win.h) / COARSE_PIXELS));
-    const cw = Math.max(1, Math.round(win.w / step));
-    const ch = Math.max(1, Math.round(win.h / step));
+    const { readW, readH, pool, cw, ch, sx, sy } = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
     this.coarseBuilding = true;
     const id = this.nextId++;
     const key = `coarse-${id}`;
-    const [sx, sy] = [win.w / cw, win.h / ch];
-    createImageBitmap(this.bitmap, win.x0, win.y0, win.w, win.h, { resizeWidth: cw, resizeHeight: ch, resizeQuality: 'medium' }).then((bitmap) => {
+    const resize = readW < win.w || readH < win.h ? { resizeWidth: readW, resizeHeight: readH, resizeQuality: 'medium' as const } : {};
+    createImageBitmap(this.bitmap, win.x0, win.y0, win.w, win.h, resize).then((bitmap) => {
       if (this.closed) return;
       const worker = this.coarse();
       const whole = { x0: 0, y0: 0, w: cw, h: ch };
-      worker.postMessage({ type: 'tile', key, tile: whole, crop: whole, bitmap } satisfies TraceWorkerRequest, [bitmap]);
+      worker.postMessage({ type: 'tile', key, tile: whole, crop: whole, bitmap, pool } satisfies TraceWorkerRequest, [bitmap]);
       const c: [number, number] = [(from[0] - win.x0) / sx, (from[1] - win.y0) / sy];
       // The pointer position that asked is answered with the tree, in the same turn of the worker.
       let path: { key: string; to: [number, number] } | undefined;

@@ -1,21 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import type { ImagePx } from '../../src/core/model/projectDoc';
 import { sectionFrame } from '../../src/core/model/commands/sectionFrame';
-import { reduceRgba } from '../../src/core/trace/reduceRgba';
+import { poolDarkest } from '../../src/core/trace/poolDarkest';
+import { roughReduction } from '../../src/core/trace/roughReduction';
 import { roughToImage } from '../../src/core/trace/roughToImage';
 import { TraceSession } from '../../src/core/trace/traceSession';
 import { tilesOver, traceWindow } from '../../src/core/trace/traceWindow';
-import { COARSE_PIXELS } from '../../src/io/lineTracer';
+import { COARSE_PIXELS, ROUGH_READ_PIXELS } from '../../src/io/lineTracer';
 import { hoverStretch, startLine } from '../../src/tools/tracedLine';
 import type { LineTracer, ToolContext } from '../../src/tools/toolTypes';
 import { renderScan, sineCurve, type ScanSpec } from '../core/trace/syntheticScan';
 import { distanceStats, pointsOnCurve } from '../core/trace/traceHelpers';
 import { toolDoc } from './toolFixture';
 
-// The rough first preview of a long stretch, as the tracer makes it: the search window read at reduced resolution
-// (at most COARSE_PIXELS pixels), searched, and its path mapped back to the scan. Truth is the sine line the scan
-// was drawn from, anti-aliased (analytic): the rough path must follow it within its own resolution (one reduced
-// pixel), and the full-resolution path must then replace it in the preview.
+// The rough first preview of a long stretch, as the tracer makes it: the search window read whole and reduced by
+// blocks to about COARSE_PIXELS pixels (the darkest pixel of each), searched, and its path mapped back to the scan.
+// Truth is the sine line the scan was drawn from, anti-aliased (analytic): the rough path must follow it within its
+// own resolution (one reduced pixel), and the full-resolution path must then replace it in the preview.
 const curve = sineCurve(150, 40, 700, 0.4);
 const spec: ScanSpec = { w: 1800, h: 300, paper: [238, 230, 212], angleRad: 0.01, noise: 5, seed: 21, layers: [{ kind: 'ink', curve, widthPx: 2.5, colour: [35, 30, 28] }] };
 const scan = renderScan(spec);
@@ -25,12 +26,13 @@ const whole = { x0: 0, y0: 0, w: scan.w, h: scan.h };
 /** The rough stretch from `from` to `to` and the image px per reduced pixel (the larger of across and down). */
 function rough(): { points: ImagePx[]; stepPx: number } {
   const win = traceWindow(from, to, scan.w, scan.h);
-  const step = Math.max(2, Math.sqrt((win.w * win.h) / COARSE_PIXELS));
-  const cw = Math.max(1, Math.round(win.w / step));
-  const ch = Math.max(1, Math.round(win.h / step));
-  const sx = win.w / cw;
-  const sy = win.h / ch;
-  const reduced = reduceRgba(scan.rgba, scan.w, win, cw, ch);
+  const r = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
+  // The window is small enough to be read at full resolution, as the tracer reads it.
+  expect([r.readW, r.readH]).toEqual([win.w, win.h]);
+  const windowRgba = new Uint8ClampedArray(win.w * win.h * 4);
+  for (let y = 0; y < win.h; y++) windowRgba.set(scan.rgba.subarray(((win.y0 + y) * scan.w + win.x0) * 4, ((win.y0 + y) * scan.w + win.x0 + win.w) * 4), y * win.w * 4);
+  const { rgba: reduced, w: cw, h: ch } = poolDarkest(windowRgba, win.w, win.h, r.pool);
+  const { sx, sy } = r;
   const session = new TraceSession();
   const grid = { x0: 0, y0: 0, w: cw, h: ch };
   session.putTile('rough', grid, reduced, grid);
@@ -57,7 +59,7 @@ describe('the rough first preview of a long stretch', () => {
   const full = refined();
 
   it('follows an anti-aliased sine line within its resolution', () => {
-    // Reading 1,800 × 300 px at 16,000 px reduces by about 5 px a reduced pixel: the line is a faint ridge there.
+    // Reducing 1,800 × 300 px to about 16,000 px takes blocks of 5 px (or more): the line is a thin ridge there.
     expect(r.stepPx).toBeGreaterThan(3);
     const inner = r.points.slice(1, -1);
     // It follows the waves (a chord of 1,680 px across two of them would be tens of pixels off) ...

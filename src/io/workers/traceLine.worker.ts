@@ -1,15 +1,17 @@
 // Follows drawn lines off the main thread. Protocol: 'tile' (a tile's pixels as a transferred bitmap, one
-// pixel wider than the tile where the image allows) stores its features; 'drop' forgets tiles; 'tree'
+// pixel wider than the tile where the image allows; with `pool`, a rough window to reduce here by blocks of that
+// side) stores its features; 'drop' forgets tiles; 'tree'
 // builds an anchor's shortest-path tree over a window and answers 'treeDone'; 'path' answers the traced
 // stretch to a point (null when that tree is no longer kept); 'once' traces one placed stretch without
 // keeping a tree; 'warm' runs the whole chain once on a small made-up window, so that the first real preview
 // does not pay for compiling it (cold, a first tile and tree took ten times as long). A 'tree' may carry the
 // pointer position whose path it answers as soon as it is built, saving a round trip. Messages are handled in order.
 import type { Raster } from '../../core/trace/raster';
+import { poolDarkest } from '../../core/trace/poolDarkest';
 import { TraceSession } from '../../core/trace/traceSession';
 
 export type TraceWorkerRequest =
-  | { type: 'tile'; key: string; tile: Raster; crop: Raster; bitmap: ImageBitmap }
+  | { type: 'tile'; key: string; tile: Raster; crop: Raster; bitmap: ImageBitmap; pool?: number }
   | { type: 'drop'; keys: string[] }
   | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[]; path?: { key: string; to: [number, number] } }
   | { type: 'warm' }
@@ -41,7 +43,12 @@ function readPixels(bitmap: ImageBitmap): Uint8ClampedArray {
 self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
   const m = e.data;
   try {
-    if (m.type === 'tile') session.putTile(m.key, m.tile, readPixels(m.bitmap), m.crop);
+    if (m.type === 'tile') {
+      const { width, height } = m.bitmap;
+      const px = readPixels(m.bitmap);
+      // A rough window comes whole at (or near) full resolution and is reduced here, keeping each block's darkest pixel.
+      session.putTile(m.key, m.tile, m.pool && m.pool > 1 ? poolDarkest(px, width, height, m.pool).rgba : px, m.crop);
+    }
     else if (m.type === 'drop') session.dropTiles(m.keys);
     else if (m.type === 'tree') {
       try {
