@@ -1,6 +1,7 @@
 // Benchmark of the area-balance engine (npm run bench; add -- --json for the medians only).
 // In one run, on a forward-model section of 12 horizons × ~10,000 vertices:
-//   analysis  – analyseSection, the full analysis (validation, pin clipping, lengths, areas,
+//   analysis  – analyseSection with a caller-held preparation buffer, as the page runs it (and once
+//               more without one, in fresh arrays), the full analysis (validation, pin clipping, lengths, areas,
 //               self-crossing checks, the area–depth fit);
 //   floor     – a bare shoelace pass over the same vertices, already in typed arrays;
 //   input     – a bare shoelace pass over the section's own [x, z] point arrays, the form the
@@ -18,6 +19,7 @@
 // runs: every analysis validates, clips and measures the whole section again.
 import polygonClipping from 'polygon-clipping';
 import { analyseSection } from '../src/core/analysis/analyseSection';
+import { createPreparationBuffer } from '../src/core/analysis/preparationBuffer';
 import { monteCarlo, type MonteCarloOptions } from '../src/core/analysis/monteCarlo';
 import { forwardSection } from '../src/core/forward/forwardSection';
 import type { FoldSpec } from '../src/core/forward/forwardSpec';
@@ -179,14 +181,22 @@ function main(): void {
     for (const l of loopArrays) s += shoelaceArea(l.xs, l.zs);
     return s;
   };
+  // The page holds one buffer for the engine's passing points (state/selectors.ts), and so does this loop.
+  const preparationBuffer = createPreparationBuffer();
   const analysis = (): number => {
-    const r = analyseSection(section);
+    const r = analyseSection(section, { buffer: preparationBuffer });
     if (!r.ok) throw new Error(`bench section rejected: ${r.problems[0].message}`);
     return r.analysis.horizons.length;
   };
 
+  // The same analysis by a caller that holds no buffer: fresh arrays each call.
+  const analysisFresh = (): number => {
+    const r = analyseSection(section);
+    if (!r.ok) throw new Error(`bench section rejected: ${r.problems[0].message}`);
+    return r.analysis.horizons.length;
+  };
   const input = () => inputShoelace(section);
-  // Validation into one reused buffer, as the analysis runs it (prepareSection's pool).
+  // Validation into one reused buffer, as the analysis runs it (the caller's preparation buffer).
   const buffer = new Float64Array(section.horizons.reduce((n, h) => n + 2 * (h.line.length + h.regional.length), 0));
   let used = 0;
   const validation = () => {
@@ -195,11 +205,11 @@ function main(): void {
   };
   const crossings = crossingTest(section);
 
-  // All five in alternating blocks of 20 runs after a warm-up of each: load on the machine falls on
+  // All six in alternating blocks of 20 runs after a warm-up of each: load on the machine falls on
   // all alike, and within a block each runs in its own steady state (the floor's arrays stay in
   // cache, as a bare pass would have them; a strict one-by-one alternation would let the analysis
   // evict them and flatter the ratio).
-  const timed: [() => unknown, number[]][] = [analysis, floor, input, validation, crossings].map((fn) => [fn, []]);
+  const timed: [() => unknown, number[]][] = [analysis, floor, input, validation, crossings, analysisFresh].map((fn) => [fn, []]);
   for (let i = 0; i < 20; i++) for (const [fn] of timed) fn();
   for (let block = 0; block < 6; block++) {
     for (const [fn, times] of timed) {
@@ -210,7 +220,7 @@ function main(): void {
       }
     }
   }
-  const [analysisMs, floorMs, inputMs, validationMs, crossingMs] = timed.map(([, times]) => median(times));
+  const [analysisMs, floorMs, inputMs, validationMs, crossingMs, analysisFreshMs] = timed.map(([, times]) => median(times));
 
   const clippingMs = timeIt(() => clippedAreas(section), 7, 2);
   const ours = analyseSection(section);
@@ -232,13 +242,14 @@ function main(): void {
   const zigzag = timeSweep(steepZigzag(1_000_000), 5);
   const limb = timeSweep(steepLimb(20_000), 9);
   if (json) {
-    process.stdout.write(`${JSON.stringify({ analysisMs, floorMs, clippingMs, monteCarloMs, zigzagSweepMs: zigzag.wallMs, zigzagSweepCpuMs: zigzag.cpuMs, limbSweepMs: limb.wallMs })}\n`);
+    process.stdout.write(`${JSON.stringify({ analysisMs, analysisFreshMs, floorMs, clippingMs, monteCarloMs, zigzagSweepMs: zigzag.wallMs, zigzagSweepCpuMs: zigzag.cpuMs, limbSweepMs: limb.wallMs })}\n`);
     return;
   }
   const mcVertices = mcSection.horizons.map((h) => h.line.length);
   const x = (ms: number) => `${(ms / floorMs).toFixed(2)}× floor`;
   const rows: [string, string, string][] = [
     ['full analysis (analyseSection)', analysisMs.toFixed(3), x(analysisMs)],
+    ['  the same, no buffer (fresh arrays)', analysisFreshMs.toFixed(3), x(analysisFreshMs)],
     ['floor: bare shoelace, typed arrays', floorMs.toFixed(3), '1.00× floor'],
     ['input: bare shoelace, [x, z] arrays', inputMs.toFixed(3), x(inputMs)],
     ['  part: validation (copy to arrays)', validationMs.toFixed(3), x(validationMs)],

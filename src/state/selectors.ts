@@ -5,6 +5,7 @@ import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { analyseDoc, analyseDocGesture, prepareDocGesture, type DocGestureBase } from '../core/analysis/analyseDocGesture';
 import { activeScenario } from '../core/model/docToSection';
 import { crossingVerdictsVersion } from '../core/geometry/crossingVerdicts';
+import { createPreparationBuffer } from '../core/analysis/preparationBuffer';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
 
 // docToSection reads the scenario, the horizons, the faults, the calibration and the units and nothing
@@ -14,6 +15,9 @@ import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
 // with the verdicts' version.
 interface Entry { horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; verdicts: number; result: DocAnalysis }
 const cache = new WeakMap<Scenario, Entry>();
+// The page analyses again on every edit; its one reusable buffer for the engine's passing points (the
+// analyses here run one at a time and keep only numbers and fresh arrays).
+const analysisBuffer = createPreparationBuffer();
 
 /** Returns the analysis of the document's active (or given) scenario, memoised on what it depends on. */
 export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysis {
@@ -21,7 +25,7 @@ export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysi
   const hit = scenario ? cache.get(scenario) : undefined;
   const verdicts = crossingVerdictsVersion();
   if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units && hit.verdicts === verdicts) return hit.result;
-  const result = analyseDoc(doc, scenarioId);
+  const result = analyseDoc(doc, scenarioId, analysisBuffer);
   if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, verdicts, result });
   return result;
 }
@@ -36,7 +40,7 @@ function gestureBase(start: ProjectDoc): DocGestureBase | null {
   const verdicts = crossingVerdictsVersion();
   const hit = bases.get(start);
   if (hit && hit.verdicts === verdicts) return hit.base;
-  const base = prepareDocGesture(start, selectAnalysis(start));
+  const base = prepareDocGesture(start, selectAnalysis(start), analysisBuffer);
   bases.set(start, { base, verdicts });
   return base;
 }

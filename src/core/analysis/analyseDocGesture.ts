@@ -18,6 +18,7 @@ import { activeScenario, docToSection, type DocSection } from '../model/docToSec
 import type { ProjectDoc, Scenario } from '../model/projectDoc';
 import { analyseDocSection, type DocAnalysis, type LeftOutHorizon } from './analyseDocSection';
 import { analysePrepared } from './analyseSection';
+import type { PreparationBuffer } from './preparationBuffer';
 import { prepareSection, type PreparedSection } from './prepareSection';
 import { projectedContribution } from './projectedContribution';
 
@@ -29,16 +30,16 @@ export interface DocGestureBase {
   leftOut: LeftOutHorizon[];
 }
 
-/** Returns the analysis of the document's active (or given) scenario: analyseDocSection of its section. */
-export function analyseDoc(doc: ProjectDoc, scenarioId?: string): DocAnalysis {
-  return analyseDocSection(docToSection(doc, scenarioId));
+/** Returns the analysis of the document's active (or given) scenario: analyseDocSection of its section (`buffer` as there). */
+export function analyseDoc(doc: ProjectDoc, scenarioId?: string, buffer?: PreparationBuffer): DocAnalysis {
+  return analyseDocSection(docToSection(doc, scenarioId), buffer);
 }
 
-/** Returns the prepared start of a gesture from its analysis (`analyseDoc(start)`), or null when it has no analysis to follow. */
-export function prepareDocGesture(start: ProjectDoc, startAnalysis: DocAnalysis): DocGestureBase | null {
+/** Returns the prepared start of a gesture from its analysis (`analyseDoc(start)`), or null when it has no analysis to follow; `buffer` holds only the validated input while it runs. */
+export function prepareDocGesture(start: ProjectDoc, startAnalysis: DocAnalysis, buffer?: PreparationBuffer): DocGestureBase | null {
   const ds = startAnalysis.docSection;
   if (!ds.ok || !startAnalysis.outcome?.ok || ds.section.horizons.length === 0) return null;
-  const prep = prepareSection(ds.section);
+  const prep = prepareSection(ds.section, {}, buffer);
   if (!prep.ok) return null;
   return { scenario: activeScenario(start), docSection: ds, prepared: prep.prepared, leftOut: startAnalysis.leftOut };
 }

@@ -1,5 +1,6 @@
 // The analysis of a project document's scenario as the app shows it (memoised by state/selectors).
 import type { DocSection } from '../model/docToSection';
+import type { PreparationBuffer } from './preparationBuffer';
 import { analyseSection, type AnalysisOutcome } from './analyseSection';
 
 /** A horizon the engine could not analyse (its own input problem), left out so that the others still are. */
@@ -19,10 +20,10 @@ export interface DocAnalysis {
 // those horizons are left out with the engine's message as the reason and the rest is analysed again;
 // a problem of the whole section (pins, units) still stops the analysis.
 
-/** Returns the analysis of a document's section, leaving out horizons with problems of their own (listed with the reason); outcome null when there is nothing to analyse. */
-export function analyseDocSection(docSection: DocSection): DocAnalysis {
+/** Returns the analysis of a document's section, leaving out horizons with problems of their own (listed with the reason); outcome null when there is nothing to analyse. `buffer`: the caller's reusable memory (createPreparationBuffer), else fresh arrays. */
+export function analyseDocSection(docSection: DocSection, buffer?: PreparationBuffer): DocAnalysis {
   if (!docSection.ok || docSection.section.horizons.length === 0) return { docSection, outcome: null, leftOut: [] };
-  const outcome = analyseSection(docSection.section);
+  const outcome = analyseSection(docSection.section, { buffer });
   if (outcome.ok || !outcome.problems.every((p) => p.horizon !== undefined)) return { docSection, outcome, leftOut: [] };
   const bad = new Map<string, string>();
   for (const p of outcome.problems) {
@@ -39,7 +40,7 @@ export function analyseDocSection(docSection: DocSection): DocAnalysis {
     section: { ...docSection.section, horizons: docSection.section.horizons.filter((_, i) => keep[i]) },
     horizonIds: docSection.horizonIds.filter((_, i) => keep[i]),
   };
-  const again = analyseSection(reduced.section);
+  const again = analyseSection(reduced.section, { buffer });
   // Leaving some out can bring up a problem of the rest only in theory (problems are per horizon); keep it honest.
   return again.ok ? { docSection: reduced, outcome: again, leftOut } : { docSection, outcome, leftOut: [] };
 }

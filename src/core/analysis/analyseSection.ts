@@ -5,7 +5,8 @@ import type { SectionProblem } from '../model/validateSection';
 import { chamberlinDepth } from './chamberlinDepth';
 import { fitAreaDepth, type AreaDepthResult } from './fitAreaDepth';
 import { layerParallelStrain } from './layerParallelStrain';
-import { prepareSectionScratch, type PreparedSection } from './prepareSection';
+import type { PreparationBuffer } from './preparationBuffer';
+import { prepareSection, prepareSectionScratch, type PrepareOptions, type PreparedSection } from './prepareSection';
 
 export type { SectionProblem, SectionProblemCode } from '../model/validateSection';
 export type { AreaDepthResult } from './fitAreaDepth';
@@ -33,10 +34,13 @@ export interface SectionAnalysis {
 export type AnalysisOutcome = { ok: true; analysis: SectionAnalysis; warnings: SectionProblem[] }
   | { ok: false; problems: SectionProblem[] };
 
-/** Full area-balance analysis (units and units² of the section); input problems as { ok: false, problems }, never thrown. */
-export function analyseSection(section: Section, options: { referenceElevation?: number } = {}): AnalysisOutcome {
-  // Only numbers leave this function, so the prepared lines may live in the reused buffer.
-  const prep = prepareSectionScratch(section, options);
+/**
+ * Full area-balance analysis (units and units² of the section); input problems as { ok: false, problems }, never thrown.
+ * A caller that analyses repeatedly may hand in its own `buffer` (createPreparationBuffer) to spare fresh memory per call.
+ */
+export function analyseSection(section: Section, options: PrepareOptions & { buffer?: PreparationBuffer } = {}): AnalysisOutcome {
+  // Only numbers leave this function, so the prepared lines may live in the caller's buffer.
+  const prep = options.buffer ? prepareSectionScratch(section, options, options.buffer) : prepareSection(section, options);
   if (!prep.ok) return { ok: false, problems: prep.problems };
   return { ok: true, analysis: analysePrepared(prep.prepared), warnings: [] };
 }

@@ -1,6 +1,7 @@
 import { DEFAULT_RESOLUTION, type LengthUnit, type Section } from '../model/section';
 import { validateSectionArrays, type Allocate, type SectionProblem } from '../model/validateSection';
 import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
+import type { PreparationBuffer } from './preparationBuffer';
 import { projectedSegmentFlags } from './projectedSegmentFlags';
 
 // The fast path's starting point: validate once, clip every horizon and regional to the pins
@@ -25,41 +26,34 @@ export interface PreparedSection {
   resolution: number;
 }
 
-// The validated input points only live until each horizon is clipped (the clipped lines are
-// new arrays), so they are written into one reused buffer instead of fresh arrays per call:
-// live dragging and the benchmark re-prepare sections many times, and fresh large arrays cost
-// page faults. Nothing computed is kept between calls, only the memory. Not re-entrant, which
-// prepareSection never needs (it is synchronous; each Worker has its own module instance).
-// A one-off analysis (analyseSection) keeps nothing of the prepared section, so its clipped lines
-// come from the same buffer too (prepareSectionScratch); they are valid only until the next call.
-let pool = new Float64Array(1 << 12);
-let poolUsed = 0;
-const fromPool: Allocate = (n) => {
-  if (poolUsed + n > pool.length) {
-    // Views handed out earlier keep the old buffer alive until this call ends.
-    pool = new Float64Array(Math.max(2 * pool.length, 2 * n));
-    poolUsed = 0;
-  }
-  poolUsed += n;
-  return pool.subarray(poolUsed - n, poolUsed);
-};
+// The validated input points only live until each horizon is clipped (the clipped lines are new
+// arrays), so a caller that prepares many times hands in its own buffer for them
+// (createPreparationBuffer); without one they are fresh arrays. A one-off analysis (analyseSection)
+// keeps nothing of the prepared section, so its clipped lines may live in the caller's buffer too
+// (prepareSectionScratch). The engine holds no memory of its own between calls, so it is
+// re-entrant: two preparations with two buffers may be interleaved, in one thread or in two workers.
+
+export interface PrepareOptions {
+  referenceElevation?: number;
+}
 
 export type SectionPreparation = { ok: true; prepared: PreparedSection } | { ok: false; problems: SectionProblem[] };
 
 /** The section validated, clipped and measured once; every problem found (structure, pins, self-crossing) instead of throwing. */
-export function prepareSection(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
-  return prepare(section, options, undefined);
+export function prepareSection(section: Section, options: PrepareOptions = {}, buffer?: PreparationBuffer): SectionPreparation {
+  return prepare(section, options, buffer, false);
 }
 
-/** As prepareSection, but the clipped lines live in a reused buffer: read the result before the next call, keep none of its arrays. */
-export function prepareSectionScratch(section: Section, options: { referenceElevation?: number } = {}): SectionPreparation {
-  return prepare(section, options, fromPool);
+/** As prepareSection, but the clipped lines live in the caller's buffer: read the result before that buffer's next use, keep none of its arrays. */
+export function prepareSectionScratch(section: Section, options: PrepareOptions, buffer: PreparationBuffer): SectionPreparation {
+  return prepare(section, options, buffer, true);
 }
 
-function prepare(section: Section, options: { referenceElevation?: number }, clipAllocate: Allocate | undefined): SectionPreparation {
+function prepare(section: Section, options: PrepareOptions, buffer: PreparationBuffer | undefined, scratch: boolean): SectionPreparation {
   // Validation copies the points straight into typed arrays, so every vertex is read from the input once.
-  poolUsed = 0;
-  const v = validateSectionArrays(section, fromPool);
+  buffer?.reset();
+  const v = validateSectionArrays(section, buffer?.allocate);
+  const clipAllocate: Allocate | undefined = scratch ? buffer?.allocate : undefined;
   if (!v.ok) return { ok: false, problems: v.problems };
   const s = v.section;
   const option = options.referenceElevation;

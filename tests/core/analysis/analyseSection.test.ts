@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { analysePrepared, analyseSection, type SectionAnalysis } from '../../../src/core/analysis/analyseSection';
+import { createPreparationBuffer } from '../../../src/core/analysis/preparationBuffer';
 import { prepareSection, prepareSectionScratch } from '../../../src/core/analysis/prepareSection';
 import type { Section, XZ } from '../../../src/core/model/section';
 import { expectClose } from '../../expectClose';
 import { methodExample, pts, triangleHorizon } from './sections';
 
-function analysed(s: Section, options?: { referenceElevation?: number }): SectionAnalysis {
+function analysed(s: Section, options?: Parameters<typeof analyseSection>[1]): SectionAnalysis {
   const out = analyseSection(s, options);
   if (!out.ok) throw new Error(out.problems.map((p) => p.message).join('\n'));
   return out.analysis;
@@ -204,30 +205,32 @@ describe('analyseSection(section) projected runs', () => {
 });
 
 describe('analyseSection(section) called again and again', () => {
-  it('leaves an earlier analysis and its prepared lines untouched by a later one', () => {
-    // The validated points are written into a reused buffer (prepareSection); the results must not share it.
-    const first = analysed(methodExample());
-    const prepared = prepareSection(methodExample());
+  it('leaves an earlier analysis and its prepared lines untouched by a later one with the same buffer', () => {
+    // The validated points are written into the caller's buffer; the results must not share it.
+    const buffer = createPreparationBuffer();
+    const first = analysed(methodExample(), { buffer });
+    const prepared = prepareSection(methodExample(), {}, buffer);
     const before = JSON.stringify([first, prepared], (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
     const other = methodExample();
     other.horizons.forEach((h) => h.line.forEach((p) => { p[1] -= 777; }));
-    analysed(other);
-    prepareSection(other);
+    analysed(other, { buffer });
+    prepareSection(other, {}, buffer);
     expect(JSON.stringify([first, prepared], (_k, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v))).toBe(before);
   });
 });
 
 
-describe('analyseSection and prepareSection share a reused buffer safely', () => {
+describe('analyseSection and prepareSection share a caller-held buffer safely', () => {
   it('analyseSection(s2) leaves the arrays of an earlier prepareSection(s1) untouched, and gives the same numbers as analysePrepared', () => {
     // Our own check of the buffer's lifetime: prepareSection's lines are kept by the live view, analyseSection's are scratch.
+    const buffer = createPreparationBuffer();
     const s1 = methodExample();
-    const kept = prepareSection(s1);
+    const kept = prepareSection(s1, {}, buffer);
     if (!kept.ok) throw new Error('methodExample rejected');
     const before = kept.prepared.horizons.map((h) => [Array.from(h.line.xs), Array.from(h.line.zs), Array.from(h.regional.zs)]);
     const s2: Section = { ...s1, horizons: s1.horizons.map((h) => ({ ...h, line: h.line.map(([x, z]): XZ => [x, z + 123]) })) };
-    const scratch = analyseSection(s2);
-    analyseSection(s1);
+    const scratch = analyseSection(s2, { buffer });
+    analyseSection(s1, { buffer });
     expect(kept.prepared.horizons.map((h) => [Array.from(h.line.xs), Array.from(h.line.zs), Array.from(h.regional.zs)])).toEqual(before);
     const fresh = prepareSection(s2);
     if (!scratch.ok || !fresh.ok) throw new Error('s2 rejected');
@@ -235,14 +238,15 @@ describe('analyseSection and prepareSection share a reused buffer safely', () =>
   });
 });
 
-describe('prepareSectionScratch(section) and prepareSection(section)', () => {
-  it('scratch lines come from one reused buffer, kept lines from buffers of their own', () => {
-    // Our own check of where the arrays live (the scratch buffer grows to fit, then is reused).
+describe('prepareSectionScratch(section, options, buffer) and prepareSection(section)', () => {
+  it('scratch lines come from the caller-held buffer, kept lines from buffers of their own', () => {
+    // Our own check of where the arrays live (the buffer grows to fit, then is reused).
     const s = methodExample();
-    for (let k = 0; k < 3; k++) prepareSectionScratch(s);
-    const a = prepareSectionScratch(s);
-    const b = prepareSectionScratch(s);
-    const kept = prepareSection(s);
+    const buffer = createPreparationBuffer(16);
+    for (let k = 0; k < 3; k++) prepareSectionScratch(s, {}, buffer);
+    const a = prepareSectionScratch(s, {}, buffer);
+    const b = prepareSectionScratch(s, {}, buffer);
+    const kept = prepareSection(s, {}, buffer);
     if (!a.ok || !b.ok || !kept.ok) throw new Error('methodExample rejected');
     expect(a.prepared.horizons[0].line.xs.buffer).toBe(b.prepared.horizons[0].line.xs.buffer);
     expect(a.prepared.horizons[0].line.xs.buffer).toBe(a.prepared.horizons[3].regional.zs.buffer);
