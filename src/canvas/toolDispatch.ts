@@ -10,7 +10,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { screenToImage } from '../state/camera';
 import { useToolSession } from '../state/toolSessionStore';
 import { toolEntry } from '../tools/toolRegistry';
-import { runTool, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
+import { runTool, type LineTracer, type ToolCommand, type ToolContext, type ToolEvent, type ToolPreview } from '../tools/toolTypes';
 import { cachedClientRect } from './viewBoxRect';
 
 /** Pointer tolerance for picking, in screen pixels. */
@@ -71,22 +71,36 @@ export function tracerBytesHeld(): number {
   return tracer?.tracer.bytesHeld ?? 0;
 }
 
-function context(): ToolContext {
+/**
+ * The context the tools see: the document, selection and calibration pick from the stores, with the pick
+ * tolerance (image px) and line tracer the view supplies. The tool tests build theirs with this too.
+ */
+export function toolContext(tolerancePx: number, tracer: LineTracer | null): ToolContext {
   const doc = useDocStore.getState().doc;
   const session = useSessionStore.getState();
   const toolSession = useToolSession.getState();
   return {
     doc,
     frame: sectionFrame(doc),
-    tolerancePx: PICK_TOLERANCE_SCREEN_PX / session.camera.scale,
+    tolerancePx,
     selectedHorizonId: session.selectedHorizonId,
     calibrationPick: toolSession.calibrationPick,
-    tracer: scanTracer(doc),
+    tracer,
     followLine: toolSession.followLine,
   };
 }
 
-function execute(commands: ToolCommand[]): void {
+function context(): ToolContext {
+  const doc = useDocStore.getState().doc;
+  return toolContext(PICK_TOLERANCE_SCREEN_PX / useSessionStore.getState().camera.scale, scanTracer(doc));
+}
+
+/**
+ * Carries out a tool's commands on the stores: edits and gestures on the document store (one undo entry per
+ * edit or per gesture; a gesture edit applies to the document as the gesture began), selection and messages on
+ * the session, the preview here. The one place these rules are applied (the tool tests run through it too).
+ */
+export function executeToolCommands(commands: readonly ToolCommand[]): void {
   const store = useDocStore.getState();
   for (const c of commands) {
     switch (c.type) {
@@ -131,7 +145,7 @@ export function dispatchToolEvent(event: ToolEvent): void {
   const entry = toolEntry(toolId);
   const { state, commands } = runTool(entry.tool, toolState, event, context());
   toolState = state;
-  execute(commands);
+  executeToolCommands(commands);
   if (useToolSession.getState().stateName !== state.name) useToolSession.setState({ stateName: state.name });
 }
 
