@@ -1,6 +1,7 @@
 // The bridge from the project document (image pixels) to the engine's plain section (section units).
 import { fitCalibration, type FittedCalibration } from '../calibration/fitCalibration';
 import { imageToSection } from '../calibration/mapPoints';
+import { lineToSection } from '../calibration/lineToSection';
 import { nearestOnPolyline } from '../geometry/nearestOnPolyline';
 import { selfIntersections } from '../geometry/selfIntersections';
 import type { DocFault, DocHorizon, ProjectDoc, Scenario } from './projectDoc';
@@ -32,7 +33,7 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
   const pl = imageToSection(fit, scenario.pinsPx[0])[0];
   const pr = imageToSection(fit, scenario.pinsPx[1])[0];
   const toXZ = (p: [number, number]): XZ => imageToSection(fit, p);
-  const { faults, usable, skippedFaults } = readFaults(doc.faults, toXZ);
+  const { faults, usable, skippedFaults } = readFaults(doc.faults, fit);
   const tolerance = ON_FAULT_TOLERANCE * Math.abs(pr - pl);
   const horizons: SectionHorizon[] = [];
   const horizonIds: string[] = [];
@@ -47,7 +48,7 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
       skipped.push({ id: h.id, name: h.name, reason: 'no regional yet' });
       continue;
     }
-    const shape = horizonShape(h, doc.faults, usable, toXZ, tolerance, doc.units);
+    const shape = horizonShape(h, doc.faults, usable, fit, tolerance, doc.units);
     if (typeof shape === 'string') {
       skipped.push({ id: h.id, name: h.name, reason: shape });
       continue;
@@ -74,7 +75,7 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
 }
 
 /** The document's faults in section units, those usable for joins (by id), and the ones left out with the reason. */
-function readFaults(docFaults: readonly DocFault[], toXZ: (p: [number, number]) => XZ) {
+function readFaults(docFaults: readonly DocFault[], fit: FittedCalibration) {
   const faults: SectionFault[] = [];
   const usable = new Map<string, SectionFault>();
   const skippedFaults: SkippedFault[] = [];
@@ -83,7 +84,7 @@ function readFaults(docFaults: readonly DocFault[], toXZ: (p: [number, number]) 
       skippedFaults.push({ id: f.id, name: f.name, reason: 'fewer than two vertices' });
       continue;
     }
-    const line = f.pointsPx.map(toXZ);
+    const line = lineToSection(fit, f.pointsPx);
     const crossing = selfIntersections(line.map((q) => q[0]), line.map((q) => q[1]), 1);
     if (crossing.length > 0) {
       const [i, j] = crossing[0];
@@ -103,16 +104,18 @@ function readFaults(docFaults: readonly DocFault[], toXZ: (p: [number, number]) 
  */
 function horizonShape(
   h: DocHorizon, docFaults: readonly DocFault[], usable: ReadonlyMap<string, SectionFault>,
-  toXZ: (p: [number, number]) => XZ, tolerance: number, units: string,
+  fit: FittedCalibration, tolerance: number, units: string,
 ): Pick<SectionHorizon, 'line' | 'pieces' | 'joinFaults'> | string {
-  if (h.joins.length === 0) return { line: h.pointsPx.map(toXZ) };
+  // The whole line converted once (and remembered), the pieces cut from it.
+  const line = lineToSection(fit, h.pointsPx);
+  if (h.joins.length === 0) return { line };
   const pieces: XZ[][] = [];
   const joinFaults: string[] = [];
   let from = 0;
   for (let k = 0; k <= h.joins.length; k++) {
     const to = k < h.joins.length ? h.joins[k].at : h.pointsPx.length;
     if (to - from < 2) return `piece ${k + 1} has fewer than two vertices`;
-    pieces.push(h.pointsPx.slice(from, to).map(toXZ));
+    pieces.push(line.slice(from, to));
     from = to;
   }
   for (let k = 0; k < h.joins.length; k++) {
