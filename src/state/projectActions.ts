@@ -6,6 +6,9 @@ import { fileTooLargeMessage } from '../core/model/limits';
 import { MAX_PROJECT_FILE_BYTES, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
 import { readProjectFile, type OpenProgress } from '../io/readProjectFile';
 import { reopenScan } from '../io/reopenScan';
+import { fitCalibration } from '../core/calibration/fitCalibration';
+import { lineToSection } from '../core/calibration/lineToSection';
+import { pointsBox } from '../core/geometry/pointsBox';
 import { useDocStore } from './docStore';
 import { selectAnalysis } from './selectors';
 import { getScan, putScan, type CachedScan } from './scanCache';
@@ -21,19 +24,14 @@ export function fitViewToDoc(doc: ProjectDoc): void {
     fitTo({ u0: 0, v0: 0, width: doc.scan.widthPx, height: doc.scan.heightPx, margin: 24 });
     return;
   }
-  // The box of every vertex, in a plain loop: a spread of a long traced line's vertices into Math.min overflows the stack.
+  // The box of every vertex (each line's box remembered: opening a file measures them a line a task beforehand).
   let [u0, v0, u1, v1] = [Infinity, Infinity, -Infinity, -Infinity];
-  // Indexed, not destructured: a million vertices through the array iterator took a tenth of a second.
   for (const h of doc.horizons) {
-    const points = h.pointsPx;
-    for (let i = 0; i < points.length; i++) {
-      const u = points[i][0];
-      const v = points[i][1];
-      if (u < u0) u0 = u;
-      if (u > u1) u1 = u;
-      if (v < v0) v0 = v;
-      if (v > v1) v1 = v;
-    }
+    const [a, b, c, d] = pointsBox(h.pointsPx);
+    u0 = Math.min(u0, a);
+    v0 = Math.min(v0, b);
+    u1 = Math.max(u1, c);
+    v1 = Math.max(v1, d);
   }
   // Nothing to frame: the view is no longer fitted to what was open before (a resize must not frame it again).
   if (u0 > u1) {
@@ -129,6 +127,20 @@ export async function openProjectFile(file: File): Promise<boolean> {
     // The first analysis of a big document takes a few hundred milliseconds: it runs in a task of its own before
     // the document is drawn (the views then read the remembered result), not inside the drawing's task.
     session.setBusy(`Opening ${file.name} … measuring`);
+    // Each line is first converted to section units and measured for the framing in a task of its own (both
+    // remembered per line: lineToSection, pointsBox), so neither the analysis nor the drawing's task reads a
+    // million vertices again.
+    const cal = doc.calibration ? fitCalibration(doc.calibration) : null;
+    for (const f of doc.faults) {
+      await nextTask();
+      if (cal?.ok) lineToSection(cal.fit, f.pointsPx);
+    }
+    for (const h of doc.horizons) {
+      await nextTask();
+      if (cal?.ok) lineToSection(cal.fit, h.pointsPx);
+      // Without a scan the view is framed on the horizons (fitViewToDoc).
+      if (!doc.scan) pointsBox(h.pointsPx);
+    }
     await nextTask();
     selectAnalysis(doc);
     await nextTask();
