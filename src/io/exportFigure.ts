@@ -6,6 +6,7 @@
 // state/currentFigureSvg.
 import { FIGURE_HEIGHT, FIGURE_WIDTH, scanImageOpen, type SectionSvgParts } from './renderSectionSvg';
 import { figureScanRegion } from './figureScanRegion';
+import { base64Pieces } from './base64Pieces';
 import type { FigurePngReply, FigurePngRequest, FigureScanRegion, PngStep } from './figurePngProtocol';
 
 export type { PngStep } from './figurePngProtocol';
@@ -18,25 +19,14 @@ export const PNG_SIZES = [
   { id: 'a3-300', label: 'A3 at 300 dpi (4961 × 3508 px)', width: 4961, height: 3508 },
 ] as const;
 
-function blobToDataUrl(blob: Blob): Promise<string> {
-  return new Promise((resolve, reject) => {
-    const r = new FileReader();
-    r.onload = () => resolve(String(r.result));
-    r.onerror = () => reject(r.error);
-    r.readAsDataURL(blob);
-  });
-}
-
-/** Bytes of the scan read at a time for the SVG: a multiple of 3, so that the pieces' base64 joins into one. */
-const BASE64_PIECE = 3 * 1024 * 1024;
-
 /**
- * Returns a scan of the given MIME type as the pieces of a data: URL the SVG can embed (joined, they are the URL):
- * its original bytes for PNG, JPEG and WebP, else its decoded bitmap re-encoded as PNG (the browser cannot show
- * TIFF or PDF in an SVG). Read a piece at a time by the browser, so a scan file of hundreds of megabytes never
- * becomes one string (a string that long is more than the browser allows).
+ * Returns a scan of the given MIME type as the parts of a data: URL the SVG can embed (joined, they are the URL),
+ * each piece of its base64 a Blob of its own: its original bytes for PNG, JPEG and WebP, else its decoded bitmap
+ * re-encoded as PNG (the browser cannot show TIFF or PDF in an SVG). Read and encoded a piece at a time
+ * (io/base64Pieces), so a scan file of hundreds of megabytes never becomes one string, nor all its pieces strings
+ * at once, and no task of the page encodes more than one piece.
  */
-export async function scanDataUrlPieces(type: string, scan: { bitmap: ImageBitmap; bytes: Blob }): Promise<string[]> {
+export async function scanDataUrlParts(type: string, scan: { bitmap: ImageBitmap; bytes: Blob }): Promise<Blob[]> {
   let bytes: Blob;
   let mime = type;
   if (/^image\/(png|jpeg|webp)$/.test(type)) bytes = scan.bytes;
@@ -44,19 +34,17 @@ export async function scanDataUrlPieces(type: string, scan: { bitmap: ImageBitma
     const canvas = new OffscreenCanvas(scan.bitmap.width, scan.bitmap.height);
     canvas.getContext('2d')?.drawImage(scan.bitmap, 0, 0);
     bytes = await canvas.convertToBlob({ type: 'image/png' });
+    canvas.width = canvas.height = 0;
     mime = 'image/png';
   }
-  const pieces = [`data:${mime};base64,`];
-  for (let at = 0; at < bytes.size; at += BASE64_PIECE) {
-    const url = await blobToDataUrl(bytes.slice(at, at + BASE64_PIECE, mime));
-    pieces.push(url.slice(url.indexOf(',') + 1));
-  }
-  return pieces;
+  const parts = [new Blob([`data:${mime};base64,`])];
+  for await (const piece of base64Pieces(bytes)) parts.push(new Blob([piece]));
+  return parts;
 }
 
-/** Returns the figure as an SVG file: its parts with the scan embedded once from the data: URL's pieces (none: drawn without it). */
-export function sectionSvgBlob(parts: SectionSvgParts, scanUrlPieces: string[] | null): Blob {
-  const image = parts.scan && scanUrlPieces ? [scanImageOpen(parts.scan), ...scanUrlPieces, '"/>'] : [];
+/** Returns the figure as an SVG file: its parts with the scan embedded once from the data: URL's parts (none: drawn without it). Base64 needs no XML escaping. */
+export function sectionSvgBlob(parts: SectionSvgParts, scanUrlParts: Blob[] | null): Blob {
+  const image = parts.scan && scanUrlParts ? [scanImageOpen(parts.scan), ...scanUrlParts, '"/>'] : [];
   return new Blob([parts.head, parts.under, parts.panelOpen, ...image, parts.over, '</svg>'], { type: 'image/svg+xml' });
 }
 

@@ -1,6 +1,6 @@
 // The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg
 // (in parts: written out as the SVG file with the scan embedded once, or handed to the PNG worker with the scan region).
-import { scanDataUrlPieces, sectionSvgBlob, type FigureScanSource } from '../io/exportFigure';
+import { scanDataUrlParts, sectionSvgBlob, type FigureScanSource } from '../io/exportFigure';
 import { renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
@@ -13,8 +13,8 @@ export async function currentFigureSvgBlob(): Promise<Blob> {
   const doc = useDocStore.getState().doc;
   const { parts } = currentFigureParts();
   const cached = getScan(doc.scan?.id);
-  const pieces = doc.scan && cached?.bitmap ? await scanDataUrlPieces(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes }) : null;
-  return sectionSvgBlob(parts, pieces);
+  const urlParts = doc.scan && cached?.bitmap ? await scanDataUrlParts(doc.scan.type, { bitmap: cached.bitmap, bytes: cached.bytes }) : null;
+  return sectionSvgBlob(parts, urlParts);
 }
 
 /** Returns the figure of the open project in its parts below and above the scan, with the decoded scan (and its tile pyramid when cut) to draw between them (null when none is shown). */
