@@ -271,3 +271,42 @@ describe('the write-ahead journal', () => {
     expect(readJournal()).toBeNull();
   });
 });
+
+describe('an edit is handed to IndexedDB in its own task', () => {
+  const store = new Map<string, string>();
+  const listeners = { addEventListener: () => undefined, removeEventListener: () => undefined };
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    vi.stubGlobal('localStorage', { getItem: (k: string) => store.get(k) ?? null, setItem: (k: string, v: string) => void store.set(k, v), removeItem: (k: string) => void store.delete(k) });
+    vi.stubGlobal('window', { ...listeners, setTimeout, clearTimeout });
+    vi.stubGlobal('document', { ...listeners, visibilityState: 'visible' });
+    store.clear();
+    await clearSnapshot(await openAutosaveDb(factory));
+  });
+  afterEach(() => {
+    vi.restoreAllMocks();
+    vi.unstubAllGlobals();
+  });
+
+  // The journal (localStorage) brings an edit back after a reload, but a killed browser loses what localStorage had
+  // not yet written to disk: the IndexedDB write must start at once, not a task later behind the page's render.
+  it('makes the write request before the edit returns, and the edit is then kept', async () => {
+    const { IDBObjectStore } = await import('fake-indexeddb');
+    const { startAutosave } = await import('../../src/state/autosave');
+    const db = await openAutosaveDb(factory);
+    useDocStore.getState().replace(sampleDoc());
+    const stop = startAutosave();
+    try {
+      // A first edit opens the database (if no earlier write has), and is kept.
+      useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'First edit' }));
+      await vi.waitFor(async () => expect((await readSnapshot(db))?.doc.title).toBe('First edit'));
+      const put = vi.spyOn(IDBObjectStore.prototype, 'put');
+      useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Second edit' }));
+      expect(put).toHaveBeenCalledTimes(1);
+      expect((put.mock.calls[0][0] as { doc: { title: string } }).doc.title).toBe('Second edit');
+      await vi.waitFor(async () => expect((await readSnapshot(db))?.doc.title).toBe('Second edit'));
+    } finally {
+      stop();
+    }
+  });
+});
