@@ -5,11 +5,12 @@
 // The first preview from an anchor is progressive: at once a straight segment; while the full-resolution tiles and
 // tree are computed, a second worker searches the same window reduced to about COARSE_PIXELS pixels (so a few
 // milliseconds however long the stretch: the tree is sent with the pointer position and answers it at once), and
-// its path, mapped back to the image, is shown until the full one is ready. The window is read whole (the browser
-// reduces it first only past ROUGH_READ_PIXELS) and the worker keeps the darkest pixel of each block
-// (core/trace/poolDarkest): the browser's own resize sampled a 3 px line away in whole columns, and the rough path
-// ran straight. Both workers are warmed up when the tracer starts. As soon as an anchor is placed, the tree around
-// it is built ahead, towards where the line was heading, so the next preview usually finds its tree waiting.
+// its path, mapped back to the image, is shown until the full one is ready. The window is read halved by the browser
+// until it fits ROUGH_READ_PIXELS (a smoothing halving keeps a line 2 px wide at half its darkness or better, one of
+// 1 px at a quarter) and the worker keeps the darkest pixel of each block (core/trace/poolDarkest): the browser's own
+// resize straight to the rough size sampled a 3 px line away in whole columns, and the rough path ran straight. Both
+// workers are warmed up when the tracer starts. As soon as an anchor is placed, the tree around it is built ahead,
+// towards where the line was heading, so the next preview usually finds its tree waiting.
 import type { ImagePx } from '../core/model/projectDoc';
 import { pixelFeatures } from '../core/trace/pixelFeatures';
 import type { Raster } from '../core/trace/raster';
@@ -30,10 +31,10 @@ const TREES_KEPT = 4;
 /** The rough search reduces the window to about this many pixels (and by at least 2 in each direction). */
 export const COARSE_PIXELS = 16_000;
 /**
- * A rough window is read at full resolution up to this many pixels (a 3,000 px stretch's window is 1.4 MP); a larger
- * one is first reduced by the browser to about this.
+ * A rough window is read at full resolution up to this many pixels, a larger one halved by the browser until it fits
+ * (a 3,000 px stretch's window, 1.4 MP, is read halved).
  */
-export const ROUGH_READ_PIXELS = 4_000_000;
+export const ROUGH_READ_PIXELS = 400_000;
 
 /** A rough tree: its anchor and window (image px), and the window's image px per reduced pixel across and down. */
 interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: number }
@@ -140,8 +141,10 @@ export class ScanLineTracer {
       return null;
     }
     this.wanted = { from, win };
+    // The rough tree first: the full-resolution one waits until it is built (see pumpTree).
+    const rough = this.roughStretch(from, to, key);
     this.pumpTree();
-    return this.roughStretch(from, to, key);
+    return rough;
   }
 
   /** Builds the trees of a just-placed anchor `to` ahead of the pointer: over the window of a stretch as long as the last, going on the same way. */
@@ -152,10 +155,10 @@ export class ScanLineTracer {
     const win = traceWindow(to, next, W, H);
     if (win.w <= 0 || win.h <= 0) return;
     this.wanted = { from: to, win };
-    this.pumpTree();
     this.coarseWanted = { from: to, win };
     this.coarseFor = null;
     this.pumpCoarse();
+    this.pumpTree();
   }
 
   /** Returns the rough preview from `from` to `to` when its reduced-resolution search has it, else null and starts it. */
@@ -186,18 +189,18 @@ export class ScanLineTracer {
     return this.coarseWorker;
   }
 
-  /** Sends the wanted rough tree when no other is being built: the window read whole, reduced by blocks in the worker, as one tile. */
+  /** Sends the wanted rough tree when no other is being built: the window read halved (roughReduction), reduced by blocks in the worker, as one tile. */
   private pumpCoarse(): void {
     if (this.coarseBuilding || !this.coarseWanted || this.closed) return;
     const { from, win } = this.coarseWanted;
     const answer = this.coarseFor;
     this.coarseWanted = null;
     this.coarseFor = null;
-    const { readW, readH, pool, cw, ch, sx, sy } = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
+    const { readW, readH, scale, pool, cw, ch, sx, sy } = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
     this.coarseBuilding = true;
     const id = this.nextId++;
     const key = `coarse-${id}`;
-    const resize = readW < win.w || readH < win.h ? { resizeWidth: readW, resizeHeight: readH, resizeQuality: 'medium' as const } : {};
+    const resize = scale > 1 ? { resizeWidth: readW, resizeHeight: readH, resizeQuality: 'medium' as const } : {};
     createImageBitmap(this.bitmap, win.x0, win.y0, win.w, win.h, resize).then((bitmap) => {
       if (this.closed) return;
       const worker = this.coarse();
@@ -217,6 +220,7 @@ export class ScanLineTracer {
       while (this.coarseTrees.length > TREES_KEPT) this.coarseTrees.shift();
     }).catch((err: unknown) => {
       this.coarseBuilding = false;
+      this.pumpTree();
       console.error(`Line tracing: ${err instanceof Error ? err.message : String(err)}`);
     });
   }
@@ -225,6 +229,9 @@ export class ScanLineTracer {
     if (this.closed) return;
     if (m.type === 'treeDone') {
       this.coarseBuilding = false;
+      // The full-resolution tree held back for this one starts first, so a pointer asking new windows all the time
+      // cannot keep it waiting.
+      this.pumpTree();
       this.pumpCoarse();
     } else if (m.type === 'path') {
       this.coarseAsked.delete(m.key);
@@ -285,9 +292,13 @@ export class ScanLineTracer {
     return tiles.map((t) => t.key);
   }
 
-  /** Sends the wanted tree when no other is being built (only the latest wanted is kept). */
+  /**
+   * Sends the wanted tree when no other is being built (only the latest wanted is kept), nor a rough one: on a busy
+   * machine the two workers shared the cores and the rough first preview, a few milliseconds of work, came after
+   * hundreds; the full-resolution tree, which takes far longer, waits that long for it.
+   */
   private pumpTree(): void {
-    if (this.building || !this.wanted || this.closed) return;
+    if (this.building || this.coarseBuilding || !this.wanted || this.closed) return;
     const { from, win } = this.wanted;
     this.wanted = null;
     this.building = true;

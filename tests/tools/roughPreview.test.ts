@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ImagePx } from '../../src/core/model/projectDoc';
 import { sectionFrame } from '../../src/core/model/commands/sectionFrame';
-import { poolDarkest } from '../../src/core/trace/poolDarkest';
 import { roughReduction } from '../../src/core/trace/roughReduction';
 import { roughToImage } from '../../src/core/trace/roughToImage';
 import { TraceSession } from '../../src/core/trace/traceSession';
@@ -10,11 +9,12 @@ import { COARSE_PIXELS, ROUGH_READ_PIXELS } from '../../src/io/lineTracer';
 import { hoverStretch, startLine } from '../../src/tools/tracedLine';
 import type { LineTracer, ToolContext } from '../../src/tools/toolTypes';
 import { renderScan, sineCurve, type ScanSpec } from '../core/trace/syntheticScan';
-import { distanceStats, pointsOnCurve } from '../core/trace/traceHelpers';
+import { boxResize, distanceStats, pointsOnCurve } from '../core/trace/traceHelpers';
 import { toolDoc } from './toolFixture';
 
-// The rough first preview of a long stretch, as the tracer makes it: the search window read whole and reduced by
-// blocks to about COARSE_PIXELS pixels (the darkest pixel of each), searched, and its path mapped back to the scan.
+// The rough first preview of a long stretch, as the tracer makes it: the search window read halved (by the browser's
+// smoothing resize) and reduced by blocks to about COARSE_PIXELS pixels (the darkest pixel of each), searched, and its
+// path mapped back to the scan.
 // Truth is the sine line the scan was drawn from, anti-aliased (analytic): the rough path must follow it within its
 // own resolution (one reduced pixel), and the full-resolution path must then replace it in the preview.
 const curve = sineCurve(150, 40, 700, 0.4);
@@ -27,15 +27,15 @@ const whole = { x0: 0, y0: 0, w: scan.w, h: scan.h };
 function rough(): { points: ImagePx[]; stepPx: number } {
   const win = traceWindow(from, to, scan.w, scan.h);
   const r = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
-  // The window is small enough to be read at full resolution, as the tracer reads it.
-  expect([r.readW, r.readH]).toEqual([win.w, win.h]);
-  const windowRgba = new Uint8ClampedArray(win.w * win.h * 4);
-  for (let y = 0; y < win.h; y++) windowRgba.set(scan.rgba.subarray(((win.y0 + y) * scan.w + win.x0) * 4, ((win.y0 + y) * scan.w + win.x0 + win.w) * 4), y * win.w * 4);
-  const { rgba: reduced, w: cw, h: ch } = poolDarkest(windowRgba, win.w, win.h, r.pool);
-  const { sx, sy } = r;
+  // The window is past the read budget: the browser halves it (its smoothing resize, a 2 × 2 mean), as the tracer asks.
+  expect(r.scale).toBe(2);
+  const windowRgba = boxResize(scan.rgba, scan.w, win, r.readW, r.readH);
   const session = new TraceSession();
+  // As the rough worker does: the read window reduced by blocks, the darkest pixel of each, as one tile.
+  const { w: cw, h: ch } = session.putPooledTile('rough', windowRgba, r.readW, r.readH, r.pool);
+  const { sx, sy } = r;
+  expect([cw, ch]).toEqual([r.cw, r.ch]);
   const grid = { x0: 0, y0: 0, w: cw, h: ch };
-  session.putTile('rough', grid, reduced, grid);
   const at = (p: readonly [number, number]): [number, number] => [(p[0] - win.x0) / sx, (p[1] - win.y0) / sy];
   session.buildTree(1, at(from), grid, ['rough']);
   const path = session.path(1, at(to));

@@ -7,7 +7,6 @@
 // does not pay for compiling it (cold, a first tile and tree took ten times as long). A 'tree' may carry the
 // pointer position whose path it answers as soon as it is built, saving a round trip. Messages are handled in order.
 import type { Raster } from '../../core/trace/raster';
-import { poolDarkest } from '../../core/trace/poolDarkest';
 import { TraceSession } from '../../core/trace/traceSession';
 
 export type TraceWorkerRequest =
@@ -47,7 +46,8 @@ self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
       const { width, height } = m.bitmap;
       const px = readPixels(m.bitmap);
       // A rough window comes whole at (or near) full resolution and is reduced here, keeping each block's darkest pixel.
-      session.putTile(m.key, m.tile, m.pool && m.pool > 1 ? poolDarkest(px, width, height, m.pool).rgba : px, m.crop);
+      if (m.pool && m.pool > 1) session.putPooledTile(m.key, px, width, height, m.pool);
+      else session.putTile(m.key, m.tile, px, m.crop);
     }
     else if (m.type === 'drop') session.dropTiles(m.keys);
     else if (m.type === 'tree') {

@@ -33,6 +33,12 @@ describe('poolDarkest (the darkest pixel of each block)', () => {
     expect([...r.rgba.subarray((6 * 16) * 4, (6 * 16) * 4 + 3)]).toEqual(paper);
   });
 
+  it('keeps the pixel darkest by luminance, not by one channel', () => {
+    // Rec. 601 luminance (common practice): (200, 40, 200) is 106.0, (60, 180, 60) is 130.4, though its red is lower.
+    const rgba = new Uint8ClampedArray([60, 180, 60, 255, 200, 40, 200, 255, 240, 240, 240, 255, 240, 240, 240, 255]);
+    expect([...poolDarkest(rgba, 2, 2, 2).rgba]).toEqual([200, 40, 200, 255]);
+  });
+
   it('copies the image for a block of one pixel and gives nothing for an empty image', () => {
     const rgba = scanWithRow(3);
     const r = poolDarkest(rgba, W, H, 1);

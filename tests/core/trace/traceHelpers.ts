@@ -41,3 +41,32 @@ export function distanceStats(scan: SyntheticScan, curve: Curve, pts: [number, n
   }
   return { rms: Math.sqrt(s / pts.length), max };
 }
+
+/**
+ * The window `win` of an image `w` px across (`rgba`) resized to cw × ch as a browser's smoothing resize does at
+ * these ratios: each output pixel the area-weighted mean of the image pixels under it (a box filter; at exactly
+ * half it is the 2 × 2 mean that mipmapping gives).
+ */
+export function boxResize(rgba: ArrayLike<number>, w: number, win: { x0: number; y0: number; w: number; h: number }, cw: number, ch: number): Uint8ClampedArray {
+  const out = new Uint8ClampedArray(cw * ch * 4);
+  const sx = win.w / cw;
+  const sy = win.h / ch;
+  for (let j = 0; j < ch; j++) {
+    const v0 = win.y0 + j * sy;
+    for (let i = 0; i < cw; i++) {
+      const u0 = win.x0 + i * sx;
+      const acc = [0, 0, 0, 0];
+      let area = 0;
+      for (let y = Math.floor(v0); y < v0 + sy; y++) {
+        const wy = Math.min(v0 + sy, y + 1) - Math.max(v0, y);
+        for (let x = Math.floor(u0); x < u0 + sx; x++) {
+          const a = wy * (Math.min(u0 + sx, x + 1) - Math.max(u0, x));
+          for (let c = 0; c < 4; c++) acc[c] += a * rgba[(y * w + x) * 4 + c];
+          area += a;
+        }
+      }
+      for (let c = 0; c < 4; c++) out[(j * cw + i) * 4 + c] = Math.round(acc[c] / area);
+    }
+  }
+  return out;
+}
