@@ -29,6 +29,8 @@ const REGIONAL_DASH = [14, 4, 3, 4];
 /** Splits a horizon into runs of solid and projected segments, as flat point arrays; no run crosses from one piece to the next. */
 function runsOf(h: DocHorizon): { points: number[]; projected: boolean }[] {
   const n = h.pointsPx.length;
+  // Most lines are one solid run: flattened in a plain loop (a big document's lines are 100,000 vertices each).
+  if (n >= 2 && h.projected.length === 0 && h.joins.length === 0) return [{ projected: false, points: flatOf(h.pointsPx) }];
   const flags = new Array<boolean>(Math.max(0, n - 1)).fill(false);
   for (const [a, b] of h.projected) for (let s = Math.max(0, a); s < Math.min(b, n - 1); s++) flags[s] = true;
   const gaps = new Set(h.joins.map((j) => j.at - 1));
@@ -47,6 +49,16 @@ function runsOf(h: DocHorizon): { points: number[]; projected: boolean }[] {
   }
   if (n === 1) runs.push({ projected: false, points: [h.pointsPx[0][0], h.pointsPx[0][1]] });
   return runs;
+}
+
+/** The points as one flat [u0, v0, u1, v1, …] array. */
+function flatOf(points: readonly ImagePx[]): number[] {
+  const flat = new Array<number>(2 * points.length);
+  for (let i = 0; i < points.length; i++) {
+    flat[2 * i] = points[i][0];
+    flat[2 * i + 1] = points[i][1];
+  }
+  return flat;
 }
 
 /** How a long line is drawn: the zoom (screen px per image px) and the window of pixel columns (u · scale) kept in detail. */

@@ -15,10 +15,17 @@ export interface ExcessFillGeometry {
   below: number[];
 }
 
+/** Appends the image pixels of (xs[i], zs[i]) to `out`: sectionToImage's arithmetic, written out so a line of 100,000 vertices makes no pair arrays. */
 function flatPx(frame: FittedCalibration, xs: ArrayLike<number>, zs: ArrayLike<number>, out: number[]): void {
+  const { a, b } = frame;
+  const det = a[1] * b[2] - a[2] * b[1];
+  const start = out.length;
+  out.length = start + 2 * xs.length;
   for (let i = 0; i < xs.length; i++) {
-    const p = sectionToImage(frame, [xs[i], zs[i]]);
-    out.push(p[0], p[1]);
+    const dx = xs[i] - a[0];
+    const dz = zs[i] - b[0];
+    out[start + 2 * i] = (b[2] * dx - a[2] * dz) / det;
+    out[start + 2 * i + 1] = (a[1] * dz - b[1] * dx) / det;
   }
 }
 
@@ -36,13 +43,16 @@ export interface ClippedHorizonPx { loopHead: number[]; part: FillHorizonPart }
 
 /** Returns the horizon clipped to the pins for the fill (reused while only its regional moves), or null when it does not cross both pins once. */
 export function clippedHorizonPx(linePx: ImagePx[], pins: [number, number], frame: FittedCalibration): ClippedHorizonPx | null {
+  // imageToSection's arithmetic, written out: no pair array a vertex.
+  const { a, b } = frame;
   const xs = new Float64Array(linePx.length);
   const zs = new Float64Array(linePx.length);
-  linePx.forEach((p, i) => {
-    const q = imageToSection(frame, p);
-    xs[i] = q[0];
-    zs[i] = q[1];
-  });
+  for (let i = 0; i < linePx.length; i++) {
+    const u = linePx[i][0];
+    const v = linePx[i][1];
+    xs[i] = a[0] + a[1] * u + a[2] * v;
+    zs[i] = b[0] + b[1] * u + b[2] * v;
+  }
   const part = fillHorizonPart(xs, zs, pins);
   if (!part) return null;
   const loopHead: number[] = [];
