@@ -6,7 +6,7 @@
 // told apart by the array itself, not the horizon's id: a newly opened document reuses ids.
 import { useEffect, useRef, useState } from 'react';
 
-/** Vertices first drawn in one task (at least one line a step, however long). */
+/** Vertices first drawn in one task at most (except a single line longer than that, drawn alone). */
 const VERTICES_PER_STEP = 150_000;
 
 /** Returns the ids to draw now, in their order: those whose line was drawn before, and new ones up to a step's vertices; the rest follow, a step a task. */
@@ -14,12 +14,18 @@ export function useShapesInSteps(ids: readonly string[], lines: readonly (readon
   const drawn = useRef(new WeakSet<object>());
   const [, setStep] = useState(0);
   let budget = VERTICES_PER_STEP;
+  let full = false;
   const now: string[] = [];
   const nowLines: (readonly unknown[])[] = [];
   for (let i = 0; i < ids.length; i++) {
     const line = lines[i] ?? [];
     if (!drawn.current.has(line)) {
-      if (budget <= 0) continue;
+      // A new line joins while it fits in what is left of the step (the step's first one whatever its length);
+      // the first that does not closes the step, so lines still join in their order.
+      if (full || (budget < VERTICES_PER_STEP && line.length > budget)) {
+        full = true;
+        continue;
+      }
       budget -= line.length;
     }
     now.push(ids[i]);
