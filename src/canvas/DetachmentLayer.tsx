@@ -53,9 +53,12 @@ export function DetachmentLayer() {
     <Layer listening={false}>
       {shapes.band && <Line points={shapes.band} closed fill={COLOUR} opacity={0.14} perfectDrawEnabled={false} />}
       <Line points={shapes.line} stroke={COLOUR} strokeWidth={2.2 * k} dash={[12 * k, 6 * k]} perfectDrawEnabled={false} />
-      <Label x={shapes.anchor[0] + 4 * k} y={shapes.anchor[1] + 5 * k} listening={false}>
-        <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2 * k} perfectDrawEnabled={false} />
-        <Text text={shapes.label} fontSize={FONT * k} lineHeight={LINE_HEIGHT} padding={PAD * k} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
+      {/* The label is laid out in screen pixels and scaled to the view: a font of FONT / scale image pixels (over a
+          thousand on a big document fitted to the view) made the canvas resolve a new font size on every zoom, and
+          one that large took a tenth of a second to set. */}
+      <Label x={shapes.anchor[0] + 4 * k} y={shapes.anchor[1] + 5 * k} scaleX={k} scaleY={k} listening={false}>
+        <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2} perfectDrawEnabled={false} />
+        <Text text={shapes.label} fontSize={FONT} lineHeight={LINE_HEIGHT} padding={PAD} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
       </Label>
     </Layer>
   );
