@@ -36,6 +36,20 @@ export const COARSE_PIXELS = 16_000;
  */
 export const ROUGH_READ_PIXELS = 400_000;
 
+/** Longest run of tile cuts on the page before it yields (ms). */
+const CUT_SLICE_MS = 6;
+
+/** Resolves in a later task, so input and drawing waiting on the page go first. */
+function yieldToPage(): Promise<void> {
+  const scheduler = (globalThis as { scheduler?: { yield?: () => Promise<void> } }).scheduler;
+  if (scheduler?.yield) return scheduler.yield();
+  return new Promise((resolve) => {
+    const channel = new MessageChannel();
+    channel.port1.onmessage = () => resolve();
+    channel.port2.postMessage(null);
+  });
+}
+
 /** A rough tree: its anchor and window (image px), and the window's image px per reduced pixel across and down. */
 interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: number }
 
@@ -67,6 +81,8 @@ export class ScanLineTracer {
   private aheadOf = new Set<string>();
   /** The pointer position the wanted rough tree answers once built. */
   private coarseFor: { key: string; to: ImagePx } | null = null;
+  /** The latest snap asked and its answer. */
+  private lastSnap: { x: number; y: number; r: number; q: ImagePx | null } | null = null;
   /** Bytes the worker reported holding after its latest tree. */
   bytesHeld = 0;
 
@@ -88,6 +104,15 @@ export class ScanLineTracer {
   /** Returns the line centre within `radiusPx` (at most MAX_SNAP_RADIUS_PX) of p, or null where no line is drawn. */
   snap(p: ImagePx, radiusPx: number): ImagePx | null {
     const r = Math.min(radiusPx, MAX_SNAP_RADIUS_PX);
+    // The preview asks again for the same pointer each time a traced stretch arrives: a snap took ~10 ms of the page.
+    const last = this.lastSnap;
+    if (last && last.x === p[0] && last.y === p[1] && last.r === r) return last.q ? [last.q[0], last.q[1]] : null;
+    const q = this.snapAt(p, r);
+    this.lastSnap = { x: p[0], y: p[1], r, q };
+    return q;
+  }
+
+  private snapAt(p: ImagePx, r: number): ImagePx | null {
     const x0 = Math.max(0, Math.floor(p[0] - r - 3));
     const y0 = Math.max(0, Math.floor(p[1] - r - 3));
     const x1 = Math.min(this.bitmap.width, Math.ceil(p[0] + r + 3));
@@ -264,7 +289,15 @@ export class ScanLineTracer {
     const W = this.bitmap.width;
     const H = this.bitmap.height;
     const tiles = tilesOver(win, W, H);
+    let since = performance.now();
     for (const t of tiles) {
+      // Cutting a tile from the scan runs on the page (about 1.3 ms each): a window's thirty ran as one 40 ms task and
+      // held up the preview drawn meanwhile. Past CUT_SLICE_MS the page gets its turn.
+      if (performance.now() - since > CUT_SLICE_MS) {
+        await yieldToPage();
+        if (this.closed) return [];
+        since = performance.now();
+      }
       if (this.tiles.has(t.key)) {
         this.tiles.delete(t.key);
         this.tiles.set(t.key, true);

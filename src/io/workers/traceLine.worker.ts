@@ -53,11 +53,12 @@ self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
     else if (m.type === 'tree') {
       try {
         session.buildTree(m.id, m.from, m.win, m.tileKeys);
+        // The path before the tree's end: the page starts its next work on 'treeDone', and the preview came after it.
+        if (m.path) reply({ type: 'path', id: m.id, key: m.path.key, points: session.path(m.id, m.path.to) });
       } finally {
         // Answered even on failure, so the page never waits for a tree that will not come.
         reply({ type: 'treeDone', id: m.id, bytesHeld: session.bytesHeld() });
       }
-      if (m.path) reply({ type: 'path', id: m.id, key: m.path.key, points: session.path(m.id, m.path.to) });
     } else if (m.type === 'warm') session.warmUp(); else if (m.type === 'path') reply({ type: 'path', id: m.id, key: m.key, points: session.path(m.id, m.to) });
     else if (m.type === 'once') reply({ type: 'path', id: -1, key: m.key, points: session.traceOnce(m.from, m.to, m.win, m.tileKeys) });
   } catch (err) {
