@@ -3,7 +3,11 @@
 // rather than left to the canvas to clip). Full resolution is the decoded bitmap itself, drawn a tile-sized crop at
 // a time; reduced levels come from the scan's tile pyramid (state/scanTilesPyramid) as they are made, and until the
 // level a zoom wants is made the whole bitmap is drawn as one image.
-import { memo, useEffect, useRef, useSyncExternalStore } from 'react';
+// What the layer last drew is written on the section view's element as data-scan-drawn, set when the layer has
+// drawn it: "tiles" (the tiles the zoom wants, at their level), "whole" (the whole bitmap standing in for a level
+// not made yet) or "drawing" (the view changed and the layer has not drawn it yet); absent without a scan. A
+// picture of the scan is final once it reads "tiles" (the browser tests wait for that instead of for time).
+import { memo, useEffect, useRef, useSyncExternalStore, type RefObject } from 'react';
 import Konva from 'konva';
 import { Layer, Group, Rect } from 'react-konva';
 import { useDocStore } from '../state/docStore';
@@ -17,7 +21,9 @@ const MARGIN_PX = 64;
 /** Above this zoom the scan's pixels are shown as crisp squares rather than smoothed. */
 const CRISP_ABOVE_SCALE = 2;
 
-export const ScanLayer = memo(function ScanLayer() {
+export type ScanDrawn = 'tiles' | 'whole' | 'drawing';
+
+export const ScanLayer = memo(function ScanLayer({ viewRef }: { viewRef: RefObject<HTMLElement | null> }) {
   const scan = useDocStore((s) => s.doc.scan);
   useSyncExternalStore(subscribeScans, scanCacheVersion);
   useSyncExternalStore(subscribePyramids, pyramidsVersion);
@@ -30,9 +36,13 @@ export const ScanLayer = memo(function ScanLayer() {
   useEffect(() => {
     const group = groupRef.current;
     const layer = layerRef.current;
+    const view = viewRef.current;
     if (!bitmap || !group || !layer) return;
     const nodes = new Map<string, Konva.Image>();
-    let shown = '';
+    let drawing: ScanDrawn = 'tiles';
+    const mark = (drawn: ScanDrawn) => view?.setAttribute('data-scan-drawn', drawn);
+    // Fired by Konva once the layer's scene is on its canvas.
+    layer.on('draw.scanDrawn', () => mark(drawing));
     const place = (key: string, attrs: Konva.ImageConfig) => {
       if (nodes.has(key)) return;
       const node = new Konva.Image({ ...attrs, listening: false, perfectDrawEnabled: false });
@@ -73,12 +83,12 @@ export const ScanLayer = memo(function ScanLayer() {
       }
       const crisp = camera.scale > CRISP_ABOVE_SCALE;
       if (layer.imageSmoothingEnabled() === crisp) layer.imageSmoothingEnabled(!crisp);
-      const now = [...wanted].sort().join(' ');
-      if (now !== shown) layer.batchDraw();
-      shown = now;
+      drawing = wanted.has('full') ? 'whole' : 'tiles';
+      // A new camera redraws the layer in the next frame even with the same tiles (batchDraw joins that draw).
+      mark('drawing');
+      layer.batchDraw();
     };
     update();
-    layer.batchDraw();
     const unsubscribeCamera = useSessionStore.subscribe((s, prev) => {
       if (s.camera !== prev.camera || s.viewport !== prev.viewport) update();
     });
@@ -87,11 +97,13 @@ export const ScanLayer = memo(function ScanLayer() {
     return () => {
       unsubscribeCamera();
       unsubscribeLevels();
+      layer.off('draw.scanDrawn');
+      view?.removeAttribute('data-scan-drawn');
       nodes.forEach((n) => n.destroy());
       nodes.clear();
       layer.batchDraw();
     };
-  }, [bitmap, pyramid]);
+  }, [bitmap, pyramid, viewRef]);
 
   if (!scan) return <Layer listening={false} />;
   return (

@@ -143,7 +143,7 @@ export function SectionView() {
         onPointerUp={endPan}
         onPointerLeave={endPan}
       >
-        <ScanLayer />
+        <ScanLayer viewRef={boxRef} />
         <GridLayer />
         <ShapesLayer />
         <DetachmentLayer />

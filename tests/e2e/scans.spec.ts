@@ -326,22 +326,12 @@ test('the grid draws lines in section units over the scan, and follows the view'
   const cy = centre + 40;
   // The scan is drawn (not the empty view's background) before the row is read.
   await expect.poll(async () => (await viewPixel(page, cx, cy))[3]).toBe(255);
-  // The demo is drawn whole until its tiles are cut, then from tiles (resampled a little differently):
-  // wait until the row is steady before taking it as the picture without a grid.
-  let previous = await viewRow(page, cy, 60, 660);
-  await expect
-    .poll(async () => {
-      await page.waitForTimeout(400);
-      const now = await viewRow(page, cy, 60, 660);
-      const same = JSON.stringify(now) === JSON.stringify(previous);
-      previous = now;
-      return same;
-    }, { timeout: 20_000 })
-    .toBe(true);
-  const before = previous;
+  // The demo is drawn whole until its tiles are cut, then from tiles (resampled a little differently): the
+  // row is taken as the picture without a grid once the view says its tiles are drawn.
+  await expect(page.getByTestId('section-view')).toHaveAttribute('data-scan-drawn', 'tiles', { timeout: 20_000 });
+  const before = await viewRow(page, cy, 60, 660);
   await page.getByTestId('toggle-grid').check();
   await expect(page.getByTestId('toggle-grid')).toBeChecked();
-  const after = await viewRow(page, cy, 60, 660);
   const differs = (a: number[][], b: number[][]) => a.map((p, i) => Math.abs(p[0] - b[i][0]) + Math.abs(p[1] - b[i][1]) + Math.abs(p[2] - b[i][2]) > 30);
   const changed = (a: number[][], b: number[][]) => differs(a, b).filter(Boolean).length;
   // Runs of changed columns at most 3 px wide: where a vertical grid line crosses the row.
@@ -357,9 +347,16 @@ test('the grid draws lines in section units over the scan, and follows the view'
     }
     return runs;
   };
+  // Lines of constant x (every 5000 m at this zoom, ~100 px apart) cross the row as narrow runs once the grid
+  // layer has drawn (its next frame); most columns do not change.
+  let after = before;
+  await expect
+    .poll(async () => {
+      after = await viewRow(page, cy, 60, 660);
+      return narrowRuns(differs(before, after));
+    })
+    .toBeGreaterThanOrEqual(3);
   await page.screenshot({ path: test.info().outputPath('grid-on-demo.png') });
-  // Lines of constant x (every 5000 m at this zoom, ~100 px apart) cross the row as narrow runs; most columns do not change.
-  expect(narrowRuns(differs(before, after))).toBeGreaterThanOrEqual(3);
   expect(changed(before, after)).toBeLessThan(before.length / 2);
   // Off again: the row is as it was.
   await page.getByTestId('toggle-grid').uncheck();
