@@ -1,9 +1,11 @@
-// One message at a time: errors stay until dismissed, information fades.
+// One message at a time: errors stay until dismissed, information fades. The area carries the last message shown
+// as data-last-message ("info: …" or "error: …"), still there after it fades, so a check need not race the fade.
 import { useEffect } from 'react';
 import { useSessionStore } from '../state/sessionStore';
 
 export function MessageBar() {
   const message = useSessionStore((s) => s.message);
+  const lastMessage = useSessionStore((s) => s.lastMessage);
   const busy = useSessionStore((s) => s.busy);
   const busyDone = useSessionStore((s) => s.busyDone);
   const busyCancel = useSessionStore((s) => s.busyCancel);
@@ -13,7 +15,7 @@ export function MessageBar() {
     return () => window.clearTimeout(t);
   }, [message]);
   return (
-    <div className="message-area" aria-live="polite">
+    <div className="message-area" aria-live="polite" data-testid="message-area" data-last-message={lastMessage ? `${lastMessage.kind}: ${lastMessage.text}` : undefined}>
       {busy && (
         <div className="message busy" data-testid="busy">
           <span data-testid="busy-text">{busy}</span>

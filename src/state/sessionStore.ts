@@ -26,6 +26,8 @@ export interface SessionState {
   activeTool: string;
   selectedHorizonId: string | null;
   message: Message | null;
+  /** The message shown last, kept after it fades or is dismissed (the message area carries it, for the browser tests). */
+  lastMessage: Message | null;
   busy: string | null;
   /** The share of the busy work done (0..1), when it is known. */
   busyDone: number | null;
@@ -62,6 +64,7 @@ export const useSessionStore = create<SessionState>()((set) => ({
   activeTool: 'select',
   selectedHorizonId: null,
   message: null,
+  lastMessage: null,
   busy: null,
   busyDone: null,
   busyCancel: null,
@@ -77,7 +80,10 @@ export const useSessionStore = create<SessionState>()((set) => ({
   setViewInsetBottom: (viewInsetBottom) => set((s) => (s.viewInsetBottom === viewInsetBottom ? s : { viewInsetBottom })),
   setTool: (activeTool) => set({ activeTool }),
   selectHorizon: (selectedHorizonId) => set({ selectedHorizonId }),
-  showMessage: (kind, text) => set({ message: { kind, text, id: ++messageId } }),
+  showMessage: (kind, text) => {
+    const message = { kind, text, id: ++messageId };
+    set({ message, lastMessage: message });
+  },
   clearMessage: () => set({ message: null }),
   setBusy: (busy, work) => set({ busy, busyDone: busy === null ? null : work?.done ?? null, busyCancel: busy === null ? null : work?.cancel ?? null }),
   setStarted: () => set({ started: true }),

@@ -10,6 +10,7 @@ import { clickAt, fittedScan, screen, type Cam } from './fittedScan';
 import { gradientPng } from './pngFixture';
 import { viewPixel } from './canvasPixels';
 import { paletteColour } from '../../src/core/model/horizonPalette';
+import { expectLastMessage } from './messages';
 
 const W = 1000;
 const H = 500;
@@ -306,7 +307,7 @@ test('a horizon of 100 000 vertices is drawn at screen resolution, redrawn on zo
   }
   const section = { units: 'm', pins: [0, 10_000], horizons: [{ name: 'Long line', line, regional: [[-500, 500], [10_500, 500]] }] };
   await page.getByTestId('open-project').setInputFiles({ name: 'long.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(section)) });
-  await expect(page.getByTestId('message-info')).toContainText('Opened long.json');
+  await expectLastMessage(page, 'info', 'Opened long.json');
   // The analysis uses every vertex: the excess area is the bump's 4 km² to four significant figures (the
   // display rule drops trailing zeros, so 3.9996 … 4.0004 km² read "4"; 3.999 or 4.001 would show).
   await expect(page.getByTestId('horizon-table').locator('tbody tr').first().locator('td').nth(1)).toHaveText('4');

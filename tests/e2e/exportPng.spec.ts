@@ -13,6 +13,7 @@ import { serializeProject } from '../../src/io/projectFile';
 import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
 import type { ImagePx, ProjectDoc } from '../../src/core/model/projectDoc';
 import type { Section, XZ } from '../../src/core/model/section';
+import { expectLastMessage } from './messages';
 
 const SECTION: Section = {
   units: 'm',
@@ -145,7 +146,7 @@ test('a PNG export shows its progress, stops on Cancel without a download or a c
   await expect(page.getByTestId('busy-progress')).toBeVisible();
   await page.screenshot({ path: test.info().outputPath('export-progress.png') });
   await page.getByTestId('busy-cancel').click();
-  await expect(page.getByTestId('message-info')).toContainText('PNG export cancelled');
+  await expectLastMessage(page, 'info', 'PNG export cancelled');
   await expect(page.getByTestId('busy')).toHaveCount(0);
   await page.screenshot({ path: test.info().outputPath('export-cancelled.png') });
   release();

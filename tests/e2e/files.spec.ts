@@ -12,6 +12,7 @@ import { imageToSection } from '../../src/core/calibration/mapPoints';
 import type { ProjectDoc } from '../../src/core/model/projectDoc';
 import { parseHorizonsCsv } from '../../src/io/csvHorizons';
 import { parseProjectText } from '../../src/io/projectFile';
+import { expectLastMessage } from './messages';
 
 const SECTION = {
   units: 'm',
@@ -78,7 +79,7 @@ test('save → reload → open gives back an identical document, scan included',
   await page.getByTestId('start-fresh').click();
   await expect(page.getByTestId('busy')).toHaveCount(0);
   await page.getByTestId('open-project').setInputFiles({ name: 'p.foldroot.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(first)) });
-  await expect(page.getByTestId('message-info')).toContainText('Opened p.foldroot.json');
+  await expectLastMessage(page, 'info', 'Opened p.foldroot.json');
   await expect(page.getByTestId('scan-name')).toContainText('gradient.png — 300 × 200 px');
   const second = await saveProject(page);
   expect(second.doc).toEqual(first.doc);
@@ -131,7 +132,7 @@ test('CSV, GeoJSON and SVG imports of generated files give the expected horizons
 test('exported PNG has the asked size and content; exported SVG parses', async ({ page }) => {
   await ready(page);
   await openSection(page);
-  await expect(page.getByTestId('message-info')).toContainText('Opened fold-section.json');
+  await expectLastMessage(page, 'info', 'Opened fold-section.json');
   await page.getByTestId('menu-export').click();
   await page.getByTestId('png-size').selectOption('a3-300');
   const pngBytes = await download(page, () => page.getByTestId('export-png').click());
@@ -202,7 +203,7 @@ function differingShare(a: PNG, b: PNG, y0: number, y1: number): number {
 test('the title and author are set from the menus and the report, and appear in the report and the exported figure', async ({ page }) => {
   await ready(page);
   await openSection(page);
-  await expect(page.getByTestId('message-info')).toContainText('Opened fold-section.json');
+  await expectLastMessage(page, 'info', 'Opened fold-section.json');
   await page.getByTestId('menu-export').click();
   const plain = PNG.sync.read(await download(page, () => page.getByTestId('export-png').click()));
   // The fields start from the document (a section file is titled after its file name); Esc keeps it.
@@ -273,7 +274,7 @@ test('opening a file over unsaved changes asks first; Cancel keeps the project, 
   });
   // Nothing unsaved: no question.
   await openSection(page, SECTION, 'first.json');
-  await expect(page.getByTestId('message-info')).toContainText('Opened first.json');
+  await expectLastMessage(page, 'info', 'Opened first.json');
   expect(asked).toEqual([]);
   await setTitleAndAuthor(page, 'Work in progress', 'R. Tester');
   await expect(page.getByTestId('autosave-status')).toHaveText(/^Unsaved changes/);
@@ -283,7 +284,7 @@ test('opening a file over unsaved changes asks first; Cancel keeps the project, 
   expect(asked[0]).toMatch(/Discard the changes not saved to a file and open second\.json\?/);
   await expect(page.getByTestId('busy')).toHaveCount(0);
   await expect(page.getByTestId('autosave-status')).toHaveText(/^Unsaved changes/);
-  await expect(page.getByText(/Opened second\.json/)).toHaveCount(0);
+  await expect(page.getByTestId('message-area')).not.toHaveAttribute('data-last-message', /Opened second\.json/);
   const kept = await saveProject(page);
   expect([kept.doc.title, kept.doc.author, kept.doc.horizons.length]).toEqual(['Work in progress', 'R. Tester', 3]);
   // A file that cannot be opened only gets its message, even with changes unsaved.
@@ -294,7 +295,7 @@ test('opening a file over unsaved changes asks first; Cancel keeps the project, 
   // OK: the file opens in place of the project.
   answer = true;
   await openSection(page, { ...SECTION, horizons: SECTION.horizons.slice(0, 2) }, 'second.json');
-  await expect(page.getByTestId('message-info')).toContainText('Opened second.json');
+  await expectLastMessage(page, 'info', 'Opened second.json');
   expect(asked).toHaveLength(2);
   await expect(page.getByTestId('autosave-status')).toHaveText(/^Saved/);
   const opened = await saveProject(page);
@@ -335,7 +336,7 @@ test('corrupt and hostile files give a message and leave the open project unchan
     await page.getByTestId('open-project').setInputFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text) });
     // The same parser in Node says what the page must say. Every message names the file, so it is this case's.
     const expected = parseProjectText(text, name);
-    if (expected.ok) await expect(page.getByTestId('message-info')).toContainText(`Opened ${name}`);
+    if (expected.ok) await expectLastMessage(page, 'info', `Opened ${name}`);
     else await expect(page.getByTestId('message-error')).toContainText(expected.message.split(' (')[0]);
   }
   await expect(page.getByTestId('busy')).toHaveCount(0);

@@ -18,6 +18,7 @@ import { docToSection } from '../../src/core/model/docToSection';
 import type { ControlPoint, ProjectDoc } from '../../src/core/model/projectDoc';
 import type { Section } from '../../src/core/model/section';
 import { fitCamera } from '../../src/state/camera';
+import { expectLastMessage } from './messages';
 
 const demo = JSON.parse(readFileSync('public/demo/section.json', 'utf8')) as Section;
 const truth = JSON.parse(readFileSync('public/demo/truth.json', 'utf8')) as { displacement: number; detachmentElevation: number };
@@ -398,7 +399,7 @@ test('Monte Carlo and sensitivity results of one project never show against the 
   // Open the demo's own section file (public/demo/section.json): another project, the same scenario id and
   // the same section in section units, so a result keyed by its section alone would even pass for current.
   await page.getByTestId('open-project').setInputFiles({ name: 'section.json', mimeType: 'application/json', buffer: readFileSync('public/demo/section.json') });
-  await expect(page.getByTestId('message-info')).toContainText('Opened section.json');
+  await expectLastMessage(page, 'info', 'Opened section.json');
   await expect(page.getByTestId('result-detachment-elevation')).toContainText(' m');
   await expect(page.getByTestId('mc-run')).toBeVisible();
   await expect(page.getByTestId('mc-result')).toHaveCount(0);
@@ -412,7 +413,7 @@ test('Monte Carlo and sensitivity results of one project never show against the 
   await page.getByTestId('mc-run').click();
   await expect(page.getByTestId('mc-progress')).toBeVisible();
   await page.getByTestId('open-project').setInputFiles({ name: 'again.json', mimeType: 'application/json', buffer: readFileSync('public/demo/section.json') });
-  await expect(page.getByTestId('message-info')).toContainText('Opened again.json');
+  await expectLastMessage(page, 'info', 'Opened again.json');
   await expect(page.getByTestId('mc-progress')).toHaveCount(0);
   await expect(page.getByTestId('mc-run')).toBeEnabled();
   await expect(page.getByTestId('mc-result')).toHaveCount(0);

@@ -4,6 +4,7 @@ import type { Page } from '@playwright/test';
 import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { expectLastMessage } from './messages';
 
 const N = 150_000;
 
@@ -37,7 +38,7 @@ test('a horizon of 150,000 vertices opens, exports as SVG and PNG, and is drawn 
   test.setTimeout(120_000);
   await gotoStarted(page);
   await page.getByTestId('open-project').setInputFiles({ name: 'dense.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(denseSection(N))) });
-  await expect(page.getByTestId('message-info')).toContainText('Opened dense.json');
+  await expectLastMessage(page, 'info', 'Opened dense.json');
   await expect.poll(() => horizonNames(page)).toEqual(['Upper marker', 'Lower marker']);
   await page.getByTestId('menu-export').click();
   const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');

@@ -6,6 +6,7 @@
 // the other three stay on the line, so both views show a depth of 3000 m.
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { expectLastMessage } from './messages';
 
 function section(h4Regional: [number, number][]): string {
   const horizons = [0, 1, 2, 3].map((k) => {
@@ -25,7 +26,7 @@ for (const [name, regional, reason] of cases) {
   test(`strip and pane show one depth and leave out a horizon whose regional ${name}`, async ({ page }) => {
     await gotoStarted(page);
     await page.getByTestId('open-project').setInputFiles({ name: 'four.json', mimeType: 'application/json', buffer: Buffer.from(section(regional)) });
-    await expect(page.getByTestId('message-info')).toContainText('Opened four.json');
+    await expectLastMessage(page, 'info', 'Opened four.json');
     const strip = page.getByTestId('strip-detachment-depth');
     const pane = page.getByTestId('result-detachment-depth');
     await expect(strip).toHaveText(/3[,\s]?000 m/);
