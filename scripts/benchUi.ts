@@ -3,7 +3,7 @@
 // in the same page, their ratio and the longest main-thread task it caused (PerformanceObserver 'longtask').
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
-//                       --trace-mp 200 --no-trace --only-trace]
+//                       --no-documents --trace-mp 200 --no-trace --only-trace]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -12,7 +12,9 @@
 // - open scan at each size: drop → shown; floor: createImageBitmap of the same file in the same page.
 // - export PNG at each offered size (--png-sizes screen,a4-150,a4-300,a3-300) and scan size: click → download;
 //   floor: drawing the scan at the PNG's size and encoding that canvas as PNG in the same page; with the longest
-//   main-thread task and the main thread's heap peak against the PNG's pixel bytes.
+//   main-thread task and the main thread's heap peak against the PNG's pixel bytes; the app's own time (its click
+//   handler → the file handed to the download, without Playwright's click and download event) and each step's
+//   share (src/io/exportFigure.ts PNG_STEP_MARK). --no-documents leaves out the big-document rows.
 // - big documents (12 horizons × each --vertices): opening the section file, the first move of a regional drag,
 //   single and Shift (every regional) drags waiting for the numbers, a continuous drag at 60 moves a second, the
 //   autosave task after the edit; floor: one 16.7 ms frame.
@@ -49,6 +51,8 @@ const WITH_UNCAPPED = !process.argv.includes('--no-uncapped');
 const WITH_SCANS = !process.argv.includes('--no-scans') && !process.argv.includes('--only-trace');
 const WITH_TRACE = !process.argv.includes('--no-trace');
 const ONLY_TRACE = process.argv.includes('--only-trace');
+/** Leaves out the big-document rows (open, drags, autosave), e.g. to time only the scan and export rows. */
+const WITH_DOCUMENTS = !process.argv.includes('--no-documents') && !ONLY_TRACE;
 const TRACE_MP = Number(flag('trace-mp') ?? 200);
 /** A folder for screenshots of the tracing rows' first previews (optional). */
 const SHOTS = flag('shots');
@@ -192,7 +196,7 @@ const EXPORT_SIZES = PNG_SIZES.filter(([id]) => !WANTED_SIZES || WANTED_SIZES.in
  * Exports the figure as PNG at one offered size; returns click → download (ms), the longest task, and the main
  * thread's JavaScript heap peak over its level before the export (bytes; sampled every 5 ms, after a collection).
  */
-async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; longest: number; bytes: number; heapPeak: number }> {
+async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; longest: number; bytes: number; heapPeak: number; steps: Map<string, number> }> {
   await page.getByTestId('menu-export').click();
   await page.getByTestId('png-size').selectOption(sizeId);
   const cdp = await page.context().newCDPSession(page);
@@ -215,7 +219,36 @@ async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; long
   const size = PNG_SIZES.find(([id]) => id === sizeId)!;
   check(head.readUInt32BE(16) === size[1] && head.readUInt32BE(20) === size[2], `the PNG export is not ${size[1]} × ${size[2]} px`);
   await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
-  return { ms, longest: await longestSince(page, t0), bytes: readFileSync(path).length, heapPeak };
+  return { ms, longest: await longestSince(page, t0), bytes: readFileSync(path).length, heapPeak, steps: await pngSteps(page, t0, t0 + ms) };
+}
+
+/**
+ * The time from each step of the PNG export to the next (src/io/exportFigure.ts PNG_STEP_MARK marks, set on the
+ * page as each step starts or is heard from the worker), keyed by the step it starts with: 'click' → 'start' is
+ * the check of the lines and the figure's markup, 'posted' → 'figure' the worker's start-up and the request's
+ * hand-over, 'done' → 'download' handing the file to the browser.
+ */
+async function pngSteps(page: Page, t0: number, t1: number): Promise<Map<string, number>> {
+  const marks = (await page.evaluate(`performance.getEntriesByName('foldroot-png-step').filter((m) => m.startTime >= ${t0}).map((m) => [m.detail, m.startTime])`)) as [string, number][];
+  await page.evaluate(`performance.clearMarks('foldroot-png-step')`);
+  check(marks.length >= 4 && marks.some(([m]) => m === 'done'), 'the PNG export set no step marks');
+  const at: [string, number][] = [['click', t0], ...marks, ['download', Math.max(t1, marks[marks.length - 1][1])]];
+  const steps = new Map(at.slice(0, -1).map(([step, t], i) => [step, at[i + 1][1] - t]));
+  // The app's own time: from its click handler to the file handed to the browser (without Playwright's click and download event).
+  const asked = marks.find(([m]) => m === 'asked')?.[1];
+  const handed = marks.find(([m]) => m === 'handed')?.[1];
+  check(asked !== undefined && handed !== undefined, 'the PNG export set no asked/handed marks');
+  steps.set(APP_TIME, handed - asked);
+  return steps;
+}
+
+/** The steps' key for the app's own time of an export (click handler → file handed over). */
+const APP_TIME = 'in the app';
+
+/** The medians of each step over runs, as a note: "click 12 · start 3 · … ms". */
+function stepsNote(runs: Map<string, number>[]): string {
+  const names = [...new Set(runs.flatMap((r) => [...r.keys()]))].filter((n) => n !== APP_TIME);
+  return names.map((n) => `${n} ${median(runs.map((r) => r.get(n) ?? 0)).toFixed(0)}`).join(' · ');
 }
 
 /** The page's frame intervals (ms) over `frames` frames with nothing happening: the floor of a pan frame. */
@@ -608,7 +641,7 @@ async function scans(page: Page): Promise<void> {
     const openLongest: number[] = [];
     const reduced: number[] = [];
     const floor: number[] = [];
-    const exp = EXPORT_SIZES.map(() => ({ ms: [] as number[], longest: [] as number[], floor: [] as number[], heap: [] as number[] }));
+    const exp = EXPORT_SIZES.map(() => ({ ms: [] as number[], longest: [] as number[], floor: [] as number[], heap: [] as number[], steps: [] as Map<string, number>[] }));
     await makeScan(page, side, `bench-${mp}mp.jpg`);
     // The heavy sizes once: a 100 MP scan takes seconds per step on a shared machine.
     const runs = mp >= 100 ? 1 : RUNS;
@@ -637,6 +670,7 @@ async function scans(page: Page): Promise<void> {
         exp[k].ms.push(e.ms);
         exp[k].longest.push(e.longest);
         exp[k].heap.push(e.heapPeak);
+        exp[k].steps.push(e.steps);
         exp[k].floor.push(await exportFloor(page, w, h));
       }
     }
@@ -646,7 +680,7 @@ async function scans(page: Page): Promise<void> {
       const pixelMb = (w * h * 4) / 1048576;
       report({
         work: `export PNG ${w} × ${h} with a ${mp} MP scan`, ms: median(exp[k].ms), floor: median(exp[k].floor), longest: median(exp[k].longest),
-        note: `heap peak +${(median(exp[k].heap) / 1048576).toFixed(1)} MB (target < 2 × ${pixelMb.toFixed(1)} MB pixels)${runs < RUNS ? '; 1 run' : ''}`,
+        note: `in the app (its click handler → the file handed over) ${median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)).toFixed(0)} ms = ${(median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)) / median(exp[k].floor)).toFixed(2)}×; heap peak +${(median(exp[k].heap) / 1048576).toFixed(1)} MB (target < 2 × ${pixelMb.toFixed(1)} MB pixels)${runs < RUNS ? '; 1 run' : ''}; steps (ms): ${stepsNote(exp[k].steps)}`,
       });
     }
     if (mp === 1 || mp === big) {
@@ -810,7 +844,7 @@ async function run(base: string, uncapped: boolean): Promise<void> {
         await page.close();
         page = await fresh();
       }
-      if (!ONLY_TRACE) await bigDocuments(page, uncapped ? 'uncapped' : 'capped');
+      if (WITH_DOCUMENTS) await bigDocuments(page, uncapped ? 'uncapped' : 'capped');
     } catch (e) {
       const shot = `${process.env.BENCH_OUT || '/tmp'}/bench-ui-failure.png`;
       await page.screenshot({ path: shot }).catch(() => undefined);

@@ -2,12 +2,12 @@
 // data: URL, written into the file piece by piece. The PNG is drawn in a worker from the same figure markup (io/paintFigureSvg), in three layers:
 // the figure below the scan, the scan region the panel shows, taken from the scan's tile pyramid at about the
 // PNG's resolution and drawn through the calibration's matrix (the scan's file never passes through a string),
-// and the figure above it; then encoded there. The figure of the open project is put together in
-// state/currentFigureSvg.
+// and the figure above it; then encoded there. The worker paints the figure while the page takes the scan region,
+// and stays for the next export. The figure of the open project is put together in state/currentFigureSvg.
 import { FIGURE_HEIGHT, FIGURE_WIDTH, scanImageOpen, type SectionSvgParts } from './renderSectionSvg';
 import { figureScanRegion } from './figureScanRegion';
 import { base64Pieces } from './base64Pieces';
-import type { FigurePngReply, FigurePngRequest, FigureScanRegion, PngStep } from './figurePngProtocol';
+import type { FigurePngReply, FigurePngRequest, FigurePngScan, FigureScanRegion, PngStep } from './figurePngProtocol';
 
 export type { PngStep } from './figurePngProtocol';
 
@@ -89,75 +89,99 @@ async function scanRegion(parts: SectionSvgParts, source: FigureScanSource, widt
     const bitmap = await createImageBitmap(source.bitmap, sx, sy, sw, sh, { resizeWidth: rw, resizeHeight: rh, resizeQuality: 'high' });
     return { ...base, regionW: rw, regionH: rh, tiles: [{ bitmap, x: 0, y: 0 }], originPx: [sx, sy], pxPerRegionPx: [sw / rw, sh / rh] };
   }
-  if (!stopped()) tiles.push({ bitmap: await py.region(choice.level, choice.x0, choice.y0, choice.x1, choice.y1), x: 0, y: 0 });
+  if (!stopped()) {
+    // Full resolution: one crop of the bitmap (a copy made by the browser in one call); a reduced level is put
+    // together from its tiles, or halved from the finer level, in blocks.
+    const [sw, sh] = [choice.x1 - choice.x0, choice.y1 - choice.y0];
+    const bitmap = choice.level === 0 ? await createImageBitmap(source.bitmap, choice.x0, choice.y0, sw, sh) : await py.region(choice.level, choice.x0, choice.y0, choice.x1, choice.y1);
+    tiles.push({ bitmap, x: 0, y: 0 });
+  }
   return { ...base, tiles, originPx: [choice.x0 * choice.factor, choice.y0 * choice.factor], pxPerRegionPx: [choice.factor, choice.factor] };
 }
 
-/** A worker started ahead of the next export (its script loaded and compiled while the user picks a size). */
-let spare: Worker | null = null;
+/**
+ * The user-timing mark set at each step of a PNG export, the step in its `detail`: 'asked' (the menu's click),
+ * 'start', 'posted' (the figure handed to the worker), 'scan-region', 'region-posted', each step the worker reports
+ * (PngStep), 'done' and 'handed' (the file given to the browser's download); read by the benchmark (scripts/benchUi.ts) for its breakdown.
+ */
+export const PNG_STEP_MARK = 'foldroot-png-step';
+/** Sets the PNG export's step mark (PNG_STEP_MARK). */
+export const markPngStep = (step: string): void => void performance.mark(PNG_STEP_MARK, { detail: step });
+
+/** The worker free for the next export: started ahead (prepareFigurePng) or kept from the last export. */
+let idle: Worker | null = null;
 const newWorker = () => new Worker(new URL('./workers/figurePng.worker.ts', import.meta.url), { type: 'module' });
 
-/** Starts the PNG worker ahead of an export (e.g. when the export menu opens); one is kept at most. */
+/** Starts the PNG worker ahead of an export (e.g. when the export menu opens), so that its script is loaded and compiled by then; one is kept at most. */
 export function prepareFigurePng(): void {
-  spare ??= newWorker();
+  idle ??= newWorker();
 }
 
 /**
  * Starts a PNG of the figure at width × height pixels, drawn and encoded in a worker (io/workers/figurePng.worker.ts):
  * its part below the scan, the scan region it shows through the figure's matrix (clipped to the panel) when there is
- * a scan, and its part above. `onStep` hears each step as it starts. `cancel` ends the worker: the outcome is then
- * `{ ok: false, cancelled: true }` and nothing else is touched.
+ * a scan, and its part above. The worker paints the figure while this page takes the scan region. `onStep` hears each
+ * step as it starts. `cancel` ends the worker: the outcome is then `{ ok: false, cancelled: true }` and nothing else
+ * is touched. A worker that finished is kept for the next export.
  */
 export function startFigurePng(parts: SectionSvgParts, scan: FigureScanSource | null, width: number, height: number,
   onStep: (step: PngStep) => void = () => undefined): FigurePngJob {
-  let worker: Worker | null = null;
+  let worker: Worker | null = idle ?? newWorker();
+  idle = null;
   let stopped = false;
   let finish: (r: FigurePngResult) => void = () => undefined;
   const done = new Promise<FigurePngResult>((resolve) => { finish = resolve; });
-  const settle = (r: FigurePngResult) => {
-    worker?.terminate();
+  const settle = (r: FigurePngResult, keepWorker: boolean) => {
+    stopped = true;
+    if (worker) {
+      worker.onmessage = worker.onerror = null;
+      if (keepWorker && !idle) idle = worker;
+      else worker.terminate();
+    }
     worker = null;
     finish(r);
   };
   const cancel = () => {
+    if (!stopped) settle({ ok: false, cancelled: true, message: 'Export cancelled.' }, false);
+  };
+  const w = worker;
+  w.onmessage = (e: MessageEvent<FigurePngReply>) => {
+    const m = e.data;
     if (stopped) return;
-    stopped = true;
-    settle({ ok: false, cancelled: true, message: 'Export cancelled.' });
+    if (m.kind === 'step') {
+      markPngStep(m.step);
+      onStep(m.step);
+    } else {
+      markPngStep('done');
+      settle(m.kind === 'done' ? { ok: true, blob: m.blob } : { ok: false, cancelled: false, message: m.message }, true);
+    }
+  };
+  w.onerror = (e) => {
+    if (!stopped) settle({ ok: false, cancelled: false, message: e.message || 'The figure could not be drawn.' }, false);
   };
   void (async () => {
     try {
-      if (scan && parts.scan) onStep('scan-region');
-      const region = scan ? await scanRegion(parts, scan, width, height, () => stopped) : null;
+      markPngStep('start');
+      const showsScan = Boolean(scan && parts.scan);
+      const req: FigurePngRequest = {
+        kind: 'figure', under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>`,
+        figure: { width: FIGURE_WIDTH, height: FIGURE_HEIGHT }, panel: parts.panel, width, height, scanFollows: showsScan,
+      };
+      w.postMessage(req);
+      markPngStep('posted');
+      if (!scan || !showsScan) return;
+      markPngStep('scan-region');
+      onStep('scan-region');
+      const region = await scanRegion(parts, scan, width, height, () => stopped);
       if (stopped) {
         region?.tiles.forEach((t) => t.bitmap.close());
         return;
       }
-      const req: FigurePngRequest = {
-        under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>`,
-        figure: { width: FIGURE_WIDTH, height: FIGURE_HEIGHT }, panel: parts.panel, width, height, scan: region,
-      };
-      const w = spare ?? newWorker();
-      spare = null;
-      worker = w;
-      w.onmessage = (e: MessageEvent<FigurePngReply>) => {
-        const m = e.data;
-        if (stopped) return;
-        if (m.kind === 'step') onStep(m.step);
-        else {
-          stopped = true;
-          settle(m.kind === 'done' ? { ok: true, blob: m.blob } : { ok: false, cancelled: false, message: m.message });
-        }
-      };
-      w.onerror = (e) => {
-        if (stopped) return;
-        stopped = true;
-        settle({ ok: false, cancelled: false, message: e.message || 'The figure could not be drawn.' });
-      };
-      w.postMessage(req, region ? region.tiles.map((t) => t.bitmap) : []);
+      const next: FigurePngScan = { kind: 'scan', scan: region };
+      w.postMessage(next, region ? region.tiles.map((t) => t.bitmap) : []);
+      markPngStep('region-posted');
     } catch (e) {
-      if (stopped) return;
-      stopped = true;
-      settle({ ok: false, cancelled: false, message: e instanceof Error ? e.message : String(e) });
+      if (!stopped) settle({ ok: false, cancelled: false, message: e instanceof Error ? e.message : String(e) }, false);
     }
   })();
   return { done, cancel };

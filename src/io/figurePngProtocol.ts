@@ -19,7 +19,13 @@ export interface FigureScanRegion {
   opacity: number;
 }
 
+/**
+ * An export is two messages, so that the worker paints the figure while the page is still taking the scan region:
+ * first the figure (`scanFollows`: a scan message comes next), then, when it shows a scan, the region (null: none
+ * after all). The worker answers each export with steps and then done or failed, and is then free for the next.
+ */
 export interface FigurePngRequest {
+  kind: 'figure';
   /** The figure's part below the scan and its part above, each a whole SVG document of `figure` units. */
   under: string;
   over: string;
@@ -28,7 +34,11 @@ export interface FigurePngRequest {
   panel: { x: number; y: number; w: number; h: number };
   width: number;
   height: number;
-  scan: FigureScanRegion | null;
+  scanFollows: boolean;
 }
+
+export interface FigurePngScan { kind: 'scan'; scan: FigureScanRegion | null }
+
+export type FigurePngMessage = FigurePngRequest | FigurePngScan;
 
 export type FigurePngReply = { kind: 'step'; step: PngStep } | { kind: 'done'; blob: Blob } | { kind: 'failed'; message: string };

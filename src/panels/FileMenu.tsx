@@ -7,7 +7,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
-import { prepareFigurePng, startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
+import { markPngStep, prepareFigurePng, startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
 import { currentFigureParts, currentFigureSvgBlob } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
@@ -53,6 +53,7 @@ let pngJob: FigurePngJob | null = null;
 
 async function exportPng(sizeId: string): Promise<void> {
   if (pngJob) return;
+  markPngStep('asked');
   if (!(await afterLinesChecked('The PNG'))) return;
   if (pngJob) return;
   const size = PNG_SIZES.find((s) => s.id === sizeId) ?? PNG_SIZES[0];
@@ -66,7 +67,10 @@ async function exportPng(sizeId: string): Promise<void> {
     const { parts, scan } = currentFigureParts();
     pngJob = startFigurePng(parts, scan, size.width, size.height, say);
     const png = await pngJob.done;
-    if (png.ok) downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
+    if (png.ok) {
+      downloadFile(png.blob, safeFileName(useDocStore.getState().doc.title, '.png'));
+      markPngStep('handed');
+    }
     else if (png.cancelled) session.showMessage('info', `PNG export cancelled; nothing was saved.`);
     else session.showMessage('error', png.message);
   } finally {

@@ -2,25 +2,29 @@
 // it shows (tiles already at about the figure's resolution, put together without seams, then drawn through the
 // figure's matrix and clipped to the panel), the part above, and the PNG encoding. Both parts are the figure's
 // own SVG markup (io/renderSectionSvg), painted by io/paintFigureSvg. Reports each step as it starts; the page
-// cancels by ending the worker.
-import { paintFigureSvg, parseFigureSvg } from '../paintFigureSvg';
-import type { FigurePngReply, FigurePngRequest } from '../figurePngProtocol';
+// cancels by ending the worker. The figure comes first and is painted while the page takes the scan region, which
+// follows in a second message (io/figurePngProtocol); the worker then stays for the next export.
+import { paintFigureSvg, parseFigureSvg, type SvgNode } from '../paintFigureSvg';
+import type { FigurePngMessage, FigurePngReply, FigurePngRequest, FigureScanRegion } from '../figurePngProtocol';
 
 type Ctx = OffscreenCanvasRenderingContext2D;
 
 const post = (reply: FigurePngReply) => (self as unknown as Worker).postMessage(reply);
 
-function drawScan(ctx: Ctx, req: FigurePngRequest): void {
-  const scan = req.scan;
-  if (!scan) return;
-  // The region in one canvas first: tiles drawn one by one through a scaling matrix would each be smoothed
-  // to their own edges and leave faint seams.
-  const region = new OffscreenCanvas(scan.regionW, scan.regionH);
-  const rctx = region.getContext('2d');
-  if (!rctx) throw new Error('This browser cannot draw the scan region off the page.');
-  for (const t of scan.tiles) {
-    rctx.drawImage(t.bitmap, t.x, t.y);
-    t.bitmap.close();
+function drawScan(ctx: Ctx, req: FigurePngRequest, scan: FigureScanRegion): void {
+  // One piece is drawn as it is; several are put together in one canvas first: tiles drawn one by one through a
+  // scaling matrix would each be smoothed to their own edges and leave faint seams.
+  let image: ImageBitmap | OffscreenCanvas;
+  if (scan.tiles.length === 1 && scan.tiles[0].x === 0 && scan.tiles[0].y === 0) image = scan.tiles[0].bitmap;
+  else {
+    const region = new OffscreenCanvas(scan.regionW, scan.regionH);
+    const rctx = region.getContext('2d');
+    if (!rctx) throw new Error('This browser cannot draw the scan region off the page.');
+    for (const t of scan.tiles) {
+      rctx.drawImage(t.bitmap, t.x, t.y);
+      t.bitmap.close();
+    }
+    image = region;
   }
   const { panel, figure } = req;
   ctx.save();
@@ -35,12 +39,16 @@ function drawScan(ctx: Ctx, req: FigurePngRequest): void {
   ctx.globalAlpha = scan.opacity;
   ctx.imageSmoothingEnabled = true;
   ctx.imageSmoothingQuality = 'high';
-  ctx.drawImage(region, 0, 0);
+  ctx.drawImage(image, 0, 0);
   ctx.restore();
-  region.width = region.height = 0;
+  if (image instanceof ImageBitmap) image.close();
+  else image.width = image.height = 0;
 }
 
-async function render(req: FigurePngRequest): Promise<Blob> {
+/** The export under way: its canvas with the figure's lower part painted, the upper part parsed, waiting for the scan. */
+let pending: { req: FigurePngRequest; canvas: OffscreenCanvas; ctx: Ctx; over: SvgNode } | null = null;
+
+function begin(req: FigurePngRequest): void {
   const canvas = new OffscreenCanvas(req.width, req.height);
   const ctx = canvas.getContext('2d');
   if (!ctx) throw new Error('This browser cannot draw a canvas of that size; choose a smaller PNG size.');
@@ -48,19 +56,43 @@ async function render(req: FigurePngRequest): Promise<Blob> {
   ctx.fillStyle = '#ffffff';
   ctx.fillRect(0, 0, req.width, req.height);
   paintFigureSvg(ctx, parseFigureSvg(req.under), req.width, req.height);
-  if (req.scan) {
-    post({ kind: 'step', step: 'scan' });
-    drawScan(ctx, req);
-  }
-  post({ kind: 'step', step: 'labels' });
-  paintFigureSvg(ctx, parseFigureSvg(req.over), req.width, req.height);
-  post({ kind: 'step', step: 'encoding' });
-  return canvas.convertToBlob({ type: 'image/png' });
+  pending = { req, canvas, ctx, over: parseFigureSvg(req.over) };
 }
 
-self.onmessage = (e: MessageEvent<FigurePngRequest>) => {
-  render(e.data).then(
-    (blob) => post({ kind: 'done', blob }),
-    (err: unknown) => post({ kind: 'failed', message: err instanceof Error ? err.message : String(err) }),
-  );
+async function finish(scan: FigureScanRegion | null): Promise<Blob> {
+  if (!pending) throw new Error('The figure was not started.');
+  const { req, canvas, ctx, over } = pending;
+  pending = null;
+  if (scan) {
+    post({ kind: 'step', step: 'scan' });
+    drawScan(ctx, req, scan);
+  }
+  post({ kind: 'step', step: 'labels' });
+  paintFigureSvg(ctx, over, req.width, req.height);
+  post({ kind: 'step', step: 'encoding' });
+  const blob = await canvas.convertToBlob({ type: 'image/png' });
+  // The worker stays for the next export: its pixels go now, not at the next collection.
+  canvas.width = canvas.height = 0;
+  return blob;
+}
+
+function failed(err: unknown): void {
+  pending = null;
+  post({ kind: 'failed', message: err instanceof Error ? err.message : String(err) });
+}
+
+self.onmessage = (e: MessageEvent<FigurePngMessage>) => {
+  const m = e.data;
+  try {
+    if (m.kind === 'figure') {
+      begin(m);
+      if (m.scanFollows) return;
+    } else if (!pending) {
+      m.scan?.tiles.forEach((t) => t.bitmap.close());
+      return;
+    }
+    finish(m.kind === 'scan' ? m.scan : null).then((blob) => post({ kind: 'done', blob }), failed);
+  } catch (err) {
+    failed(err);
+  }
 };
