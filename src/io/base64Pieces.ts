@@ -4,7 +4,7 @@
 import { bytesToBase64 } from './base64';
 
 /** Bytes read at a time: a multiple of 3, so that the pieces' base64 joins into the base64 of the whole. */
-export const BASE64_PIECE_BYTES = 3 * 1024 * 1024;
+export const BASE64_PIECE_BYTES = 3 * 512 * 1024;
 
 /** What the pieces are read from: a Blob or File (anything whose slices can be read as bytes). */
 export interface ByteSource {

@@ -164,7 +164,7 @@ test('a PNG export shows its progress, stops on Cancel without a download or a c
 });
 
 test('the SVG embeds the scan file once, its bytes exactly, when the file is read in several pieces', async ({ page }) => {
-  // Noise does not compress: a PNG of about 4.6 MB, more than one 3 MiB piece of the SVG writer.
+  // Noise does not compress: a PNG of about 4.6 MB, several 1.5 MiB pieces of the SVG writer.
   const [w, h] = [1400, 1100];
   const png = new PNG({ width: w, height: h });
   let seed = 7;

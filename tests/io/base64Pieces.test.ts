@@ -26,9 +26,10 @@ describe('base64Pieces', () => {
   });
 
   it('never holds more than one piece of a large file as a string', async () => {
-    // A fake 13 MB file, each slice made on demand from its offset. A writer that read the file as one string would
-    // yield one piece of its whole base64; pieces of at most 4 MiB characters keep a file of any size (over
-    // 400 MB, whose base64 would pass V8's longest string, 2^29 − 24 characters, v8.h String::kMaxLength) writable.
+    // A fake file of four pieces and two bytes, each slice made on demand from its offset. A writer that read the
+    // file as one string would yield one piece of its whole base64; pieces of at most 2 MiB characters keep a file
+    // of any size (over 400 MB, whose base64 would pass V8's longest string, 2^29 − 24 characters, v8.h
+    // String::kMaxLength) writable.
     const size = 4 * BASE64_PIECE_BYTES + 2;
     const byteAt = (i: number) => (i * 2654435761) >>> 24;
     const bytesOf = (start: number, end: number) => {
