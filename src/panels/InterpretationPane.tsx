@@ -17,7 +17,8 @@ import { MonteCarloPanel } from './interpretation/MonteCarloPanel';
 import { ScenarioPanel } from './interpretation/ScenarioPanel';
 import { SensitivityPanel } from './interpretation/SensitivityPanel';
 import { diagnostics } from './interpretation/diagnostics';
-import { areaUnit, formatLength, largestMagnitude } from '../format/formatQuantity';
+import { formatLength } from '../format/formatQuantity';
+import { tableAreaUnit } from '../format/horizonColumns';
 import { outlierFlags } from './interpretation/outlierFlags';
 import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
 import { scenarioColour } from './interpretation/scenarioColour';
@@ -77,7 +78,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
   const { analysis, series, docSection, outcome } = sa;
   const diag = useMemo(() => diagnostics(docSection, outcome, sa.leftOut), [docSection, outcome, sa.leftOut]);
   const flags = useMemo(() => (series ? outlierFlags(series.points, series.fit.fit) : []), [series]);
-  const unit = analysis ? areaUnit(analysis.units, largestMagnitude(analysis.horizons.map((h) => h.excessArea))) : null;
+  const unit = analysis ? tableAreaUnit(analysis) : null;
   const toggle = useCallback((id: string, included: boolean) => apply((d) => scenarioSetIncluded(d, id, included)), [apply]);
 
   // Split choices for the second segment: between consecutive included depths.

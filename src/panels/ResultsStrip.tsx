@@ -57,7 +57,7 @@ export function ResultsStrip() {
             <button type="button" key={h.id} className={`strip-area${h.id === selectedId ? ' selected' : ''}${h.included ? '' : ' excluded'}`} onClick={() => selectHorizon(h.id)} title={h.leftOutReason ? `${h.name} is left out of the analysis: ${h.leftOutReason}` : `Excess area of ${h.name}${h.included ? '' : ' (left out of the fit)'}`}>
               <span className="swatch" style={{ background: h.colour }} />
               <span className="strip-area-name">{h.name}</span>
-              <span data-testid={`strip-area-${h.id}`}>{h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units) : '—'}</span>
+              <span data-testid={`strip-area-${h.id}`}>{h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units, live.areaUnit) : '—'}</span>
             </button>
           ))}
         </div>

@@ -1,7 +1,7 @@
 // Plain-word diagnostics and the horizons flagged as far off the line.
 import type { Diagnostic } from './diagnostics';
-import type { OutlierFlag } from './outlierFlags';
-import { formatArea, formatNumber, type AreaUnit } from '../../format/formatQuantity';
+import { outlierFlagDistance, type OutlierFlag } from './outlierFlags';
+import type { AreaUnit } from '../../format/formatQuantity';
 
 export function DiagnosticList({ items, flags, unit }: { items: Diagnostic[]; flags: OutlierFlag[]; unit: AreaUnit | null }) {
   if (items.length === 0 && flags.length === 0) return null;
@@ -12,8 +12,7 @@ export function DiagnosticList({ items, flags, unit }: { items: Diagnostic[]; fl
       ))}
       {flags.map((f) => (
         <div key={f.id} className="diagnostic warning" data-testid="outlier-flag">
-          <b>{f.name}</b> lies far off the line ({unit ? formatArea(f.residual, '', unit) : formatNumber(f.residual)}
-          {f.studentized !== null ? `, ${f.studentized.toFixed(1)} standard errors` : ''}). Likely reasons:
+          <b>{f.name}</b> lies far off the line ({outlierFlagDistance(f, unit)}). Likely reasons:
           <ul>{f.reasons.map((r) => <li key={r}>{r}</li>)}</ul>
         </div>
       ))}

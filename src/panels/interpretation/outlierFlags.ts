@@ -2,6 +2,7 @@ import type { LineFit } from '../../core/stats/leastSquares';
 import type { GraphPoint } from './areaDepthSeries';
 import { maxOf } from '../../core/stats/minMax';
 import { isExactFit } from '../../core/analysis/isExactFit';
+import { formatArea, formatFixed, formatNumber, type AreaUnit } from '../../format/formatQuantity';
 
 // Points far off the area–depth line, with the usual geological reasons (Epard & Groshong 1993;
 // Groshong 2006 ch. 11, as summarised in docs/method.md §Non-linear graphs). "Far" is an internally
@@ -42,4 +43,10 @@ export function outlierFlags(points: readonly GraphPoint[], fit: LineFit | null)
     out.push({ id: p.id, name: p.name, residual: r, studentized, reasons });
   });
   return out;
+}
+
+/** Returns how far a flagged point lies off the line, "−1.364 km², −1.4 standard errors", in the table's area unit (the one number rule). */
+export function outlierFlagDistance(f: OutlierFlag, unit: AreaUnit | null): string {
+  const area = unit ? formatArea(f.residual, '', unit) : formatNumber(f.residual);
+  return f.studentized === null ? area : `${area}, ${formatFixed(f.studentized, 1)} standard errors`;
 }

@@ -6,6 +6,8 @@ import type { Regime } from '../../core/analysis/analyseSection';
 import { activeScenario } from '../../core/model/docToSection';
 import type { ProjectDoc } from '../../core/model/projectDoc';
 import type { LengthUnit } from '../../core/model/section';
+import type { AreaUnit } from '../../format/formatQuantity';
+import { tableAreaUnit } from '../../format/horizonColumns';
 import { selectLiveAnalysis } from '../../state/selectors';
 
 export interface LiveHorizon {
@@ -18,6 +20,8 @@ export type LiveResults =
   | { ready: false; message: string; horizons: LiveHorizon[] }
   | {
     ready: true; units: LengthUnit; horizons: LiveHorizon[];
+    /** The one area unit for every horizon's area, the same as the pane's table and the exports (tableAreaUnit). */
+    areaUnit: AreaUnit;
     /** Null when fewer than two included horizons at distinct depths. */
     detachmentDepth: number | null; detachmentElevation: number | null; displacement: number | null;
     noDetachment: boolean; referenceElevation: number; note: string | null;
@@ -51,7 +55,7 @@ export function liveResultsOf(doc: ProjectDoc, d: DocAnalysis): LiveResults {
   const fitNote = !ad ? 'Include at least two horizons at different depths for an area–depth line.'
     : ad.noDetachment ? 'No detachment below these horizons: the area–depth line does not reach zero area below the deepest one.' : null;
   return {
-    ready: true, units: a.units, horizons,
+    ready: true, units: a.units, horizons, areaUnit: tableAreaUnit(a),
     detachmentElevation: ad?.detachmentElevation ?? null,
     detachmentDepth: ad?.detachmentDepth ?? null,
     displacement: ad ? ad.displacement : null,

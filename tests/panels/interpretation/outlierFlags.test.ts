@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { leastSquares } from '../../../src/core/stats/leastSquares';
 import type { GraphPoint } from '../../../src/panels/interpretation/areaDepthSeries';
-import { outlierFlags } from '../../../src/panels/interpretation/outlierFlags';
+import { outlierFlagDistance, outlierFlags } from '../../../src/panels/interpretation/outlierFlags';
 
 // On the synthetic line A = 1000·(3000 − h) of docs/method.md §Check values (our own example), with one point moved off.
 function points(offsets: number[], projected: number[] = []): GraphPoint[] {
@@ -67,5 +67,14 @@ describe('outlierFlags(points, fit)', () => {
     expect(outlierFlags(p, leastSquares(inc.map((q) => q.depth), inc.map((q) => q.area)))).toEqual([]);
     const two = points([]).slice(0, 2);
     expect(outlierFlags(two, leastSquares([500, 1000], [2.5e6, 2e6]))).toEqual([]);
+  });
+});
+
+describe('outlierFlagDistance(flag, unit)', () => {
+  it('writes a negative distance with the minus sign U+2212, in the area and in standard errors', () => {
+    // The one number rule (src/format/formatQuantity.ts): every shown negative number takes U+2212.
+    const f = { id: 'b', name: 'B1', residual: -1.364e6, studentized: -1.364, reasons: [] };
+    expect(outlierFlagDistance(f, { factor: 1e-6, label: 'km²' })).toBe('\u22121.364 km², \u22121.4 standard errors');
+    expect(outlierFlagDistance({ ...f, studentized: null }, { factor: 1, label: 'm²' })).toBe('\u22121364000 m²');
   });
 });

@@ -9,6 +9,8 @@ import { setRegional } from '../../../src/core/model/commands/setRegional';
 import { docToSection } from '../../../src/core/model/docToSection';
 import { emptyProjectDoc, type ProjectDoc } from '../../../src/core/model/projectDoc';
 import { liveResults } from '../../../src/panels/workspace/liveResults';
+import { formatArea } from '../../../src/format/formatQuantity';
+import { tableAreaUnit } from '../../../src/format/horizonColumns';
 
 /** 12 horizons × 2000 vertices over a 4000 × 2000 px scan at 2.5 m/px; detachment-fold bumps shrinking with depth. */
 function bigDoc(): ProjectDoc {
@@ -75,6 +77,22 @@ describe('liveResults', () => {
     expect(after.detachmentElevation!).toBeCloseTo(expected, 6);
     // With the reference following the highest regional, the depth below it shrinks by δ·W0/D.
     expect(after.detachmentDepth!).toBeCloseTo(before.detachmentDepth! - (delta * w0) / before.displacement!, 6);
+  });
+
+  it('writes every area in the one unit of the pane\'s table, small ones included', () => {
+    // A horizon with a bump of 2 px (5 m) beside bumps of hundreds of metres: its area is far below 10⁵ m², the others
+    // above, so a unit chosen per value would write it in m² while the table writes it in km² (src/format/formatQuantity.ts).
+    const doc = bigDoc();
+    const h = doc.horizons[11];
+    h.pointsPx = h.pointsPx.map(([u], i) => [u, 200 + 11 * 120 - (i > 900 && i < 1100 ? 2 : 0)]);
+    const live = liveResults(doc);
+    if (!live.ready) throw new Error(live.message);
+    const unit = tableAreaUnit(full(doc));
+    expect(unit.label).toBe('km²');
+    expect(live.areaUnit).toEqual(unit);
+    const small = live.horizons[11].excessArea as number;
+    expect(Math.abs(small)).toBeLessThan(1e5);
+    expect(formatArea(small, live.units, live.areaUnit)).toMatch(/ km²$/);
   });
 
   it('liveResults says what is missing before the section can be analysed', () => {
