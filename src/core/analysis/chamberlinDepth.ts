@@ -31,7 +31,12 @@ export function chamberlinDepth(excessArea: number, shortening: number, resoluti
   return { depth: excessArea / shortening, reason: null };
 }
 
-/** Two significant figures, in exponent form outside 10⁻³ … 10⁶ ("2.5", "1.0e-6"). */
+/**
+ * Two significant figures of a positive length, in exponent form outside 10⁻³ … 10⁶ ("2.5", "2e−6"), written as
+ * src/format/formatQuantity.ts writes numbers: trailing zeros dropped, the minus sign U+2212.
+ */
 function short(v: number): string {
-  return v >= 1e-3 && v < 1e6 ? String(Number(v.toPrecision(2))) : v.toExponential(1).replace('e+', 'e');
+  if (v >= 1e-3 && v < 1e6) return String(Number(v.toPrecision(2)));
+  const [m, e] = v.toExponential(1).split('e');
+  return `${Number(m)}e${Number(e)}`.replace('-', '\u2212');
 }

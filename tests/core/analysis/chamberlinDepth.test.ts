@@ -6,6 +6,13 @@ import { lengthBeyondSpan } from '../../../src/core/geometry/lengthBeyondSpan';
 import type { Section } from '../../../src/core/model/section';
 
 describe('chamberlinDepth(A, L − W, resolution)', () => {
+  it('writes a tiny shortening in its reason as the one number rule does: "2e−6", with U+2212 and no trailing zero', () => {
+    // A 1 mm bump 1 m wide: L − W = 2·(√(0.5² + 0.001²) − 0.5) ≈ 2.0e-6 m (Pythagoras), far below a 6.4 m resolution.
+    const r = chamberlinDepth(5e-4, 2 * (Math.hypot(0.5, 0.001) - 0.5), 6.4, 'm');
+    expect(r.depth).toBeNull();
+    expect(r.reason).toBe('not meaningful: the bed is only 2e\u22126 m longer than its regional, less than the 6.4 m the digitising resolves');
+  });
+
   it('is A / (L − W)', () => {
     // Source: Chamberlin (1910), H = A / (L − W) (docs/method.md §Chamberlin depth).
     expect(chamberlinDepth(2e6, 11_000 - 10_000)).toEqual({ depth: 2000, reason: null });
@@ -19,11 +26,11 @@ describe('chamberlinDepth(A, L − W, resolution)', () => {
     expect(chamberlinDepth(1e6, 0).reason).toBe('bed length equals regional length');
     expect(chamberlinDepth(1e6, -1000)).toEqual({ depth: null, reason: 'the bed is shorter than its regional but the area is lifted above it' });
     expect(chamberlinDepth(-1e6, 1000)).toEqual({ depth: null, reason: 'the bed is longer than its regional but the area is lost below it' });
-    expect(chamberlinDepth(-5, -2.5e-10, 2.5, 'm').reason).toBe('not meaningful: the bed is only 2.5e-10 m shorter than its regional, less than the 2.5 m the digitising resolves');
+    expect(chamberlinDepth(-5, -2.5e-10, 2.5, 'm').reason).toBe('not meaningful: the bed is only 2.5e\u221210 m shorter than its regional, less than the 2.5 m the digitising resolves');
     expect(chamberlinDepth(Number.NaN, 1000).depth).toBeNull();
     const tiny = chamberlinDepth(5, 2.5e-10, 2.5, 'm');
     expect(tiny.depth).toBeNull();
-    expect(tiny.reason).toMatch(/^not meaningful: the bed is only 2\.5e-10 m longer than its regional, less than the 2\.5 m the digitising resolves$/);
+    expect(tiny.reason).toMatch(/^not meaningful: the bed is only 2\.5e\u221210 m longer than its regional, less than the 2\.5 m the digitising resolves$/);
   });
 });
 
@@ -58,7 +65,7 @@ describe('Chamberlin depth of a nearly flat bed', () => {
     const h = out.analysis.horizons[0];
     expect(h.excessArea).toBeCloseTo(1e-3 * 10_000 / 2, 9);
     expect(h.chamberlinDepth).toBeNull();
-    expect(h.chamberlinReason).toMatch(/^not meaningful: the bed is only 2\.5e-10 m longer than its regional, less than the 1\.0e-6 m the digitising resolves$/);
+    expect(h.chamberlinReason).toMatch(/^not meaningful: the bed is only 2\.5e\u221210 m longer than its regional, less than the 1e\u22126 m the digitising resolves$/);
     expect(out.analysis.notes.some((n) => n.startsWith('No Chamberlin depth for "Bump": not meaningful'))).toBe(true);
   });
 
