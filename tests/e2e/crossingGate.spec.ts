@@ -98,7 +98,7 @@ test('a results table exported right after a long line is edited to cross itself
   });
   await expect(page.getByTestId('busy-text')).toHaveText('Checking lines… The results table waits for the self-crossing check of the long lines.');
   await expect(page.getByTestId('busy-cancel')).toBeVisible();
-  await page.screenshot({ path: '/work/wt/shots/hostile-checking-lines.png' });
+  await page.screenshot({ path: test.info().outputPath('checking-lines.png') });
   await worker.evaluate(() => (self as unknown as { releaseChecks(): void }).releaseChecks());
   const csv = (await downloaded).toString('utf8');
   await expect(page.getByTestId('busy')).toHaveCount(0);

@@ -83,7 +83,7 @@ test('a read-only tab follows the editing tab\'s kept edits and never claims to 
   await expect(status).toContainText('its work as kept at');
   await expect(status).not.toContainText('Saved');
   await expect(status).not.toContainText('Unsaved');
-  await second.screenshot({ path: '/work/wt/shots/hostile-read-only-tab.png' });
+  await second.screenshot({ path: test.info().outputPath('read-only-tab.png') });
   // A second horizon renamed too: the whole kept document is followed, not one field.
   const secondName = (p: Page) => p.getByTestId('horizon-list').getByLabel('Horizon name').nth(1);
   await secondName(page).fill('Second horizon renamed');
@@ -127,7 +127,7 @@ test('when the editing tab closes, one waiting tab takes over on its own with th
   // The work is the other tab's, not a last session brought back: no "Start fresh" that would clear it.
   await expect(editor.getByTestId('restore-banner')).toHaveCount(0);
   await expect(firstName(editor)).toHaveValue('Tab A last edit');
-  await editor.screenshot({ path: '/work/wt/shots/hostile-tab-takeover.png' });
+  await editor.screenshot({ path: test.info().outputPath('tab-takeover.png') });
   await expect(waiter.getByTestId('read-only-banner')).toContainText('open for editing in another tab');
 
   // It edits and keeps its edits; the tab still waiting follows them and cannot edit over them.

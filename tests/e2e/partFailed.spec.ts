@@ -36,7 +36,7 @@ test('a part that fails to draw shows why, keeps the work, and can be drawn agai
   await expect(firstName(page)).toHaveValue('Kept through a failed part');
   await expect(page.getByTestId('horizon-list')).toBeVisible();
   await expect(page.locator('canvas').first()).toBeVisible();
-  await page.screenshot({ path: '/work/wt/shots/hostile-part-failed.png' });
+  await page.screenshot({ path: test.info().outputPath('part-failed.png') });
 
   // Recovery 1: the project can be saved from the message itself, with the edit in it.
   const [dl] = await Promise.all([page.waitForEvent('download'), failed.getByRole('button', { name: 'Save project…' }).click()]);

@@ -18,7 +18,7 @@ test('a title over the name limit is refused with the reason; one within it is k
   await page.getByTestId('project-info-save').click();
   await expect(page.getByTestId('project-info-dialog')).toHaveCount(1);
   await expect(page.getByTestId('project-info-problem')).toHaveAttribute('role', 'alert');
-  await page.screenshot({ path: '/work/wt/shots/hostile-title-too-long.png' });
+  await page.screenshot({ path: test.info().outputPath('title-too-long.png') });
   await page.getByTestId('project-info-cancel').click();
   await open();
   await expect(page.getByTestId('project-title')).toHaveValue(before);
