@@ -102,6 +102,12 @@ describe('one live analysis read by every view', () => {
       useDocStore.getState().endGesture();
       expect(useDocStore.getState().gestureStart).toBeNull();
       expectAgree(views(), reason, true);
+      // The strip's note reads as one sentence: the reason in brackets without its own full stop ("pin.).").
+      const { doc } = useDocStore.getState();
+      const note = liveResults(doc).ready ? (liveResults(doc) as { note: string | null }).note : null;
+      const paneReason = scenarioAnalysisOf(selectLiveAnalysis(doc, null)).leftOut[0].reason;
+      expect(note).toBe(`Left out: H4 (${paneReason.replace(/\.$/, '')}).`);
+      expect(note).not.toMatch(/\.\)/);
     });
   }
 });

@@ -51,7 +51,7 @@ export function liveResultsOf(doc: ProjectDoc, d: DocAnalysis): LiveResults {
   const a = d.outcome.analysis;
   const ad = a.areaDepth;
   const leftOut = d.leftOut.length === 0 ? null
-    : `Left out: ${d.leftOut.map((h) => `${h.name} (${h.reason})`).join('; ')}.`;
+    : `Left out: ${d.leftOut.map((h) => `${h.name} (${h.reason.replace(/\.$/, '')})`).join('; ')}.`;
   const fitNote = !ad ? 'Include at least two horizons at different depths for an area–depth line.'
     : ad.noDetachment ? 'No detachment below these horizons: the area–depth line does not reach zero area below the deepest one.' : null;
   return {
