@@ -9,8 +9,9 @@
 //   validation, self-crossing – two parts of the analysis timed alone (validateSectionArrays into a
 //               reused buffer, and sweepSelfCrossing on the clipped lines), to show where the time goes;
 //   sweep     – the self-crossing test alone on long steep lines, where many segments overlap in x:
-//               a 1,000,000-vertex steep zigzag and a 20,000-vertex densely traced steep limb (wall
-//               time and CPU time, since a shared machine inflates the first);
+//               a 1,000,000-vertex steep zigzag, a diamond spiral of as many (x and z both reverse, so the
+//               sweep itself holds nearly every segment at once: its worst case) and a 20,000-vertex densely traced
+//               steep limb (wall time and CPU time, since a shared machine inflates the first);
 //   clipping  – the same excess areas the general-purpose way: each horizon + regional loop
 //               as a polygon, clipped to the pin rectangle with polygon-clipping (npm), planar area;
 // and 10,000 Monte Carlo realisations of 6 horizons × ~2,000 vertices (monteCarlo).
@@ -151,6 +152,18 @@ function steepZigzag(n: number): { xs: Float64Array; zs: Float64Array } {
   return { xs, zs };
 }
 
+/**
+ * A diamond spiral (four vertices a turn, the radius growing a little at each): every segment spans from the centre
+ * line out to its radius in both x and z, and both reverse every other vertex, so no choice of sweep axis helps and
+ * the sweep itself holds nearly every segment at once. It does not cross itself (each turn lies outside the last).
+ */
+function diamondSpiral(n: number): { xs: Float64Array; zs: Float64Array } {
+  const xs = new Float64Array(n), zs = new Float64Array(n);
+  const dx = [1, 0, -1, 0], dz = [0, 1, 0, -1];
+  for (let i = 0; i < n; i++) { const r = 1 + i * 1e-3; xs[i] = r * dx[i % 4]; zs[i] = r * dz[i % 4]; }
+  return { xs, zs };
+}
+
 /** A densely traced steep limb: z falls steadily while x wavers by hand-like jitter; it does not cross itself. */
 function steepLimb(n: number): { xs: Float64Array; zs: Float64Array } {
   const xs = new Float64Array(n), zs = new Float64Array(n);
@@ -240,9 +253,10 @@ function main(): void {
   const monteCarloMs = timeIt(mc, 7, 2);
 
   const zigzag = timeSweep(steepZigzag(1_000_000), 5);
+  const spiral = timeSweep(diamondSpiral(1_000_000), 3);
   const limb = timeSweep(steepLimb(20_000), 9);
   if (json) {
-    process.stdout.write(`${JSON.stringify({ analysisMs, analysisFreshMs, floorMs, clippingMs, monteCarloMs, zigzagSweepMs: zigzag.wallMs, zigzagSweepCpuMs: zigzag.cpuMs, limbSweepMs: limb.wallMs })}\n`);
+    process.stdout.write(`${JSON.stringify({ analysisMs, analysisFreshMs, floorMs, clippingMs, monteCarloMs, zigzagSweepMs: zigzag.wallMs, zigzagSweepCpuMs: zigzag.cpuMs, spiralSweepMs: spiral.wallMs, spiralSweepCpuMs: spiral.cpuMs, limbSweepMs: limb.wallMs })}\n`);
     return;
   }
   const mcVertices = mcSection.horizons.map((h) => h.line.length);
@@ -257,6 +271,7 @@ function main(): void {
     ['polygon-clipping loop ∩ pin rectangle', clippingMs.toFixed(1), `${(clippingMs / analysisMs).toFixed(0)}× analysis`],
     ['Monte Carlo, 10,000 runs', monteCarloMs.toFixed(1), `${(monteCarloMs / 10_000 * 1000).toFixed(1)} µs/run`],
     ['self-crossing: 1,000,000-vertex zigzag', zigzag.wallMs.toFixed(0), `CPU ${zigzag.cpuMs.toFixed(0)} ms`],
+    ['  1,000,000-vertex spiral (sweep, worst)', spiral.wallMs.toFixed(0), `CPU ${spiral.cpuMs.toFixed(0)} ms`],
     ['self-crossing: 20,000-vertex steep limb', limb.wallMs.toFixed(1), `CPU ${limb.cpuMs.toFixed(1)} ms`],
   ];
   const line = (a: string, b: string, c: string) => `${a.padEnd(40)} ${b.padStart(10)}  ${c}`;

@@ -5,7 +5,9 @@ import { xMonotoneChains, type XMonotoneChains } from './xMonotoneChains';
 // intersection problems", 17th IEEE Symposium on Foundations of Computer Science): segments enter
 // an ordered list (a treap) at their left end and leave it at their right end, and only segments
 // that become neighbours in that list are tested, so the first crossing is found in O(n log n) —
-// 1,000,000 vertices of a steep zigzag take about a second (npm run bench). Every side-of-line
+// it runs along whichever axis the line reverses on less (sweepAxis). npm run bench times a 1,000,000-vertex
+// steep zigzag, and a diamond spiral of as many vertices, where the sweep holds nearly every segment at once
+// (its worst case). Every side-of-line
 // decision is the exact sign of Shewchuk's adaptive orientation predicate (robust-predicates), so
 // near-touching fold-backs are judged exactly on the coordinates given.
 //
@@ -56,6 +58,31 @@ function compact(xs: ArrayLike<number>, zs: ArrayLike<number>): Line {
     n++;
   }
   return { x, z, source, n, visits: null };
+}
+
+/** How many times the direction of travel along one coordinate reverses (a zero step keeps the last direction). */
+function reversals(v: Float64Array, n: number): number {
+  let count = 0;
+  let dir = 0;
+  for (let i = 1; i < n; i++) {
+    const d = v[i] > v[i - 1] ? 1 : v[i] < v[i - 1] ? -1 : 0;
+    if (d === 0) continue;
+    if (dir !== 0 && d !== dir) count++;
+    dir = d;
+  }
+  return count;
+}
+
+/**
+ * Sweeps along the coordinate that reverses less often: x and z swap when z does. Swapping the axes mirrors the
+ * plane, which turns every orientation sign over but keeps which stretches cross, touch or retrace (each rule
+ * above compares signs with each other, never with a fixed one), so the verdict is the same. A steep limb then
+ * splits into few monotone chains instead of one per fold-back: a densely traced steep zigzag that reverses in x
+ * at every vertex is, swept along z, one chain and needs no sweep at all.
+ */
+function sweepAxis(L: Line): Line {
+  if (reversals(L.z, L.n) >= reversals(L.x, L.n)) return L;
+  return { ...L, x: L.z, z: L.x };
 }
 
 /** Segment k's left end (smaller x, then smaller z) is vertex lo(k); its right end hi(k). */
@@ -449,7 +476,7 @@ class SweepList {
  * line folds back in few places; `false` runs the sweep alone (the same answer, checked by the tests).
  */
 export function sweepSelfCrossing(xs: ArrayLike<number>, zs: ArrayLike<number>, quick = true): [number, number] | null {
-  const L = compact(xs, zs);
+  const L = sweepAxis(compact(xs, zs));
   const segs = L.n - 1;
   if (segs < 2) return null;
   const { x, z } = L;

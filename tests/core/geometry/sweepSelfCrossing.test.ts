@@ -82,6 +82,20 @@ describe('sweepSelfCrossing on long lines', () => {
     expect(hit).not.toBeNull();
     expect(hit![1]).toBe(n);
   }, 60_000);
+
+  it('sweeps a zigzag along a diagonal (x and z both reverse at every vertex) and finds a crossing added at its end', () => {
+    // Even vertices on x = z, odd ones on x − z = 2, each a half step further along: no crossing (constructed so).
+    const n = 200_000;
+    const xs = new Float64Array(n + 2);
+    const zs = new Float64Array(n + 2);
+    for (let i = 0; i < n; i++) { const off = i % 2; xs[i] = i * 0.5 + off; zs[i] = i * 0.5 - off; }
+    expect(sweepSelfCrossing(xs.subarray(0, n), zs.subarray(0, n))).toBeNull();
+    // Back from the last vertex to (1, −1) and on to (0.5, 1): the last segment crosses segment 0, (0, 0)–(1.5, −0.5).
+    xs[n] = 1; zs[n] = -1;
+    xs[n + 1] = 0.5; zs[n + 1] = 1;
+    const hit = sweepSelfCrossing(xs, zs);
+    expect(hit).toEqual([0, n]);
+  }, 60_000);
 });
 
 describe('sweepSelfCrossing against independent checks (properties)', () => {
@@ -95,6 +109,20 @@ describe('sweepSelfCrossing against independent checks (properties)', () => {
       if (one) expect(all).toContainEqual(one);
       const swept = sweepSelfCrossing(pts.map((p) => p[0]), pts.map((p) => p[1]), false);
       if (swept) expect(all).toContainEqual(swept);
+    }), { numRuns: 3000 });
+  }, 60_000);
+
+  it('gives the same verdict with x and z swapped (the sweep runs along the axis the line reverses on less)', () => {
+    // Swapping the axes mirrors the plane: which stretches cross is unchanged (the all-pairs search on the
+    // swapped points is the reference). Lines that reverse more in x than in z are swept along z.
+    const pt = fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 }));
+    fc.assert(fc.property(fc.array(pt, { minLength: 2, maxLength: 40 }), (pts) => {
+      const swapped = pts.map(([x, z]): [number, number] => [z, x]);
+      const all = selfCrossingsAllPairs(swapped.map((p) => p[0]), swapped.map((p) => p[1]));
+      expect(all.length > 0).toBe(selfCrossingsAllPairs(pts.map((p) => p[0]), pts.map((p) => p[1])).length > 0);
+      const one = cross(swapped);
+      expect(one !== null).toBe(all.length > 0);
+      if (one) expect(all).toContainEqual(one);
     }), { numRuns: 3000 });
   }, 60_000);
 
