@@ -1,19 +1,16 @@
 // The results strip and the interpretation pane read one analysis: opened with a horizon whose regional
 // crosses itself, or misses a pin, both leave that horizon out with the reason and show the same
-// detachment depth for the rest. Check value: an analytic forward model (Epard & Groshong, 1993,
-// A = D·(zd − h)): D = 1000 m, regionals at −500 … −2000 m and the detachment 3000 m below the highest;
-// each excess area is a triangle fold 8000 m wide (area = base × height / 2). Without the deepest horizon
-// the other three stay on the line, so both views show a depth of 3000 m.
+// detachment depth for the rest. Check value: the analytic forward model of
+// tests/fixtures/forwardModel/forwardModel.ts (Epard & Groshong, 1993, A = D·(zd − h)), its detachment 3000 m
+// below the highest regional. Without the deepest horizon the other three stay on the line, so both views show
+// a depth of 3000 m.
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { expectLastMessage } from './messages';
+import { forwardHorizon } from '../fixtures/forwardModel/forwardModel';
 
 function section(h4Regional: [number, number][]): string {
-  const horizons = [0, 1, 2, 3].map((k) => {
-    const r = -500 * (k + 1);
-    const height = (2 * 1000 * (3000 - 500 * k)) / 8000;
-    return { name: `H${k + 1}`, line: [[-800, r], [1000, r], [5000, r + height], [9000, r], [10_800, r]], regional: k === 3 ? h4Regional : [[-800, r], [10_800, r]] };
-  });
+  const horizons = [0, 1, 2, 3].map((k) => ({ ...forwardHorizon(k), ...(k === 3 ? { regional: h4Regional } : {}) }));
   return JSON.stringify({ units: 'm', pins: [0, 10_000], horizons });
 }
 

@@ -52,6 +52,18 @@ async function setUp(page: Page): Promise<Cam> {
   return cam;
 }
 
+/** Sets the regional flat at −2000 m (v = 300), takes the Regional tool and presses the mouse on the regional at u = 500: the drag's start, in page px. */
+async function grabFlatRegional(page: Page, cam: Cam): Promise<{ x: number; y: number }> {
+  await page.getByTestId('regional-z-flat').fill('-2000');
+  await page.getByTestId('regional-z-flat').press('Enter');
+  await expect(page.getByTestId('regional-summary')).toContainText('mean elevation −2000 m, dip 0°');
+  await page.getByTestId('tool-regional').click();
+  const grab = screen(cam, 500, 300);
+  await page.mouse.move(grab.x, grab.y);
+  await page.mouse.down();
+  return grab;
+}
+
 test('a regional is typed at the pins, flat, or through a point at a dip; drag and fields stay in step; one undo per value', async ({ page }) => {
   const cam = await setUp(page);
   const summary = page.getByTestId('regional-summary');
@@ -97,13 +109,7 @@ test('a regional is typed at the pins, flat, or through a point at a dip; drag a
 
   // Back to flat at −2000 m (v = 300), then drag the regional up 10 px (100 m) with the Regional tool:
   // the fields follow the drag.
-  await page.getByTestId('regional-z-flat').fill('-2000');
-  await page.getByTestId('regional-z-flat').press('Enter');
-  await expect(summary).toContainText('mean elevation −2000 m, dip 0°');
-  await page.getByTestId('tool-regional').click();
-  const grab = screen(cam, 500, 300);
-  await page.mouse.move(grab.x, grab.y);
-  await page.mouse.down();
+  const grab = await grabFlatRegional(page, cam);
   await page.mouse.move(grab.x, grab.y - 10 * cam.scale, { steps: 4 });
   await page.mouse.up();
   // The drag moves the regional by whole screen pixels: about 100 m up, the same at both pins.
@@ -155,14 +161,7 @@ async function drawnFillColumn(page: Page, x: number, y0: number, y1: number): P
 
 test('a continuous drag of a regional, moves faster than frames: held and let go, the fill and numbers are those of the last position', async ({ page }) => {
   const cam = await setUp(page);
-  const summary = page.getByTestId('regional-summary');
-  await page.getByTestId('regional-z-flat').fill('-2000');
-  await page.getByTestId('regional-z-flat').press('Enter');
-  await expect(summary).toContainText('mean elevation −2000 m, dip 0°');
-  await page.getByTestId('tool-regional').click();
-  const grab = screen(cam, 500, 300);
-  await page.mouse.move(grab.x, grab.y);
-  await page.mouse.down();
+  const grab = await grabFlatRegional(page, cam);
 
   // 30 moves up one screen pixel each, then one of 6: generated in the page three to a task (the last task four),
   // faster than the page draws frames (a mouse reporting quickly). 36 screen px = 36 / scale scan px = 360 / scale m up (z = 1000 − 10 v).

@@ -1,12 +1,12 @@
 // Exports and runs on the numbers wait for the long lines' self-crossing checks (src/state/linesChecked.ts), then
 // read the analysis again, so a line found to cross itself is left out, with the reason, as the pane shows it.
 // "Crosses" is checked independently with @turf/kinks (a general-purpose library from the registry); the other
-// horizons are the forward model of tests/state/selectAnalysis.leftOut.test.ts (docs/method.md §Forward models).
+// horizons are the forward model of tests/fixtures/forwardModel/forwardModel.ts (docs/method.md §Forward models).
 import { lineString } from '@turf/helpers';
 import kinks from '@turf/kinks';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { sweepSelfCrossing } from '../../src/core/geometry/sweepSelfCrossing';
-import { emptyProjectDoc, type ProjectDoc } from '../../src/core/model/projectDoc';
+import type { ProjectDoc } from '../../src/core/model/projectDoc';
 import { moveVertex } from '../../src/core/model/commands/moveVertex';
 import type { SelfCrossingReply, SelfCrossingRequest } from '../../src/io/workers/selfCrossing.worker';
 import { resultsCsv, sectionFileText } from '../../src/io/exportTables';
@@ -17,9 +17,7 @@ import { useDocStore } from '../../src/state/docStore';
 import { afterLinesChecked, linesChecked, pendingLineChecks } from '../../src/state/linesChecked';
 import { selectAnalysis } from '../../src/state/selectors';
 import { useSessionStore } from '../../src/state/sessionStore';
-
-// 2.5 m per pixel across and down; x = −1000 m at u = 0, z = 0 at v = 0.
-const px = (x: number, z: number): [number, number] => [(x + 1000) / 2.5, -z / 2.5];
+import { forwardModelDoc, px } from '../fixtures/forwardModel/forwardModel';
 
 /** A steep limb of n vertices between the pins (z falls at every vertex), offset by `shift` m so each test has lines of its own; `loop` throws a stretch back across it. */
 function limbLine(n: number, loop: boolean, shift: number): [number, number][] {
@@ -36,19 +34,9 @@ function limbLine(n: number, loop: boolean, shift: number): [number, number][] {
 
 /** Four horizons of the forward model (D = 1000 m, detachment at −3500 m) and the steep limb "Limb". */
 function doc(limb: [number, number][]): ProjectDoc {
-  const d = emptyProjectDoc();
-  d.calibration = { kind: 'axes', xPoints: [{ u: 0, v: 0, value: -1000 }, { u: 4800, v: 0, value: 11_000 }], zPoints: [{ u: 0, v: 0, value: 0 }, { u: 0, v: 2000, value: -5000 }] };
-  for (let k = 0; k < 4; k++) {
-    const r = -500 * (k + 1);
-    const height = (2 * 1000 * (3000 - 500 * k)) / 8000;
-    const id = `h${k + 1}`;
-    d.horizons.push({ id, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, projected: [], joins: [],
-      pointsPx: [px(-800, r), px(1000, r), px(5000, r + height), px(9000, r), px(10_800, r)] });
-    d.scenarios[0].regionals[id] = [px(-800, r), px(10_800, r)];
-  }
+  const d = forwardModelDoc();
   d.horizons.push({ id: 'limb', name: 'Limb', colour: '#000000', visible: true, locked: false, projected: [], joins: [], pointsPx: limb.map(([x, z]) => px(x, z)) });
   d.scenarios[0].regionals.limb = [px(-800, -2500), px(10_800, -2500)];
-  d.scenarios[0].pinsPx = [px(0, 0), px(10_000, 0)];
   return d;
 }
 

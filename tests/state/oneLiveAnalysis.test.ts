@@ -3,37 +3,18 @@
 // depth and the same left-out horizons, during a regional drag (through the real document store and
 // its gesture) and after it, for the two cases where separate computations used to disagree: a
 // regional edited so that it crosses itself, and a regional that misses a pin.
-// Check values: an analytic forward model (Epard & Groshong, 1993, area–depth relation A = D·(zd − h)):
-// D = 1000 m, regionals at −500, −1000, −1500, −2000 m and the detachment 3000 m below the highest, so
-// each horizon's excess area is 1000 m × (3000 − 500k) m, drawn as a triangle fold 8000 m wide
-// (area = base × height / 2). Leaving out the deepest horizon keeps the other three on that line.
+// Check values: the analytic forward model of tests/fixtures/forwardModel/forwardModel.ts (Epard & Groshong,
+// 1993, A = D·(zd − h)); leaving out the deepest horizon keeps the other three on that line.
 import { afterEach, describe, expect, it } from 'vitest';
 import { setRegional } from '../../src/core/model/commands/setRegional';
-import { emptyProjectDoc, type ProjectDoc } from '../../src/core/model/projectDoc';
+import { emptyProjectDoc } from '../../src/core/model/projectDoc';
 import { detachmentTrace } from '../../src/canvas/detachmentTrace';
 import { resultsCsv } from '../../src/io/exportTables';
 import { scenarioAnalysisOf } from '../../src/panels/interpretation/useScenarioAnalysis';
 import { liveResults } from '../../src/panels/workspace/liveResults';
 import { useDocStore } from '../../src/state/docStore';
 import { selectAnalysis, selectLiveAnalysis } from '../../src/state/selectors';
-
-// 2.5 m per pixel across and down; x = −1000 m at u = 0, z = 0 at v = 0.
-const px = (x: number, z: number): [number, number] => [(x + 1000) / 2.5, -z / 2.5];
-
-function forwardDoc(): ProjectDoc {
-  const d = emptyProjectDoc();
-  d.calibration = { kind: 'axes', xPoints: [{ u: 0, v: 0, value: -1000 }, { u: 4800, v: 0, value: 11_000 }], zPoints: [{ u: 0, v: 0, value: 0 }, { u: 0, v: 2000, value: -5000 }] };
-  for (let k = 0; k < 4; k++) {
-    const r = -500 * (k + 1);
-    const height = (2 * 1000 * (3000 - 500 * k)) / 8000;
-    const id = `h${k + 1}`;
-    d.horizons.push({ id, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, projected: [], joins: [],
-      pointsPx: [px(-800, r), px(1000, r), px(5000, r + height), px(9000, r), px(10_800, r)] });
-    d.scenarios[0].regionals[id] = [px(-800, r), px(10_800, r)];
-  }
-  d.scenarios[0].pinsPx = [px(0, 0), px(10_000, 0)];
-  return d;
-}
+import { forwardModelDoc, px } from '../fixtures/forwardModel/forwardModel';
 
 // H4's regional, edited to run right, double back and run right again: it crosses itself between the pins.
 const crossing: [number, number][] = [px(-800, -2000), px(6000, -2000), px(3000, -2100), px(4000, -1900), px(10_800, -2000)];
@@ -86,7 +67,7 @@ describe('one live analysis read by every view', () => {
   ] as const) {
     it(`strip, pane, graph, detachment line and CSV agree during and after a drag that gives ${name}`, () => {
       const store = useDocStore.getState();
-      store.replace(forwardDoc());
+      store.replace(forwardModelDoc());
       // Before: all four horizons on the forward model's line.
       const before = views();
       expect(before.strip).toBeCloseTo(3000, 6);

@@ -5,31 +5,20 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../src/core/analysis/analyseSection';
 import { docToSection } from '../../src/core/model/docToSection';
-import { emptyProjectDoc, type ProjectDoc } from '../../src/core/model/projectDoc';
+import type { ProjectDoc } from '../../src/core/model/projectDoc';
 import { selectAnalysis, selectLiveAnalysis } from '../../src/state/selectors';
-
-// 2.5 m per pixel across and down; x = −1000 m at u = 0, z = 0 at v = 0.
-const px = (x: number, z: number): [number, number] => [(x + 1000) / 2.5, -z / 2.5];
+import { forwardModelDoc, px } from '../fixtures/forwardModel/forwardModel';
 
 /**
- * A forward model (docs/method.md §Forward models): pins 0 and 10 000 m, regionals at −500, −1000, −1500,
- * −2000 m, D = 1000 m and the detachment 3000 m below the highest regional (elevation −3500 m), so
- * A = D·(zd − h) = 3.0, 2.5, 2.0, 1.5 km², each a triangle fold 8000 m wide (area = base · height / 2).
+ * The forward model (tests/fixtures/forwardModel/forwardModel.ts: A = D·(zd − h) = 3.0, 2.5, 2.0, 1.5 km²).
  * `shortRegional`: that horizon's regional stops at x = 9500 m, short of the right pin.
  */
 function doc(shortRegional: number | null): ProjectDoc {
-  const d = emptyProjectDoc();
-  d.calibration = { kind: 'axes', xPoints: [{ u: 0, v: 0, value: -1000 }, { u: 4800, v: 0, value: 11_000 }], zPoints: [{ u: 0, v: 0, value: 0 }, { u: 0, v: 2000, value: -5000 }] };
-  for (let k = 0; k < 4; k++) {
-    const r = -500 * (k + 1);
-    const area = 1000 * (3000 - 500 * k);
-    const height = (2 * area) / 8000;
-    const id = `h${k + 1}`;
-    d.horizons.push({ id, name: `H${k + 1}`, colour: '#000000', visible: true, locked: false, projected: [], joins: [],
-      pointsPx: [px(-800, r), px(1000, r), px(5000, r + height), px(9000, r), px(10_800, r)] });
-    d.scenarios[0].regionals[id] = [px(-800, r), px(k === shortRegional ? 9500 : 10_800, r)];
+  const d = forwardModelDoc();
+  if (shortRegional !== null) {
+    const r = -500 * (shortRegional + 1);
+    d.scenarios[0].regionals[`h${shortRegional + 1}`] = [px(-800, r), px(9500, r)];
   }
-  d.scenarios[0].pinsPx = [px(0, 0), px(10_000, 0)];
   return d;
 }
 
