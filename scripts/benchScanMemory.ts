@@ -4,33 +4,24 @@
 // of all the browser's processes (Linux /proc, which is where decoded bitmaps and tiles live: they are not JS heap),
 // and what the scan panel says it holds (decoded scans, reduced-view tiles).
 //   BENCH_DIST=/path/to/dist BENCH_PORT=4202 npx tsx scripts/benchScanMemory.ts [--mp 100] [--count 3]
-import { spawn, type ChildProcess } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
-import { chromium, type Page } from '@playwright/test';
+import { chromium, type Browser, type Page } from '@playwright/test';
+import { startPreview } from './previewServer';
 
 const DIST = process.env.BENCH_DIST || 'dist';
-const PORT = Number(process.env.BENCH_PORT) || 4202;
-const VITE = 'node_modules/vite/bin/vite.js';
 const flag = (name: string, fallback: number) => {
   const i = process.argv.indexOf(`--${name}`);
   return i >= 0 ? Number(process.argv[i + 1]) : fallback;
 };
 const MP = flag('mp', 100);
 const COUNT = flag('count', 3);
-
-async function serve(): Promise<ChildProcess> {
-  const server = spawn(process.execPath, [VITE, 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--outDir', DIST], { stdio: 'ignore' });
-  for (let i = 0; i < 100; i++) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${PORT}`)).ok) return server;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  server.kill();
-  throw new Error(`The preview server did not start on port ${PORT}`);
-}
+/** After the last, open a scan of this size in their place (0: none): what the replaced scan leaves behind. */
+const REPLACE_MP = flag('replace-mp', 1);
+/** Also print the renderer's memory by allocator (a memory-infra dump) at each step. */
+const BREAKDOWN = process.argv.includes('--breakdown');
+const DEPTH = flag('depth', 2);
+/** Screenshot path prefix: `<prefix>-<mp>mp-<i>.png` after each opening and `<prefix>-replaced.png`. */
+const SHOTS = process.argv.includes('--shots') ? process.argv[process.argv.indexOf('--shots') + 1] : undefined;
 
 /** Resident memory (MB) of the process and all its descendants, from /proc. */
 function treeRssMb(rootPid: number): number {
@@ -78,8 +69,45 @@ async function makeScan(page: Page, side: number, name: string): Promise<void> {
   })()`);
 }
 
+interface TraceEvent { ph: string; pid: number; name: string; args?: { name?: string; dumps?: { allocators?: Record<string, { attrs?: { size?: { value: string } } }> } } }
+
+/**
+ * The renderer's memory by allocator (MB), from one detailed memory-infra dump (Chromium's own accounting, the
+ * same the browser's task manager reads): top-level allocators and their direct children, e.g. malloc,
+ * partition_alloc/partitions/buffer, v8, blink_gc, skia/sk_resource_cache, canvas, discardable, gpu.
+ */
+async function rendererAllocators(browser: Browser): Promise<Map<string, number>> {
+  const cdp = await browser.newBrowserCDPSession();
+  const events: TraceEvent[] = [];
+  cdp.on('Tracing.dataCollected', (e) => {
+    for (const v of e.value) events.push(v as unknown as TraceEvent);
+  });
+  const complete = new Promise<void>((resolve) => cdp.once('Tracing.tracingComplete', () => resolve()));
+  await cdp.send('Tracing.start', { traceConfig: { includedCategories: ['disabled-by-default-memory-infra'], memoryDumpConfig: { triggers: [] } }, transferMode: 'ReportEvents' } as never);
+  await cdp.send('Tracing.requestMemoryDump', { deterministic: true, levelOfDetail: 'detailed' } as never);
+  await cdp.send('Tracing.end');
+  await complete;
+  await cdp.detach();
+  const renderers = new Set(events.filter((e) => e.ph === 'M' && e.name === 'process_name' && e.args?.name === 'Renderer').map((e) => e.pid));
+  const out = new Map<string, number>();
+  for (const e of events) {
+    if (e.ph !== 'v' || !renderers.has(e.pid)) continue;
+    for (const [name, a] of Object.entries(e.args?.dumps?.allocators ?? {})) {
+      const size = a.attrs?.size?.value;
+      if (!size || name.split('/').length > DEPTH || (DEPTH <= 2 && name.includes('0x'))) continue;
+      out.set(name, (out.get(name) ?? 0) + parseInt(size, 16) / 1048576);
+    }
+  }
+  return out;
+}
+
+/** The allocators holding at least `minMb`, largest first, as "name 123" pairs (MB). */
+function allocatorLine(m: Map<string, number>, minMb = 8): string {
+  return [...m].filter(([, mb]) => mb >= minMb).sort((a, b) => b[1] - a[1]).map(([name, mb]) => `${name} ${mb.toFixed(0)}`).join(', ');
+}
+
 async function main(): Promise<void> {
-  const server = await serve();
+  const preview = await startPreview(DIST, { port: Number(process.env.BENCH_PORT) || undefined });
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--enable-precise-memory-info'] });
   const browserPid = (browser as unknown as { process?: () => { pid: number } }).process?.().pid;
   try {
@@ -87,10 +115,11 @@ async function main(): Promise<void> {
     page.on('dialog', (d) => void d.accept());
     const cdp = await page.context().newCDPSession(page);
     await cdp.send('Performance.enable');
-    await page.goto(`http://127.0.0.1:${PORT}`);
+    await page.goto(preview.url);
     await page.locator('[data-startup="done"]').waitFor({ timeout: 60_000 });
     const rootPid = browserPid ?? Number(/(\d+)/.exec(readFileSync('/proc/self/stat', 'utf8'))![1]);
-    const measure = async (what: string) => {
+    let base: { rss: number; anon: number } | null = null;
+    const measure = async (what: string, rgbaMb: number) => {
       await cdp.send('HeapProfiler.collectGarbage');
       const { metrics } = (await cdp.send('Performance.getMetrics')) as { metrics: { name: string; value: number }[] };
       const heap = metrics.find((m) => m.name === 'JSHeapUsedSize')!.value / 1048576;
@@ -104,13 +133,15 @@ async function main(): Promise<void> {
         rss += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
         anon += Number(/RssAnon:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
       }
+      base ??= { rss, anon };
       const held = await page.getByTestId('scan-memory').evaluate((el) => `${el.getAttribute('data-decoded-scans')} decoded, ${el.getAttribute('data-reduced-tiles')} tiles`).catch(() => 'no scan decoded');
-      console.log(`${what.padEnd(34)} JS heap ${heap.toFixed(1).padStart(7)} MB   renderer RSS ${rss.toFixed(0).padStart(6)} MB (private ${anon.toFixed(0).padStart(6)} MB)   browser processes RSS ${treeRssMb(rootPid).toFixed(0).padStart(6)} MB   panel: ${held}`);
+      const ratio = rgbaMb > 0 ? `   = ${(rss / rgbaMb).toFixed(2)}× its RGBA ${rgbaMb.toFixed(0)} MB (over the app before any scan ${((rss - base.rss) / rgbaMb).toFixed(2)}×, private ${((anon - base.anon) / rgbaMb).toFixed(2)}×)` : '';
+      console.log(`${what.padEnd(34)} JS heap ${heap.toFixed(1).padStart(7)} MB   renderer RSS ${rss.toFixed(0).padStart(6)} MB (private ${anon.toFixed(0).padStart(6)} MB)${ratio}   browser processes RSS ${treeRssMb(rootPid).toFixed(0).padStart(6)} MB   panel: ${held}`);
+      if (BREAKDOWN) console.log(`${''.padEnd(34)} renderer by allocator (MB): ${allocatorLine(await rendererAllocators(browser))}`);
     };
-    await measure('after start-up (demo)');
-    const side = Math.round(Math.sqrt(MP * 1e6));
-    for (let i = 1; i <= COUNT; i++) {
-      const name = `memory-${i}.jpg`;
+    await measure('after start-up (demo)', 0);
+    const open = async (mp: number, name: string) => {
+      const side = Math.round(Math.sqrt(mp * 1e6));
       await makeScan(page, side, name);
       await page.evaluate(`(() => {
         const d = new DataTransfer();
@@ -120,15 +151,25 @@ async function main(): Promise<void> {
       await page.getByTestId('scan-name').filter({ hasText: name }).waitFor({ timeout: 300_000 });
       await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 300_000 });
       await page.locator('[data-testid="scan-memory"][data-building="no"]').waitFor({ timeout: 300_000 });
+      await page.locator('[data-scan-drawn="tiles"]').waitFor({ timeout: 300_000 });
       await page.evaluate('window.__scanFile = null');
-      // Give deferred releases a moment to run (a timer, then a frame).
+      // Deferred releases run a task after the change (state/scanLifetime): a timer, then a frame.
       await page.evaluate('new Promise((r) => setTimeout(() => requestAnimationFrame(() => r(null)), 50))');
-      await measure(`after opening scan ${i} (${MP} MP)`);
+      return (side * side * 4) / 1048576;
+    };
+    for (let i = 1; i <= COUNT; i++) {
+      const rgba = await open(MP, `memory-${i}.jpg`);
+      await measure(`after opening scan ${i} (${MP} MP)`, rgba);
+      if (SHOTS) await page.screenshot({ path: `${SHOTS}-${MP}mp-${i}.png` });
     }
-    console.log(`(${MP} MP as RGBA: ${((side * side * 4) / 1048576).toFixed(0)} MB)`);
+    if (REPLACE_MP > 0) {
+      await open(REPLACE_MP, 'memory-replacement.jpg');
+      await measure(`replaced by a ${REPLACE_MP} MP scan`, 0);
+      if (SHOTS) await page.screenshot({ path: `${SHOTS}-replaced.png` });
+    }
   } finally {
     await browser.close();
-    server.kill();
+    preview.stop();
   }
 }
 

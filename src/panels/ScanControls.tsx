@@ -70,7 +70,7 @@ export function ScanControls() {
       )}
       {scan && notShown && <p className="hint warn" data-testid="scan-not-shown">Not shown: {notShown}</p>}
       {scan && held.decoded > 0 && (
-        <p className="hint" data-testid="scan-memory" data-decoded-scans={held.decoded} data-reduced-tiles={held.tiles} data-building={held.building ? 'yes' : 'no'}>
+        <p className="hint" data-testid="scan-memory" data-decoded-scans={held.decoded} data-reduced-tiles={held.tiles} data-building={held.building ? 'yes' : 'no'} data-scratch-bytes={held.scratchBytes}>
           In this tab: {mb(held.fullBytes)} at full resolution, {mb(held.tileBytes)} of reduced views{held.building ? ' (making the reduced views for zooming out …)' : ''}
         </p>
       )}

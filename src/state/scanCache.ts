@@ -83,9 +83,9 @@ export function heldScanIds(): string[] {
 
 /**
  * What decoded scans hold in this tab: how many are decoded, their full bitmaps' bytes (RGBA), the reduced views'
- * tiles and bytes, and whether reduced views are still being made. Shown in the scan panel; read by tests.
+ * tiles and bytes, whether reduced views are still being made, and the bytes of the canvases they are made through. Shown in the scan panel; read by tests.
  */
-export function scanMemoryHeld(): { decoded: number; fullBytes: number; tiles: number; tileBytes: number; building: boolean } {
+export function scanMemoryHeld(): { decoded: number; fullBytes: number; tiles: number; tileBytes: number; building: boolean; scratchBytes: number } {
   let decoded = 0;
   let fullBytes = 0;
   for (const scan of scans.values()) {
@@ -94,7 +94,7 @@ export function scanMemoryHeld(): { decoded: number; fullBytes: number; tiles: n
     fullBytes += scan.bitmap.width * scan.bitmap.height * 4;
   }
   const p = pyramidsHeld();
-  return { decoded, fullBytes, tiles: p.tiles, tileBytes: p.bytes, building: p.building };
+  return { decoded, fullBytes, tiles: p.tiles, tileBytes: p.bytes, building: p.building, scratchBytes: p.scratchBytes };
 }
 
 /** Returns a counter that changes whenever a scan is added (for useSyncExternalStore). */

@@ -86,8 +86,43 @@ function drawLevelRegion(ctx: OffscreenCanvasRenderingContext2D, p: TilePyramid,
   ctx.drawImage(finer.canvas, 0, 0, 2 * w, 2 * h, 0, 0, w, h);
 }
 
-/** One reused scratch canvas per level drawn through (a level not held), cleared over the part asked for. */
+/**
+ * One reused scratch canvas per level drawn through (a level not made yet, or not held), cleared over the part asked
+ * for. They hold up to 2 × TILE_PX a side each (16 MB at 2048 px), so they are let go when the work that needed them
+ * ends (releaseScratches), not kept for the session.
+ */
 const scratches = new Map<number, OffscreenCanvasRenderingContext2D>();
+/** How many builds and region reads are drawing through the scratch canvases now. */
+let scratchUsers = 0;
+
+/** Gives back the scratch canvases' pixels once no build or region read is using them (a 0 × 0 canvas holds none). */
+function releaseScratches(): void {
+  if (scratchUsers > 0) return;
+  for (const ctx of scratches.values()) {
+    ctx.canvas.width = 0;
+    ctx.canvas.height = 0;
+  }
+  scratches.clear();
+}
+
+/** Runs `work` with the scratch canvases in use, and lets them go when it and every other user are done. */
+async function withScratches<T>(work: () => Promise<T>): Promise<T> {
+  scratchUsers += 1;
+  try {
+    return await work();
+  } finally {
+    scratchUsers -= 1;
+    releaseScratches();
+  }
+}
+
+/** The scratch canvases held now (their count and RGBA bytes), for tests and the memory benchmark. */
+export function scratchesHeld(): { canvases: number; bytes: number } {
+  let bytes = 0;
+  for (const ctx of scratches.values()) bytes += ctx.canvas.width * ctx.canvas.height * 4;
+  return { canvases: scratches.size, bytes };
+}
+
 function scratch(level: number, w: number, h: number): OffscreenCanvasRenderingContext2D {
   let ctx = scratches.get(level);
   if (!ctx || ctx.canvas.width < w || ctx.canvas.height < h) {
@@ -151,7 +186,7 @@ export function startTilePyramid(id: string, bitmap: ImageBitmap): TilePyramid {
   const pyramid: TilePyramid = { widthPx: bitmap.width, heightPx: bitmap.height, levels, full: bitmap, tiles: levels.map(() => null), ready: Promise.resolve() };
   const b: Building = { pyramid, released: false, made: levels.length <= 1 };
   if (typeof OffscreenCanvas !== 'undefined' && levels.length > 1) {
-    pyramid.ready = makeLevels(b).catch((e: unknown) => {
+    pyramid.ready = withScratches(() => makeLevels(b)).catch((e: unknown) => {
       // Without reduced levels the scan is still drawn (from its full bitmap), only less smoothly zoomed out.
       console.warn(`The scan's reduced views could not be made: ${e instanceof Error ? e.message : String(e)}`);
     }).finally(() => {
@@ -187,8 +222,11 @@ export function heldPyramidIds(): string[] {
   return [...pyramids.keys()];
 }
 
-/** What the pyramids hold: their reduced-level tiles, the bytes of those tiles (RGBA), and whether a build is under way. */
-export function pyramidsHeld(): { tiles: number; bytes: number; building: boolean } {
+/**
+ * What the pyramids hold: their reduced-level tiles, the bytes of those tiles (RGBA), whether a build is under way,
+ * and the bytes of the scratch canvases builds and region reads draw through (none once they are done).
+ */
+export function pyramidsHeld(): { tiles: number; bytes: number; building: boolean; scratchBytes: number } {
   let tiles = 0;
   let bytes = 0;
   let building = false;
@@ -199,7 +237,7 @@ export function pyramidsHeld(): { tiles: number; bytes: number; building: boolea
       bytes += t.width * t.height * 4;
     }
   }
-  return { tiles, bytes, building };
+  return { tiles, bytes, building, scratchBytes: scratchesHeld().bytes };
 }
 
 /** Returns the scan's pyramid (its levels made so far), else undefined. */
@@ -213,7 +251,11 @@ export function getTilePyramid(id: string | undefined | null): TilePyramid | und
  * finer than `level` by exact halvings, one 1024-pixel block at a time with a turn for the page after each. For
  * a figure: choose the coarsest level whose pixels are no larger than the output's, and read just the region shown.
  */
-export async function pyramidRegion(p: TilePyramid, level: number, x0: number, y0: number, x1: number, y1: number): Promise<ImageBitmap> {
+export function pyramidRegion(p: TilePyramid, level: number, x0: number, y0: number, x1: number, y1: number): Promise<ImageBitmap> {
+  return withScratches(() => readRegion(p, level, x0, y0, x1, y1));
+}
+
+async function readRegion(p: TilePyramid, level: number, x0: number, y0: number, x1: number, y1: number): Promise<ImageBitmap> {
   const lv = p.levels[Math.min(Math.max(0, level), p.levels.length - 1)];
   const [ax, ay] = [Math.max(0, Math.floor(x0)), Math.max(0, Math.floor(y0))];
   const [bx, by] = [Math.min(lv.widthPx, Math.ceil(x1)), Math.min(lv.heightPx, Math.ceil(y1))];
@@ -231,5 +273,8 @@ export async function pyramidRegion(p: TilePyramid, level: number, x0: number, y
       await new Promise((resolve) => setTimeout(resolve, 0));
     }
   }
+  // The block's pixels go now rather than at the next collection.
+  block.canvas.width = 0;
+  block.canvas.height = 0;
   return out.transferToImageBitmap();
 }

@@ -132,8 +132,35 @@ test('a generated 100-megapixel scan opens with progress shown, and pans and zoo
   await page.screenshot({ path: test.info().outputPath('big-actual-size.png') });
 });
 
+/** What the page has closed and which object URLs it has made and revoked (window.__scanMemory), from its start. */
+async function watchBitmapsAndUrls(page: Page) {
+  await page.addInitScript(() => {
+    const watch = { closed: [] as string[], made: [] as string[], revoked: [] as string[] };
+    (window as unknown as { __scanMemory: typeof watch }).__scanMemory = watch;
+    const close = ImageBitmap.prototype.close;
+    ImageBitmap.prototype.close = function (this: ImageBitmap) {
+      // Its size before it goes (a closed bitmap reads 0 × 0).
+      watch.closed.push(`${this.width}x${this.height}`);
+      close.call(this);
+    };
+    const make = URL.createObjectURL.bind(URL);
+    const revoke = URL.revokeObjectURL.bind(URL);
+    URL.createObjectURL = (o: Blob | MediaSource) => {
+      const url = make(o);
+      watch.made.push(url);
+      return url;
+    };
+    URL.revokeObjectURL = (url: string) => {
+      watch.revoked.push(url);
+      revoke(url);
+    };
+  });
+  return () => page.evaluate(() => (window as unknown as { __scanMemory: { closed: string[]; made: string[]; revoked: string[] } }).__scanMemory);
+}
+
 test('a scan that replaces another is drawn from its own tiles, and the one it replaced is closed', async ({ page }) => {
   test.setTimeout(120_000);
+  const watched = await watchBitmapsAndUrls(page);
   await openApp(page);
   const memory = page.getByTestId('scan-memory');
   // 3000 px a side: levels 0 (the bitmap itself) and 2 (one tile of 750 px); 4200 px: levels 2 (2 × 2) and 3 (1).
@@ -149,16 +176,32 @@ test('a scan that replaces another is drawn from its own tiles, and the one it r
   await expect(memory).toHaveAttribute('data-decoded-scans', '1');
   await expect(memory).toHaveAttribute('data-reduced-tiles', '5');
   await expect(memory).toContainText('67 MB at full resolution');
+  // The page itself closed the first scan's bitmap and its one tile, and none of the second's.
+  await expect.poll(async () => (await watched()).closed.filter((c) => c === '3000x3000' || c === '750x750').sort()).toEqual(['3000x3000', '750x750']);
+  expect((await watched()).closed.filter((c) => c === '4200x4200')).toEqual([]);
+  // The scratch canvases the reduced views were made through are given back.
+  await expect(memory).toHaveAttribute('data-scratch-bytes', '0');
+  // Every object URL made while opening and replacing is revoked (a scan is drawn from its bitmap, not a URL).
+  const urls = await watched();
+  expect(urls.made.filter((u) => !urls.revoked.includes(u))).toEqual([]);
   // Fitted, the view draws the second scan's level 3 tile: its centre has the gradient's middle colour.
+  await expect(page.getByTestId('section-view')).toHaveAttribute('data-scan-drawn', 'tiles');
   const { cx, cy } = await viewCentre(page);
   const [r, g] = await viewPixel(page, cx, cy);
   expect(near(r, 128, 8) && near(g, 128, 8)).toBe(true);
+  await page.screenshot({ path: test.info().outputPath('replaced-scan.png') });
   // Undo brings the first scan back, decoded again from its bytes, with its own tile; the second is closed.
   await page.keyboard.press('Control+z');
   await expect(page.getByTestId('scan-name')).toContainText('first.png — 3000 × 3000 px');
   await expect(memory).toHaveAttribute('data-building', 'no', { timeout: 60_000 });
   await expect(memory).toHaveAttribute('data-decoded-scans', '1');
   await expect(memory).toHaveAttribute('data-reduced-tiles', '1');
+  await expect.poll(async () => (await watched()).closed.filter((c) => c === '4200x4200')).toEqual(['4200x4200']);
+  // Fitted to the first scan again, its own tile is drawn: the centre has the gradient's middle colour.
+  await page.getByTestId('zoom-fit').click();
+  await expect(page.getByTestId('section-view')).toHaveAttribute('data-scan-drawn', 'tiles');
+  const [r1, g1] = await viewPixel(page, cx, cy);
+  expect(near(r1, 128, 8) && near(g1, 128, 8)).toBe(true);
 });
 
 test('an 8-bit RGB TIFF opens with its colours', async ({ page }) => {
