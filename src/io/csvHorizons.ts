@@ -6,7 +6,7 @@ import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanCoordinate } from './cleanCoordinate';
-import { parseCsvRows, toCsv } from './csvText';
+import { parseCsvTable, toCsv } from './csvText';
 import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
@@ -29,10 +29,12 @@ function parseNumber(s: string): number | null {
 export function parseHorizonsCsv(text: string): HorizonImport {
   const problems: RowProblem[] = [];
   if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The CSV file cannot be imported: ${fileTooLargeMessage(text.length, MAX_IMPORT_BYTES)}.`, problems };
-  const rows = parseCsvRows(text);
+  const { rows, quoted } = parseCsvTable(text);
+  // Only an unquoted '#' opens a comment: a quoted first field is data (a name that starts with '#').
+  const comment = (r: number) => (quoted[r] & 1) === 0 && rows[r][0].trim().startsWith('#');
   let units: LengthUnit | null = null;
   let line = 0;
-  while (line < rows.length && (rows[line].join('').trim() === '' || rows[line][0].trim().startsWith('#'))) {
+  while (line < rows.length && (rows[line].join('').trim() === '' || comment(line))) {
     // The caution line (written by writeHorizonsCsv) is prose: never read a unit out of it.
     const m = /^\s*#\s*caution\b/i.test(rows[line][0]) ? null : /units?\s*[:=]\s*([a-z-]+)/i.exec(rows[line].join(','));
     if (m) units = readUnit(m[1]) ?? units;
@@ -59,11 +61,13 @@ export function parseHorizonsCsv(text: string): HorizonImport {
   const counter = { n: 0 };
   for (let r = line + 1; r < rows.length; r++) {
     const row = rows[r];
-    if (row.join('').trim() === '' || row[0].trim().startsWith('#')) continue;
+    if (row.join('').trim() === '' || comment(r)) continue;
     const where = `line ${r + 1}`;
-    // Names were written through spreadsheetText: its mark comes off, so a name comes back exactly.
-    const name = fromSpreadsheetText((row[nameCol] ?? '').trim()).trim();
-    if (name === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
+    // Names were written through spreadsheetText: its mark comes off, so a name comes back exactly. A quoted
+    // name is taken as written (csvField quotes one with white space at an end); an unquoted one is trimmed.
+    const cell = row[nameCol] ?? '';
+    const name = nameCol < 31 && (quoted[r] & (1 << nameCol)) !== 0 ? fromSpreadsheetText(cell) : fromSpreadsheetText(cell.trim()).trim();
+    if (name.trim() === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
     if (name.length > LIMITS.nameLength) { pushProblem(problems, { where, message: `horizon name longer than ${LIMITS.nameLength} characters` }, counter); continue; }
     const x = parseNumber(row[xCol] ?? '');
     const z = parseNumber(row[zCol] ?? '');

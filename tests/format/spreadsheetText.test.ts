@@ -35,7 +35,31 @@ describe('one rule for Copy table and CSV', () => {
     const horizons = PAYLOADS.map((name, i) => ({ name, line: [[0, i], [1000, i + 0.5]] as [number, number][] }));
     const back = parseHorizonsCsv(writeHorizonsCsv(horizons, 'm'));
     expect(back.ok).toBe(true);
-    if (back.ok) expect(back.horizons.map((h) => h.name).sort()).toEqual(PAYLOADS.map((n) => n.trim()).sort());
+    if (back.ok) expect(back.horizons.map((h) => h.name).sort()).toEqual([...PAYLOADS].sort());
+  });
+
+  it('CSV export then import gives back a name that starts with "#" or has white space at an end, and keeps the file\'s comment lines', () => {
+    // A '#' opening a row is the comment mark (common practice for CSV readers): "#2 coal" must not be read as one.
+    const names = ['#2 coal', '# units: ft', ' leading', 'trailing ', '\t=tab', '\u00a0=nbsp', '\r=cr'];
+    const horizons = names.map((name, i) => ({ name, line: [[0, i], [1000, i + 0.5]] as [number, number][] }));
+    const back = parseHorizonsCsv(writeHorizonsCsv(horizons, 'm'));
+    expect(back.ok).toBe(true);
+    if (back.ok) {
+      expect(back.horizons.map((h) => h.name)).toEqual(names);
+      expect(back.units).toBe('m');
+    }
+    // A hand-written file: an unquoted '#' line is still a comment, and unquoted names are still trimmed.
+    const hand = parseHorizonsCsv('# units: ft\nhorizon,x,z\n Top ,0,1\nTop,5,2\n');
+    expect(hand.ok && hand.units === 'ft' && hand.horizons.map((h) => [h.name, h.line.length])).toEqual([['Top', 2]]);
+  });
+
+  it('CSV export then import gives back any name that is not blank (fast-check)', () => {
+    const name = fc.string({ minLength: 1, maxLength: 40, unit: fc.constantFrom('#', "'", '=', '+', '-', '@', ' ', '\t', '\r', '\n', ',', '"', 'a', 'Z', '1', '\u00a0', 'é') })
+      .filter((n) => n.trim() !== '');
+    fc.assert(fc.property(fc.uniqueArray(name, { minLength: 1, maxLength: 5 }), (names) => {
+      const back = parseHorizonsCsv(writeHorizonsCsv(names.map((n, i) => ({ name: n, line: [[0, i], [10, i]] as [number, number][] })), 'm'));
+      return back.ok && JSON.stringify(back.horizons.map((h) => h.name)) === JSON.stringify(names);
+    }), { numRuns: 300 });
   });
 
   it('fromSpreadsheetText undoes spreadsheetText for any text (fast-check)', () => {
