@@ -165,7 +165,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
         {docSection.ok && analysis && (
           <details className="interp-section" data-testid="sensitivity-section">
             <summary>Sensitivity to the regional</summary>
-            <SensitivityPanel scenarioId={scenario.id} section={docSection.section} />
+            <SensitivityPanel scenarioId={scenario.id} section={docSection.section} prepared={sa.prepared} />
           </details>
         )}
         {docSection.ok && analysis && (

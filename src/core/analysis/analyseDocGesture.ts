@@ -35,11 +35,15 @@ export function analyseDoc(doc: ProjectDoc, scenarioId?: string, buffer?: Prepar
   return analyseDocSection(docToSection(doc, scenarioId), buffer);
 }
 
-/** Returns the prepared start of a gesture from its analysis (`analyseDoc(start)`), or null when it has no analysis to follow; `buffer` holds only the validated input while it runs. */
+/**
+ * Returns the prepared start of a gesture from its analysis (`analyseDoc(start)`), or null when it has no analysis
+ * to follow: the analysis's own preparation when it carries one, else the section prepared again (`buffer` holds only
+ * the validated input while it runs).
+ */
 export function prepareDocGesture(start: ProjectDoc, startAnalysis: DocAnalysis, buffer?: PreparationBuffer): DocGestureBase | null {
   const ds = startAnalysis.docSection;
   if (!ds.ok || !startAnalysis.outcome?.ok || ds.section.horizons.length === 0) return null;
-  const prep = prepareSection(ds.section, {}, buffer);
+  const prep = startAnalysis.prepared ? { ok: true as const, prepared: startAnalysis.prepared } : prepareSection(ds.section, {}, buffer);
   if (!prep.ok) return null;
   return { scenario: activeScenario(start), docSection: ds, prepared: prep.prepared, leftOut: startAnalysis.leftOut };
 }

@@ -1,7 +1,8 @@
 // The analysis of a project document's scenario as the app shows it (memoised by state/selectors).
 import type { DocSection } from '../model/docToSection';
 import type { PreparationBuffer } from './preparationBuffer';
-import { analyseSection, type AnalysisOutcome } from './analyseSection';
+import { analysePrepared, type AnalysisOutcome } from './analyseSection';
+import { prepareSection, type PreparedSection } from './prepareSection';
 
 /** A horizon the engine could not analyse (its own input problem), left out so that the others still are. */
 export interface LeftOutHorizon { id: string; name: string; reason: string }
@@ -13,6 +14,12 @@ export interface DocAnalysis {
   outcome: AnalysisOutcome | null;
   /** Horizons left out for a problem of their own (e.g. a regional short of a pin); empty when none. */
   leftOut: LeftOutHorizon[];
+  /**
+   * The preparation the outcome was computed from (docSection.section validated, clipped and measured), when the
+   * outcome is ok: a gesture's start and the sensitivity sweeps start from it instead of preparing the same
+   * section again (a big document's lines take a tenth of a second each time). Shared: never change it.
+   */
+  prepared?: PreparedSection;
 }
 
 // One unfinished horizon must not hide the results of the others while the user works (the CLI stays
@@ -20,11 +27,12 @@ export interface DocAnalysis {
 // those horizons are left out with the engine's message as the reason and the rest is analysed again;
 // a problem of the whole section (pins, units) still stops the analysis.
 
-/** Returns the analysis of a document's section, leaving out horizons with problems of their own (listed with the reason); outcome null when there is nothing to analyse. `buffer`: the caller's reusable memory (createPreparationBuffer), else fresh arrays. */
+/** Returns the analysis of a document's section, leaving out horizons with problems of their own (listed with the reason); outcome null when there is nothing to analyse. `buffer`: the caller's reusable memory for the validated input (createPreparationBuffer), else fresh arrays. */
 export function analyseDocSection(docSection: DocSection, buffer?: PreparationBuffer): DocAnalysis {
   if (!docSection.ok || docSection.section.horizons.length === 0) return { docSection, outcome: null, leftOut: [] };
-  const outcome = analyseSection(docSection.section, { buffer });
-  if (outcome.ok || !outcome.problems.every((p) => p.horizon !== undefined)) return { docSection, outcome, leftOut: [] };
+  const first = analysed(docSection, buffer);
+  const outcome = first.outcome;
+  if (outcome.ok || !outcome.problems.every((p) => p.horizon !== undefined)) return { docSection, leftOut: [], ...first };
   const bad = new Map<string, string>();
   for (const p of outcome.problems) {
     const reason = problemReason(p.message, p.horizon!);
@@ -40,9 +48,16 @@ export function analyseDocSection(docSection: DocSection, buffer?: PreparationBu
     section: { ...docSection.section, horizons: docSection.section.horizons.filter((_, i) => keep[i]) },
     horizonIds: docSection.horizonIds.filter((_, i) => keep[i]),
   };
-  const again = analyseSection(reduced.section, { buffer });
+  const again = analysed(reduced, buffer);
   // Leaving some out can bring up a problem of the rest only in theory (problems are per horizon); keep it honest.
-  return again.ok ? { docSection: reduced, outcome: again, leftOut } : { docSection, outcome, leftOut: [] };
+  return again.outcome.ok ? { docSection: reduced, leftOut, ...again } : { docSection, outcome, leftOut: [] };
+}
+
+/** analyseSection of the section (the same outcome), with the preparation it was computed from when it is ok. */
+function analysed(docSection: Extract<DocSection, { ok: true }>, buffer: PreparationBuffer | undefined): { outcome: AnalysisOutcome; prepared?: PreparedSection } {
+  const prep = prepareSection(docSection.section, {}, buffer);
+  if (!prep.ok) return { outcome: { ok: false, problems: prep.problems } };
+  return { outcome: { ok: true, analysis: analysePrepared(prep.prepared), warnings: [] }, prepared: prep.prepared };
 }
 
 /** The engine's message without its leading 'Horizon "name": ' (the pane names the horizon itself). */

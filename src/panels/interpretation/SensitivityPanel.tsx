@@ -4,7 +4,7 @@
 // main pane's depth for the same shift; the elevation has no such ambiguity.
 import { useEffect, useState } from 'react';
 import type { Section } from '../../core/model/section';
-import { prepareSection } from '../../core/analysis/prepareSection';
+import { prepareSection, type PreparedSection } from '../../core/analysis/prepareSection';
 import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
 import { SweepPlot } from './SweepPlot';
@@ -14,15 +14,20 @@ import { sectionKey } from '../../core/model/sectionKey';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { useCrossingChecks } from '../../state/crossingChecks';
 
-export function SensitivityPanel({ scenarioId, section: current }: { scenarioId: string; section: Section }) {
-  // The sweeps re-prepare the whole section: while a regional or pin is dragged they keep the section
+/**
+ * The sweeps of `section`; `prepared`, when given, is the analysis's own preparation of that section (the sweeps
+ * start from it instead of preparing the section again).
+ */
+export function SensitivityPanel({ scenarioId, section: current, prepared: currentPrepared }: { scenarioId: string; section: Section; prepared?: PreparedSection }) {
+  // The sweeps re-evaluate the whole section: while a regional or pin is dragged they keep the section
   // of the gesture's start, and follow once it ends.
   const gesture = useDocStore((s) => s.gestureStart !== null);
   // While a long line is being checked for crossing itself the section may yet lose it: no sweep on it until then.
   const checking = useCrossingChecks((s) => s.pending > 0);
-  const [held, setHeld] = useState(current);
-  if (!gesture && held !== current) setHeld(current);
-  const section = gesture ? held : current;
+  const [held, setHeld] = useState({ section: current, prepared: currentPrepared });
+  if (!gesture && (held.section !== current || held.prepared !== currentPrepared)) setHeld({ section: current, prepared: currentPrepared });
+  const section = gesture ? held.section : current;
+  const prepared = gesture ? held.prepared : currentPrepared;
   const [offsetRange, setOffsetRange] = useState(100);
   const [tiltRange, setTiltRange] = useState(5);
   const [pivot, setPivot] = useState<'left' | 'right'>('left');
@@ -37,7 +42,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
     let timer: ReturnType<typeof setTimeout> | undefined;
     const make = () => {
       if (timer !== undefined) return;
-      timer = setTimeout(() => setMade({ section, offsetRange, tiltRange, pivot, sweep: sweepOf(section, offsetRange, tiltRange, pivot) }), 0);
+      timer = setTimeout(() => setMade({ section, offsetRange, tiltRange, pivot, sweep: sweepOf(section, prepared, offsetRange, tiltRange, pivot) }), 0);
     };
     const frame = requestAnimationFrame(make);
     const fallback = setTimeout(make, 250);
@@ -46,7 +51,7 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
       clearTimeout(fallback);
       clearTimeout(timer);
     };
-  }, [section, offsetRange, tiltRange, pivot, checking]);
+  }, [section, prepared, offsetRange, tiltRange, pivot, checking]);
   const ready = made !== null && made.section === section && made.offsetRange === offsetRange && made.tiltRange === tiltRange && made.pivot === pivot;
   const sweep = ready ? made.sweep : null;
   const setAmplification = useUncertaintyStore((st) => st.setAmplification);
@@ -100,9 +105,9 @@ export function SensitivityPanel({ scenarioId, section: current }: { scenarioId:
 
 interface Sweep { offsets: number[]; tilts: number[]; result: ReturnType<typeof regionalSensitivity>; width: number }
 
-/** The offset and tilt sweeps of the section (null when the engine cannot prepare it). */
-function sweepOf(section: Section, offsetRange: number, tiltRange: number, pivot: 'left' | 'right'): Sweep | null {
-  const prep = prepareSection(section);
+/** The offset and tilt sweeps of the section, from its preparation when given (null when the engine cannot prepare it). */
+function sweepOf(section: Section, prepared: PreparedSection | undefined, offsetRange: number, tiltRange: number, pivot: 'left' | 'right'): Sweep | null {
+  const prep = prepared ? { ok: true as const, prepared } : prepareSection(section);
   if (!prep.ok) return null;
   const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);
   // Tilt entered in units per 1000 units (m per km), swept as dz/dx.
