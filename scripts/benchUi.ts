@@ -3,7 +3,7 @@
 // in the same page, their ratio and the longest main-thread task it caused (PerformanceObserver 'longtask').
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
-//                       --no-documents --trace-mp 200 --no-trace --only-trace]
+//                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -20,11 +20,14 @@
 //   autosave task after the edit; floor: one 16.7 ms frame.
 // - tracing on a --trace-mp scan (default 200 MP): Draw horizon, an anchor on a drawn line, the pointer moved
 //   3,000 px along it; the first preview that follows the line (the rough one), the full-resolution preview (when
-//   the preview stops changing), and each later pointer position of a few pixels (move → preview redrawn);
-//   floor: one 16.7 ms frame. Then the renderer's memory with the scan open, before tracing and after the
+//   the preview stops changing), and each of --moves later pointer positions of a few pixels: move → preview
+//   redrawn, and move → the full-resolution trace to that position drawn (no stand-in left); floor: one 16.7 ms
+//   frame. The machine's load average is printed with them. --trace-profile keeps a Chromium trace of the later
+//   moves there and prints, for the slowest, what each thread ran between the move and its trace drawn. Then the renderer's memory with the scan open, before tracing and after the
 //   stretch is placed: the difference is what tracing holds.
 // The script fails loudly (exit 1) when what it meant to open is not open or a measurement saw nothing.
 import { execFileSync } from 'node:child_process';
+import { loadavg } from 'node:os';
 import { chromium, type Page } from '@playwright/test';
 import { forwardSection } from '../src/core/forward/forwardSection';
 import { sectionToProjectDoc } from '../src/core/model/migrations/sectionToProjectDoc';
@@ -56,6 +59,10 @@ const WITH_DOCUMENTS = !process.argv.includes('--no-documents') && !ONLY_TRACE;
 const TRACE_MP = Number(flag('trace-mp') ?? 200);
 /** A folder for screenshots of the tracing rows' first previews (optional). */
 const SHOTS = flag('shots');
+/** Later pointer positions timed after a traced preview has settled. */
+const MOVES = Math.max(1, Number(flag('moves') ?? 60));
+/** A folder for a Chromium trace of the later pointer positions (`trace-moves.json`), with a summary of the slowest. */
+const TRACE_PROFILE = flag('trace-profile');
 /** A folder for a CPU profile of each big-document open and continuous drag (`open-12x<n>.cpuprofile`, `drag-12x<n>.cpuprofile`, opened by Chrome's DevTools); a summary is printed. */
 const PROFILE = flag('profile');
 
@@ -441,7 +448,7 @@ async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number)
 interface ProfileNode { id: number; callFrame: { functionName: string; url: string; lineNumber: number }; children?: number[] }
 interface CpuProfile { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[]; startTime: number; endTime: number }
 
-interface TraceEvent { name: string; ph: string; dur?: number; tid: number; pid: number; args?: { name?: string } }
+interface TraceEvent { name: string; ph: string; ts?: number; dur?: number; tdur?: number; tid: number; pid: number; args?: { name?: string; data?: { type?: string; functionName?: string } } }
 
 /** Prints the time of each kind of trace event (ms a move) on the renderer's main thread and on every other thread, by thread name. */
 function printTrace(trace: { traceEvents: TraceEvent[] }, moves: number): void {
@@ -702,16 +709,17 @@ async function scans(page: Page): Promise<void> {
 }
 
 // The preview line as the overlay draws it: each drawing sets a user-timing mark (canvas/OverlayLayer.tsx,
-// PREVIEW_DRAWN_MARK) whose detail holds its point count; a log of [time, points] of every drawing whose points
-// differ from the one before is kept as window.__previewLog.
+// PREVIEW_DRAWN_MARK) whose detail holds its point count, last point and whether a stand-in is still shown while
+// tracing; a log of [time, points, tracing] of every drawing that differs from the one before is kept as
+// window.__previewLog.
 const WATCH_PREVIEW = `(() => {
   window.__previewLog = [];
   let last = '';
   window.__previewObserver = new PerformanceObserver((l) => {
     for (const e of l.getEntries()) {
       if (e.name !== 'foldroot-preview-drawn') continue;
-      const sig = e.detail.points + ':' + e.detail.last.join(',');
-      if (sig !== last) { last = sig; window.__previewLog.push([e.startTime, e.detail.points]); }
+      const sig = e.detail.points + ':' + e.detail.last.join(',') + ':' + e.detail.tracing;
+      if (sig !== last) { last = sig; window.__previewLog.push([e.startTime, e.detail.points, e.detail.tracing]); }
     }
   });
   window.__previewObserver.observe({ type: 'mark' });
@@ -723,6 +731,76 @@ async function until(page: Page, expr: string, timeoutMs: number, what: string):
   while (!(await page.evaluate(expr))) {
     check(Date.now() < end, what);
     await new Promise((r) => setTimeout(r, 40));
+  }
+}
+
+/**
+ * Moves the pointer MOVES times to `at(k)`, each after the last move's full-resolution trace was drawn; returns, per
+ * move, the time to the first redrawn preview and to the first one with no stand-in left (page ms from just before
+ * the move), and from the page's receipt of the move (its pointermove) to that trace drawn. With --trace-profile the moves are recorded in a Chromium trace and the slowest are broken down.
+ */
+async function laterMoves(page: Page, at: (k: number) => { x: number; y: number }): Promise<{ first: number[]; traced: number[]; received: number[] }> {
+  const first: number[] = [];
+  const traced: number[] = [];
+  const received: number[] = [];
+  const browser = page.context().browser()!;
+  // When the page received each move (its pointermove dispatched): what is left of move → traced is Chromium's own
+  // delivery, which waits for the next frame.
+  await page.evaluate(`window.addEventListener('pointermove', () => { window.__movedAt = performance.now(); }, true)`);
+  const cdp = TRACE_PROFILE ? await page.context().newCDPSession(page) : null;
+  if (cdp) {
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    await cdp.send('Profiler.start');
+  }
+  if (TRACE_PROFILE) await browser.startTracing(page, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing', 'v8', 'v8.execute', 'disabled-by-default-v8.gc', 'toplevel', 'blink'] });
+  for (let k = 0; k < MOVES; k++) {
+    const p = at(k);
+    const n = (await page.evaluate('window.__previewLog.length')) as number;
+    const t = (await page.evaluate(`(performance.mark('bench-move', { detail: ${k} }), performance.now())`)) as number;
+    await page.mouse.move(p.x, p.y);
+    await until(page, `window.__previewLog.length > ${n}`, 60_000, 'a pointer move redrew no preview');
+    await until(page, `window.__previewLog.slice(${n}).some((e) => !e[2])`, 60_000, 'a pointer move was never traced');
+    const log = ((await page.evaluate(`window.__previewLog.slice(${n})`)) as [number, number, boolean][]);
+    first.push(log[0][0] - t);
+    traced.push(log.find((e) => !e[2])![0] - t);
+    received.push(log.find((e) => !e[2])![0] - ((await page.evaluate('window.__movedAt')) as number));
+  }
+  if (TRACE_PROFILE && cdp) {
+    const trace = await browser.stopTracing();
+    const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+    await cdp.detach();
+    const { writeFileSync, mkdirSync } = await import('node:fs');
+    mkdirSync(TRACE_PROFILE, { recursive: true });
+    writeFileSync(`${TRACE_PROFILE}/trace-moves.json`, trace);
+    writeFileSync(`${TRACE_PROFILE}/trace-moves.cpuprofile`, JSON.stringify(profile));
+    printSlowMoves(JSON.parse(trace.toString()) as { traceEvents: TraceEvent[] }, traced);
+    printProfile(profile, MOVES);
+  }
+  return { first, traced, received };
+}
+
+/** Prints, for the five slowest moves (move → traced), the longest events of each thread between the move and its trace drawn. */
+function printSlowMoves(trace: { traceEvents: TraceEvent[] }, traced: number[]): void {
+  const threads = new Map<string, string>();
+  for (const e of trace.traceEvents) if (e.ph === 'M' && e.name === 'thread_name') threads.set(`${e.pid}:${e.tid}`, e.args?.name ?? '');
+  const moves = trace.traceEvents.filter((e) => e.name === 'bench-move' && (e.ph === 'R' || e.ph === 'I' || e.ph === 'b' || e.ph === 'n')).sort((a, b) => (a.ts ?? 0) - (b.ts ?? 0));
+  if (moves.length !== traced.length) {
+    console.log(`    trace: ${moves.length} move marks for ${traced.length} moves; no breakdown`);
+    return;
+  }
+  const slow = traced.map((ms, k) => ({ ms, k })).sort((a, b) => b.ms - a.ms).slice(0, 5);
+  for (const { ms, k } of slow) {
+    const t0 = moves[k].ts ?? 0;
+    const t1 = t0 + ms * 1000;
+    console.log(`    move ${k}: ${ms.toFixed(1)} ms to its trace; events over 0.5 ms (start after the move, +wall, (thread time), ms):`);
+    const wrappers = new Set(['ThreadControllerImpl::RunTask', 'v8.callFunction', 'ThreadPool_RunTask', 'Receive mojo message', 'HandlePostMessage']);
+    const seen = trace.traceEvents.filter((e) => e.ph === 'X' && !wrappers.has(e.name) && (e.dur ?? 0) > 500 && (e.ts ?? 0) < t1 && (e.ts ?? 0) + (e.dur ?? 0) > t0);
+    for (const e of seen.sort((a, b) => (a.ts ?? 0) - (b.ts ?? 0)).slice(0, 40)) {
+      const detail = e.args?.data?.type ?? e.args?.data?.functionName ?? '';
+      const cpu = e.tdur === undefined ? '' : `(${(e.tdur / 1000).toFixed(1)})`;
+      console.log(`      ${(((e.ts ?? 0) - t0) / 1000).toFixed(1).padStart(7)} +${((e.dur ?? 0) / 1000).toFixed(1).padStart(6)} ${cpu.padStart(7)}  ${(threads.get(`${e.pid}:${e.tid}`) ?? '?').padEnd(22)} ${e.name} ${detail}`);
+    }
   }
 }
 
@@ -776,18 +854,19 @@ async function tracing(page: Page): Promise<void> {
   const settled = log[log.length - 1];
   report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: first that follows`, ms: firstFollowing[0] - t0, floor: FRAME_MS, longest: await longestSince(page, t0), note: `${firstFollowing[1]} points; the rough search (window reduced to about 16,000 px, the darkest pixel of each block)` });
   report({ work: `trace preview, 3,000 px on a ${TRACE_MP} MP scan: full resolution`, ms: settled[0] - t0, floor: FRAME_MS, note: `${settled[1]} points; tiles and tree in the worker` });
-  // Later pointer positions: a few image pixels along the line each, waiting for the redrawn preview.
-  const later: number[] = [];
-  for (let k = 1; k <= 12; k++) {
-    const u = u1 + (k * 2) / cam.scale;
-    const p = toScreen(u, lineV(u));
-    const n = ((await page.evaluate('window.__previewLog.length')) as number);
-    const t = await now(page);
-    await page.mouse.move(p.x, p.y);
-    await until(page, `window.__previewLog.length > ${n}`, 60_000, 'a pointer move redrew no preview');
-    later.push(((await page.evaluate(`window.__previewLog[${n}][0]`)) as number) - t);
-  }
-  report({ work: `trace preview, later pointer positions (${TRACE_MP} MP)`, ms: median(later), floor: FRAME_MS, note: `largest ${later.reduce((m, x) => Math.max(m, x), 0).toFixed(1)} ms of ${later.length}; move → redrawn` });
+  // Later pointer positions: 12.3 image px along the line each (under a screen pixel when fitted), back to the start
+  // past 700 px so they stay in the window searched, waiting for the redrawn preview and then for the
+  // full-resolution trace to that position.
+  const later = await laterMoves(page, (k) => {
+    const u = u1 + (((k + 1) * 12.3) % 700);
+    return toScreen(u, lineV(u));
+  });
+  const load = loadavg().map((x) => x.toFixed(2)).join(' ');
+  const most = (xs: number[]) => xs.reduce((m, x) => Math.max(m, x), 0).toFixed(1);
+  const overFrame = (xs: number[]) => xs.filter((x) => x > FRAME_MS).length;
+  report({ work: `trace preview, later pointer positions (${TRACE_MP} MP): redrawn`, ms: median(later.first), floor: FRAME_MS, note: `largest ${most(later.first)} ms of ${later.first.length}, ${overFrame(later.first)} over a frame; move → redrawn; load average ${load}` });
+  report({ work: `trace preview, later pointer positions (${TRACE_MP} MP): traced`, ms: median(later.traced), floor: FRAME_MS, note: `largest ${most(later.traced)} ms of ${later.traced.length}, ${overFrame(later.traced)} over a frame; move → full trace to it drawn` });
+  report({ work: `trace preview, later pointer positions (${TRACE_MP} MP): received → traced`, ms: median(later.received), floor: FRAME_MS, note: `largest ${most(later.received)} ms of ${later.received.length}, ${overFrame(later.received)} over a frame; pointermove dispatched → full trace drawn` });
   // Place the anchor, let a second pass (the user's hand moving on), then preview the next 3,000 px: the trees
   // around the new anchor were started when it was placed.
   const end = toScreen(u1, lineV(u1));

@@ -171,7 +171,7 @@ const CalibrationMarks = memo(function CalibrationMarks({ scale }: { scale: numb
   );
 });
 
-/** The user-timing mark set each time a tool's preview line is drawn (its detail: the line's point count and last point), so the UI benchmark can time the preview from the page itself; only the latest is kept. */
+/** The user-timing mark set each time a tool's preview line is drawn (its detail: the line's point count, last point and whether part of it is a stand-in still tracing), so the UI benchmark can time the preview from the page itself; only the latest is kept. */
 export const PREVIEW_DRAWN_MARK = 'foldroot-preview-drawn';
 
 function ToolPreviewShape() {
@@ -196,7 +196,7 @@ function ToolPreviewShape() {
         }
         if (preview.line && preview.line.length > 1) {
           performance.clearMarks(PREVIEW_DRAWN_MARK);
-          performance.mark(PREVIEW_DRAWN_MARK, { detail: { points: preview.line.length, last: preview.line[preview.line.length - 1] } });
+          performance.mark(PREVIEW_DRAWN_MARK, { detail: { points: preview.line.length, last: preview.line[preview.line.length - 1], tracing: preview.tracing ?? false } });
         }
         if (preview.pinXs) {
           const doc = useDocStore.getState().doc;

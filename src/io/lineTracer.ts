@@ -1,22 +1,25 @@
-// The scan's line tracer for the drawing tools: snapping reads a few pixels on the main thread; traced
-// stretches are computed in a worker (feature tiles, one shortest-path tree per anchor, the path read
-// back per pointer position), so a large scan never stalls the page. Answers are synchronous — ready or
-// not yet — and `onReady` is called whenever something asked for has arrived.
+// The scan's line tracer for the drawing tools: snapping reads a few pixels on the main thread; the cost of a
+// traced stretch is computed in a worker (feature tiles, one shortest-path tree per anchor), and each tree, once
+// built, is handed to the page (core/trace/handedTree: transferred, not copied), which reads the path to every
+// pointer position from it in the move's own task: a preview follows the pointer in the frame the move arrives in,
+// with no round trip to a worker. Answers are synchronous — ready or not yet — and `onReady` is called whenever
+// something asked for has arrived.
 // The first preview from an anchor is progressive: at once a straight segment; while the full-resolution tiles and
 // tree are computed, a second worker searches the same window reduced to about COARSE_PIXELS pixels (so a few
-// milliseconds however long the stretch: the tree is sent with the pointer position and answers it at once), and
-// its path, mapped back to the image, is shown until the full one is ready. The window is read halved by the browser
-// until it fits ROUGH_READ_PIXELS (a smoothing halving keeps a line 2 px wide at half its darkness or better, one of
-// 1 px at a quarter) and the worker keeps the darkest pixel of each block (core/trace/poolDarkest): the browser's own
-// resize straight to the rough size sampled a 3 px line away in whole columns, and the rough path ran straight. Both
-// workers are warmed up when the tracer starts. As soon as an anchor is placed, the tree around it is built ahead,
-// towards where the line was heading, so the next preview usually finds its tree waiting.
+// milliseconds however long the stretch), and its path, mapped back to the image, is shown until the full one is
+// ready. The window is read halved by the browser until it fits ROUGH_READ_PIXELS (a smoothing halving keeps a line
+// 2 px wide at half its darkness or better, one of 1 px at a quarter) and the worker keeps the darkest pixel of each
+// block (core/trace/poolDarkest): the browser's own resize straight to the rough size sampled a 3 px line away in
+// whole columns, and the rough path ran straight. Both workers are warmed up when the tracer starts. As soon as an
+// anchor is placed, the tree around it is built ahead, towards where the line was heading, so the next preview
+// usually finds its tree waiting.
 import type { ImagePx } from '../core/model/projectDoc';
 import { pixelFeatures } from '../core/trace/pixelFeatures';
 import type { Raster } from '../core/trace/raster';
 import { roughReduction } from '../core/trace/roughReduction';
 import { roughToImage } from '../core/trace/roughToImage';
 import { snapToLine } from '../core/trace/snapToLine';
+import { TraceSession } from '../core/trace/traceSession';
 import { tilesOver, traceWindow, windowCovers } from '../core/trace/traceWindow';
 import type { TraceWorkerReply, TraceWorkerRequest } from './workers/traceLine.worker';
 
@@ -26,7 +29,7 @@ export const TILES_KEPT = 96;
 export const MAX_SNAP_RADIUS_PX = 24;
 /** Stretches kept once traced (the committed ones are asked again until the line is finished). */
 const PATHS_KEPT = 256;
-/** Trees the worker keeps; the same number as its session keeps. */
+/** Trees the page keeps; the same number as its session keeps. */
 const TREES_KEPT = 4;
 /** The rough search reduces the window to about this many pixels (and by at least 2 in each direction). */
 export const COARSE_PIXELS = 16_000;
@@ -56,14 +59,23 @@ interface CoarseRef { id: number; from: ImagePx; win: Raster; sx: number; sy: nu
 interface TreeRef { id: number; from: ImagePx; win: Raster }
 
 const keyOf = (from: ImagePx, to: ImagePx) => `${from[0]},${from[1]}|${to[0]},${to[1]}`;
+const sameAnchor = (a: ImagePx, b: ImagePx) => a[0] === b[0] && a[1] === b[1];
 
 export class ScanLineTracer {
   private worker: Worker;
+  /** The trees handed over by the workers, full-resolution and rough: the paths to the pointer are read here. */
+  private held = new TraceSession();
+  private heldRough = new TraceSession();
+  /** The full-resolution trees held (oldest first, as `held` keeps them). */
   private trees: TreeRef[] = [];
+  /** The pointer position last asked, towards which the next tree centres its path before handing it over. */
+  private toward: ImagePx | null = null;
   private nextId = 1;
   /** The tree asked for while another is being built: only the latest is kept. */
   private wanted: { from: ImagePx; win: Raster } | null = null;
   private building = false;
+  /** The tree being built, while `building`. */
+  private buildingFor: { from: ImagePx; win: Raster } | null = null;
   private chain: Promise<void> = Promise.resolve();
   private tiles = new Map<string, true>();
   private paths = new Map<string, ImagePx[]>();
@@ -75,16 +87,17 @@ export class ScanLineTracer {
   private coarseTrees: CoarseRef[] = [];
   private coarseWanted: { from: ImagePx; win: Raster } | null = null;
   private coarseBuilding = false;
+  /** The rough tree being built, while `coarseBuilding`. */
+  private coarseBuildingFor: { from: ImagePx; win: Raster } | null = null;
   private coarsePaths = new Map<string, ImagePx[]>();
-  private coarseAsked = new Set<string>();
   /** Placed stretches whose look-ahead trees were started. */
   private aheadOf = new Set<string>();
-  /** The pointer position the wanted rough tree answers once built. */
-  private coarseFor: { key: string; to: ImagePx } | null = null;
   /** The latest snap asked and its answer. */
   private lastSnap: { x: number; y: number; r: number; q: ImagePx | null } | null = null;
+  /** The rough paths handed out, so a preview can say it shows a stand-in. */
+  private roughPaths = new WeakSet<readonly ImagePx[]>();
   /** Bytes the worker reported holding after its latest tree. */
-  bytesHeld = 0;
+  private workerBytes = 0;
 
   constructor(private bitmap: ImageBitmap, private onReady: () => void) {
     this.worker = new Worker(new URL('./workers/traceLine.worker.ts', import.meta.url), { type: 'module' });
@@ -92,6 +105,13 @@ export class ScanLineTracer {
     this.post({ type: 'warm' });
     // The rough worker is started at once, so that the first preview does not wait for it to load.
     this.coarse().postMessage({ type: 'warm' } satisfies TraceWorkerRequest);
+    // The page reads paths too: its own warm-up compiles that code before the first preview needs it.
+    setTimeout(() => new TraceSession().warmUp(), 0);
+  }
+
+  /** Bytes held by tracing: the worker's tiles and the trees held on the page. */
+  get bytesHeld(): number {
+    return this.workerBytes + this.held.bytesHeld() + this.heldRough.bytesHeld();
   }
 
   /** Stops the worker; later questions get no answers. */
@@ -118,6 +138,12 @@ export class ScanLineTracer {
     const x1 = Math.min(this.bitmap.width, Math.ceil(p[0] + r + 3));
     const y1 = Math.min(this.bitmap.height, Math.ceil(p[1] + r + 3));
     if (x1 - x0 < 3 || y1 - y0 < 3) return null;
+    // Near a line being traced the features are held here already (a tree's window): no pixels to read.
+    const held = this.held.featuresOver(x0, y0, x1, y1);
+    if (held) {
+      const q = snapToLine(held, p[0], p[1], r);
+      return q ? [q[0], q[1]] : null;
+    }
     const w = x1 - x0;
     const h = y1 - y0;
     if (!this.snapCanvas) this.snapCanvas = new OffscreenCanvas(2 * MAX_SNAP_RADIUS_PX + 8, 2 * MAX_SNAP_RADIUS_PX + 8);
@@ -149,13 +175,14 @@ export class ScanLineTracer {
       this.aheadOf.add(key);
       this.buildAhead(from, to);
     }
-    if (this.asked.has(key)) return placed ? null : this.roughStretch(from, to, key);
-    const tree = [...this.trees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H));
-    if (tree) {
-      this.asked.add(key);
-      this.post({ type: 'path', id: tree.id, key, to: [to[0], to[1]] });
-      return placed ? null : this.roughStretch(from, to, key);
+    if (!placed) this.toward = to;
+    // A tree held here answers at once: the path is read in this task.
+    const read = this.readHeld(from, to);
+    if (read) {
+      this.keepPath(key, read);
+      return read;
     }
+    if (this.asked.has(key)) return placed ? null : this.roughStretch(from, to, key);
     const win = traceWindow(from, to, W, H);
     if (placed) {
       this.asked.add(key);
@@ -165,11 +192,33 @@ export class ScanLineTracer {
       });
       return null;
     }
-    this.wanted = { from, win };
+    // A tree being built for this anchor and covering the pointer answers when it arrives.
+    const coming = this.building && this.buildingFor && sameAnchor(this.buildingFor.from, from) && windowCovers(this.buildingFor.win, to, W, H);
+    if (!coming) this.wanted = { from, win };
     // The rough tree first: the full-resolution one waits until it is built (see pumpTree).
     const rough = this.roughStretch(from, to, key);
     this.pumpTree();
     return rough;
+  }
+
+  /** Returns the path from `from` to `to` read from a full-resolution tree held here, or null when none covers it. */
+  private readHeld(from: ImagePx, to: ImagePx): ImagePx[] | null {
+    const W = this.bitmap.width;
+    const H = this.bitmap.height;
+    for (let i = this.trees.length - 1; i >= 0; i--) {
+      const t = this.trees[i];
+      if (!sameAnchor(t.from, from) || !windowCovers(t.win, to, W, H)) continue;
+      const points = this.held.path(t.id, [to[0], to[1]]);
+      if (points) return points;
+      // That tree is no longer held.
+      this.trees.splice(i, 1);
+    }
+    return null;
+  }
+
+  private keepPath(key: string, points: ImagePx[]): void {
+    this.paths.set(key, points);
+    while (this.paths.size > PATHS_KEPT) this.paths.delete(this.paths.keys().next().value as string);
   }
 
   /** Builds the trees of a just-placed anchor `to` ahead of the pointer: over the window of a stretch as long as the last, going on the same way. */
@@ -181,28 +230,38 @@ export class ScanLineTracer {
     if (win.w <= 0 || win.h <= 0) return;
     this.wanted = { from: to, win };
     this.coarseWanted = { from: to, win };
-    this.coarseFor = null;
     this.pumpCoarse();
     this.pumpTree();
   }
 
-  /** Returns the rough preview from `from` to `to` when its reduced-resolution search has it, else null and starts it. */
+  /** Returns the rough preview from `from` to `to` when its reduced-resolution tree is held here, else null and starts it. */
   private roughStretch(from: ImagePx, to: ImagePx, key: string): ImagePx[] | null {
     const done = this.coarsePaths.get(key);
     if (done) return done;
-    if (this.closed || this.coarseAsked.has(key)) return null;
+    if (this.closed) return null;
     const W = this.bitmap.width;
     const H = this.bitmap.height;
-    const tree = [...this.coarseTrees].reverse().find((t) => t.from[0] === from[0] && t.from[1] === from[1] && windowCovers(t.win, to, W, H, 2 * Math.max(t.sx, t.sy)));
-    if (tree) {
-      this.coarseAsked.add(key);
-      const c: [number, number] = [(to[0] - tree.win.x0) / tree.sx, (to[1] - tree.win.y0) / tree.sy];
-      this.coarse().postMessage({ type: 'path', id: tree.id, key, to: c } satisfies TraceWorkerRequest);
-      return null;
+    for (let i = this.coarseTrees.length - 1; i >= 0; i--) {
+      const t = this.coarseTrees[i];
+      if (!sameAnchor(t.from, from) || !windowCovers(t.win, to, W, H, 2 * Math.max(t.sx, t.sy))) continue;
+      const c: [number, number] = [(to[0] - t.win.x0) / t.sx, (to[1] - t.win.y0) / t.sy];
+      const reduced = this.heldRough.path(t.id, c);
+      if (!reduced) {
+        this.coarseTrees.splice(i, 1);
+        continue;
+      }
+      // Back to image pixels, with the ends exactly at the anchor and the pointer.
+      const points = roughToImage(reduced, t.win, t.sx, t.sy, from, to);
+      this.roughPaths.add(points);
+      this.coarsePaths.set(key, points);
+      while (this.coarsePaths.size > PATHS_KEPT) this.coarsePaths.delete(this.coarsePaths.keys().next().value as string);
+      return points;
     }
-    this.coarseWanted = { from, win: traceWindow(from, to, W, H) };
-    this.coarseFor = { key, to };
-    this.pumpCoarse();
+    const pending = this.coarseBuilding && this.coarseBuildingFor && sameAnchor(this.coarseBuildingFor.from, from) && windowCovers(this.coarseBuildingFor.win, to, W, H);
+    if (!pending) {
+      this.coarseWanted = { from, win: traceWindow(from, to, W, H) };
+      this.pumpCoarse();
+    }
     return null;
   }
 
@@ -218,11 +277,10 @@ export class ScanLineTracer {
   private pumpCoarse(): void {
     if (this.coarseBuilding || !this.coarseWanted || this.closed) return;
     const { from, win } = this.coarseWanted;
-    const answer = this.coarseFor;
     this.coarseWanted = null;
-    this.coarseFor = null;
     const { readW, readH, scale, pool, cw, ch, sx, sy } = roughReduction(win.w, win.h, COARSE_PIXELS, ROUGH_READ_PIXELS);
     this.coarseBuilding = true;
+    this.coarseBuildingFor = { from, win };
     const id = this.nextId++;
     const key = `coarse-${id}`;
     const resize = scale > 1 ? { resizeWidth: readW, resizeHeight: readH, resizeQuality: 'medium' as const } : {};
@@ -232,19 +290,17 @@ export class ScanLineTracer {
       const whole = { x0: 0, y0: 0, w: cw, h: ch };
       worker.postMessage({ type: 'tile', key, tile: whole, crop: whole, bitmap, pool } satisfies TraceWorkerRequest, [bitmap]);
       const c: [number, number] = [(from[0] - win.x0) / sx, (from[1] - win.y0) / sy];
-      // The pointer position that asked is answered with the tree, in the same turn of the worker.
-      let path: { key: string; to: [number, number] } | undefined;
-      if (answer && windowCovers(win, answer.to, this.bitmap.width, this.bitmap.height, 2 * Math.max(sx, sy))) {
-        path = { key: answer.key, to: [(answer.to[0] - win.x0) / sx, (answer.to[1] - win.y0) / sy] };
-        this.coarseAsked.add(answer.key);
-      }
-      worker.postMessage({ type: 'tree', id, from: c, win: whole, tileKeys: [key], path } satisfies TraceWorkerRequest);
-      // The tile served only this tree: the worker keeps the tree's own copy of its features.
+      // Centred towards the pointer as it is now, so the first rough path read here finds its centres done.
+      const p = this.toward;
+      const toward: [number, number] | undefined = p && windowCovers(win, p, this.bitmap.width, this.bitmap.height) ? [(p[0] - win.x0) / sx, (p[1] - win.y0) / sy] : undefined;
+      worker.postMessage({ type: 'tree', id, from: c, win: whole, tileKeys: [key], toward } satisfies TraceWorkerRequest);
+      // The tile served only this tree.
       worker.postMessage({ type: 'drop', keys: [key] } satisfies TraceWorkerRequest);
       this.coarseTrees.push({ id, from, win, sx, sy });
       while (this.coarseTrees.length > TREES_KEPT) this.coarseTrees.shift();
     }).catch((err: unknown) => {
       this.coarseBuilding = false;
+      this.coarseBuildingFor = null;
       this.pumpTree();
       console.error(`Line tracing: ${err instanceof Error ? err.message : String(err)}`);
     });
@@ -254,22 +310,14 @@ export class ScanLineTracer {
     if (this.closed) return;
     if (m.type === 'treeDone') {
       this.coarseBuilding = false;
+      this.coarseBuildingFor = null;
+      if (m.tree) this.heldRough.putTree(m.tree);
+      else this.coarseTrees = this.coarseTrees.filter((t) => t.id !== m.id);
       // The full-resolution tree held back for this one starts first, so a pointer asking new windows all the time
       // cannot keep it waiting.
       this.pumpTree();
       this.pumpCoarse();
-    } else if (m.type === 'path') {
-      this.coarseAsked.delete(m.key);
-      const tree = this.coarseTrees.find((t) => t.id === m.id);
-      if (m.points && tree) {
-        // Back to image pixels, with the ends exactly at the anchor and the pointer.
-        const [a, b] = m.key.split('|').map((t) => t.split(',').map(Number) as ImagePx);
-        this.coarsePaths.set(m.key, roughToImage(m.points, tree.win, tree.sx, tree.sy, a, b));
-        while (this.coarsePaths.size > PATHS_KEPT) this.coarsePaths.delete(this.coarsePaths.keys().next().value as string);
-      } else {
-        this.coarseTrees = this.coarseTrees.filter((t) => t.id !== m.id);
-      }
-    } else {
+    } else if (m.type === 'error') {
       console.error(`Line tracing: ${m.message}`);
     }
     this.onReady();
@@ -335,16 +383,19 @@ export class ScanLineTracer {
     const { from, win } = this.wanted;
     this.wanted = null;
     this.building = true;
+    this.buildingFor = { from, win };
     this.enqueue(async () => {
       try {
         const tileKeys = await this.sendTiles(win);
         if (this.closed) return;
         const id = this.nextId++;
-        this.trees.push({ id, from, win });
-        while (this.trees.length > TREES_KEPT) this.trees.shift();
-        this.post({ type: 'tree', id, from: [from[0], from[1]], win, tileKeys });
+        // Centred towards the pointer as it is now, so the first path read here finds its centres done.
+        const p = this.toward;
+        const toward: [number, number] | undefined = p && windowCovers(win, p, this.bitmap.width, this.bitmap.height) ? [p[0], p[1]] : undefined;
+        this.post({ type: 'tree', id, from: [from[0], from[1]], win, tileKeys, toward });
       } catch (err) {
         this.building = false;
+        this.buildingFor = null;
         throw err;
       }
     });
@@ -353,18 +404,19 @@ export class ScanLineTracer {
   private receive(m: TraceWorkerReply): void {
     if (this.closed) return;
     if (m.type === 'treeDone') {
+      const made = this.buildingFor;
       this.building = false;
-      this.bytesHeld = m.bytesHeld;
+      this.buildingFor = null;
+      this.workerBytes = m.bytesHeld;
+      if (m.tree && made) {
+        this.held.putTree(m.tree);
+        this.trees.push({ id: m.id, from: made.from, win: made.win });
+        while (this.trees.length > TREES_KEPT) this.trees.shift();
+      }
       this.pumpTree();
     } else if (m.type === 'path') {
       this.asked.delete(m.key);
-      if (m.points) {
-        this.paths.set(m.key, m.points);
-        while (this.paths.size > PATHS_KEPT) this.paths.delete(this.paths.keys().next().value as string);
-      } else {
-        // That tree is no longer kept: the next ask builds another.
-        this.trees = this.trees.filter((t) => t.id !== m.id);
-      }
+      if (m.points) this.keepPath(m.key, m.points);
     } else {
       // A tile or path the worker could not handle: say so; the stretch stays straight.
       console.error(`Line tracing: ${m.message}`);

@@ -33,6 +33,8 @@ export interface LineTracer {
    * starts it; `placed` for a stretch whose anchor is placed (computed first), not a preview to the pointer.
    */
   stretch(from: ImagePx, to: ImagePx, placed?: boolean): ImagePx[] | null;
+  /** Returns whether `points` (an answer of `stretch`) is a rough stand-in that the full-resolution trace will replace. */
+  rough?(points: readonly ImagePx[]): boolean;
 }
 
 export interface ToolContext {
@@ -59,6 +61,8 @@ export interface ToolPreview {
   marks?: ImagePx[];
   /** Section x of pin lines being placed. */
   pinXs?: number[];
+  /** Part of `line` is a stand-in (straight, or a rough trace) while the traced stretch to the pointer computes. */
+  tracing?: boolean;
 }
 
 export type ToolCommand =

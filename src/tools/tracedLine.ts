@@ -77,14 +77,15 @@ export function removeLastStretch(line: TracedLine): TracedLine | null {
 /**
  * Returns the preview from the last anchor to the pointer: the traced stretch when ready; while it computes, the last
  * ready one (`previous`, if it starts at the same anchor) then on to the pointer; a straight segment otherwise.
- * `exact` is the ready stretch to keep as the next `previous`.
+ * `exact` is the ready stretch to keep as the next `previous`; `tracing` says the preview is a stand-in (straight, the
+ * last one extended, or a rough trace) for the full-resolution trace still computing.
  */
-export function hoverStretch(line: TracedLine, p: ImagePx, ctx: ToolContext, alt: boolean, previous: ImagePx[] | null): { preview: ImagePx[]; exact: ImagePx[] | null } {
+export function hoverStretch(line: TracedLine, p: ImagePx, ctx: ToolContext, alt: boolean, previous: ImagePx[] | null): { preview: ImagePx[]; exact: ImagePx[] | null; tracing: boolean } {
   const last = line.anchors[line.anchors.length - 1];
-  if (!follows(ctx, alt)) return { preview: [last, p], exact: null };
+  if (!follows(ctx, alt)) return { preview: [last, p], exact: null, tracing: false };
   const q = snapped(p, ctx, alt);
   const exact = ctx.tracer?.stretch(last, q) ?? null;
-  if (exact) return { preview: exact, exact };
-  if (previous && previous.length > 0 && previous[0][0] === last[0] && previous[0][1] === last[1]) return { preview: [...previous, q], exact: previous };
-  return { preview: [last, q], exact: null };
+  if (exact) return { preview: exact, exact, tracing: ctx.tracer?.rough?.(exact) ?? false };
+  if (previous && previous.length > 0 && previous[0][0] === last[0] && previous[0][1] === last[1]) return { preview: [...previous, q], exact: previous, tracing: true };
+  return { preview: [last, q], exact: null, tracing: true };
 }

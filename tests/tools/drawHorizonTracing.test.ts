@@ -22,11 +22,13 @@ describe('drawHorizonTool with a line tracer', () => {
     if (t.state.name !== 'placing') return;
     expect(onTheLine(t.state.points)).toBe(true);
     t.move([200, 118]);
-    // Not ready yet: a straight rubber band from the anchor to the snapped pointer.
+    // Not ready yet: a straight rubber band from the anchor to the snapped pointer, which the preview says is a stand-in.
     expect(t.preview?.line).toHaveLength(2);
+    expect(t.preview?.tracing).toBe(true);
     tracer.finishAll();
     t.send({ type: 'traced' });
     expect(t.preview?.line?.length).toBeGreaterThan(10);
+    expect(t.preview?.tracing).toBe(false);
     expect(onTheLine(t.preview?.line ?? [])).toBe(true);
     t.click([200, 118]);
     t.click([400, 141]);

@@ -74,15 +74,18 @@ describe('the rough first preview of a long stretch', () => {
 
   it('is replaced in the preview by the full-resolution path once that is ready', () => {
     let ready = false;
-    const tracer: LineTracer = { snap: () => null, stretch: () => (ready ? full : r.points) };
+    const tracer: LineTracer = { snap: () => null, stretch: () => (ready ? full : r.points), rough: (points) => points === r.points };
     const doc = toolDoc();
     const ctx: ToolContext = { doc, frame: sectionFrame(doc), tolerancePx: 4, selectedHorizonId: null, calibrationPick: 'points', tracer, followLine: true };
     const line = startLine(from, ctx, false, true);
     const first = hoverStretch(line, to, ctx, false, null);
     expect(first.preview).toEqual(r.points);
+    // The rough path is a stand-in: the preview says it is still tracing.
+    expect(first.tracing).toBe(true);
     ready = true;
     const next = hoverStretch(line, to, ctx, false, first.exact);
     expect(next.preview).toEqual(full);
     expect(next.preview).not.toEqual(first.preview);
+    expect(next.tracing).toBe(false);
   });
 });

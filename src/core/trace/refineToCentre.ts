@@ -11,6 +11,9 @@ const DIRECTION_SPAN = 3;
 /**
  * Centres already found, by path pixel and the pixel DIRECTION_SPAN ahead of it (the one behind is fixed by the
  * tree): paths to nearby pointer positions share all but their last pixels, so a preview re-centres only those.
+ * The key is the pixel index times 64 plus the step to the pixel ahead (at most DIRECTION_SPAN each way, 49 codes),
+ * a small integer for windows up to 16 MP, which a Map looks up faster than a large number (a window narrower than
+ * the 7 codes across keeps the pixel index times the window's size plus the index ahead).
  */
 export type CentreCache = Map<number, { point: [number, number]; widthPx: number } | null>;
 
@@ -29,12 +32,14 @@ export function refineToCentre(path: readonly number[], r: Raster, f: PixelFeatu
   if (n < 2) return { points: pts, onLine: n, found: on.fill(1), widthPx };
   let found = 0;
   const out: [number, number][] = [];
-  const size = r.w * r.h;
+  const side = 2 * DIRECTION_SPAN + 1;
   // This call's own profile buffers: nothing shared between calls, so two runs cannot overwrite each other's.
   const profiles = profileScratch();
   for (let i = 0; i < n; i++) {
     const ahead = Math.min(n - 1, i + DIRECTION_SPAN);
-    const key = path[i] * size + path[ahead];
+    const step = path[ahead] - path[i];
+    const dy = Math.round(step / r.w);
+    const key = r.w >= side ? path[i] * 64 + (dy + DIRECTION_SPAN) * side + (step - dy * r.w + DIRECTION_SPAN) : path[i] * r.w * r.h + path[ahead];
     const known = cache?.get(key);
     if (known !== undefined) {
       if (known) {

@@ -1,21 +1,20 @@
 // The tracer's working memory, without the messaging around it: feature tiles computed once and kept
 // (least recently used go first past a cap), and the shortest-path trees of the latest anchors. The app
-// runs one in a worker; the benchmark runs one directly.
+// runs one in a worker, which builds the trees and hands each to the page (handedTree), and one on the page,
+// which holds the handed trees and reads paths from them; the benchmark runs one directly.
 import { assembleFeatures } from './assembleFeatures';
 import { pixelFeatures, type PixelFeatures } from './pixelFeatures';
 import { poolDarkest } from './poolDarkest';
 import type { Raster } from './raster';
-import { shortestPathTree, type PathTree } from './shortestPathTree';
+import { shortestPathTree } from './shortestPathTree';
 import { traceCost } from './traceCost';
-import type { CentreCache } from './refineToCentre';
+import { handTree, keptTree, type HandedTree, type KeptTree } from './handedTree';
 import { pixelIndexAt, traceStretch, TRACE_TOLERANCE_PX } from './traceStretch';
 
 /** Trees kept (the latest anchors): enough for the stretch being previewed and the ones still being filled in. */
 export const TREES_KEPT = 4;
 /** Side of the made-up window the warm-up traces. */
 const WARM_SIDE_PX = 160;
-
-interface KeptTree { id: number; from: [number, number]; win: Raster; tree: PathTree; features: PixelFeatures; centres: CentreCache }
 
 export class TraceSession {
   private tiles = new Map<string, PixelFeatures>();
@@ -49,6 +48,37 @@ export class TraceSession {
     const tree = shortestPathTree(traceCost(features), win.w, win.h, pixelIndexAt(features, from[0], from[1]));
     this.trees.push({ id, from, win, tree, features, centres: new Map() });
     while (this.trees.length > TREES_KEPT) this.trees.shift();
+  }
+
+  /**
+   * Returns tree `id` as handed data with the buffers to transfer, and forgets it (its arrays move with it); null
+   * when that tree is not kept.
+   */
+  takeTree(id: number): { handed: HandedTree; transfer: ArrayBuffer[] } | null {
+    const t = this.trees.find((k) => k.id === id);
+    if (!t) return null;
+    this.trees = this.trees.filter((k) => k !== t);
+    return handTree(t);
+  }
+
+  /** Keeps a tree handed over by another session (the oldest goes past TREES_KEPT). */
+  putTree(h: HandedTree): void {
+    this.trees.push(keptTree(h));
+    while (this.trees.length > TREES_KEPT) this.trees.shift();
+  }
+
+  /** Returns the features of a kept tree's window that holds image rectangle [x0, x1) × [y0, y1) whole, or null (newest first). */
+  featuresOver(x0: number, y0: number, x1: number, y1: number): PixelFeatures | null {
+    for (let i = this.trees.length - 1; i >= 0; i--) {
+      const f = this.trees[i].features;
+      if (x0 >= f.x0 && y0 >= f.y0 && x1 <= f.x0 + f.w && y1 <= f.y0 + f.h) return f;
+    }
+    return null;
+  }
+
+  /** Returns whether tree `id` is kept. */
+  hasTree(id: number): boolean {
+    return this.trees.some((k) => k.id === id);
   }
 
   /** Returns the traced stretch from `from` to `to` over window `win` by a search that stops at `to` (no tree kept): for a stretch already placed. */

@@ -45,9 +45,12 @@ export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [n
   // outcrop) and a centroid over two inks lies between them; a pixel where no line was found is only where the
   // search stepped. The line runs straight from the anchor to the first centre kept, a few pixels along.
   const pts: [number, number][] = [[from[0], from[1]]];
+  const near2 = NEAR_ANCHOR_PX * NEAR_ANCHOR_PX;
   for (let i = 1; i < points.length - 1; i++) {
+    if (!keep[i]) continue;
     const [x, y] = points[i];
-    if (!keep[i] || Math.hypot(x - from[0], y - from[1]) < NEAR_ANCHOR_PX || Math.hypot(x - to[0], y - to[1]) < NEAR_ANCHOR_PX) continue;
+    const ax = x - from[0], ay = y - from[1], bx = x - to[0], by = y - to[1];
+    if (ax * ax + ay * ay < near2 || bx * bx + by * by < near2) continue;
     pts.push(points[i]);
   }
   pts.push([to[0], to[1]]);
@@ -65,9 +68,13 @@ export function traceStretch(tree: PathTree, f: PixelFeatures, from: readonly [n
  */
 export function ownLineCentres(found: Uint8Array, widthPx: Float32Array): Uint8Array {
   const n = found.length;
-  const widths: number[] = [];
-  for (let i = 0; i < n; i++) if (found[i]) widths.push(widthPx[i]);
-  widths.sort((a, b) => a - b);
+  let m = 0;
+  for (let i = 0; i < n; i++) if (found[i]) m++;
+  // A typed array sorts numerically without a comparator: a preview sorts every centre of the path at each move.
+  const widths = new Float32Array(m);
+  m = 0;
+  for (let i = 0; i < n; i++) if (found[i]) widths[m++] = widthPx[i];
+  widths.sort();
   const limit = widths.length > 0 ? WIDE_FACTOR * widths[widths.length >> 1] + WIDE_SLACK_PX : Infinity;
   const own = new Uint8Array(n);
   for (let i = 0; i < n; i++) own[i] = found[i] && widthPx[i] <= limit ? 1 : 0;

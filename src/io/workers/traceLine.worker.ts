@@ -1,32 +1,32 @@
 // Follows drawn lines off the main thread. Protocol: 'tile' (a tile's pixels as a transferred bitmap, one
 // pixel wider than the tile where the image allows; with `pool`, a rough window to reduce here by blocks of that
-// side) stores its features; 'drop' forgets tiles; 'tree'
-// builds an anchor's shortest-path tree over a window and answers 'treeDone'; 'path' answers the traced
-// stretch to a point (null when that tree is no longer kept); 'once' traces one placed stretch without
-// keeping a tree; 'warm' runs the whole chain once on a small made-up window, so that the first real preview
-// does not pay for compiling it (cold, a first tile and tree took ten times as long). A 'tree' may carry the
-// pointer position whose path it answers as soon as it is built, saving a round trip. Messages are handled in order.
+// side) stores its features; 'drop' forgets tiles; 'tree' builds an anchor's shortest-path tree over a window,
+// centres the path to `toward` (the pointer when it was asked) so its centres come along, and answers 'treeDone'
+// with the tree handed over (core/trace/handedTree: its arrays transferred, the worker keeps no copy): the page reads
+// every pointer position's path from it in the move's own task; 'once' traces one placed stretch without keeping a
+// tree; 'warm' runs the whole chain once on a small made-up window, so that the first real preview does not pay for
+// compiling it (cold, a first tile and tree took ten times as long). Messages are handled in order.
 import type { Raster } from '../../core/trace/raster';
+import type { HandedTree } from '../../core/trace/handedTree';
 import { TraceSession } from '../../core/trace/traceSession';
 
 export type TraceWorkerRequest =
   | { type: 'tile'; key: string; tile: Raster; crop: Raster; bitmap: ImageBitmap; pool?: number }
   | { type: 'drop'; keys: string[] }
-  | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[]; path?: { key: string; to: [number, number] } }
+  | { type: 'tree'; id: number; from: [number, number]; win: Raster; tileKeys: string[]; toward?: [number, number] }
   | { type: 'warm' }
-  | { type: 'path'; id: number; key: string; to: [number, number] }
   | { type: 'once'; key: string; from: [number, number]; to: [number, number]; win: Raster; tileKeys: string[] };
 
 export type TraceWorkerReply =
-  | { type: 'treeDone'; id: number; bytesHeld: number }
+  | { type: 'treeDone'; id: number; bytesHeld: number; tree: HandedTree | null }
   | { type: 'path'; id: number; key: string; points: [number, number][] | null }
   | { type: 'error'; message: string };
 
 const session = new TraceSession();
 let canvas: OffscreenCanvas | null = null;
 
-function reply(msg: TraceWorkerReply): void {
-  (self as unknown as { postMessage(m: unknown): void }).postMessage(msg);
+function reply(msg: TraceWorkerReply, transfer: ArrayBuffer[] = []): void {
+  (self as unknown as { postMessage(m: unknown, t: ArrayBuffer[]): void }).postMessage(msg, transfer);
 }
 
 function readPixels(bitmap: ImageBitmap): Uint8ClampedArray {
@@ -51,15 +51,16 @@ self.onmessage = (e: MessageEvent<TraceWorkerRequest>) => {
     }
     else if (m.type === 'drop') session.dropTiles(m.keys);
     else if (m.type === 'tree') {
+      let handed: ReturnType<TraceSession['takeTree']> = null;
       try {
         session.buildTree(m.id, m.from, m.win, m.tileKeys);
-        // The path before the tree's end: the page starts its next work on 'treeDone', and the preview came after it.
-        if (m.path) reply({ type: 'path', id: m.id, key: m.path.key, points: session.path(m.id, m.path.to) });
+        if (m.toward) session.path(m.id, m.toward);
+        handed = session.takeTree(m.id);
       } finally {
         // Answered even on failure, so the page never waits for a tree that will not come.
-        reply({ type: 'treeDone', id: m.id, bytesHeld: session.bytesHeld() });
+        reply({ type: 'treeDone', id: m.id, bytesHeld: session.bytesHeld(), tree: handed?.handed ?? null }, handed?.transfer ?? []);
       }
-    } else if (m.type === 'warm') session.warmUp(); else if (m.type === 'path') reply({ type: 'path', id: m.id, key: m.key, points: session.path(m.id, m.to) });
+    } else if (m.type === 'warm') session.warmUp();
     else if (m.type === 'once') reply({ type: 'path', id: -1, key: m.key, points: session.traceOnce(m.from, m.to, m.win, m.tileKeys) });
   } catch (err) {
     reply({ type: 'error', message: err instanceof Error ? err.message : String(err) });

@@ -133,15 +133,17 @@ export function drawLineTool(spec: DrawLineSpec): Tool<DrawLineState> {
     const line = lineOf(s);
     const vertices = lineVertices(line);
     let hoverPath = s.hoverPath;
+    let tracing = computing(line);
     if (s.hover && !s.finishing) {
       const h = hoverStretch(line, s.hover, ctx, s.hoverAlt, s.hoverPath);
       hoverPath = h.exact;
+      tracing ||= h.tracing;
       for (let k = 1; k < h.preview.length; k++) vertices.push(h.preview[k]);
       const snap = spec.inPieces && line.anchors.length >= 1 ? snapToFault(ctx.doc.faults, s.hover, ctx.tolerancePx) : null;
       if (snap) marks.push(snap.point);
     }
     lines.push(vertices);
-    return { state: { ...s, hoverPath }, command: { type: 'preview', preview: { lines, line: vertices, marks: [...marks, ...s.points], colour } } };
+    return { state: { ...s, hoverPath }, command: { type: 'preview', preview: { lines, line: vertices, marks: [...marks, ...s.points], colour, tracing } } };
   }
 
   function show(s: Placing | Continuing, ctx: ToolContext, extra: ToolCommand[] = []): ToolResult<DrawLineState> {
