@@ -9,7 +9,10 @@
 // Rows (each the median of --runs runs where a run is repeatable):
 // - pan: frame intervals while panning a 1 MP and the largest scan (fitted, and at 1:1); floor: the page's idle
 //   frame interval. Twice: frame rate capped at the display's, and uncapped (a frame then takes what its work takes).
-// - open scan at each size: drop → shown; floor: createImageBitmap of the same file in the same page.
+// - open scan at each size: drop → shown; floor: createImageBitmap of the same file in the same page. With it the
+//   renderer's memory (resident and private) against the scan's RGBA size, and against the renderer before any
+//   scan plus that RGBA size (what holding the decoded scan cannot go under), with Chromium's own account of it by
+//   allocator (scripts/rendererMemory.ts); last, the renderer once the largest scan is replaced by a 1 MP one.
 // - export PNG at each offered size (--png-sizes screen,a4-150,a4-300,a3-300) and scan size: click → download;
 //   floor: drawing the scan at the PNG's size and encoding that canvas as PNG in the same page; with the longest
 //   main-thread task and the main thread's heap peak against the PNG's pixel bytes; the app's own time (its click
@@ -35,6 +38,7 @@ import type { LineSection as Section } from '../src/core/model/section';
 import { fitCamera } from '../src/state/camera';
 import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
 import { startPreview } from './previewServer';
+import { allocatorLine, rendererAllocators } from './rendererMemory';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
 const VITE = 'node_modules/vite/bin/vite.js';
@@ -669,7 +673,12 @@ async function scans(page: Page): Promise<void> {
         const m = await rendererMemory(page);
         if (m) {
           const over = before ? `; over the app before any scan ${(m.rss - before.rss).toFixed(0)} MB = ${((m.rss - before.rss) / rgba).toFixed(2)}× (private ${((m.anon - before.anon) / rgba).toFixed(2)}×)` : '';
-          report({ work: `renderer memory with a ${mp} MP scan open`, ms: m.rss, floor: rgba, unit: 'MB', note: `floor: its RGBA size; target ≤ 1.5× (${(1.5 * rgba).toFixed(0)} MB)${over}` });
+          report({ work: `renderer memory with a ${mp} MP scan open`, ms: m.rss, floor: rgba, unit: 'MB', note: `floor: its RGBA size; target ≤ 1.5× (${(1.5 * rgba).toFixed(0)} MB); private ${m.anon.toFixed(0)} MB = ${(m.anon / rgba).toFixed(2)}×${over}` });
+          if (before) {
+            // What holding the decoded scan cannot go under: the renderer as it was before any scan, plus the RGBA.
+            const alloc = await rendererAllocators(page.context().browser()!).catch(() => null);
+            report({ work: `  … against the app before any scan + its RGBA (${mp} MP)`, ms: m.rss, floor: before.rss + rgba, unit: 'MB', note: `floor: ${before.rss.toFixed(0)} + ${rgba.toFixed(0)} MB${alloc ? `; renderer by allocator (MB): ${allocatorLine(alloc, 8)}` : ''}` });
+          }
         }
       }
       for (const [k, [id, w, h]] of EXPORT_SIZES.entries()) {
@@ -890,7 +899,7 @@ async function tracing(page: Page): Promise<void> {
   await page.getByTestId('horizon-list').locator('li').first().waitFor();
   const after = await rendererMb(page);
   if (before !== null && after !== null) {
-    report({ work: `renderer memory with a ${TRACE_MP} MP scan: before tracing`, ms: before, floor: (side * side * 4) / 1048576, unit: 'MB', note: 'floor: its RGBA size' });
+    report({ work: `renderer memory with a ${TRACE_MP} MP scan: before tracing`, ms: before, floor: (side * side * 4) / 1048576, unit: 'MB', note: 'floor: its RGBA size (the renderer before any scan is in the scan rows)' });
     report({ work: `renderer memory with a ${TRACE_MP} MP scan: after two traced stretches`, ms: after, floor: before, unit: 'MB', note: `tracing holds ${(after - before).toFixed(0)} MB (workers, tiles, trees)` });
   }
 }

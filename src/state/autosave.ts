@@ -50,7 +50,8 @@ export async function autosaveNow(): Promise<void> {
     let scan: StoredScan | null = null;
     const fresh = Boolean(doc.scan && cached && writtenScanId !== doc.scan.id);
     if (doc.scan && cached) {
-      scan = { id: doc.scan.id, type: doc.scan.type, name: doc.scan.name, bytes: fresh ? await cached.bytes.arrayBuffer() : new ArrayBuffer(0) };
+      // The Blob itself: the browser copies its bytes into the database without the page reading them.
+      scan = { id: doc.scan.id, type: doc.scan.type, name: doc.scan.name, bytes: fresh ? cached.bytes : new Blob([]) };
     }
     const stamp = nextStamp();
     await writeSnapshot(dbOpen ?? (await db()), { savedAt: new Date(stamp).toISOString(), stamp, doc, dirty: revision !== savedRevision }, scan, fresh);
@@ -86,7 +87,7 @@ async function journalIfNewer(kept: KeptRead): Promise<KeptRead | null> {
 
 /** Puts the kept scan of `doc` into the scan cache (decoded when it can be); returns why it is not shown, or null. */
 async function bringBackScan(doc: ProjectDoc, stored: StoredScan | null): Promise<string | null> {
-  if (!doc.scan || !stored || stored.id !== doc.scan.id || stored.bytes.byteLength === 0) return null;
+  if (!doc.scan || !stored || stored.id !== doc.scan.id || stored.bytes.size === 0) return null;
   let notShown: string | null = null;
   const blob = new Blob([stored.bytes], { type: stored.type });
   // At the saved page and size, nothing asked (reopenSavedScan). A scan that cannot be shown keeps its bytes in

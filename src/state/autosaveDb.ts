@@ -14,7 +14,21 @@ const CURRENT = 'current';
 /** Where kept work that this build cannot read (e.g. kept by a newer build) is moved instead of being overwritten. */
 const SET_ASIDE = 'set-aside';
 
-export interface StoredScan { id: string; type: string; name: string; bytes: ArrayBuffer }
+/**
+ * A kept scan: its original file as a Blob. The browser keeps a Blob's bytes itself (on disk for IndexedDB), so
+ * neither writing nor reading a scan copies the file into the page's memory. Records written before kept an
+ * ArrayBuffer; they are read back as a Blob too (storedScanOf).
+ */
+export interface StoredScan { id: string; type: string; name: string; bytes: Blob }
+
+/** The record as a StoredScan (an older record's ArrayBuffer wrapped as a Blob), or null when it holds no bytes. */
+function storedScanOf(record: unknown): StoredScan | null {
+  const s = record as { id?: unknown; type?: unknown; name?: unknown; bytes?: unknown } | undefined;
+  if (!s || typeof s.id !== 'string' || typeof s.type !== 'string' || typeof s.name !== 'string') return null;
+  if (s.bytes instanceof Blob) return { id: s.id, type: s.type, name: s.name, bytes: s.bytes };
+  if (s.bytes instanceof ArrayBuffer) return { id: s.id, type: s.type, name: s.name, bytes: new Blob([s.bytes], { type: s.type }) };
+  return null;
+}
 export interface AutosaveSnapshot {
   savedAt: string; doc: ProjectDoc; dirty: boolean; scan: StoredScan | null;
   /** When it was kept (autosaveJournal's nextStamp; for records written before stamps, the time of savedAt): the newer of this and the journal comes back. */
@@ -97,8 +111,7 @@ export async function readKept(db: IDBDatabase): Promise<KeptRead> {
     if (!checked.ok) return { kind: 'unreadable', message: checked.message };
     let scan: StoredScan | null = null;
     if (typeof state.scanId === 'string') {
-      const s = (await request(tx.objectStore(SCANS).get(state.scanId))) as StoredScan | undefined;
-      if (s && s.bytes instanceof ArrayBuffer) scan = s;
+      scan = storedScanOf(await request(tx.objectStore(SCANS).get(state.scanId)));
     }
     const savedAt = typeof state.savedAt === 'string' ? state.savedAt : '';
     const stamp = typeof state.stamp === 'number' ? state.stamp : Date.parse(savedAt) || 0;
@@ -112,8 +125,7 @@ export async function readKept(db: IDBDatabase): Promise<KeptRead> {
 
 /** Returns the stored bytes of the scan with this id, or null. */
 export async function readStoredScan(db: IDBDatabase, id: string): Promise<StoredScan | null> {
-  const s = (await request(db.transaction([SCANS], 'readonly').objectStore(SCANS).get(id))) as StoredScan | undefined;
-  return s && s.bytes instanceof ArrayBuffer ? s : null;
+  return storedScanOf(await request(db.transaction([SCANS], 'readonly').objectStore(SCANS).get(id)));
 }
 
 /** Returns the kept snapshot this build can restore, or null when there is none or it cannot be read. */

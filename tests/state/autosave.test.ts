@@ -15,7 +15,7 @@ import { sampleDoc } from '../io/sampleDoc';
 const decodeScan = vi.hoisted(() => vi.fn(async (..._args: unknown[]): Promise<unknown> => ({ ok: false, message: 'cannot decode in tests' })));
 vi.mock('../../src/io/decodeScan', () => ({ decodeScan }));
 const { autosaveNow, restoreAutosave } = await import('../../src/state/autosave');
-const { getScan } = await import('../../src/state/scanCache');
+const { getScan, putScan } = await import('../../src/state/scanCache');
 const { useSessionStore } = await import('../../src/state/sessionStore');
 
 const factory = new IDBFactory();
@@ -31,12 +31,12 @@ function decodedAt(widthPx: number, heightPx: number): DecodeResult {
 async function keep(): Promise<void> {
   const db = await openAutosaveDb(factory);
   const doc = { ...sampleDoc(), scan: scanRef };
-  await writeSnapshot(db, { savedAt: '2026-01-01T00:00:00.000Z', doc, dirty: true }, { id: scanRef.id, type: scanRef.type, name: scanRef.name, bytes: bytes.slice().buffer }, true);
+  await writeSnapshot(db, { savedAt: '2026-01-01T00:00:00.000Z', doc, dirty: true }, { id: scanRef.id, type: scanRef.type, name: scanRef.name, bytes: new Blob([bytes], { type: scanRef.type }) }, true);
 }
 
 async function keptScanBytes(): Promise<Uint8Array | null> {
   const snap = await readSnapshot(await openAutosaveDb(factory));
-  return snap?.scan ? new Uint8Array(snap.scan.bytes) : null;
+  return snap?.scan ? new Uint8Array(await snap.scan.bytes.arrayBuffer()) : null;
 }
 
 describe('restoreAutosave with a kept scan', () => {
@@ -70,6 +70,43 @@ describe('restoreAutosave with a kept scan', () => {
     useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited after the restore' }));
     await autosaveNow();
     expect(await keptScanBytes()).toEqual(bytes);
+  });
+
+  it('brings back a scan an earlier build kept as an ArrayBuffer', async () => {
+    const db = await openAutosaveDb(factory);
+    await new Promise<void>((resolve, reject) => {
+      const tx = db.transaction(['scans'], 'readwrite');
+      tx.objectStore('scans').put({ id: scanRef.id, type: scanRef.type, name: scanRef.name, bytes: bytes.slice().buffer }, scanRef.id);
+      tx.oncomplete = () => resolve();
+      tx.onerror = () => reject(tx.error);
+    });
+    decodeScan.mockResolvedValue(decodedAt(500, 250));
+    expect(await restoreAutosave()).toBe(true);
+    const given = decodeScan.mock.calls[0][0] as Blob;
+    expect(given.type).toBe('image/tiff');
+    expect(new Uint8Array(await given.arrayBuffer())).toEqual(bytes);
+    expect(new Uint8Array(await getScan(scanRef.id)!.bytes.arrayBuffer())).toEqual(bytes);
+  });
+
+  it('keeps a newly opened scan as its Blob, without reading its bytes into the page', async () => {
+    decodeScan.mockResolvedValue(decodedAt(500, 250));
+    expect(await restoreAutosave()).toBe(true);
+    const other = { ...scanRef, id: 'scan-new', name: 'new.tif' };
+    const file = new Blob([Uint8Array.from([73, 73, 42, 0, 9, 9, 9])], { type: 'image/tiff' });
+    const read = vi.spyOn(file, 'arrayBuffer');
+    putScan(other.id, { bitmap: { width: 500, height: 250, close: vi.fn() } as unknown as ImageBitmap, bytes: file });
+    useDocStore.getState().apply((d) => ({ ...d, scan: other }));
+    await autosaveNow();
+    expect(read).not.toHaveBeenCalled();
+    const record = await new Promise<{ bytes: unknown }>((resolve, reject) => {
+      void openAutosaveDb(factory).then((db) => {
+        const r = db.transaction(['scans'], 'readonly').objectStore('scans').get(other.id);
+        r.onsuccess = () => resolve(r.result as { bytes: unknown });
+        r.onerror = () => reject(r.error);
+      });
+    });
+    expect(record.bytes).toBeInstanceOf(Blob);
+    expect(new Uint8Array(await (record.bytes as Blob).arrayBuffer())).toEqual(Uint8Array.from([73, 73, 42, 0, 9, 9, 9]));
   });
 
   it('keeps the bytes of a scan that cannot be decoded at all, and says so', async () => {

@@ -12,21 +12,23 @@ describe('autosave database (fake-indexeddb)', () => {
   it('keeps the document and the scan bytes, rewriting the bytes only when asked', async () => {
     const db = await openAutosaveDb(new IDBFactory());
     const doc = { ...sampleDoc(), scan: { id: 's1', name: 'a.png', widthPx: 2, heightPx: 2, type: 'image/png' } };
-    const bytes = Uint8Array.from([1, 2, 3, 4, 5]).buffer;
+    const bytes = new Blob([Uint8Array.from([1, 2, 3, 4, 5])], { type: 'image/png' });
     await writeSnapshot(db, { savedAt: 't1', doc, dirty: true }, { id: 's1', type: 'image/png', name: 'a.png', bytes }, true);
     const edited = { ...doc, title: 'edited' };
-    await writeSnapshot(db, { savedAt: 't2', doc: edited, dirty: false }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new ArrayBuffer(0) }, false);
+    await writeSnapshot(db, { savedAt: 't2', doc: edited, dirty: false }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new Blob([]) }, false);
     const snap = await readSnapshot(db);
     expect(snap?.doc).toEqual(edited);
     expect(snap?.dirty).toBe(false);
     expect(snap?.savedAt).toBe('t2');
-    expect(new Uint8Array(snap!.scan!.bytes)).toEqual(Uint8Array.from([1, 2, 3, 4, 5]));
+    // Kept as a Blob (the browser holds its bytes, not the page).
+    expect(snap!.scan!.bytes).toBeInstanceOf(Blob);
+    expect(new Uint8Array(await snap!.scan!.bytes.arrayBuffer())).toEqual(Uint8Array.from([1, 2, 3, 4, 5]));
   });
 
   it('drops the scan when the document no longer has one, and clears on "Start fresh"', async () => {
     const db = await openAutosaveDb(new IDBFactory());
     const doc = { ...sampleDoc(), scan: { id: 's1', name: 'a.png', widthPx: 2, heightPx: 2, type: 'image/png' } };
-    await writeSnapshot(db, { savedAt: 't', doc, dirty: true }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new ArrayBuffer(3) }, true);
+    await writeSnapshot(db, { savedAt: 't', doc, dirty: true }, { id: 's1', type: 'image/png', name: 'a.png', bytes: new Blob([new Uint8Array(3)]) }, true);
     await writeSnapshot(db, { savedAt: 't', doc: sampleDoc(), dirty: true }, null, false);
     expect((await readSnapshot(db))?.scan).toBeNull();
     await clearSnapshot(db);
