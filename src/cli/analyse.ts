@@ -14,6 +14,16 @@ import { toJsonReport } from './toJsonReport';
 
 const USAGE = 'usage: analyse FILE [--json] [--scenario NAME]';
 
+/** What --help prints: the usage and the rules a user of the table needs (docs/method.md). */
+const HELP = `${USAGE}
+  FILE             a section file, a section under "section", or the app's project file
+  --json           the JSON report (src/cli/README.md) instead of the table
+  --scenario NAME  the scenario of a project file to analyse (default its active one)
+Chamberlin depth is "not meaningful" when the bed-length shortening |L - W| is below the digitising
+resolution: the file's "resolution" (the app writes the one it used: one scan pixel), else 1e-4 of the
+pin width (docs/method.md, Digitising resolution).
+`;
+
 function fail(message: string): never {
   process.stderr.write(`analyse: ${terminalText(message.replace(/\s+/g, ' '))}\n`);
   process.exit(2);
@@ -21,6 +31,10 @@ function fail(message: string): never {
 
 function main(argv: string[]): void {
   const args = argv.filter((a) => a !== '--');
+  if (args.includes('--help') || args.includes('-h')) {
+    process.stdout.write(HELP);
+    return;
+  }
   const json = args.includes('--json');
   let scenario: string | undefined;
   const files: string[] = [];

@@ -5,6 +5,7 @@ import { isExactFit } from '../core/analysis/isExactFit';
 import { EXACT_FIT_TEXT, formatArea, formatInterval, formatNumber as num, formatR2 } from '../format/formatQuantity';
 import { maxOf } from '../core/stats/minMax';
 import { columnHeader, columnsOf, screenCell, tableAreaUnit } from '../format/horizonColumns';
+import { analysisNotes } from '../format/analysisNotes';
 
 // The terminal writes numbers by the one rule of src/format (as the screen, the figure and the report do).
 
@@ -50,7 +51,7 @@ export function formatTable(a: SectionAnalysis, source: string | null = null): s
     out.push('Area–depth line: none (see notes).');
   }
   out.push('', 'Notes:');
-  for (const n of [...a.notes, SECTION_CAUTION]) out.push(`  - ${terminalText(n)}`);
+  for (const n of [...analysisNotes(a), SECTION_CAUTION]) out.push(`  - ${terminalText(n)}`);
   out.push('');
   return out.join('\n');
 }

@@ -1,6 +1,7 @@
 import type { Regime, SectionAnalysis } from '../core/analysis/analyseSection';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { jsonHorizon, type JsonHorizon } from '../format/horizonColumns';
+import { analysisNotes } from '../format/analysisNotes';
 
 /** The --json report (src/cli/README.md §JSON report), keys exactly as listed there; non-finite numbers become null; the caution ends the notes. */
 export interface JsonReport {
@@ -31,6 +32,6 @@ export function toJsonReport(a: SectionAnalysis): JsonReport {
       detachmentDepthCI95: d.detachmentDepthCI95, displacementCI95: d.displacementCI95,
     },
     regime: a.regime,
-    notes: [...a.notes, SECTION_CAUTION],
+    notes: [...analysisNotes(a), SECTION_CAUTION],
   };
 }

@@ -27,13 +27,16 @@ export function minusSign(text: string): string {
 export function formatNumber(v: number | null | undefined, digits = 4): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';
   if (v === 0) return '0';
-  if (Math.abs(v) >= 1e9) {
-    const [m, e] = v.toExponential(Math.max(0, digits - 1)).split('e');
-    return minusSign(`${trimZeros(m)}e${Number(e)}`);
-  }
+  if (Math.abs(v) >= 1e9) return exponentForm(v, digits);
   const mag = Math.floor(Math.log10(Math.abs(v)));
   const decimals = Math.max(0, Math.min(6, digits - 1 - mag));
   return minusSign(trimZeros(v.toFixed(decimals)));
+}
+
+/** v in exponent form with `digits` significant figures, trailing zeros dropped, the minus sign U+2212 ("3.7e10", "2e−6"). */
+function exponentForm(v: number, digits: number): string {
+  const [m, e] = v.toExponential(Math.max(0, digits - 1)).split('e');
+  return minusSign(`${trimZeros(m)}e${Number(e)}`);
 }
 
 function trimZeros(text: string): string {
@@ -44,6 +47,15 @@ function trimZeros(text: string): string {
 export function formatLength(v: number | null | undefined, units: string, digits = 4): string {
   const n = formatNumber(v, digits);
   return n === '—' ? n : `${n} ${units}`;
+}
+
+/**
+ * Returns a length that must be seen however small it is (a shortening far below the digitising resolution)
+ * with its unit: as formatLength, but below 10⁻³ units in exponent form instead of rounding to "0" ("2e−6 m").
+ */
+export function formatSmallLength(v: number, units: string, digits = 2): string {
+  if (Number.isFinite(v) && v !== 0 && Math.abs(v) < 1e-3) return `${exponentForm(v, digits)} ${units}`;
+  return formatLength(v, units, digits);
 }
 
 /** The display unit of a set of areas: multiply by `factor` and write `label`. */
@@ -114,7 +126,7 @@ export function formatFixed(v: number, decimals: number): string {
 }
 
 /** Returns a horizon's Chamberlin depth as a number, "not meaningful" when its shortening is below the digitising resolution, else "—". */
-export function formatChamberlin(h: { chamberlinDepth: number | null; chamberlinReason: string | null }): string {
+export function formatChamberlin(h: { chamberlinDepth: number | null; chamberlinReason: { kind: string } | null }): string {
   if (h.chamberlinDepth !== null) return formatNumber(h.chamberlinDepth);
-  return h.chamberlinReason?.startsWith('not meaningful') ? 'not meaningful' : '—';
+  return h.chamberlinReason?.kind === 'not-meaningful' ? 'not meaningful' : '—';
 }

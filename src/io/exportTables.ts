@@ -14,6 +14,7 @@ import { toCsv } from './csvText';
 import { columnsOf, csvHeader, dataCell } from '../format/horizonColumns';
 import type { UncertaintyReport } from './uncertaintyReport';
 import { leftOutText } from '../format/leftOutText';
+import { analysisNotes } from '../format/analysisNotes';
 
 /** Returns every horizon of the document in section units, a horizon cut by faults with its pieces (empty when the document has no usable calibration). */
 export function docHorizonsInSection(doc: ProjectDoc): ImportedHorizon[] {
@@ -35,13 +36,12 @@ export function docFaultsInSection(doc: ProjectDoc): ImportedFault[] {
   return doc.faults.filter((f) => f.pointsPx.length >= 2).map((f) => ({ name: f.name, line: f.pointsPx.map((p) => imageToSection(fit, p)) }));
 }
 
-/** Returns the section with every coordinate, pin and reference rounded to 1e-6 unit (cleanCoordinate), for writing to a file. */
+/** Returns the section with every coordinate, pin and reference rounded to 1e-6 unit (cleanCoordinate), for writing to a file; the resolution is kept as used (digitisingResolution already gives six figures). */
 export function cleanSection(section: Section): Section {
   return {
     ...section,
     pins: [cleanCoordinate(section.pins[0]), cleanCoordinate(section.pins[1])],
     ...(section.referenceElevation !== undefined ? { referenceElevation: cleanCoordinate(section.referenceElevation) } : {}),
-    ...(section.resolution !== undefined ? { resolution: Number(section.resolution.toPrecision(6)) } : {}),
     horizons: section.horizons.map((h) => ({
       ...h,
       ...(h.line ? { line: h.line.map(cleanPoint) } : {}),
@@ -97,7 +97,7 @@ export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: 
   }
   // A horizon left out for a problem of its own (a line that crosses itself, a regional short of a pin), as the pane says.
   for (const h of analysis.leftOut) rows.push(['# left out', leftOutText(h)]);
-  for (const n of a.notes) rows.push(['# note', n]);
+  for (const n of analysisNotes(a)) rows.push(['# note', n]);
   rows.push(['# caution', SECTION_CAUTION]);
   return toCsv(rows);
 }

@@ -8,12 +8,15 @@ import { crossingVerdictsVersion } from '../core/geometry/crossingVerdicts';
 import { createPreparationBuffer } from '../core/analysis/preparationBuffer';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
 
-// docToSection reads the scenario, the horizons, the faults, the calibration and the units and nothing
-// else, so the result is memoised on those five objects: editing one scenario (or undoing to a document that
-// shares them) does not re-analyse the others.
+// docToSection reads the scenario, the horizons, the faults, the calibration, the units, the stated
+// resolution and whether there is a scan (digitisingResolution), and nothing else, so the result is memoised
+// on those: editing one scenario (or undoing to a document that shares them) does not re-analyse the others.
 // A self-crossing verdict that arrives from the worker (crossingChecks.ts) changes the result too: it is remembered
 // with the verdicts' version.
-interface Entry { horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units']; verdicts: number; result: DocAnalysis }
+interface Entry {
+  horizons: ProjectDoc['horizons']; faults: ProjectDoc['faults']; calibration: ProjectDoc['calibration']; units: ProjectDoc['units'];
+  resolution: ProjectDoc['resolution']; scanned: boolean; verdicts: number; result: DocAnalysis;
+}
 const cache = new WeakMap<Scenario, Entry>();
 // The page analyses again on every edit; its one reusable buffer for the engine's passing points (the
 // analyses here run one at a time and keep only numbers and fresh arrays).
@@ -24,9 +27,10 @@ export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysi
   const scenario = activeScenario(doc, scenarioId);
   const hit = scenario ? cache.get(scenario) : undefined;
   const verdicts = crossingVerdictsVersion();
-  if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units && hit.verdicts === verdicts) return hit.result;
+  if (hit && hit.horizons === doc.horizons && hit.faults === doc.faults && hit.calibration === doc.calibration && hit.units === doc.units
+    && hit.resolution === doc.resolution && hit.scanned === (doc.scan !== null) && hit.verdicts === verdicts) return hit.result;
   const result = analyseDoc(doc, scenarioId, analysisBuffer);
-  if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, verdicts, result });
+  if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, resolution: doc.resolution, scanned: doc.scan !== null, verdicts, result });
   return result;
 }
 

@@ -48,6 +48,12 @@ describe('analyse FILE --json', () => {
     expect(j.notes.some((n: string) => n.includes('licensed professional'))).toBe(true);
   }, T);
 
+  it('--help prints the usage and the stated resolution rule, exit code 0', () => {
+    const r = analyse('--help');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/^usage: analyse FILE \[--json\] \[--scenario NAME\]/);
+    expect(r.stdout).toContain('else 1e-4 of the\npin width');
+  }, T);
   it('accepts a section embedded under "section"', () => {
     const a = analyse(writeCase('embedded', { section: example() }), '--json');
     const b = analyse(join(fixtures, 'method-example.json'), '--json');

@@ -98,6 +98,7 @@ function sameExceptRegionals(doc: ProjectDoc, start: ProjectDoc, base: DocGestur
   const s = activeScenario(doc);
   const b = base.scenario;
   if (doc.horizons !== start.horizons || doc.faults !== start.faults || doc.calibration !== start.calibration || doc.units !== start.units || s.id !== b.id) return false;
+  if (doc.resolution !== start.resolution || (doc.scan === null) !== (start.scan === null)) return false;
   if (s.pinsPx !== b.pinsPx || s.excluded !== b.excluded || s.referenceElevation !== b.referenceElevation) return false;
   // The same horizons must have a regional (docToSection skips the others).
   return doc.horizons.every((h) => (s.regionals[h.id]?.length >= 2) === (b.regionals[h.id]?.length >= 2));

@@ -2,7 +2,7 @@ import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit, Section } from '../model/section';
 import type { Regime } from './detachmentOfLine';
 import type { SectionProblem } from '../model/validateSection';
-import { chamberlinDepth } from './chamberlinDepth';
+import { chamberlinDepth, type ChamberlinReason } from './chamberlinDepth';
 import { fitAreaDepth, type AreaDepthResult } from './fitAreaDepth';
 import { layerParallelStrain } from './layerParallelStrain';
 import type { PreparationBuffer } from './preparationBuffer';
@@ -12,12 +12,13 @@ export type { SectionProblem, SectionProblemCode } from '../model/validateSectio
 export type { AreaDepthResult } from './fitAreaDepth';
 export type { Cutoff } from '../model/joinPieces';
 export type { Regime } from './detachmentOfLine';
+export type { ChamberlinReason } from './chamberlinDepth';
 
 export interface HorizonResult {
   name: string; included: boolean; excessArea: number; bedLength: number; regionalLength: number;
   regionalElevation: number; depth: number; chamberlinDepth: number | null;
-  /** Why there is no Chamberlin depth (L ≤ W, or a shortening below the digitising resolution); null when there is one. */
-  chamberlinReason: string | null;
+  /** Why there is no Chamberlin depth (L ≤ W, or a shortening below the digitising resolution), as data; null when there is one. */
+  chamberlinReason: ChamberlinReason | null;
   lpsStrain: number | null;
   projectedAreaShare: number; projectedLength: number; residual: number | null;
   /** Number of pieces (1 for an unbroken line) and the cutoff pairs between them (empty for one piece). */
@@ -26,7 +27,9 @@ export interface HorizonResult {
 
 export interface SectionAnalysis {
   units: LengthUnit; pinWidth: number; referenceElevation: number;
-  horizons: HorizonResult[]; areaDepth: AreaDepthResult | null; notes: string[];
+  horizons: HorizonResult[]; areaDepth: AreaDepthResult | null;
+  /** The engine's notes in words; the Chamberlin reasons are data on the horizons, and src/format/analysisNotes.ts shows both. */
+  notes: string[];
   /** Shortening or extension from the area–depth line; null when there is no detachment below the horizons. */
   regime: Regime | null;
 }
@@ -55,7 +58,7 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
   const residuals = new Map(fitIdx.map((i, k) => [i, area.fit ? area.fit.residuals[k] : null]));
   const notes = [...area.notes];
   const horizons = p.horizons.map((h, i): HorizonResult => {
-    const chamberlin = chamberlinDepth(h.excessArea, h.bedBeyond - h.regionalBeyond, p.resolution, p.units);
+    const chamberlin = chamberlinDepth(h.excessArea, h.bedBeyond - h.regionalBeyond, p.resolution);
     if (h.projectedLength > 0) {
       notes.push(`Horizon "${h.name}": ${(100 * h.projectedAreaShare).toFixed(1)}% of its excess area and ${round(h.projectedLength)} ${p.units} of its bed length are projected (interpreted); treat its values as projected, not measured.`);
     }
@@ -69,10 +72,6 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
       pieces: h.pieces, cutoffs: h.cutoffs,
     };
   });
-  // One note per reason, naming its horizons.
-  const byReason = new Map<string, string[]>();
-  for (const h of horizons) if (h.chamberlinReason !== null) byReason.set(h.chamberlinReason, [...(byReason.get(h.chamberlinReason) ?? []), `"${h.name}"`]);
-  for (const [reason, names] of byReason) notes.push(`No Chamberlin depth for ${names.join(', ')}: ${reason}.`);
   return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes, regime: ad ? ad.regime : null };
 }
 

@@ -4,11 +4,20 @@
 // quotient holds; it is undefined when L = W or when A and L − W have opposite signs.
 // L − W is a small difference of two long sums, so the caller forms it without cancellation
 // (lengthBeyondSpan of the line less that of the regional). When it is positive but below what the
-// digitising resolves, H = A / (L − W) is noise — a 1 mm bump over 10 km gives about 10¹⁰ m — so no depth is
-// given and the reason says why.
+// digitising resolves (digitisingResolution), H = A / (L − W) is noise — a 1 mm bump over 10 km gives about
+// 10¹⁰ m — so no depth is given and the reason says why. The reason is data (its numbers, not text), so the
+// one number rule writes it wherever it is shown (src/format/chamberlinReasonText.ts).
+
+/** Why a horizon has no Chamberlin depth; `not-meaningful` carries |L − W| and the resolution (section units). */
+export type ChamberlinReason =
+  | { kind: 'not-finite' }
+  | { kind: 'equal-lengths' }
+  | { kind: 'longer-but-lost' }
+  | { kind: 'shorter-but-lifted' }
+  | { kind: 'not-meaningful'; shortening: number; resolution: number };
 
 /** The Chamberlin depth of a horizon, or why there is none. */
-export type ChamberlinResult = { depth: number; reason: null } | { depth: null; reason: string };
+export type ChamberlinResult = { depth: number; reason: null } | { depth: null; reason: ChamberlinReason };
 
 /**
  * Returns H = A / (L − W) (section units) from the excess area A (units²) and the bed-length shortening
@@ -16,27 +25,12 @@ export type ChamberlinResult = { depth: number; reason: null } | { depth: null; 
  * of the opposite sign to A, when |L − W| is below `resolution` (the smallest length the digitising
  * resolves, units), or when an input is not finite.
  */
-export function chamberlinDepth(excessArea: number, shortening: number, resolution = 0, units = ''): ChamberlinResult {
-  if (!Number.isFinite(excessArea) || !Number.isFinite(shortening)) return { depth: null, reason: 'its lengths or area are not finite numbers' };
-  if (shortening === 0) return { depth: null, reason: 'bed length equals regional length' };
+export function chamberlinDepth(excessArea: number, shortening: number, resolution = 0): ChamberlinResult {
+  if (!Number.isFinite(excessArea) || !Number.isFinite(shortening)) return { depth: null, reason: { kind: 'not-finite' } };
+  if (shortening === 0) return { depth: null, reason: { kind: 'equal-lengths' } };
   if (excessArea !== 0 && Math.sign(excessArea) !== Math.sign(shortening)) {
-    return { depth: null, reason: shortening > 0
-      ? 'the bed is longer than its regional but the area is lost below it'
-      : 'the bed is shorter than its regional but the area is lifted above it' };
+    return { depth: null, reason: { kind: shortening > 0 ? 'longer-but-lost' : 'shorter-but-lifted' } };
   }
-  if (Math.abs(shortening) < resolution) {
-    const u = units ? ` ${units}` : '';
-    return { depth: null, reason: `not meaningful: the bed is only ${short(Math.abs(shortening))}${u} ${shortening > 0 ? 'longer' : 'shorter'} than its regional, less than the ${short(resolution)}${u} the digitising resolves` };
-  }
+  if (Math.abs(shortening) < resolution) return { depth: null, reason: { kind: 'not-meaningful', shortening, resolution } };
   return { depth: excessArea / shortening, reason: null };
-}
-
-/**
- * Two significant figures of a positive length, in exponent form outside 10⁻³ … 10⁶ ("2.5", "2e−6"), written as
- * src/format/formatQuantity.ts writes numbers: trailing zeros dropped, the minus sign U+2212.
- */
-function short(v: number): string {
-  if (v >= 1e-3 && v < 1e6) return String(Number(v.toPrecision(2)));
-  const [m, e] = v.toExponential(1).split('e');
-  return `${Number(m)}e${Number(e)}`.replace('-', '\u2212');
 }

@@ -1,4 +1,5 @@
-import { DEFAULT_RESOLUTION, type LengthUnit, type Section } from '../model/section';
+import { digitisingResolution } from '../model/digitisingResolution';
+import type { LengthUnit, Section } from '../model/section';
 import { validateSectionArrays, type Allocate, type SectionProblem } from '../model/validateSection';
 import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
 import type { PreparationBuffer } from './preparationBuffer';
@@ -22,7 +23,7 @@ export interface PreparedSection {
   areas: Float64Array;
   regionalElevations: Float64Array;
   included: Uint8Array;
-  /** The smallest length the digitising resolves (units; Section.resolution, else DEFAULT_RESOLUTION). */
+  /** The smallest length the digitising resolves (units): digitisingResolution of the section's stated one and W₀. */
   resolution: number;
 }
 
@@ -91,7 +92,7 @@ function prepare(section: Section, options: PrepareOptions, buffer: PreparationB
       units: s.units, pins: s.pins, pinWidth: s.pins[1] - s.pins[0],
       referenceElevation: option ?? s.referenceElevation ?? highest,
       horizons, areas, regionalElevations, included,
-      resolution: section.resolution !== undefined && Number.isFinite(section.resolution) && section.resolution > 0 ? section.resolution : DEFAULT_RESOLUTION,
+      resolution: digitisingResolution({ stated: s.resolution, pinWidth: s.pins[1] - s.pins[0] }),
     },
   };
 }

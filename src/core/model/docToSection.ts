@@ -6,6 +6,7 @@ import { nearestOnPolyline } from '../geometry/nearestOnPolyline';
 import { selfIntersections } from '../geometry/selfIntersections';
 import type { DocFault, DocHorizon, ProjectDoc, Scenario } from './projectDoc';
 import type { Section, SectionFault, SectionHorizon, XZ } from './section';
+import { digitisingResolution } from './digitisingResolution';
 import { ON_FAULT_TOLERANCE } from './validateSectionArrays';
 
 export interface SkippedHorizon { id: string; name: string; reason: string }
@@ -66,8 +67,12 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
     units: doc.units,
     pins: [Math.min(pl, pr), Math.max(pl, pr)],
     horizons,
-    // One scan pixel: the digitising resolves no finer length change.
-    resolution: Math.max(Math.abs(fit.unitsPerPxX), Math.abs(fit.unitsPerPxZ)),
+    // The one rule (digitisingResolution): the stated resolution and one scan pixel, else a share of W₀.
+    resolution: digitisingResolution({
+      stated: doc.resolution,
+      scanPixel: doc.scan ? Math.max(Math.abs(fit.unitsPerPxX), Math.abs(fit.unitsPerPxZ)) : undefined,
+      pinWidth: pr - pl,
+    }),
     ...(scenario.referenceElevation !== undefined ? { referenceElevation: scenario.referenceElevation } : {}),
     ...(faults.length ? { faults } : {}),
   };

@@ -101,6 +101,11 @@ export interface ProjectDoc {
   scenarios: Scenario[];
   activeScenarioId: string;
   settings: ProjectSettings;
+  /**
+   * The digitising resolution (section units) a section file stated, kept when the app opened that file;
+   * absent otherwise. docToSection takes the coarser of it and one scan pixel (digitisingResolution).
+   */
+  resolution?: number;
 }
 
 export type { XZ };

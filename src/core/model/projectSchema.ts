@@ -73,6 +73,7 @@ const docShape = {
   scenarios: z.array(scenario).min(1).max(PROJECT_LIMITS.scenarios),
   activeScenarioId: id,
   settings: z.looseObject(settingsShape),
+  resolution: num.positive().optional(),
 };
 
 /** The zod schema of a current project document; unknown keys are kept (loose) so newer optional fields survive. */

@@ -36,9 +36,9 @@ export interface Section {
   /** Reference elevation for depths; default the highest regional elevation. */
   referenceElevation?: number;
   /**
-   * The smallest length the digitising resolves (units): one scan pixel for a section digitised in the app;
-   * default DEFAULT_RESOLUTION, the grid section files store coordinates on. A bed-length shortening below it
-   * gives no Chamberlin depth.
+   * The smallest length the digitising resolves (units, positive); a bed-length shortening below it gives no
+   * Chamberlin depth. The app writes the one it used (digitisingResolution: one scan pixel for lines
+   * digitised on a scan); left out, 10⁻⁴ of the pin width (docs/method.md §Digitising resolution).
    */
   resolution?: number;
   horizons: SectionHorizon[];
@@ -56,6 +56,3 @@ export interface LineSection extends Section { horizons: LineHorizon[] }
 export function horizonPieces(h: SectionHorizon): XZ[][] {
   return h.pieces ?? (h.line ? [h.line] : []);
 }
-
-/** Section files store coordinates on a grid of 10⁻⁶ units: no length change below it is digitised. */
-export const DEFAULT_RESOLUTION = 1e-6;

@@ -33,6 +33,7 @@ export function validateSection(input: unknown): SectionValidation {
   const section: Section = { units: s.units, pins: s.pins, horizons };
   if (s.faults.length > 0) section.faults = s.faults.map((f): SectionFault => ({ name: f.name, line: toPoints(f.xs, f.zs) }));
   if (s.referenceElevation !== undefined) section.referenceElevation = s.referenceElevation;
+  if (s.resolution !== undefined) section.resolution = s.resolution;
   return { ok: true, section };
 }
 

@@ -14,6 +14,8 @@ export interface SectionArrays {
   units: LengthUnit;
   pins: [number, number];
   referenceElevation?: number;
+  /** The digitising resolution the file states (units, positive), if it states one. */
+  resolution?: number;
   horizons: HorizonArrays[];
   /** The faults as given (empty when the file has none). */
   faults: FaultArrays[];
@@ -70,6 +72,10 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
   if (ref !== undefined && (typeof ref !== 'number' || !Number.isFinite(ref))) {
     out.push({ code: typeof ref === 'number' ? 'not-finite' : 'bad-shape', message: 'Section: "referenceElevation" must be a finite number; fix it or leave it out.' });
   }
+  const resolution = input.resolution;
+  if (resolution !== undefined && (typeof resolution !== 'number' || !Number.isFinite(resolution) || resolution <= 0)) {
+    out.push({ code: typeof resolution === 'number' && !Number.isFinite(resolution) ? 'not-finite' : 'bad-shape', message: 'Section: "resolution" must be a positive number, the smallest length the digitising resolves in the section\'s units; fix it or leave it out.' });
+  }
   if (!Array.isArray(input.horizons)) {
     out.push({ code: 'bad-shape', message: 'Section: "horizons" must be an array of horizons; add it (it may be empty).' });
     return { ok: false, problems: out };
@@ -99,6 +105,7 @@ export function validateSectionArrays(input: unknown, allocate: Allocate = newAr
   if (out.length > 0 || !pins || !faults) return { ok: false, problems: out };
   const section: SectionArrays = { units: units as LengthUnit, pins, horizons, faults };
   if (typeof ref === 'number') section.referenceElevation = ref;
+  if (typeof resolution === 'number') section.resolution = resolution;
   return { ok: true, section };
 }
 

@@ -19,6 +19,7 @@ import { ReportHorizonTable } from './ReportHorizonTable';
 import { regimeText } from '../interpretation/regimeText';
 import { tableAreaUnit } from '../../format/horizonColumns';
 import { leftOutText } from '../../format/leftOutText';
+import { analysisNotes } from '../../format/analysisNotes';
 import { useCrossingChecks } from '../../state/crossingChecks';
 import { afterLinesChecked } from '../../state/linesChecked';
 
@@ -42,6 +43,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
   const answered = useCrossingChecks((s) => s.answered);
   const analysis = selectAnalysis(doc);
   const result = analysis.outcome && analysis.outcome.ok ? analysis.outcome.analysis : null;
+  const notes = result ? analysisNotes(result) : [];
   const [figure, setFigure] = useState<Blob | null>(null);
   useEffect(() => {
     let live = true;
@@ -114,7 +116,7 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
             its bed length counts the pieces only, and the table gives each cutoff pair’s fault, slip (along the fault), heave and throw.
           </p>
         )}
-        {result && result.notes.length > 0 && <ul className="report-notes">{result.notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}
+        {notes.length > 0 && <ul className="report-notes">{notes.map((n, i) => <li key={i}>{n}</li>)}</ul>}
         <div className="report-figures">
           {graphUrl && <img src={graphUrl} alt="Area–depth graph" className="report-graph" />}
         </div>

@@ -11,6 +11,7 @@ import { resultsTsv } from './resultsTsv';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import { summaryRows } from './summaryRows';
 import { chamberlinNote, STRAIN_SIGN_TEXT } from '../../format/chamberlinNote';
+import { chamberlinReasonText } from '../../format/chamberlinReasonText';
 
 interface Props {
   analysis: SectionAnalysis;
@@ -75,7 +76,7 @@ export function HorizonTable({ analysis, horizonIds, flagged, onToggle, initialA
                         <span className="name-text">{h.name}</span>
                       </label>
                     </td>)
-                  : <td key={c.key} title={c.key === 'chamberlinDepth' ? h.chamberlinReason ?? undefined : undefined}>{screenCell(c, h, unit)}</td>)}
+                  : <td key={c.key} title={c.key === 'chamberlinDepth' && h.chamberlinReason ? chamberlinReasonText(h.chamberlinReason, u) : undefined}>{screenCell(c, h, unit)}</td>)}
               </tr>
             ))}
           </tbody>

@@ -2,6 +2,7 @@ import type { AnalysisOutcome } from '../../core/analysis/analyseSection';
 import type { DocSection } from '../../core/model/docToSection';
 import type { LeftOutHorizon } from '../../core/analysis/analyseDocSection';
 import { leftOutText } from '../../format/leftOutText';
+import { analysisNotes } from '../../format/analysisNotes';
 
 // What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
 // called a poor fit: our threshold, a common rule of thumb for area–depth lines.
@@ -31,7 +32,7 @@ export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | n
     if (ad.n >= 3 && ad.r2 < POOR_FIT_R2) out.push({ level: 'warning', text: `Poor fit: r² = ${ad.r2.toFixed(3)}. The points scatter about one straight line; look at the flagged horizons, or fit a subset or a second segment.` });
     if (ad.detachmentDepthInterval.kind === 'unbounded') out.push({ level: 'warning', text: 'The 95% interval on the detachment depth is unbounded: the slope is not clearly different from zero, so the data do not pin the depth down.' });
   }
-  for (const note of a.notes) {
+  for (const note of analysisNotes(a)) {
     if (/projected|Chamberlin|above the deepest/.test(note)) out.push({ level: 'info', text: note });
   }
   return out;

@@ -4,13 +4,16 @@ import { layerParallelStrain } from '../../../src/core/analysis/layerParallelStr
 import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { lengthBeyondSpan } from '../../../src/core/geometry/lengthBeyondSpan';
 import type { Section } from '../../../src/core/model/section';
+import { analysisNotes } from '../../../src/format/analysisNotes';
+import { chamberlinReasonText } from '../../../src/format/chamberlinReasonText';
 
 describe('chamberlinDepth(A, L − W, resolution)', () => {
-  it('writes a tiny shortening in its reason as the one number rule does: "2e−6", with U+2212 and no trailing zero', () => {
+  it('gives the reason as data and the one number rule writes it: "2e−6", with U+2212 and no trailing zero', () => {
     // A 1 mm bump 1 m wide: L − W = 2·(√(0.5² + 0.001²) − 0.5) ≈ 2.0e-6 m (Pythagoras), far below a 6.4 m resolution.
-    const r = chamberlinDepth(5e-4, 2 * (Math.hypot(0.5, 0.001) - 0.5), 6.4, 'm');
-    expect(r.depth).toBeNull();
-    expect(r.reason).toBe('not meaningful: the bed is only 2e\u22126 m longer than its regional, less than the 6.4 m the digitising resolves');
+    const shortening = 2 * (Math.hypot(0.5, 0.001) - 0.5);
+    const r = chamberlinDepth(5e-4, shortening, 6.4);
+    expect(r).toEqual({ depth: null, reason: { kind: 'not-meaningful', shortening, resolution: 6.4 } });
+    expect(chamberlinReasonText(r.reason!, 'm')).toBe('not meaningful: the bed is only 2e\u22126 m longer than its regional, less than the 6.4 m the digitising resolves');
   });
 
   it('is A / (L − W)', () => {
@@ -23,14 +26,17 @@ describe('chamberlinDepth(A, L − W, resolution)', () => {
     expect(chamberlinDepth(-2e6, 9_000 - 10_000)).toEqual({ depth: 2000, reason: null });
   });
   it('gives no depth, with the reason, when L = W, when A and L − W differ in sign, when |L − W| is below the resolution, or an input is not finite', () => {
-    expect(chamberlinDepth(1e6, 0).reason).toBe('bed length equals regional length');
-    expect(chamberlinDepth(1e6, -1000)).toEqual({ depth: null, reason: 'the bed is shorter than its regional but the area is lifted above it' });
-    expect(chamberlinDepth(-1e6, 1000)).toEqual({ depth: null, reason: 'the bed is longer than its regional but the area is lost below it' });
-    expect(chamberlinDepth(-5, -2.5e-10, 2.5, 'm').reason).toBe('not meaningful: the bed is only 2.5e\u221210 m shorter than its regional, less than the 2.5 m the digitising resolves');
-    expect(chamberlinDepth(Number.NaN, 1000).depth).toBeNull();
-    const tiny = chamberlinDepth(5, 2.5e-10, 2.5, 'm');
-    expect(tiny.depth).toBeNull();
-    expect(tiny.reason).toMatch(/^not meaningful: the bed is only 2\.5e\u221210 m longer than its regional, less than the 2\.5 m the digitising resolves$/);
+    expect(chamberlinDepth(1e6, 0)).toEqual({ depth: null, reason: { kind: 'equal-lengths' } });
+    expect(chamberlinDepth(1e6, -1000)).toEqual({ depth: null, reason: { kind: 'shorter-but-lifted' } });
+    expect(chamberlinDepth(-1e6, 1000)).toEqual({ depth: null, reason: { kind: 'longer-but-lost' } });
+    expect(chamberlinDepth(Number.NaN, 1000)).toEqual({ depth: null, reason: { kind: 'not-finite' } });
+    const shorter = chamberlinDepth(-5, -2.5e-10, 2.5);
+    expect(chamberlinReasonText(shorter.reason!, 'm')).toBe('not meaningful: the bed is only 2.5e\u221210 m shorter than its regional, less than the 2.5 m the digitising resolves');
+    const longer = chamberlinDepth(5, 2.5e-10, 2.5);
+    expect(longer.depth).toBeNull();
+    expect(chamberlinReasonText(longer.reason!, 'ft')).toBe('not meaningful: the bed is only 2.5e\u221210 ft longer than its regional, less than the 2.5 ft the digitising resolves');
+    // At the resolution itself the shortening is resolved: the rule is |L − W| < resolution.
+    expect(chamberlinDepth(5, 2.5, 2.5)).toEqual({ depth: 2, reason: null });
   });
 });
 
@@ -65,8 +71,9 @@ describe('Chamberlin depth of a nearly flat bed', () => {
     const h = out.analysis.horizons[0];
     expect(h.excessArea).toBeCloseTo(1e-3 * 10_000 / 2, 9);
     expect(h.chamberlinDepth).toBeNull();
-    expect(h.chamberlinReason).toMatch(/^not meaningful: the bed is only 2\.5e\u221210 m longer than its regional, less than the 1e\u22126 m the digitising resolves$/);
-    expect(out.analysis.notes.some((n) => n.startsWith('No Chamberlin depth for "Bump": not meaningful'))).toBe(true);
+    // No resolution stated: 10⁻⁴ of the 10 km pin width, 1 m (digitisingResolution).
+    expect(chamberlinReasonText(h.chamberlinReason!, 'm')).toBe('not meaningful: the bed is only 2.5e\u221210 m longer than its regional, less than the 1 m the digitising resolves');
+    expect(analysisNotes(out.analysis)).toContain('No Chamberlin depth for "Bump": not meaningful: the bed is only 2.5e\u221210 m longer than its regional, less than the 1 m the digitising resolves.');
   });
 
   it('a bump large enough to digitise keeps its depth A / (L − W) from the same sums', () => {

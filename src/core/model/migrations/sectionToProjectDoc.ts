@@ -54,7 +54,9 @@ export function sectionToProjectDoc(section: Section, title = 'Section'): Projec
     excluded: section.horizons.flatMap((h, i) => (h.include === false ? [horizons[i].id] : [])),
     ...(section.referenceElevation !== undefined ? { referenceElevation: section.referenceElevation } : {}),
   };
-  return { ...doc, title, units: section.units, calibration, horizons, faults, scenarios: [scenario] };
+  // The canvas is no scan: a resolution the file states is kept, else the one rule falls back on W₀ (digitisingResolution).
+  const stated = section.resolution !== undefined && Number.isFinite(section.resolution) && section.resolution > 0 ? { resolution: section.resolution } : {};
+  return { ...doc, title, units: section.units, calibration, horizons, faults, scenarios: [scenario], ...stated };
 }
 
 /** The joins of a horizon in pieces: one where each piece after the first starts, on the named fault or the first one both ends lie on (a validated section has one). */
