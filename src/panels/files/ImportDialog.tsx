@@ -2,7 +2,8 @@
 // and for SVG the two reference points that place the drawing in the section.
 import { docLimitProblem } from '../../core/model/docLimitProblem';
 import { useMemo, useState } from 'react';
-import { importHorizons, type ImportedHorizon } from '../../core/model/commands/importHorizons';
+import { importHorizons, type ImportedFault, type ImportedHorizon } from '../../core/model/commands/importHorizons';
+import { importedCoordinateProblem } from '../../core/model/importedCoordinateProblem';
 import type { LengthUnit } from '../../core/model/section';
 import { svgToSectionAxes } from '../../io/svgHorizons';
 import { fitViewToDoc } from '../../state/projectActions';
@@ -62,11 +63,17 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
   const [ref2, setRef2] = useState<Ref>(() => (svgBox ? { sx: String(svgBox[2]), sy: String(svgBox[1]), x: String(svgBox[2] - svgBox[0]), z: String(svgBox[3] - svgBox[1]) } : { sx: '', sy: '', x: '', z: '' }));
   const mapped = useMemo((): { ok: true; horizons: ImportedHorizon[] } | { ok: false; message: string } => {
     if (!pending.result.ok) return { ok: false, message: pending.result.message };
-    if (pending.kind !== 'svg') return { ok: true, horizons: pending.result.horizons };
+    // The same coordinate range as a section file (core/model/limits.ts), before anything reaches the document.
+    const inRange = (r: { ok: true; horizons: ImportedHorizon[] }, faults: readonly ImportedFault[] = []) => {
+      const far = importedCoordinateProblem(r.horizons) ?? importedCoordinateProblem(faults, 'Fault');
+      return far ? { ok: false as const, message: `Nothing can be imported from ${pending.fileName}: ${far}.` } : r;
+    };
+    if (pending.kind !== 'svg') return inRange({ ok: true, horizons: pending.result.horizons }, pending.result.faults);
     const num = (r: Ref) => ({ svg: [Number(r.sx), Number(r.sy)] as [number, number], section: [Number(r.x), Number(r.z)] as [number, number] });
     const bad = [ref1, ref2].some((r) => Object.values(r).some((v) => v.trim() === ''));
     if (bad) return { ok: false, message: 'Enter all eight numbers of the two reference points.' };
-    return svgToSectionAxes(pending.result.lines, [num(ref1), num(ref2)]);
+    const onAxes = svgToSectionAxes(pending.result.lines, [num(ref1), num(ref2)]);
+    return onAxes.ok ? inRange(onAxes) : onAxes;
   }, [pending, ref1, ref2]);
 
   const confirm = () => {
