@@ -110,8 +110,10 @@ export function FileMenu() {
   const figureVe = useSessionStore((s) => s.figureVerticalExaggeration);
   const lastSaved = useAutosaveStatus((s) => s.lastSavedAt);
   const dirty = useDocStore((s) => s.revision !== s.savedRevision);
-  const revision = useDocStore((s) => s.revision);
-  const kept = useAutosaveStatus((s) => s.keptRevision === revision);
+  // Whether the kept revision is the document's, selected as one flag: a drag bumps the revision every frame, and
+  // the menu renders only when the flag turns.
+  const keptRevision = useAutosaveStatus((s) => s.keptRevision);
+  const kept = useDocStore((s) => s.revision === keptRevision);
   const readOnly = useTabStore((s) => s.role === 'read-only');
   const shownKeptAt = useTabStore((s) => s.shownKeptAt);
   const openRef = useRef<HTMLInputElement>(null);

@@ -7,7 +7,6 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { scenarioSetIncluded } from '../core/model/commands/scenarioSetIncluded';
 import { scenarioSwitch } from '../core/model/commands/scenarioSwitch';
 import { setSettings } from '../core/model/commands/setSettings';
-import { twoSegmentFit } from '../core/analysis/twoSegmentFit';
 import { AreaDepthGraph } from './interpretation/AreaDepthGraph';
 import { Cautions } from './interpretation/Cautions';
 import { DiagnosticList } from './interpretation/DiagnosticList';
@@ -20,7 +19,14 @@ import { diagnostics } from './interpretation/diagnostics';
 import { formatLength } from '../format/formatQuantity';
 import { tableAreaUnit } from '../format/horizonColumns';
 import { outlierFlags } from './interpretation/outlierFlags';
-import { useScenarioAnalysis } from './interpretation/useScenarioAnalysis';
+import { liveScenarioAnalysis, useScenarioAnalysis, type ScenarioAnalysis } from './interpretation/useScenarioAnalysis';
+import { useShownDoc } from '../state/shownDoc';
+import { LiveText, useLiveShape, type LiveRead } from './liveText';
+import type { Diagnostic } from './interpretation/diagnostics';
+import type { OutlierFlag } from './interpretation/outlierFlags';
+import type { AreaUnit } from '../format/formatQuantity';
+import type { GraphPoint } from './interpretation/areaDepthSeries';
+import { twoSegmentFit, type TwoSegmentFit } from '../core/analysis/twoSegmentFit';
 import { scenarioColour } from './interpretation/scenarioColour';
 import './interpretation/interpretation.css';
 
@@ -67,18 +73,71 @@ export function InterpretationPane() {
   );
 }
 
-function PaneBody({ onCollapse }: { onCollapse: () => void }) {
+/** The pane's diagnostics and flagged horizons of a scenario analysis, made once per analysis (the live texts read them). */
+const readings = new WeakMap<ScenarioAnalysis, { diag: Diagnostic[]; flags: OutlierFlag[]; unit: AreaUnit | null }>();
+function paneReading(sa: ScenarioAnalysis): { diag: Diagnostic[]; flags: OutlierFlag[]; unit: AreaUnit | null } {
+  const hit = readings.get(sa);
+  if (hit) return hit;
+  const r = {
+    diag: diagnostics(sa.docSection, sa.outcome, sa.leftOut),
+    flags: sa.series ? outlierFlags(sa.series.points, sa.series.fit.fit) : [],
+    unit: sa.analysis ? tableAreaUnit(sa.analysis) : null,
+  };
+  readings.set(sa, r);
+  return r;
+}
+const paneOf = (doc: ProjectDoc, gs: ProjectDoc | null) => paneReading(liveScenarioAnalysis(doc, gs));
+
+/**
+ * What the pane's live texts cannot change: which parts are shown. The diagnostics and the horizons flagged as far
+ * off the line are judged again when the gesture ends; meanwhile their numbers follow where the same ones stand.
+ */
+function paneShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
+  const sa = liveScenarioAnalysis(doc, gs);
+  return [Boolean(sa.analysis), Boolean(sa.series), sa.docSection.ok].join(' ');
+}
+
+const referenceRead: LiveRead = (doc, gs) => {
+  const a = liveScenarioAnalysis(doc, gs).analysis;
+  const scenario = activeScenario(doc);
+  return a && `Reference elevation for depths: ${formatLength(a.referenceElevation, doc.units)} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).`;
+};
+
+/**
+ * The area–depth graph of the store's document: while a regional is dragged its points and line follow in the
+ * graph's own render (the rest of the pane holds still and its numbers are live texts).
+ */
+function LiveGraph({ dataOnly, onTogglePoint, twoSegment }: { dataOnly: boolean; onTogglePoint: (p: GraphPoint) => void; twoSegment: TwoSegmentFit | null }) {
   const doc = useDocStore((s) => s.doc);
+  const { series } = useScenarioAnalysis(undefined, true);
+  const scenario = activeScenario(doc);
+  if (!series) return null;
+  return (
+    <AreaDepthGraph
+      series={[{ key: scenario.id, label: scenario.name, colour: scenarioColour(doc.scenarios.indexOf(scenario)), series }]}
+      units={doc.units}
+      dataOnly={dataOnly}
+      interactive
+      onTogglePoint={onTogglePoint}
+      twoSegment={twoSegment}
+      testId="area-depth-graph"
+    />
+  );
+}
+
+function PaneBody({ onCollapse }: { onCollapse: () => void }) {
+  const { doc } = useShownDoc();
   const apply = useDocStore((s) => s.apply);
   const sa = useScenarioAnalysis();
   const scenario = activeScenario(doc);
   const [dataOnly, setDataOnly] = useState(false);
   const [twoSegments, setTwoSegments] = useState(false);
   const [split, setSplit] = useState<number | null>(null);
-  const { analysis, series, docSection, outcome } = sa;
-  const diag = useMemo(() => diagnostics(docSection, outcome, sa.leftOut), [docSection, outcome, sa.leftOut]);
-  const flags = useMemo(() => (series ? outlierFlags(series.points, series.fit.fit) : []), [series]);
-  const unit = analysis ? tableAreaUnit(analysis) : null;
+  const { analysis, series, docSection } = sa;
+  const { diag, flags, unit } = paneReading(sa);
+  useLiveShape(paneShape);
+  // The second segment's numbers are not live texts: with it shown, a drag renders the pane each frame.
+  useLiveShape((d, gs) => (twoSegments ? liveScenarioAnalysis(d, gs).series?.points.map((p) => `${p.area} ${p.depth}`).join(',') ?? '' : ''));
   const toggle = useCallback((id: string, included: boolean) => apply((d) => scenarioSetIncluded(d, id, included)), [apply]);
 
   // Split choices for the second segment: between consecutive included depths.
@@ -109,20 +168,12 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
       </div>
       {isDemo(doc) && <p className="interp-demo" data-testid="demo-note">Invented demo — Project ▸ New to start your own.</p>}
       <div className="interp-scroll">
-        <DiagnosticList items={diag} flags={flags} unit={unit} />
+        <DiagnosticList items={diag} flags={flags} unit={unit} read={paneOf} />
         {analysis && <KeyResults analysis={analysis} />}
         {series && analysis && (
           <section className="interp-section">
             <h3>Area–depth graph</h3>
-            <AreaDepthGraph
-              series={[{ key: scenario.id, label: scenario.name, colour: scenarioColour(doc.scenarios.indexOf(scenario)), series }]}
-              units={u}
-              dataOnly={dataOnly}
-              interactive
-              onTogglePoint={(p) => toggle(p.id, !p.included)}
-              twoSegment={two}
-              testId="area-depth-graph"
-            />
+            <LiveGraph dataOnly={dataOnly} onTogglePoint={(p) => toggle(p.id, !p.included)} twoSegment={two} />
             <div className="button-row">
               <button type="button" onClick={() => setDataOnly(!dataOnly)} data-testid="graph-zoom">{dataOnly ? 'Show the detachment' : 'Zoom to the points'}</button>
               <label className="check"><input type="checkbox" checked={doc.settings.showDetachment} data-testid="show-detachment"
@@ -174,7 +225,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
             <MonteCarloPanel scenarioId={scenario.id} section={docSection.section} />
           </details>
         )}
-        {analysis && <p className="hint">Reference elevation for depths: {formatLength(analysis.referenceElevation, u)} ({scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).</p>}
+        {analysis && <LiveText as="p" className="hint" read={referenceRead} />}
         <Cautions />
       </div>
     </>

@@ -2,19 +2,60 @@
 // detachment depth and displacement of the area–depth line, following every drag (liveResults: a reading of the one live analysis the pane and exports read). The full
 // caution (docs/method.md §Cautions) stands beside them in small type: the strip may be the only result on screen.
 import { SECTION_CAUTION } from '../core/analysis/caution';
-import { useDocStore } from '../state/docStore';
+import type { ProjectDoc } from '../core/model/projectDoc';
+import { useShownDoc } from '../state/shownDoc';
 import { useSessionStore } from '../state/sessionStore';
 import { useCrossingChecks } from '../state/crossingChecks';
 import { formatArea, formatLength } from '../format/formatQuantity';
 import { liveResults } from './workspace/liveResults';
+import { LiveText, useLiveShape, type LiveRead } from './liveText';
 import './workspace/workspace.css';
 
+/** The strip's numbers of a document, as its live texts read them. */
+const strip = (doc: ProjectDoc, gestureStart: ProjectDoc | null) => liveResults(doc, gestureStart);
+const depthText: LiveRead = (doc, gs) => {
+  const live = strip(doc, gs);
+  return !live.ready ? null : live.detachmentDepth === null ? '—' : formatLength(live.detachmentDepth, live.units);
+};
+const elevationText: LiveRead = (doc, gs) => {
+  const live = strip(doc, gs);
+  return !live.ready ? null : live.detachmentElevation === null ? ''
+    : `below ${formatLength(live.referenceElevation, live.units)} (elevation ${formatLength(live.detachmentElevation, live.units)})`;
+};
+const regimeText: LiveRead = (doc, gs) => {
+  const live = strip(doc, gs);
+  return !live.ready ? null : live.regime ?? '';
+};
+const noteText: LiveRead = (doc, gs) => {
+  const live = strip(doc, gs);
+  return !live.ready ? null : live.note ?? '';
+};
+const displacementText: LiveRead = (doc, gs) => {
+  const live = strip(doc, gs);
+  return !live.ready ? null : live.displacement === null || live.noDetachment ? '—' : formatLength(live.displacement, live.units);
+};
+const areaText = (id: string): LiveRead => (doc, gs) => {
+  const live = strip(doc, gs);
+  const h = live.horizons.find((k) => k.id === id);
+  return !h ? null : h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units, live.areaUnit) : '—';
+};
+
+/**
+ * What of the strip its live texts cannot change: whether it has numbers, and each horizon's button (a button's
+ * hover text, which names why a horizon is left out, follows when the gesture ends).
+ */
+function stripShape(doc: ProjectDoc, gestureStart: ProjectDoc | null): string {
+  const live = strip(doc, gestureStart);
+  const buttons = live.horizons.map((h) => `${h.id} ${h.name} ${h.colour} ${h.included}`).join('\n');
+  return live.ready ? buttons : `${live.message}\n${buttons}`;
+}
+
 export function ResultsStrip() {
-  const doc = useDocStore((s) => s.doc);
-  const gestureStart = useDocStore((s) => s.gestureStart);
+  const { doc, gestureStart } = useShownDoc();
   const selectHorizon = useSessionStore((s) => s.selectHorizon);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
   const checking = useCrossingChecks((s) => s.pending > 0);
+  useLiveShape(stripShape);
   const shown = !(doc.horizons.length === 0 && !doc.calibration);
   // The strip keeps its place and height below the view even before there is anything to show, so the view's
   // size never changes while the user calibrates or draws.
@@ -26,7 +67,9 @@ export function ResultsStrip() {
       </div>
     );
   }
-  const live = liveResults(doc, gestureStart);
+  const live = strip(doc, gestureStart);
+  // The numbers sit in boxes of a fixed size (workspace.css .strip-number): a drag changes their text every frame,
+  // and a box that kept its size lays out alone instead of the page.
   return (
     <div className="results-strip" data-testid="results-strip" aria-label="Live results">
       <div className="strip-main">
@@ -34,17 +77,16 @@ export function ResultsStrip() {
           <>
             <span className="strip-figure">
               <span className="strip-label">Detachment depth</span>
-              <strong data-testid="strip-detachment-depth">{live.detachmentDepth === null ? '—' : formatLength(live.detachmentDepth, live.units)}</strong>
-              {live.detachmentElevation !== null && (
-                <span className="strip-aside" data-testid="strip-detachment-elevation">below {formatLength(live.referenceElevation, live.units)} (elevation {formatLength(live.detachmentElevation, live.units)})</span>
-              )}
+              <LiveText as="strong" className="strip-number" testId="strip-detachment-depth" read={depthText} />
+              {/* Kept while empty (no detachment), so that a drag that loses and finds the detachment moves nothing else. */}
+              <LiveText className="strip-aside strip-number wide" testId="strip-detachment-elevation" read={elevationText} />
             </span>
             <span className="strip-figure">
               <span className="strip-label">Displacement</span>
-              <strong data-testid="strip-displacement">{live.displacement === null || live.noDetachment ? '—' : formatLength(live.displacement, live.units)}</strong>
-              {live.regime && <span className="strip-aside" data-testid="strip-regime">{live.regime}</span>}
+              <LiveText as="strong" className="strip-number" testId="strip-displacement" read={displacementText} />
+              <LiveText className="strip-aside" testId="strip-regime" read={regimeText} />
             </span>
-            {live.note && <span className="strip-note" data-testid="strip-note">{live.note}</span>}
+            <LiveText className="strip-note" testId="strip-note" read={noteText} />
             {checking && <span className="strip-note" data-testid="strip-crossing-check">Checking that the long lines do not cross themselves… (the numbers stand unless one does)</span>}
           </>
         ) : (
@@ -57,7 +99,7 @@ export function ResultsStrip() {
             <button type="button" key={h.id} className={`strip-area${h.id === selectedId ? ' selected' : ''}${h.included ? '' : ' excluded'}`} onClick={() => selectHorizon(h.id)} title={h.leftOutReason ? `${h.name} is left out of the analysis: ${h.leftOutReason}` : `Excess area of ${h.name}${h.included ? '' : ' (left out of the fit)'}`}>
               <span className="swatch" style={{ background: h.colour }} />
               <span className="strip-area-name">{h.name}</span>
-              <span data-testid={`strip-area-${h.id}`}>{h.excessArea === null ? '—' : live.ready ? formatArea(h.excessArea, live.units, live.areaUnit) : '—'}</span>
+              <LiveText className="strip-number area" testId={`strip-area-${h.id}`} read={areaText(h.id)} />
             </button>
           ))}
         </div>

@@ -1,9 +1,13 @@
-// The headline numbers of the fit (number first, then the unit), with their 95% intervals.
+// The headline numbers of the fit (number first, then the unit), with their 95% intervals. Each is a live text
+// (panels/liveText.tsx): it follows a drag without the pane rendering.
 import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
+import type { ProjectDoc } from '../../core/model/projectDoc';
 import { formatPercent } from '../../format/formatQuantity';
+import { LiveText, useLiveShape, type LiveRead } from '../liveText';
 import { regimeText } from './regimeText';
-import { summaryRows } from './summaryRows';
+import { summaryRowsOf } from './summaryRows';
+import { liveScenarioAnalysis } from './useScenarioAnalysis';
 
 const KEYS: [string, string][] = [
   ['detachment-elevation', 'Detachment elevation'],
@@ -12,36 +16,66 @@ const KEYS: [string, string][] = [
   ['r2', 'r²'],
 ];
 
+/** The active scenario's analysis of a document, or null. */
+const analysisOf = (doc: ProjectDoc, gs: ProjectDoc | null): SectionAnalysis | null => liveScenarioAnalysis(doc, gs).analysis;
+
+/** A summary row's text, or its interval as shown ('' for none). */
+const rowText = (key: string, part: 'text' | 'interval'): LiveRead => (doc, gs) => {
+  const a = analysisOf(doc, gs);
+  const r = a && summaryRowsOf(a).find((k) => k.key === key);
+  if (!r) return null;
+  return part === 'text' ? r.text : !r.interval ? '' : r.interval === EXACT_FIT_TEXT ? r.interval : `95%: ${r.interval}`;
+};
+
+/** Extension E / (W0 − E) = −D / (W0 + D): over the length before extension (E = −D; common practice for bulk strain). */
+const isExtension = (a: SectionAnalysis) => a.areaDepth?.regime === 'extension' && summaryRowsOf(a).find((r) => r.key === 'shortening')!.value !== null;
+
+const regimeRead: LiveRead = (doc, gs) => {
+  const a = analysisOf(doc, gs);
+  return a && regimeText(a.areaDepth, a.units);
+};
+const strainRead: LiveRead = (doc, gs) => {
+  const a = analysisOf(doc, gs);
+  if (!a) return null;
+  const shortening = summaryRowsOf(a).find((r) => r.key === 'shortening')!;
+  return isExtension(a) ? formatPercent(-shortening.value!) : shortening.text;
+};
+
+const strainLabel: LiveRead = (doc, gs) => {
+  const a = analysisOf(doc, gs);
+  return a && (isExtension(a) ? 'Extension' : 'Shortening');
+};
+
+/** Which intervals are shown (an interval that comes or goes renders the pane). */
+function keyShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
+  const a = analysisOf(doc, gs);
+  const rows = a ? summaryRowsOf(a) : [];
+  return KEYS.map(([key]) => Boolean(rows.find((r) => r.key === key)?.interval)).join(' ');
+}
+
 export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
-  const rows = summaryRows(analysis);
-  const get = (k: string) => rows.find((r) => r.key === k)!;
-  const n = get('n');
-  const shortening = get('shortening');
-  // Extension E / (W0 − E) = −D / (W0 + D): over the length before extension (E = −D; common practice for bulk strain).
-  const extension = analysis.areaDepth?.regime === 'extension' && shortening.value !== null;
+  useLiveShape(keyShape);
+  const rows = summaryRowsOf(analysis);
   return (
     <div className="key-results">
-      {KEYS.map(([key, label]) => {
-        const r = get(key);
-        return (
-          <div className="key-result" key={key}>
-            <div className="key-label">{label}</div>
-            <div className="key-value" data-testid={`result-${key}`}>{r.text}</div>
-            {r.interval && <div className="key-interval" data-testid={`interval-${key}`}>{r.interval === EXACT_FIT_TEXT ? r.interval : `95%: ${r.interval}`}</div>}
-          </div>
-        );
-      })}
+      {KEYS.map(([key, label]) => (
+        <div className="key-result" key={key}>
+          <div className="key-label">{label}</div>
+          <LiveText as="div" className="key-value" testId={`result-${key}`} read={rowText(key, 'text')} />
+          {rows.find((r) => r.key === key)!.interval && <LiveText as="div" className="key-interval" testId={`interval-${key}`} read={rowText(key, 'interval')} />}
+        </div>
+      ))}
       <div className="key-result small">
         <div className="key-label">Horizons in fit</div>
-        <div className="key-value" data-testid="result-n">{n.text}</div>
+        <LiveText as="div" className="key-value" testId="result-n" read={rowText('n', 'text')} />
       </div>
       <div className="key-result small">
         <div className="key-label">Regime</div>
-        <div className="key-value" data-testid="result-regime">{regimeText(analysis.areaDepth, analysis.units)}</div>
+        <LiveText as="div" className="key-value" testId="result-regime" read={regimeRead} />
       </div>
       <div className="key-result small">
-        <div className="key-label">{extension ? 'Extension' : 'Shortening'}</div>
-        <div className="key-value" data-testid="result-shortening">{extension ? formatPercent(-shortening.value!) : shortening.text}</div>
+        <LiveText as="div" className="key-label" read={strainLabel} />
+        <LiveText as="div" className="key-value" testId="result-shortening" read={strainRead} />
       </div>
     </div>
   );

@@ -48,3 +48,13 @@ export function summaryRows(a: SectionAnalysis): SummaryRow[] {
   ];
 }
 
+const rowsOf = new WeakMap<SectionAnalysis, SummaryRow[]>();
+
+/** summaryRows, made once per analysis (the pane's live texts each read a row). */
+export function summaryRowsOf(a: SectionAnalysis): SummaryRow[] {
+  const hit = rowsOf.get(a);
+  if (hit) return hit;
+  const rows = summaryRows(a);
+  rowsOf.set(a, rows);
+  return rows;
+}

@@ -29,9 +29,17 @@ export type LiveResults =
     regime: Regime | null;
   };
 
+// The strip's numbers are read by each of its live texts (panels/liveText.tsx): made once per analysis.
+const read = new WeakMap<DocAnalysis, { doc: ProjectDoc; results: LiveResults }>();
+
 /** Returns the strip's numbers for the document (section units; areas in units²), or why there are none yet. */
 export function liveResults(doc: ProjectDoc, gestureStart: ProjectDoc | null = null): LiveResults {
-  return liveResultsOf(doc, selectLiveAnalysis(doc, gestureStart));
+  const d = selectLiveAnalysis(doc, gestureStart);
+  const hit = read.get(d);
+  if (hit && hit.doc === doc) return hit.results;
+  const results = liveResultsOf(doc, d);
+  read.set(d, { doc, results });
+  return results;
 }
 
 /** The strip's reading of an analysis already at hand. */
