@@ -8,6 +8,11 @@ import { test, expect } from './guard';
 import { gotoStarted } from './startup';
 import { clickAt, fittedScan, screen, type Cam } from './fittedScan';
 import { gradientPng } from './pngFixture';
+import { download } from './download';
+import { parseProjectText } from '../../src/io/projectFile';
+import { analyseDoc } from '../../src/core/analysis/analyseDocGesture';
+import { formatArea, formatLength } from '../../src/format/formatQuantity';
+import { HORIZON_COLUMNS, screenCell, tableAreaUnit } from '../../src/format/horizonColumns';
 
 const W = 1000;
 const H = 500;
@@ -222,4 +227,40 @@ test('a continuous drag of a regional, moves faster than frames: held and let go
   const row = Math.round((screen(cam, 500, 300 - (rise / cam.scale)).y - top.y));
   const alpha = (k: number) => held[4 * k + 3];
   expect(Math.max(alpha(row - 1), alpha(row), alpha(row + 1))).toBeGreaterThan(0);
+});
+
+test('the numbers written while a regional is dragged are those the panes show after the release, and the formatter\'s for the document', async ({ page }) => {
+  const cam = await setUp(page);
+  const grab = await grabFlatRegional(page, cam);
+  // Every number the strip and the pane write during a drag (their live texts), in page order.
+  const liveTexts = () => page.evaluate(() => [...document.querySelectorAll('[data-testid="results-strip"] [data-live], [data-testid="interpretation-pane"] [data-live]')]
+    .map((e) => `${e.getAttribute('data-testid') ?? e.tagName} ${e.textContent}`));
+  const before = await liveTexts();
+  const area = page.getByTestId('strip-area-h1');
+  const areaBefore = await area.textContent();
+  // Real moves, one a task, up 40 screen px: 400 / scale m (z = 1000 − 10 v).
+  for (let k = 1; k <= 20; k++) await page.mouse.move(grab.x, grab.y - 2 * k);
+  const expected = -2000 + 400 / cam.scale;
+  await expect.poll(async () => Number(await page.getByTestId('regional-z-left').inputValue())).toBeCloseTo(expected, 1);
+  await expect(area).not.toHaveText(areaBefore!);
+  const held = await liveTexts();
+  expect(held).not.toEqual(before);
+
+  await page.mouse.up();
+  await expect(page.getByTestId('drag-readout')).toBeHidden();
+  // After the release the panes render the document: the same texts, in the same places.
+  expect(await liveTexts()).toEqual(held);
+
+  // The one formatter over the saved document's analysis (the engine the app runs, here in Node).
+  await page.getByTestId('menu-project').click();
+  const opened = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
+  if (!opened.ok) throw new Error(opened.message);
+  const d = analyseDoc(opened.doc);
+  if (!d.outcome?.ok) throw new Error('the saved document has no analysis');
+  const a = d.outcome.analysis;
+  const unit = tableAreaUnit(a);
+  await expect(area).toHaveText(formatArea(a.horizons[0].excessArea, a.units, unit));
+  const column = HORIZON_COLUMNS.find((c) => c.key === 'excessArea')!;
+  await expect(page.getByTestId('horizon-table').locator('tbody tr').first()).toContainText(screenCell(column, a.horizons[0], unit));
+  await expect(page.getByTestId('summary-table')).toContainText(formatLength(a.pinWidth, a.units));
 });
