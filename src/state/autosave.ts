@@ -6,7 +6,7 @@ import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
 import { SECTION_CAUTION } from '../core/analysis/caution';
 import { PROJECT_FILE_VERSION, PROJECT_FORMAT } from '../core/model/migrations/projectFileFormat';
 import { downloadFile } from '../io/downloadFile';
-import { readSetAside, readStoredScan, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type KeptRead, type StoredScan } from './autosaveDb';
+import { discardSetAside, readSetAside, readStoredScan, unsetAsideKept, clearSnapshot, isQuotaError, openAutosaveDb, readKept, setAsideKept, writeSnapshot, type KeptRead, type StoredScan } from './autosaveDb';
 import { clearJournal, nextStamp, readJournal, writeJournal } from './autosaveJournal';
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import { announceKept, useTabStore } from './tabLock';
@@ -148,8 +148,38 @@ async function showKeptWork(): Promise<void> {
   if (notShown) useSessionStore.getState().showMessage('error', notShown);
 }
 
-/** Brings back the last autosaved state if there is one worth restoring; returns true when it did. */
+/** Brings back the last autosaved state if there is one worth restoring; returns true when it did. Work still set aside is announced at every start-up. */
 export async function restoreAutosave(): Promise<boolean> {
+  const restored = await restoreKept();
+  await announceSetAside();
+  return restored;
+}
+
+/**
+ * Says at start-up that work this build could not restore is still set aside (moved there at an earlier start-up),
+ * so that it is offered for download every time until the user downloads or discards it, not only the first time.
+ */
+async function announceSetAside(): Promise<void> {
+  if (useAutosaveStatus.getState().keptAside) return;
+  let aside: Awaited<ReturnType<typeof readSetAside>>;
+  try {
+    aside = await readSetAside(await db());
+  } catch {
+    return;
+  }
+  if (!aside) return;
+  const when = aside.savedAt ? ` (kept ${new Date(aside.savedAt).toLocaleString()})` : '';
+  useAutosaveStatus.setState({ keptAside: `Earlier work that this build could not restore${when} is still set aside in this browser, not deleted.` });
+}
+
+/** Deletes the work set aside, once the user has chosen to (the banner asks first); does nothing in a read-only tab. */
+export async function discardKeptAside(): Promise<void> {
+  if (useTabStore.getState().role === 'read-only') return;
+  await discardSetAside(await db());
+  useAutosaveStatus.setState({ keptAside: null });
+}
+
+async function restoreKept(): Promise<boolean> {
   let kept: KeptRead;
   try {
     kept = await readKept(await db());

@@ -158,6 +158,16 @@ export async function readSetAside(db: IDBDatabase): Promise<{ savedAt: string; 
   return { savedAt: typeof aside.savedAt === 'string' ? aside.savedAt : '', doc: unpackDoc(aside.doc) };
 }
 
+/** Deletes every set-aside record (the user chose to discard it, after being offered the download); the current record stays. */
+export async function discardSetAside(db: IDBDatabase): Promise<void> {
+  const tx = db.transaction([STATE], 'readwrite');
+  const finished = done(tx);
+  const store = tx.objectStore(STATE);
+  const keys = await request(store.getAllKeys());
+  for (const k of keys) if (typeof k === 'string' && (k === SET_ASIDE || k.startsWith(`${SET_ASIDE}-`))) store.delete(k);
+  await finished;
+}
+
 /** Moves a set-aside record back to be the current one, once this build has restored its work. */
 export async function unsetAsideKept(db: IDBDatabase): Promise<void> {
   const tx = db.transaction([STATE], 'readwrite');

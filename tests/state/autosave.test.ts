@@ -247,6 +247,39 @@ describe('a kept copy is never overwritten by work the restore would refuse', ()
   });
 });
 
+describe('work set aside is offered at every start-up until downloaded or deleted', () => {
+  beforeEach(async () => {
+    vi.stubGlobal('indexedDB', factory);
+    useSessionStore.getState().clearMessage();
+    await clearSnapshot(await openAutosaveDb(factory));
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('a later start-up that restores newer work still says a copy is set aside; deleting it ends that', async () => {
+    const { useAutosaveStatus } = await import('../../src/state/autosaveStatus');
+    const { discardKeptAside } = await import('../../src/state/autosave');
+    // A copy this build cannot restore (a 501-character name, as an earlier build allowed) is set aside at start-up.
+    const bad = { ...fixture('v1-two-horizons.json').doc, title: 'N'.repeat(501) };
+    await keepRecord(bad);
+    expect(await restoreAutosave()).toBe(false);
+    expect(useAutosaveStatus.getState().keptAside).toContain('kept aside in this browser, not deleted');
+    // The user works on and the page is opened again: that work comes back, and the set-aside copy is still offered.
+    useAutosaveStatus.setState({ keptAside: null });
+    useDocStore.getState().replace(sampleDoc());
+    useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Work after the set-aside' }));
+    await autosaveNow();
+    expect(await restoreAutosave()).toBe(true);
+    expect(useDocStore.getState().doc.title).toBe('Work after the set-aside');
+    expect(useAutosaveStatus.getState().keptAside).toContain('is still set aside in this browser, not deleted');
+    // Deleted when the user chooses: the current work stays, and the next start-up says nothing of it.
+    await discardKeptAside();
+    expect(useAutosaveStatus.getState().keptAside).toBeNull();
+    expect(await restoreAutosave()).toBe(true);
+    expect(useAutosaveStatus.getState().keptAside).toBeNull();
+    expect((await readSnapshot(await openAutosaveDb(factory)))?.doc.title).toBe('Work after the set-aside');
+  });
+});
+
 describe('the write-ahead journal', () => {
   const store = new Map<string, string>();
   const localStorageStub = { getItem: (k: string) => store.get(k) ?? null, setItem: (k: string, v: string) => void store.set(k, v), removeItem: (k: string) => void store.delete(k) };

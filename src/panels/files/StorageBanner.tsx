@@ -1,6 +1,6 @@
 // Banners about work kept in this browser: a restored session (keep it or start fresh) and a full storage quota.
 import { saveProjectFile } from '../../state/projectActions';
-import { downloadKeptAside, startFresh } from '../../state/autosave';
+import { discardKeptAside, downloadKeptAside, startFresh } from '../../state/autosave';
 import { useAutosaveStatus } from '../../state/autosaveStatus';
 import { takeOverEditing, useTabStore } from '../../state/tabLock';
 
@@ -45,7 +45,12 @@ export function StorageBanner() {
         <div className="storage-banner error" role="alert" data-testid="kept-aside-banner">
           <span>{keptAside} Download it to keep it as a file.</span>
           <button type="button" className="primary" data-testid="download-kept-aside" onClick={() => void downloadKeptAside()}>Download the kept copy</button>
-          <button type="button" onClick={() => useAutosaveStatus.setState({ keptAside: null })}>Dismiss</button>
+          <button type="button" onClick={() => useAutosaveStatus.setState({ keptAside: null })} title="Hide this until the next start-up">Dismiss</button>
+          {!readOnly && (
+            <button type="button" data-testid="discard-kept-aside" onClick={() => {
+              if (window.confirm('Delete the copy set aside in this browser? Download it first if you may need it.')) void discardKeptAside();
+            }}>Delete it</button>
+          )}
         </div>
       )}
       {failure && (
