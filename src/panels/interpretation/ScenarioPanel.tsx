@@ -1,8 +1,11 @@
 // Named scenarios (each its own regionals, pins and included horizons): switch, create, duplicate,
-// rename, delete; a comparison table and every scenario's fit on one graph.
-import { useMemo, useState } from 'react';
+// rename, delete; a comparison table and every scenario's fit on one graph. During a drag the table's numbers
+// are live texts (panels/liveText.tsx) and the graph is drawn again at the release.
+import { useState } from 'react';
 import { useDocStore } from '../../state/docStore';
-import { selectLiveAnalysis } from '../../state/selectors';
+import { useShownDoc } from '../../state/shownDoc';
+import type { ProjectDoc, Scenario } from '../../core/model/projectDoc';
+import { LiveText, useLiveShape, type LiveRead } from '../liveText';
 import { useCrossingChecks } from '../../state/crossingChecks';
 import { scenarioCreate } from '../../core/model/commands/scenarioCreate';
 import { scenarioDelete } from '../../core/model/commands/scenarioDelete';
@@ -15,21 +18,20 @@ import { AreaDepthGraph, type GraphSeriesSpec } from './AreaDepthGraph';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { areaDepthSeries } from './areaDepthSeries';
 import { formatLength, formatNumber, formatR2 } from '../../format/formatQuantity';
-import { scenarioAnalysisOf } from './useScenarioAnalysis';
+import { liveScenarioAnalysis, type ScenarioAnalysis } from './useScenarioAnalysis';
 import { scenarioColour } from './scenarioColour';
 
-export function ScenarioPanel() {
-  const doc = useDocStore((s) => s.doc);
-  const gestureStart = useDocStore((s) => s.gestureStart);
-  const apply = useDocStore((s) => s.apply);
-  const [renaming, setRenaming] = useState<{ id: string; name: string } | null>(null);
-  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
-  const answered = useCrossingChecks((s) => s.answered);
-  const rows = useMemo(
-    () => doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...scenarioAnalysisOf(selectLiveAnalysis(doc, gestureStart, s.id)) })),
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- `answered` stands for the verdicts selectLiveAnalysis reads
-    [doc, gestureStart, answered],
-  );
+/** Every scenario's analysis and the one reference they are compared on, made once per document (the live texts read it). */
+interface Compare {
+  rows: ({ scenario: Scenario; colour: string } & ScenarioAnalysis)[];
+  commonRef: number | null;
+  refText: string;
+}
+const compared = new WeakMap<ProjectDoc, { gestureStart: ProjectDoc | null; compare: Compare }>();
+function compareOf(doc: ProjectDoc, gestureStart: ProjectDoc | null): Compare {
+  const hit = compared.get(doc);
+  if (hit && hit.gestureStart === gestureStart && hit.compare.rows.every((r) => liveScenarioAnalysis(doc, gestureStart, r.scenario.id).outcome === r.outcome)) return hit.compare;
+  const rows = doc.scenarios.map((s, i) => ({ scenario: s, colour: scenarioColour(i), ...liveScenarioAnalysis(doc, gestureStart, s.id) }));
   // One reference for every scenario: the base case's (the first scenario that can be
   // analysed), normally its highest regional. Depths below each scenario's own reference differ by the
   // difference of the references and invite a wrong comparison; elevations compare as they are.
@@ -38,6 +40,51 @@ export function ScenarioPanel() {
   const refText = base && commonRef !== null
     ? `${formatLength(commonRef, doc.units)}, ${base.scenario.referenceElevation !== undefined ? 'the reference set in' : 'the highest regional of'} ${base.scenario.name}`
     : '';
+  const compare = { rows, commonRef, refText };
+  compared.set(doc, { gestureStart, compare });
+  return compare;
+}
+
+/** A scenario's cells in the comparison table (elevation, its interval, depth below the common reference, displacement, n), or null when it has no fit. */
+function cellsOf(c: Compare, id: string): { ok: boolean; elevation: string; interval: string; depth: string; displacement: string; n: string } | null {
+  const row = c.rows.find((r) => r.scenario.id === id);
+  const analysis = row?.analysis;
+  if (!analysis) return null;
+  const ad = analysis.areaDepth;
+  const ok = Boolean(ad && !ad.noDetachment && ad.detachmentElevation !== null);
+  const f = ad?.detachmentDepthInterval;
+  const zref = analysis.referenceElevation;
+  const interval = !ok || !f || !ad ? '—' : isExactFit(ad) ? 'exact fit' : f.kind === 'bounded'
+    ? `${formatNumber(zref - f.hi)} to ${formatNumber(zref - f.lo)}` : f.kind === 'unbounded' ? 'unbounded' : 'none';
+  return {
+    ok,
+    elevation: ok ? formatNumber(ad!.detachmentElevation) : ad ? 'none' : '—',
+    interval: interval === 'exact fit' || interval === 'unbounded' || interval === 'none' ? interval : `95%: ${interval}`,
+    depth: ok && c.commonRef !== null ? formatNumber(c.commonRef - ad!.detachmentElevation!) : '—',
+    displacement: ok ? formatNumber(ad!.displacement) : '—',
+    n: String(ad?.n ?? 0),
+  };
+}
+
+const cellRead = (id: string, key: 'elevation' | 'interval' | 'depth' | 'displacement' | 'n'): LiveRead => (doc, gs) => cellsOf(compareOf(doc, gs), id)?.[key] ?? null;
+
+/**
+ * What the comparison's live texts cannot change: the scenarios, which have a fit and an interval, the reference's
+ * wording. The graph of every scenario's fit is drawn again when the gesture ends.
+ */
+function compareShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
+  const c = compareOf(doc, gs);
+  return [c.refText, ...c.rows.map((r) => `${r.scenario.id} ${Boolean(r.analysis)} ${r.docSection.ok ? '' : r.docSection.message} ${cellsOf(c, r.scenario.id)?.ok}`)].join('\n');
+}
+
+export function ScenarioPanel() {
+  const { doc, gestureStart } = useShownDoc();
+  const apply = useDocStore((s) => s.apply);
+  const [renaming, setRenaming] = useState<{ id: string; name: string } | null>(null);
+  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
+  useCrossingChecks((s) => s.answered);
+  useLiveShape(compareShape);
+  const { rows, commonRef, refText } = compareOf(doc, gestureStart);
   const overlay: GraphSeriesSpec[] = rows.filter((r) => r.analysis).map((r) => ({
     key: r.scenario.id, label: r.scenario.name, colour: r.colour, series: areaDepthSeries(r.analysis!, r.horizonIds, commonRef ?? undefined),
   }));
@@ -97,12 +144,9 @@ export function ScenarioPanel() {
           <tbody>
             {rows.map(({ scenario: s, analysis, docSection }) => {
               const ad = analysis?.areaDepth;
-              const ok = ad && !ad.noDetachment && ad.detachmentElevation !== null;
-              const f = ad?.detachmentDepthInterval;
               const zref = analysis?.referenceElevation ?? 0;
-              const interval = !ok || !f ? '—' : isExactFit(ad) ? 'exact fit' : f.kind === 'bounded'
-                ? `${formatNumber(zref - f.hi)} to ${formatNumber(zref - f.lo)}` : f.kind === 'unbounded' ? 'unbounded' : 'none';
               const title = ad ? `${s.name}: n = ${ad.n}, r² = ${formatR2(ad.r2, isExactFit(ad))}${isExactFit(ad) ? ` (${EXACT_FIT_TEXT})` : ''}; own reference ${formatLength(zref, doc.units)}` : s.name;
+              const cells = cellsOf({ rows, commonRef, refText }, s.id);
               return (
                 <tr key={s.id} className={s.id === active ? 'active' : ''} title={title}>
                   <td className="name-col">{s.name}</td>
@@ -111,12 +155,12 @@ export function ScenarioPanel() {
                   ) : (
                     <>
                       <td>
-                        <div className="primary" data-testid={`compare-elevation-${s.id}`}>{ok ? formatNumber(ad.detachmentElevation) : ad ? 'none' : '—'}</div>
-                        {ok && <div className="interval">{interval === 'exact fit' || interval === 'unbounded' || interval === 'none' ? interval : `95%: ${interval}`}</div>}
+                        <LiveText as="div" className="primary" testId={`compare-elevation-${s.id}`} read={cellRead(s.id, 'elevation')} />
+                        {cells?.ok && <LiveText as="div" className="interval" read={cellRead(s.id, 'interval')} />}
                       </td>
-                      <td>{ok && commonRef !== null ? formatNumber(commonRef - ad.detachmentElevation!) : '—'}</td>
-                      <td>{ok ? formatNumber(ad.displacement) : '—'}</td>
-                      <td>{ad?.n ?? 0}</td>
+                      <LiveText as="td" read={cellRead(s.id, 'depth')} />
+                      <LiveText as="td" read={cellRead(s.id, 'displacement')} />
+                      <LiveText as="td" read={cellRead(s.id, 'n')} />
                     </>
                   )}
                 </tr>
