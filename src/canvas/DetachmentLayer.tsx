@@ -9,8 +9,9 @@ import { useCrossingChecks } from '../state/crossingChecks';
 import { sectionToImage } from '../core/calibration/mapPoints';
 import { EXACT_FIT_TEXT, formatInterval, formatLength } from '../format/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
+import { MARK_COLOURS } from '../core/model/horizonPalette';
 
-const COLOUR = '#b3261e';
+const COLOUR = MARK_COLOURS.detachment;
 // Screen pixels: small type on a translucent white backing, so it stays legible over scan art and
 // hides little of it.
 const FONT = 11;

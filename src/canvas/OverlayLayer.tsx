@@ -14,6 +14,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { handlesInView, type HandlesInView } from './handlesInView';
 import { getToolPreview, subscribeToolPreview } from './toolDispatch';
 import { pinLinePx } from './pinLinePx';
+import { MARK_COLOURS } from '../core/model/horizonPalette';
 
 type Ctx = Konva.Context;
 
@@ -201,7 +202,7 @@ function ToolPreviewShape() {
         if (preview.pinXs) {
           const doc = useDocStore.getState().doc;
           const frame = sectionFrame(doc);
-          raw.strokeStyle = '#263238';
+          raw.strokeStyle = MARK_COLOURS.pin;
           for (const x of preview.pinXs) {
             const l = pinLinePx(frame, x, doc.scan);
             raw.beginPath();

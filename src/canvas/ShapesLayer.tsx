@@ -14,7 +14,7 @@ import { useSessionStore } from '../state/sessionStore';
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { DECIMATE_ABOVE_VERTICES, decimateAfterPrefix, decimatePolyline, decimatePrefix, type DecimatedPrefix } from './decimatePolyline';
 import { clippedHorizonPx, excessFillSides, type ClippedHorizonPx } from './excessFillGeometry';
-import { EXCESS_FILL, fillRgba } from '../core/model/horizonPalette';
+import { EXCESS_FILL, fillRgba, MARK_COLOURS } from '../core/model/horizonPalette';
 import { joinedLinePx, type JoinedLinePx } from './joinedLinePx';
 import { pieceEndsOffFault } from '../tools/faultHits';
 import { FAULT_DASH, FAULT_WIDTH } from '../tools/faultStyle';
@@ -272,7 +272,7 @@ const PinLines = memo(function PinLines() {
         return (
           <Group key={i} listening={false}>
             <Line points={line} stroke={HALO} opacity={HALO_OPACITY} strokeWidth={1.8 + HALO_WIDTH} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />
-            <Line points={line} stroke="#263238" strokeWidth={1.8} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />
+            <Line points={line} stroke={MARK_COLOURS.pin} strokeWidth={1.8} dash={[10, 4]} strokeScaleEnabled={false} listening={false} perfectDrawEnabled={false} />
           </Group>
         );
       })}

@@ -6,9 +6,11 @@ import { isExactFit } from '../core/analysis/isExactFit';
 import { areaDepthAxes } from '../format/areaDepthAxes';
 import { escapeXml } from './escapeXml';
 import { EXACT_FIT_TEXT, formatInterval, formatNumber } from '../format/formatQuantity';
+import { MARK_COLOURS, SCENARIO_COLOURS } from '../core/model/horizonPalette';
 
-const RED = '#b3261e';
-const BLUE = '#1f6f8b';
+const RED = MARK_COLOURS.detachment;
+// The exported graph shows one scenario, in the first scenario colour.
+const BLUE = SCENARIO_COLOURS[0];
 
 /** Returns a horizon name cut to `max` characters (with an ellipsis) for a point label. */
 export function shortName(name: string, max = 12): string {

@@ -21,7 +21,8 @@ import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../forma
 import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
-import { EXCESS_FILL } from '../core/model/horizonPalette';
+import { EXCESS_FILL, MARK_COLOURS } from '../core/model/horizonPalette';
+import { FAULT_COLOURS } from '../core/model/commands/addFault';
 import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
 import { joinPieces } from '../core/model/joinPieces';
 import type { FaultArrays } from '../core/model/readFault';
@@ -35,7 +36,8 @@ const PANEL = { x: 92, y: 96, w: 908, h: 690 };
 /** The excess-area fills, as on the canvas (src/core/model/horizonPalette.ts EXCESS_FILL). */
 export const FIGURE_FILL_ABOVE = EXCESS_FILL.above;
 export const FIGURE_FILL_BELOW = EXCESS_FILL.below;
-const RED = '#b3261e';
+const RED = MARK_COLOURS.detachment;
+const PIN = MARK_COLOURS.pin;
 /** A fault's line width and dash (figure units), heavier than a horizon (2.5) and long-dashed, as on the canvas (src/tools/faultStyle.ts). */
 export const FIGURE_FAULT_WIDTH = 3.5;
 export const FIGURE_FAULT_DASH = '16 5';
@@ -128,10 +130,10 @@ function legendRows(doc: ProjectDoc, drawn: Drawn, x: number, y: number): { svg:
   const line = (stroke: string, w: number, dash = '') => (yy: number) => `<line x1="${x + 10}" y1="${yy - 4}" x2="${x + 40}" y2="${yy - 4}" stroke="${stroke}" stroke-width="${w}"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`;
   const box = (fill: string, opacity: number) => (yy: number) => `<rect x="${x + 10}" y="${yy - 10}" width="30" height="10" fill="${fill}" fill-opacity="${opacity}" stroke="${fill}" stroke-opacity="0.6" stroke-width="0.6"/>`;
   const key: [string, (yy: number) => string][] = [];
-  if (drawn.faults) key.push(['fault (heavy, long dashes)', line('#263238', FIGURE_FAULT_WIDTH, FIGURE_FAULT_DASH)]);
+  if (drawn.faults) key.push(['fault (heavy, long dashes)', line(FAULT_COLOURS[0], FIGURE_FAULT_WIDTH, FIGURE_FAULT_DASH)]);
   if (drawn.stretches) key.push(['horizon along its fault, between cutoffs (thin)', line('#444', 1.2)]);
   if (drawn.regionals) key.push(['regional (dashed, in the horizon’s colour)', line('#444', 1.5, '7 4')]);
-  if (drawn.pins) key.push(['pin', (yy) => `<line x1="${x + 25}" y1="${yy - 11}" x2="${x + 25}" y2="${yy + 3}" stroke="#20323f" stroke-width="2"/>`]);
+  if (drawn.pins) key.push(['pin', (yy) => `<line x1="${x + 25}" y1="${yy - 11}" x2="${x + 25}" y2="${yy + 3}" stroke="${PIN}" stroke-width="2"/>`]);
   if (drawn.above || drawn.below) {
     key.push(['excess area above the regional (added)', box(FIGURE_FILL_ABOVE.colour, FIGURE_FILL_ABOVE.opacity + 0.1)]);
     key.push(['excess area below the regional (subtracted)', box(FIGURE_FILL_BELOW.colour, FIGURE_FILL_BELOW.opacity + 0.1)]);
@@ -368,9 +370,9 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
     for (const [i, p] of scenario.pinsPx.entries()) {
       const x = imageToSection(fit, p)[0];
       const [lo, hi] = [toFig([x, zLo]), toFig([x, zHi])];
-      out.push(`<line class="pin" x1="${lo[0].toFixed(2)}" y1="${lo[1].toFixed(2)}" x2="${hi[0].toFixed(2)}" y2="${hi[1].toFixed(2)}" stroke="#20323f" stroke-width="2"/>`);
+      out.push(`<line class="pin" x1="${lo[0].toFixed(2)}" y1="${lo[1].toFixed(2)}" x2="${hi[0].toFixed(2)}" y2="${hi[1].toFixed(2)}" stroke="${PIN}" stroke-width="2"/>`);
       const top = toFig([x, zHi]);
-      out.push(`<text x="${top[0] + 4}" y="${Math.max(PANEL.y + 14, top[1] + 14)}" font-size="11" fill="#20323f" ${halo()}>${i === 0 ? 'left pin' : 'right pin'}</text>`);
+      out.push(`<text x="${top[0] + 4}" y="${Math.max(PANEL.y + 14, top[1] + 14)}" font-size="11" fill="${PIN}" ${halo()}>${i === 0 ? 'left pin' : 'right pin'}</text>`);
       drawn.pins = true;
     }
   }

@@ -20,3 +20,19 @@ export const EXCESS_FILL = {
 export function fillRgba(fill: { colour: string; opacity: number }): string {
   return fill.colour.replace(/^rgb\((.*)\)$/, `rgba($1, ${fill.opacity})`);
 }
+
+/**
+ * The marks drawn on the section and in its figures, one colour each wherever they are drawn: the estimated
+ * detachment (line, interval band, graph marker and labels, screen and export) and the pins.
+ */
+export const MARK_COLOURS = {
+  detachment: '#b3261e',
+  pin: '#263238',
+} as const;
+
+/**
+ * Line colours for scenarios in the area–depth graph (pane and export: scenario i takes colour i), chosen for
+ * contrast on white and for colour-blind readers (a common qualitative ordering: blue, orange, green-blue,
+ * purple, red-brown, grey).
+ */
+export const SCENARIO_COLOURS = ['#1f6f8b', '#d07a1f', '#2a9d7a', '#7a4fa3', '#a3412b', '#5f6b73'] as const;

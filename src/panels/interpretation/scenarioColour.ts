@@ -1,8 +1,7 @@
-// Distinct line colours for scenarios, chosen for contrast on white and for colour-blind readers
-// (a common qualitative ordering: blue, orange, green-blue, purple, red-brown, grey).
-const COLOURS = ['#1f6f8b', '#d07a1f', '#2a9d7a', '#7a4fa3', '#a3412b', '#5f6b73'];
+// The colour of a scenario's line in the area–depth graph: the one list, SCENARIO_COLOURS (core/model/horizonPalette.ts).
+import { SCENARIO_COLOURS } from '../../core/model/horizonPalette';
 
 /** The colour for the i-th scenario, cycling after six. */
 export function scenarioColour(i: number): string {
-  return COLOURS[((i % COLOURS.length) + COLOURS.length) % COLOURS.length];
+  return SCENARIO_COLOURS[((i % SCENARIO_COLOURS.length) + SCENARIO_COLOURS.length) % SCENARIO_COLOURS.length];
 }
