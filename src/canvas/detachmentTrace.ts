@@ -1,6 +1,6 @@
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
 import { interpolateZAt } from '../core/geometry/interpolateZAt';
-import type { Section, XZ } from '../core/model/section';
+import type { AnySection, XZ } from '../core/model/section';
 import { isExactFit } from '../core/analysis/isExactFit';
 
 // Where to draw the proposed detachment on the section: at the estimated elevation at the middle
@@ -23,7 +23,7 @@ export interface DetachmentTrace {
 }
 
 /** The detachment trace over the pins widened by `margin` of their width each side; null when there is no detachment estimate. */
-export function detachmentTrace(section: Section, analysis: SectionAnalysis, margin = 0.04): DetachmentTrace | null {
+export function detachmentTrace(section: AnySection, analysis: SectionAnalysis, margin = 0.04): DetachmentTrace | null {
   const ad = analysis.areaDepth;
   if (!ad || ad.noDetachment || ad.detachmentDepth === null || ad.detachmentElevation === null) return null;
   const [pL, pR] = section.pins;

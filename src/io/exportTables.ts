@@ -7,7 +7,7 @@ import { imageToSection } from '../core/calibration/mapPoints';
 import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
-import type { Section } from '../core/model/section';
+import { linePoints, type AnySection, type Section } from '../core/model/section';
 import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
 import { toCsv } from './csvText';
@@ -37,18 +37,18 @@ export function docFaultsInSection(doc: ProjectDoc): ImportedFault[] {
 }
 
 /** Returns the section with every coordinate, pin and reference rounded to 1e-6 unit (cleanCoordinate), for writing to a file; the resolution is kept as used (digitisingResolution already gives six figures). */
-export function cleanSection(section: Section): Section {
+export function cleanSection({ horizons, faults, ...section }: AnySection): Section {
   return {
     ...section,
     pins: [cleanCoordinate(section.pins[0]), cleanCoordinate(section.pins[1])],
     ...(section.referenceElevation !== undefined ? { referenceElevation: cleanCoordinate(section.referenceElevation) } : {}),
-    horizons: section.horizons.map((h) => ({
+    horizons: horizons.map(({ line, pieces, ...h }) => ({
       ...h,
-      ...(h.line ? { line: h.line.map(cleanPoint) } : {}),
-      ...(h.pieces ? { pieces: h.pieces.map((p) => p.map(cleanPoint)) } : {}),
+      ...(line ? { line: linePoints(line).map(cleanPoint) } : {}),
+      ...(pieces ? { pieces: pieces.map((p) => linePoints(p).map(cleanPoint)) } : {}),
       regional: h.regional.map(cleanPoint),
     })),
-    ...(section.faults ? { faults: section.faults.map((f) => ({ ...f, line: f.line.map(cleanPoint) })) } : {}),
+    ...(faults ? { faults: faults.map((f) => ({ ...f, line: linePoints(f.line).map(cleanPoint) })) } : {}),
   };
 }
 

@@ -26,7 +26,7 @@ import { FAULT_COLOURS } from '../core/model/commands/addFault';
 import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
 import { joinPieces } from '../core/model/joinPieces';
 import type { FaultArrays } from '../core/model/readFault';
-import type { SectionHorizon } from '../core/model/section';
+import { lineArrays, type SectionHorizon, type SectionLine } from '../core/model/section';
 import type { SectionProblem } from '../core/model/sectionProblem';
 
 export const FIGURE_WIDTH = 1400;
@@ -43,13 +43,13 @@ export const FIGURE_FAULT_WIDTH = 3.5;
 export const FIGURE_FAULT_DASH = '16 5';
 
 /** The horizon's line as measured (section units): its line, or its pieces joined along their faults (the analysis's rule), with which segments run along a fault; null when the pieces do not join. */
-function measuredLine(h: SectionHorizon, faults: readonly FaultArrays[]): { xs: ArrayLike<number>; zs: ArrayLike<number>; alongFault: ArrayLike<number> | null } | null {
-  if (h.line) return { ...toCoordinateArrays(h.line), alongFault: null };
+function measuredLine(h: SectionHorizon<SectionLine>, faults: readonly FaultArrays[]): { xs: ArrayLike<number>; zs: ArrayLike<number>; alongFault: ArrayLike<number> | null } | null {
+  if (h.line) return { ...lineArrays(h.line), alongFault: null };
   if (!h.pieces) return null;
-  if (h.pieces.length === 1) return { ...toCoordinateArrays(h.pieces[0]), alongFault: null };
+  if (h.pieces.length === 1) return { ...lineArrays(h.pieces[0]), alongFault: null };
   const problems: SectionProblem[] = [];
   // The section was checked when it was built (piece ends on their faults within the analysis's tolerance); join as it does.
-  const joined = joinPieces(h.pieces.map(toCoordinateArrays), faults, Infinity, 'horizon', h.name, problems, (n) => new Float64Array(n), h.joinFaults);
+  const joined = joinPieces(h.pieces.map(lineArrays), faults, Infinity, 'horizon', h.name, problems, (n) => new Float64Array(n), h.joinFaults);
   return joined ? { xs: joined.xs, zs: joined.zs, alongFault: joined.faultSegments } : null;
 }
 
@@ -269,7 +269,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   const stretches: { colour: string; runs: [number, number][][] }[] = [];
   if (ds.ok && fit) {
     const [pL, pR] = ds.section.pins;
-    const faultArrays: FaultArrays[] = (ds.section.faults ?? []).map((f) => ({ name: f.name, ...toCoordinateArrays(f.line) }));
+    const faultArrays: FaultArrays[] = (ds.section.faults ?? []).map((f) => ({ name: f.name, ...lineArrays(f.line) }));
     ds.section.horizons.forEach((h, i) => {
       // A horizon in pieces is filled along its joined line (the line the analysis measures), as on the canvas.
       const line = measuredLine(h, faultArrays);

@@ -2,7 +2,7 @@
 // (marked when it was computed for another state of the section, or said to be missing) and the
 // sensitivity amplification 1 + W0/D (docs/method.md §Sensitivity to the regional). Pure.
 import type { SectionAnalysis } from '../core/analysis/analyseSection';
-import type { Section } from '../core/model/section';
+import type { AnySection } from '../core/model/section';
 import { isStale } from '../core/model/sectionKey';
 import type { MonteCarloRecord, Percentiles } from '../core/analysis/monteCarloRecord';
 import { formatNumber } from '../format/formatQuantity';
@@ -33,7 +33,7 @@ export function amplificationOf(analysis: SectionAnalysis | null): number | null
 }
 
 /** Returns the uncertainty text and rows for a scenario's last Monte Carlo record (null: none) against the current section (null: no section). */
-export function uncertaintyReport(record: MonteCarloRecord | null, section: Section | null, analysis: SectionAnalysis | null): UncertaintyReport {
+export function uncertaintyReport(record: MonteCarloRecord | null, section: AnySection | null, analysis: SectionAnalysis | null): UncertaintyReport {
   const amplification = amplificationOf(analysis);
   const u = analysis?.units ?? section?.units ?? record?.units ?? 'm';
   const amplificationText = amplification === null ? '' : `Sensitivity amplification 1 + W₀/D = ${formatNumber(amplification, 3)} (W₀ = ${formatNumber(analysis!.pinWidth)} ${u}, D = ${formatNumber(analysis!.areaDepth!.displacement)} ${u}): raising every regional by 10 ${u} moves the detachment about ${formatNumber(10 * Math.abs(amplification), 3)} ${u} ${amplification > 0 ? 'up' : 'down'}, so an error in the regionals reaches the depth ${formatNumber(Math.abs(amplification), 3)} times larger.`;

@@ -16,7 +16,7 @@ import { interpolateZAt } from '../../src/core/geometry/interpolateZAt';
 import { paletteColour } from '../../src/core/model/horizonPalette';
 import { docToSection } from '../../src/core/model/docToSection';
 import type { ControlPoint, ProjectDoc } from '../../src/core/model/projectDoc';
-import type { Section } from '../../src/core/model/section';
+import type { AnySection, Section } from '../../src/core/model/section';
 import { fitCamera } from '../../src/state/camera';
 import { expectLastMessage } from './messages';
 
@@ -24,7 +24,7 @@ const demo = JSON.parse(readFileSync('public/demo/section.json', 'utf8')) as Sec
 const truth = JSON.parse(readFileSync('public/demo/truth.json', 'utf8')) as { displacement: number; detachmentElevation: number };
 const demoCalibration = JSON.parse(readFileSync('public/demo/calibration.json', 'utf8')) as { imageWidthPx: number; imageHeightPx: number; controlPoints: ControlPoint[] };
 
-function engine(section: Section): SectionAnalysis {
+function engine(section: AnySection): SectionAnalysis {
   const out = analyseSection(section);
   if (!out.ok) throw new Error(out.problems.map((p) => p.message).join('\n'));
   return out.analysis;

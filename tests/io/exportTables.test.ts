@@ -1,6 +1,7 @@
 // The section file for the command line: the active scenario as a Section, with the caution.
 import { describe, expect, it } from 'vitest';
 import { SECTION_CAUTION } from '../../src/core/analysis/caution';
+import { linePoints } from '../../src/core/model/section';
 import { validateSection } from '../../src/core/model/validateSection';
 import { sectionFileText } from '../../src/io/exportTables';
 import { parseProjectText } from '../../src/io/projectFile';
@@ -27,7 +28,7 @@ describe('sectionFileText', () => {
     const src = analysis.docSection.section;
     expect(section.pins[0]).toBeCloseTo(src.pins[0], 6);
     expect(section.pins[1]).toBeCloseTo(src.pins[1], 6);
-    src.horizons.forEach((h, i) => h.line!.forEach((p, j) => {
+    src.horizons.forEach((h, i) => linePoints(h.line!).forEach((p, j) => {
       expect(section.horizons[i].line![j][0]).toBeCloseTo(p[0], 6);
       expect(section.horizons[i].line![j][1]).toBeCloseTo(p[1], 6);
     }));
@@ -39,7 +40,7 @@ describe('sectionFileText', () => {
     if (!analysis.docSection.ok) throw new Error('sample has no section');
     // A section as the calibration hands it over: tails from the affine arithmetic.
     const noisy = { ...analysis.docSection.section, pins: [-9.79e-13, 1000.0000000000001] as [number, number] };
-    noisy.horizons = noisy.horizons.map((h) => ({ ...h, line: h.line!.map(([x, z]) => [x + 2.27e-13, z === 0 ? -0 : z - 1e-12] as [number, number]) }));
+    noisy.horizons = noisy.horizons.map((h) => ({ ...h, line: { xs: h.line!.xs.map((x) => x + 2.27e-13), zs: h.line!.zs.map((z) => (z === 0 ? -0 : z - 1e-12)) } }));
     const r = sectionFileText({ ...analysis, docSection: { ...analysis.docSection, section: noisy } });
     if (!r.ok) throw new Error(r.message);
     expect(r.text).not.toMatch(/\de-\d/);

@@ -1,5 +1,5 @@
 import type { Cutoff } from '../model/joinPieces';
-import type { LengthUnit, Section } from '../model/section';
+import type { AnySection, LengthUnit } from '../model/section';
 import type { Regime } from './detachmentOfLine';
 import type { SectionProblem } from '../model/validateSection';
 import { chamberlinDepth, type ChamberlinReason } from './chamberlinDepth';
@@ -41,7 +41,7 @@ export type AnalysisOutcome = { ok: true; analysis: SectionAnalysis; warnings: S
  * Full area-balance analysis (units and units² of the section); input problems as { ok: false, problems }, never thrown.
  * A caller that analyses repeatedly may hand in its own `buffer` (createPreparationBuffer) to spare fresh memory per call.
  */
-export function analyseSection(section: Section, options: PrepareOptions & { buffer?: PreparationBuffer } = {}): AnalysisOutcome {
+export function analyseSection(section: AnySection, options: PrepareOptions & { buffer?: PreparationBuffer } = {}): AnalysisOutcome {
   // Only numbers leave this function, so the prepared lines may live in the caller's buffer.
   const prep = options.buffer ? prepareSectionScratch(section, options, options.buffer) : prepareSection(section, options);
   if (!prep.ok) return { ok: false, problems: prep.problems };

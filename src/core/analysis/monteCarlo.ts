@@ -1,4 +1,4 @@
-import type { Section } from '../model/section';
+import type { AnySection } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
 import { percentile } from '../stats/percentile';
 import { seededRandom } from '../stats/seededRandom';
@@ -58,7 +58,7 @@ export interface MonteCarloResult {
 export type MonteCarloOutcome = { ok: true; result: MonteCarloResult } | { ok: false; problems: SectionProblem[] };
 
 /** Seeded Monte Carlo of detachment depth, elevation and displacement (units); input problems as { ok: false }; onProgress(done, total) every ~1% of runs. */
-export function monteCarlo(section: Section, options: MonteCarloOptions, onProgress?: (done: number, total: number) => void): MonteCarloOutcome {
+export function monteCarlo(section: AnySection, options: MonteCarloOptions, onProgress?: (done: number, total: number) => void): MonteCarloOutcome {
   const prep = prepareSection(section);
   if (!prep.ok) return { ok: false, problems: prep.problems };
   const p = prep.prepared;
@@ -107,7 +107,7 @@ export function monteCarlo(section: Section, options: MonteCarloOptions, onProgr
 type NoiseDraw = (normal: () => number, out: Float64Array) => boolean;
 
 /** One normal area change per horizon, σ·√(Σ cᵢ²) (docs/method.md §Area variance of a horizon). */
-function analyticNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
+function analyticNoise(section: AnySection, p: PreparedSection, sigma: number): NoiseDraw {
   const sds = p.horizons.map((h) => sigma * Math.sqrt(areaNoiseFactor(h.line, h.inputVertexCount, p.pins)));
   return (normal, out) => {
     for (let i = 0; i < sds.length; i++) out[i] = sds[i] === 0 ? 0 : sds[i] * normal();
@@ -116,7 +116,7 @@ function analyticNoise(section: Section, p: PreparedSection, sigma: number): Noi
 }
 
 /** σ on every digitised vertex's z, faults included, cutoffs moved with their faults (perturbSection.ts), each horizon re-joined and re-clipped; false when a perturbed section no longer validates or a line no longer crosses the pins once. */
-function vertexNoise(section: Section, p: PreparedSection, sigma: number): NoiseDraw {
+function vertexNoise(section: AnySection, p: PreparedSection, sigma: number): NoiseDraw {
   const perturb = sectionPerturbation(section);
   return (normal, out) => {
     const v = validateSectionArrays(perturb(sigma, normal));

@@ -1,5 +1,5 @@
 import { nearestOnPolyline } from '../geometry/nearestOnPolyline';
-import type { Section, SectionFault, SectionHorizon, XZ } from '../model/section';
+import { linePoints, type AnySection, type Section, type SectionFault, type SectionHorizon, type XZ } from '../model/section';
 import { ON_FAULT_TOLERANCE } from '../model/validateSectionArrays';
 
 // The vertex method of the Monte Carlo (docs/method.md §Sensitivity to the regional): the digitising
@@ -52,7 +52,9 @@ function endPlaces(section: Section, tolerance: number): EndPlaces {
  * elevation (in fault order), then on every free horizon vertex's elevation (in horizon and piece order),
  * and returns the perturbed section; σ = 0 returns the same coordinates exactly.
  */
-export function sectionPerturbation(section: Section): SectionPerturbation {
+export function sectionPerturbation(given: AnySection): SectionPerturbation {
+  // Each draw makes new points anyway: the lines as points once, whichever form they came in.
+  const section = asPoints(given);
   const tolerance = ON_FAULT_TOLERANCE * (section.pins[1] - section.pins[0]);
   const places = endPlaces(section, tolerance);
   const faults = section.faults ?? [];
@@ -75,4 +77,13 @@ export function sectionPerturbation(section: Section): SectionPerturbation {
     });
     return { ...section, horizons, ...(section.faults ? { faults: movedFaults } : {}) };
   };
+}
+
+/** The section with every horizon and fault line as [x, z] points. */
+function asPoints({ horizons: given, faults: givenFaults, ...section }: AnySection): Section {
+  const horizons = given.map(({ line, pieces, ...h }): SectionHorizon => ({
+    ...h, ...(line ? { line: linePoints(line) } : {}), ...(pieces ? { pieces: pieces.map(linePoints) } : {}),
+  }));
+  const faults = givenFaults?.map((f): SectionFault => ({ name: f.name, line: linePoints(f.line) }));
+  return { ...section, horizons, ...(faults ? { faults } : {}) };
 }

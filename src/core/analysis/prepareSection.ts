@@ -1,5 +1,5 @@
 import { digitisingResolution } from '../model/digitisingResolution';
-import type { LengthUnit, Section } from '../model/section';
+import type { AnySection, LengthUnit } from '../model/section';
 import { validateSectionArrays, type Allocate, type SectionProblem } from '../model/validateSection';
 import { prepareHorizon, type PreparedHorizon } from './prepareHorizon';
 import type { PreparationBuffer } from './preparationBuffer';
@@ -41,16 +41,16 @@ export interface PrepareOptions {
 export type SectionPreparation = { ok: true; prepared: PreparedSection } | { ok: false; problems: SectionProblem[] };
 
 /** The section validated, clipped and measured once; every problem found (structure, pins, self-crossing) instead of throwing. */
-export function prepareSection(section: Section, options: PrepareOptions = {}, buffer?: PreparationBuffer): SectionPreparation {
+export function prepareSection(section: AnySection, options: PrepareOptions = {}, buffer?: PreparationBuffer): SectionPreparation {
   return prepare(section, options, buffer, false);
 }
 
 /** As prepareSection, but the clipped lines live in the caller's buffer: read the result before that buffer's next use, keep none of its arrays. */
-export function prepareSectionScratch(section: Section, options: PrepareOptions, buffer: PreparationBuffer): SectionPreparation {
+export function prepareSectionScratch(section: AnySection, options: PrepareOptions, buffer: PreparationBuffer): SectionPreparation {
   return prepare(section, options, buffer, true);
 }
 
-function prepare(section: Section, options: PrepareOptions, buffer: PreparationBuffer | undefined, scratch: boolean): SectionPreparation {
+function prepare(section: AnySection, options: PrepareOptions, buffer: PreparationBuffer | undefined, scratch: boolean): SectionPreparation {
   // Validation copies the points straight into typed arrays, so every vertex is read from the input once.
   buffer?.reset();
   const v = validateSectionArrays(section, buffer?.allocate);

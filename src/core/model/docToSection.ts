@@ -5,7 +5,7 @@ import { lineToSection } from '../calibration/lineToSection';
 import { nearestOnPolyline } from '../geometry/nearestOnPolyline';
 import { selfIntersections } from '../geometry/selfIntersections';
 import type { DocFault, DocHorizon, ProjectDoc, Scenario } from './projectDoc';
-import type { Section, SectionFault, SectionHorizon, XZ } from './section';
+import type { FlatLine, FlatSection, SectionFault, SectionHorizon, XZ } from './section';
 import { digitisingResolution } from './digitisingResolution';
 import { ON_FAULT_TOLERANCE } from './validateSectionArrays';
 
@@ -14,7 +14,7 @@ export interface SkippedHorizon { id: string; name: string; reason: string }
 export interface SkippedFault { id: string; name: string; reason: string }
 
 export type DocSection =
-  | { ok: true; section: Section; fit: FittedCalibration; horizonIds: string[]; skipped: SkippedHorizon[]; skippedFaults: SkippedFault[] }
+  | { ok: true; section: FlatSection; fit: FittedCalibration; horizonIds: string[]; skipped: SkippedHorizon[]; skippedFaults: SkippedFault[] }
   | { ok: false; message: string; fit: FittedCalibration | null };
 
 /** Returns the active (or given) scenario of the document. */
@@ -23,7 +23,7 @@ export function activeScenario(doc: ProjectDoc, scenarioId?: string): Scenario {
   return doc.scenarios.find((s) => s.id === id) ?? doc.scenarios[0];
 }
 
-/** Returns the scenario's section in section units, skipping (with a reason) horizons and faults not ready to analyse. */
+/** Returns the scenario's section in section units (lines as coordinate arrays), skipping (with a reason) horizons and faults not ready to analyse. */
 export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
   if (!doc.calibration) return { ok: false, message: 'Calibrate the scan first: give known x and z positions.', fit: null };
   const cal = fitCalibration(doc.calibration);
@@ -36,7 +36,7 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
   const toXZ = (p: [number, number]): XZ => imageToSection(fit, p);
   const { faults, usable, skippedFaults } = readFaults(doc.faults, fit);
   const tolerance = ON_FAULT_TOLERANCE * Math.abs(pr - pl);
-  const horizons: SectionHorizon[] = [];
+  const horizons: SectionHorizon<FlatLine>[] = [];
   const horizonIds: string[] = [];
   const skipped: SkippedHorizon[] = [];
   for (const h of doc.horizons) {
@@ -63,7 +63,7 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
     });
     horizonIds.push(h.id);
   }
-  const section: Section = {
+  const section: FlatSection = {
     units: doc.units,
     pins: [Math.min(pl, pr), Math.max(pl, pr)],
     horizons,
@@ -81,8 +81,8 @@ export function docToSection(doc: ProjectDoc, scenarioId?: string): DocSection {
 
 /** The document's faults in section units, those usable for joins (by id), and the ones left out with the reason. */
 function readFaults(docFaults: readonly DocFault[], fit: FittedCalibration) {
-  const faults: SectionFault[] = [];
-  const usable = new Map<string, SectionFault>();
+  const faults: SectionFault<FlatLine>[] = [];
+  const usable = new Map<string, SectionFault<FlatLine>>();
   const skippedFaults: SkippedFault[] = [];
   for (const f of docFaults) {
     if (f.pointsPx.length < 2) {
@@ -90,7 +90,7 @@ function readFaults(docFaults: readonly DocFault[], fit: FittedCalibration) {
       continue;
     }
     const line = lineToSection(fit, f.pointsPx);
-    const crossing = selfIntersections(line.map((q) => q[0]), line.map((q) => q[1]), 1);
+    const crossing = selfIntersections(line.xs, line.zs, 1);
     if (crossing.length > 0) {
       const [i, j] = crossing[0];
       skippedFaults.push({ id: f.id, name: f.name, reason: `the line crosses itself (segments ${i}–${i + 1} and ${j}–${j + 1}); redraw it so it does not` });
@@ -108,19 +108,19 @@ function readFaults(docFaults: readonly DocFault[], fit: FittedCalibration) {
  * on a fault that is missing or left out, a piece of fewer than two vertices, a piece end off its fault.
  */
 function horizonShape(
-  h: DocHorizon, docFaults: readonly DocFault[], usable: ReadonlyMap<string, SectionFault>,
+  h: DocHorizon, docFaults: readonly DocFault[], usable: ReadonlyMap<string, SectionFault<FlatLine>>,
   fit: FittedCalibration, tolerance: number, units: string,
-): Pick<SectionHorizon, 'line' | 'pieces' | 'joinFaults'> | string {
-  // The whole line converted once (and remembered), the pieces cut from it.
+): Pick<SectionHorizon<FlatLine>, 'line' | 'pieces' | 'joinFaults'> | string {
+  // The whole line converted once (and remembered), the pieces views into it (no copy).
   const line = lineToSection(fit, h.pointsPx);
   if (h.joins.length === 0) return { line };
-  const pieces: XZ[][] = [];
+  const pieces: FlatLine[] = [];
   const joinFaults: string[] = [];
   let from = 0;
   for (let k = 0; k <= h.joins.length; k++) {
     const to = k < h.joins.length ? h.joins[k].at : h.pointsPx.length;
     if (to - from < 2) return `piece ${k + 1} has fewer than two vertices`;
-    pieces.push(line.slice(from, to));
+    pieces.push({ xs: line.xs.subarray(from, to), zs: line.zs.subarray(from, to) });
     from = to;
   }
   for (let k = 0; k < h.joins.length; k++) {
@@ -130,9 +130,10 @@ function horizonShape(
     if (!named) return `the join after piece ${k + 1} is on a fault the document no longer has; join it again or remove the join`;
     if (!fault) return `it is joined on fault "${named.name}", which is left out (see the fault's own message)`;
     joinFaults.push(fault.name);
-    const ends: [string, XZ][] = [[`the end of piece ${k + 1}`, pieces[k][pieces[k].length - 1]], [`the start of piece ${k + 2}`, pieces[k + 1][0]]];
+    const last = pieces[k].xs.length - 1;
+    const ends: [string, XZ][] = [[`the end of piece ${k + 1}`, [pieces[k].xs[last], pieces[k].zs[last]]], [`the start of piece ${k + 2}`, [pieces[k + 1].xs[0], pieces[k + 1].zs[0]]]];
     for (const [what, p] of ends) {
-      const near = nearestOnPolyline(fault.line.map((q) => q[0]), fault.line.map((q) => q[1]), p[0], p[1]);
+      const near = nearestOnPolyline(fault.line.xs, fault.line.zs, p[0], p[1]);
       if (near && near.distance > tolerance) {
         return `${what} is ${fmt(near.distance)} ${units} off fault "${fault.name}", which it is joined along; move it onto the fault`;
       }

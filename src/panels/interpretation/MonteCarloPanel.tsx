@@ -2,7 +2,7 @@
 // histogram of depths with P10/P50/P90 and the share of runs without a valid detachment.
 import { useEffect, useRef, useState } from 'react';
 import type { MonteCarloOptions } from '../../core/analysis/monteCarlo';
-import type { Section } from '../../core/model/section';
+import type { AnySection } from '../../core/model/section';
 import { isStale, sectionKey } from '../../core/model/sectionKey';
 import { useDocStore } from '../../state/docStore';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
@@ -36,7 +36,7 @@ function toOptions(f: Fields): MonteCarloOptions | string {
   };
 }
 
-function recordOf(m: MonteCarloDone, section: Section, options: MonteCarloOptions, f: Fields, referenceElevation: number): MonteCarloRecord {
+function recordOf(m: MonteCarloDone, section: AnySection, options: MonteCarloOptions, f: Fields, referenceElevation: number): MonteCarloRecord {
   const pct = (sp: MonteCarloDone['depth']) => (sp ? { p10: sp.p10, p50: sp.p50, p90: sp.p90 } : null);
   return {
     sectionKey: sectionKey(section), units: section.units, seed: options.seed, runs: m.runs, method: options.method ?? 'analytic',
@@ -49,7 +49,7 @@ function recordOf(m: MonteCarloDone, section: Section, options: MonteCarloOption
 interface Props {
   scenarioId: string;
   /** The section as the pane shows it (whether a result is out of date); a run takes the section anew once its lines are checked. */
-  section: Section;
+  section: AnySection;
 }
 
 export function MonteCarloPanel({ scenarioId, section }: Props) {

@@ -3,7 +3,7 @@
 // reference, and the highest regional moves with the offset, so a depth curve would disagree with the
 // main pane's depth for the same shift; the elevation has no such ambiguity.
 import { useEffect, useState } from 'react';
-import type { Section } from '../../core/model/section';
+import type { AnySection } from '../../core/model/section';
 import { prepareSection, type PreparedSection } from '../../core/analysis/prepareSection';
 import { regionalSensitivity } from '../../core/analysis/sensitivity';
 import { linspace } from './meanBand';
@@ -18,7 +18,7 @@ import { useCrossingChecks } from '../../state/crossingChecks';
  * The sweeps of `section`; `prepared`, when given, is the analysis's own preparation of that section (the sweeps
  * start from it instead of preparing the section again).
  */
-export function SensitivityPanel({ scenarioId, section: current, prepared: currentPrepared }: { scenarioId: string; section: Section; prepared?: PreparedSection }) {
+export function SensitivityPanel({ scenarioId, section: current, prepared: currentPrepared }: { scenarioId: string; section: AnySection; prepared?: PreparedSection }) {
   // The sweeps re-evaluate the whole section: while a regional or pin is dragged they keep the section
   // of the gesture's start, and follow once it ends.
   const gesture = useDocStore((s) => s.gestureStart !== null);
@@ -34,7 +34,7 @@ export function SensitivityPanel({ scenarioId, section: current, prepared: curre
   const u = section.units;
   // The sweeps re-prepare the whole section (a big document's lines take a few hundred milliseconds): they are
   // made after the document is first drawn, in a task of their own, and the panel says so meanwhile.
-  const [made, setMade] = useState<{ section: Section; offsetRange: number; tiltRange: number; pivot: 'left' | 'right'; sweep: Sweep | null } | null>(null);
+  const [made, setMade] = useState<{ section: AnySection; offsetRange: number; tiltRange: number; pivot: 'left' | 'right'; sweep: Sweep | null } | null>(null);
   useEffect(() => {
     if (checking) return;
     // A frame, then a task: after the browser has drawn. A page not drawing (a hidden tab) gets no frames, so a
@@ -106,7 +106,7 @@ export function SensitivityPanel({ scenarioId, section: current, prepared: curre
 interface Sweep { offsets: number[]; tilts: number[]; result: ReturnType<typeof regionalSensitivity>; width: number }
 
 /** The offset and tilt sweeps of the section, from its preparation when given (null when the engine cannot prepare it). */
-function sweepOf(section: Section, prepared: PreparedSection | undefined, offsetRange: number, tiltRange: number, pivot: 'left' | 'right'): Sweep | null {
+function sweepOf(section: AnySection, prepared: PreparedSection | undefined, offsetRange: number, tiltRange: number, pivot: 'left' | 'right'): Sweep | null {
   const prep = prepared ? { ok: true as const, prepared } : prepareSection(section);
   if (!prep.ok) return null;
   const offsets = linspace(-Math.abs(offsetRange), Math.abs(offsetRange), 41);

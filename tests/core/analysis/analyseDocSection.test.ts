@@ -10,6 +10,8 @@ import { prepareSection } from '../../../src/core/analysis/prepareSection';
 import { forwardSection } from '../../../src/core/forward/forwardSection';
 import { setRegional } from '../../../src/core/model/commands/setRegional';
 import { sectionToProjectDoc } from '../../../src/core/model/migrations/sectionToProjectDoc';
+import { isFlatLine, linePoints, type Section } from '../../../src/core/model/section';
+import { sectionKey } from '../../../src/core/model/sectionKey';
 import { expectClose } from '../../expectClose';
 
 const D = 2000;
@@ -57,6 +59,25 @@ describe('analyseDocSection', () => {
     expect(a.leftOut.map((h) => h.id)).toEqual([id]);
     expect(a.prepared.horizons.map((h) => h.name)).toEqual(['H1', 'H2', 'H3']);
     expect(a.docSection.section.horizons.map((h) => h.name)).toEqual(['H1', 'H2', 'H3']);
+  });
+
+  it('reads the lines as coordinate arrays and gives the numbers of the same lines as points, to the last bit', () => {
+    const doc = forwardDoc();
+    const a = analyseDoc(doc);
+    if (!a.docSection.ok || !a.outcome?.ok) throw new Error('no analysis');
+    const flat = a.docSection.section;
+    expect(flat.horizons.every((h) => h.line && isFlatLine(h.line))).toBe(true);
+    // The same section with every line as [x, z] points, the form of a section file.
+    const points: Section = { ...flat, horizons: flat.horizons.map(({ line, pieces: _pieces, ...h }) => ({ ...h, line: linePoints(line!) })), faults: [] };
+    const fromPoints = analyseSection(points);
+    if (!fromPoints.ok) throw new Error(fromPoints.problems[0].message);
+    expect(a.outcome.analysis).toEqual(fromPoints.analysis);
+    a.outcome.analysis.horizons.forEach((h, i) => {
+      expect(Object.is(h.excessArea, fromPoints.analysis.horizons[i].excessArea)).toBe(true);
+      expect(Object.is(h.depth, fromPoints.analysis.horizons[i].depth)).toBe(true);
+    });
+    // A result kept with the key of one form is not stale for the other.
+    expect(sectionKey(flat)).toBe(sectionKey(points));
   });
 
   it('carries no preparation when there is nothing to analyse', () => {

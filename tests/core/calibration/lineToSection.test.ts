@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { fitCalibration } from '../../../src/core/calibration/fitCalibration';
 import { lineToSection } from '../../../src/core/calibration/lineToSection';
+import { imageToSection } from '../../../src/core/calibration/mapPoints';
 import type { ControlPoint, ImagePx } from '../../../src/core/model/projectDoc';
 
 /** x = 1000 + 2.5 u − 0.1 v, z = 300 + 0.2 u − 1.5 v: rotated and sheared, written out by hand. */
@@ -18,12 +19,17 @@ function fitOf(m: (u: number, v: number) => { x: number; z: number }) {
 describe('lineToSection(fit, pointsPx)', () => {
   it('maps every vertex through the calibration, as the hand-written affine does', () => {
     const line: ImagePx[] = Array.from({ length: 1000 }, (_, k) => [k * 3.5, 700 + 40 * Math.sin(k / 30)]);
-    const xz = lineToSection(fitOf(map), line);
-    expect(xz).toHaveLength(line.length);
+    const fit = fitOf(map);
+    const xz = lineToSection(fit, line);
+    expect(xz.xs).toHaveLength(line.length);
+    expect(xz.zs).toHaveLength(line.length);
     line.forEach(([u, v], k) => {
       const want = map(u, v);
-      expect(xz[k][0]).toBeCloseTo(want.x, 6);
-      expect(xz[k][1]).toBeCloseTo(want.z, 6);
+      expect(xz.xs[k]).toBeCloseTo(want.x, 6);
+      expect(xz.zs[k]).toBeCloseTo(want.z, 6);
+      // The coordinate arrays hold imageToSection's numbers to the last bit (the pins, regionals and the figure use it).
+      const [x, z] = imageToSection(fit, [u, v]);
+      expect(Object.is(xz.xs[k], x) && Object.is(xz.zs[k], z)).toBe(true);
     });
   });
 
@@ -37,8 +43,8 @@ describe('lineToSection(fit, pointsPx)', () => {
     const wider = (u: number, v: number) => ({ x: 1000 + 5 * u - 0.1 * v, z: 300 + 0.2 * u - 1.5 * v });
     const again = lineToSection(fitOf(wider), line);
     expect(again).not.toBe(first);
-    expect(again[2][0]).toBeCloseTo(wider(50, 22).x, 6);
-    expect(lineToSection(fit, line)[2][0]).toBeCloseTo(map(50, 22).x, 6);
+    expect(again.xs[2]).toBeCloseTo(wider(50, 22).x, 6);
+    expect(lineToSection(fit, line).xs[2]).toBeCloseTo(map(50, 22).x, 6);
     // Another array with the same vertices is converted on its own.
     expect(lineToSection(fit, line.map((p): ImagePx => [p[0], p[1]]))).not.toBe(first);
   });

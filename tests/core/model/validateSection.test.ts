@@ -124,5 +124,23 @@ describe('validateSection(json)', () => {
     expect(v.ok && v.section.horizons[0].lineX).toBe(given[0]);
     expect(given.map((a) => a.length)).toEqual([3, 3, 2, 2]);
   });
-});
 
+  it('reads a line given as coordinate arrays with the same checks and messages as [x, z] points', () => {
+    // The same horizon line as the app hands it over (section.ts FlatLine).
+    const flatOf = (pts: number[][]) => ({ xs: Float64Array.from(pts, (p) => p[0]), zs: Float64Array.from(pts, (p) => p[1]) });
+    const asFlat = (line: number[][]) => ({ ...good(), horizons: [{ ...good().horizons[0], line: flatOf(line) }] });
+    const v = validateSectionArrays(asFlat(good().horizons[0].line));
+    const w = validateSectionArrays(good());
+    expect(v.ok && w.ok).toBe(true);
+    if (v.ok && w.ok) expect(v.section).toEqual(w.section);
+    // Each bad point gives the problem the same point gives as a pair: NaN, Infinity, out of range, too few.
+    for (const line of [[[0, 0], [50, Number.NaN], [100, 0]], [[0, 0], [Number.NEGATIVE_INFINITY, 1], [100, 0]], [[0, 0], [50, 2e9], [100, 0]], [[0, 0]]]) {
+      const pairs = { ...good(), horizons: [{ ...good().horizons[0], line, projected: undefined }] };
+      const flat = { ...asFlat(line), horizons: [{ ...asFlat(line).horizons[0], projected: undefined }] };
+      expect(problemsOf(flat)).toEqual(problemsOf(pairs));
+    }
+    // Arrays of two lengths are refused.
+    const uneven = { ...good(), horizons: [{ ...good().horizons[0], line: { xs: new Float64Array([0, 50, 100]), zs: new Float64Array([0, 10]) } }] };
+    expect(problemsOf(uneven)[0]).toMatchObject({ code: 'bad-shape', horizon: 'Top' });
+  });
+});
