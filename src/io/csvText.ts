@@ -49,18 +49,29 @@ export function parseCsvRows(text: string, maxRows = 5_000_000): string[][] {
 }
 
 /**
+ * A comment label ('# project') that opens a row as written, unquoted, so that a reader which skips '#' lines skips
+ * the row; a name or other text that starts with '#' is quoted instead (csvField), so it is never taken for one.
+ */
+export class CsvCommentLabel {
+  constructor(readonly text: string) {
+    if (!/^#[^",\r\n]*$/.test(text) || text !== text.trim()) throw new Error(`not a comment label: ${text}`);
+  }
+}
+
+/**
  * Returns one CSV field; text that starts like a formula is marked by spreadsheetText (src/format/spreadsheetText.ts).
  * Quoted when it holds a comma, quote or line break, starts with '#' (else read as a comment line when it opens a
  * row) or has white space at either end (else trimmed on reading): every text comes back exactly.
  */
-export function csvField(value: string | number | boolean | null): string {
+export function csvField(value: string | number | boolean | null | CsvCommentLabel): string {
   if (value === null) return '';
+  if (value instanceof CsvCommentLabel) return value.text;
   if (typeof value !== 'string') return String(value);
   const safe = spreadsheetText(value);
   return /[",\r\n]|^#/.test(safe) || value !== value.trim() ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
 /** Returns rows as CSV text with CRLF line ends. */
-export function toCsv(rows: (string | number | boolean | null)[][]): string {
+export function toCsv(rows: (string | number | boolean | null | CsvCommentLabel)[][]): string {
   return rows.map((r) => r.map(csvField).join(',')).join('\r\n') + '\r\n';
 }

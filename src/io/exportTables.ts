@@ -10,7 +10,7 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { linePoints, type AnySection, type Section } from '../core/model/section';
 import type { DocAnalysis } from '../core/analysis/analyseDocSection';
 import { cleanCoordinate, cleanPoint } from './cleanCoordinate';
-import { toCsv } from './csvText';
+import { CsvCommentLabel, toCsv } from './csvText';
 import { columnsOf, csvHeader, dataCell } from '../format/horizonColumns';
 import type { UncertaintyReport } from './uncertaintyReport';
 import { leftOutText } from '../format/leftOutText';
@@ -66,14 +66,16 @@ export function sectionFileText(analysis: DocAnalysis): { ok: true; text: string
 // Ten significant digits, and a magnitude below 1e-9 (rounding residue of an exact fit) written as 0, never "-0".
 const r = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Math.abs(v) < 1e-9 ? 0 : Number(v.toPrecision(10)));
 
+const comment = (label: string): CsvCommentLabel => new CsvCommentLabel(label);
+
 /** Returns the results table of the analysis as CSV (one row per horizon, then the area–depth line, the last Monte Carlo run and the caution), or null when there are no results. */
 export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: UncertaintyReport | null = null): string | null {
   const out = analysis.outcome;
   if (!out || !out.ok) return null;
   const a = out.analysis;
   const u = a.units;
-  const rows: (string | number | boolean | null)[][] = [
-    ['# project', doc.title], ['# scenario', activeScenario(doc).name], ['# units', u],
+  const rows: (string | number | boolean | null | CsvCommentLabel)[][] = [
+    [comment('# project'), doc.title], [comment('# scenario'), activeScenario(doc).name], [comment('# units'), u],
     columnsOf('csv').map((c) => csvHeader(c, u)),
     // A single number goes in as a number (csvField guards text that starts like a formula, not numbers).
     ...a.horizons.map((h) => columnsOf('csv').map((c) => { const v = dataCell(c, h); return v !== '' && c.kind === 'horizon' && c.unit !== 'text' && c.unit !== 'yes-no' ? Number(v) : v; })),
@@ -92,12 +94,12 @@ export function resultsCsv(doc: ProjectDoc, analysis: DocAnalysis, uncertainty: 
   }
   if (uncertainty) {
     rows.push(['sensitivity_amplification_1_plus_W0_over_D', r(uncertainty.amplification), null, null]);
-    if (uncertainty.status === 'none') rows.push(['# monte carlo', uncertainty.lines[0]]);
+    if (uncertainty.status === 'none') rows.push([comment('# monte carlo'), uncertainty.lines[0]]);
     for (const [name, v] of uncertainty.rows) rows.push([name, typeof v === 'number' ? r(v) : v, null, null]);
   }
   // A horizon left out for a problem of its own (a line that crosses itself, a regional short of a pin), as the pane says.
-  for (const h of analysis.leftOut) rows.push(['# left out', leftOutText(h)]);
-  for (const n of analysisNotes(a)) rows.push(['# note', n]);
-  rows.push(['# caution', SECTION_CAUTION]);
+  for (const h of analysis.leftOut) rows.push([comment('# left out'), leftOutText(h)]);
+  for (const n of analysisNotes(a)) rows.push([comment('# note'), n]);
+  rows.push([comment('# caution'), SECTION_CAUTION]);
   return toCsv(rows);
 }

@@ -4,6 +4,7 @@
 // follow the pointer are written into the page once a frame by the live text (panels/liveText.tsx), from the one
 // live analysis and the one formatter, and the panes render once more when the gesture ends (or when a number
 // needs a change the live text cannot make, see showDocNow).
+import { useSyncExternalStore } from 'react';
 import { create } from 'zustand';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore } from './docStore';
@@ -14,7 +15,16 @@ export interface ShownDoc {
   gestureStart: ProjectDoc | null;
 }
 
-export const useShownDoc = create<ShownDoc>()(() => ({ doc: useDocStore.getState().doc, gestureStart: useDocStore.getState().gestureStart }));
+const shownDocStore = create<ShownDoc>()(() => ({ doc: useDocStore.getState().doc, gestureStart: useDocStore.getState().gestureStart }));
+
+/**
+ * The shown document in a component (and the store's getState/setState/subscribe). A static render
+ * (renderToStaticMarkup) reads the document shown now, not the store's first state as a server render would.
+ */
+export const useShownDoc = Object.assign(
+  (): ShownDoc => useSyncExternalStore(shownDocStore.subscribe, shownDocStore.getState, shownDocStore.getState),
+  { getState: shownDocStore.getState, setState: shownDocStore.setState, subscribe: shownDocStore.subscribe },
+);
 
 /** Shows the store's document now: the panes render it (during a gesture, when the live text cannot follow). */
 export function showDocNow(): void {

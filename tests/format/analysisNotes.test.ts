@@ -27,7 +27,7 @@ describe('analysisNotes', () => {
     const a = da.outcome.analysis;
     expect(analysisNotes(a).filter((n) => n.startsWith('No Chamberlin depth'))).toEqual([NOTE]);
     expect(diagnostics(da.docSection, da.outcome).map((d) => d.text)).toContain(NOTE);
-    expect(resultsCsv(doc, da)!).toContain(`"# note","${NOTE.replace(/"/g, '""')}"`);
+    expect(resultsCsv(doc, da)!).toContain(`# note,"${NOTE.replace(/"/g, '""')}"`);
     expect(formatTable(a, null)).toContain(`  - ${NOTE}`);
     expect(toJsonReport(a).notes).toContain(NOTE);
     // The engine's own notes carry no Chamberlin words: the reason is data on the horizon.

@@ -11,6 +11,8 @@ import { parseCsvRows } from '../../src/io/csvText';
 import { resultsCsv } from '../../src/io/exportTables';
 import type { DocAnalysis } from '../../src/core/analysis/analyseDocSection';
 import { emptyProjectDoc } from '../../src/core/model/projectDoc';
+import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
+import { useDocStore } from '../../src/state/docStore';
 import { HorizonTable } from '../../src/panels/interpretation/HorizonTable';
 import { resultsTsv } from '../../src/panels/interpretation/resultsTsv';
 import { ReportHorizonTable } from '../../src/panels/files/ReportHorizonTable';
@@ -51,8 +53,11 @@ function htmlTable(html: string, label: (c: HorizonColumn) => string): Table {
 }
 
 function pane(): Table & { checked: boolean[] } {
+  // The pane's numbers are live texts read from the open document (panels/liveText.tsx): the section, opened as the app opens it.
+  const doc = sectionToProjectDoc(section);
+  useDocStore.setState({ doc, gestureStart: null });
   const html = renderToStaticMarkup(
-    <HorizonTable analysis={a} horizonIds={a.horizons.map((_, i) => `h${i}`)} flagged={new Set()} onToggle={() => {}} initialAll />,
+    <HorizonTable analysis={a} horizonIds={doc.horizons.map((h) => h.id)} flagged={new Set()} onToggle={() => {}} initialAll />,
   );
   const table = html.slice(html.indexOf('data-testid="horizon-table"'), html.indexOf('</table>'));
   // The pane's name cell is "Horizon (in fit)" with the box; a header note sits in a span after the label.

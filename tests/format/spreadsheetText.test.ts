@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../src/core/analysis/analyseSection';
 import { fromSpreadsheetText, spreadsheetText } from '../../src/format/spreadsheetText';
 import { parseHorizonsCsv, writeHorizonsCsv } from '../../src/io/csvHorizons';
-import { csvField, parseCsvRows } from '../../src/io/csvText';
+import { CsvCommentLabel, csvField, parseCsvRows, parseCsvTable, toCsv } from '../../src/io/csvText';
 import { resultsTsv } from '../../src/panels/interpretation/resultsTsv';
 import { methodExample } from '../core/analysis/sections';
 
@@ -64,5 +64,17 @@ describe('one rule for Copy table and CSV', () => {
 
   it('fromSpreadsheetText undoes spreadsheetText for any text (fast-check)', () => {
     fc.assert(fc.property(fc.string(), (t) => fromSpreadsheetText(spreadsheetText(t)) === t));
+  });
+
+  it('writes a comment label unquoted and a name that starts with # quoted, so only the label reads as a comment', () => {
+    // A '#' opening a row is the comment mark (common practice for CSV readers), as in the results CSV's '# caution' row.
+    const text = toCsv([[new CsvCommentLabel('# caution'), 'Check against wells'], ['#2 coal', 1]]);
+    expect(text.startsWith('# caution,')).toBe(true);
+    const table = parseCsvTable(text);
+    expect(table.quoted[0] & 1).toBe(0);
+    expect(table.rows[1][0]).toBe('#2 coal');
+    expect(table.quoted[1] & 1).toBe(1);
+    expect(() => new CsvCommentLabel('#a,b')).toThrow();
+    expect(() => new CsvCommentLabel('note')).toThrow();
   });
 });

@@ -82,7 +82,7 @@ describe('uncertaintyReport', () => {
     const da = selectAnalysis(doc);
     const none = resultsCsv(doc, da, uncertaintyReport(null, section, analysis))!;
     expect(none).toContain('sensitivity_amplification_1_plus_W0_over_D,');
-    expect(none).toContain(`"# monte carlo",${NO_MONTE_CARLO_TEXT}`);
+    expect(none).toContain(`# monte carlo,${NO_MONTE_CARLO_TEXT}`);
     const withRun = resultsCsv(doc, da, uncertaintyReport(record(section), section, analysis))!;
     expect(withRun).toContain('monte_carlo_detachment_depth_p50_m,2000');
     expect(withRun).toContain('monte_carlo_failed_share,0.0125');
