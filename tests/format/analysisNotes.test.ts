@@ -34,4 +34,23 @@ describe('analysisNotes', () => {
     expect(a.notes.some((n) => n.includes('Chamberlin'))).toBe(false);
     expect(a.horizons[0].chamberlinReason?.kind).toBe('not-meaningful');
   });
+
+  it('writes a projected stretch\'s share and length by the one number rule in every view', () => {
+    // Analytic: a box fold whose crest (40 m of the 100 m pin width, vertices 2..3) is projected carries
+    // 100·40 = 4000 of the 5000 m² excess area, a share of 80 %.
+    const box: Section = { units: 'm', pins: [0, 100], horizons: [
+      { name: 'Eroded', line: [[0, 0], [20, 0], [30, 100], [70, 100], [80, 0], [100, 0]], regional: [[0, 0], [100, 0]], projected: [[2, 3]] },
+      { name: 'Lower', line: [[0, -200], [40, -200], [50, -150], [60, -200], [100, -200]], regional: [[0, -200], [100, -200]] },
+    ] };
+    const doc = sectionToProjectDoc(box);
+    const da = selectAnalysis(doc);
+    if (!da.outcome?.ok) throw new Error('no analysis');
+    const a = da.outcome.analysis;
+    const said = 'Horizon "Eroded": 80 % of its excess area and 40 m of its bed length are projected (interpreted); treat its values as projected, not measured.';
+    expect(analysisNotes(a)).toContain(said);
+    expect(diagnostics(da.docSection, da.outcome).map((d) => d.text)).toContain(said);
+    expect(resultsCsv(doc, da)!).toContain(`# note,"${said.replace(/"/g, '""')}"`);
+    expect(formatTable(a, null)).toContain(`  - ${said}`);
+    expect(toJsonReport(a).notes).toContain(said);
+  });
 });

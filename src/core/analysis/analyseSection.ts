@@ -28,7 +28,7 @@ export interface HorizonResult {
 export interface SectionAnalysis {
   units: LengthUnit; pinWidth: number; referenceElevation: number;
   horizons: HorizonResult[]; areaDepth: AreaDepthResult | null;
-  /** The engine's notes in words; the Chamberlin reasons are data on the horizons, and src/format/analysisNotes.ts shows both. */
+  /** The engine's notes in words; the Chamberlin reasons and projected shares are data on the horizons, and src/format/analysisNotes.ts shows all. */
   notes: string[];
   /** Shortening or extension from the area–depth line; null when there is no detachment below the horizons. */
   regime: Regime | null;
@@ -59,9 +59,6 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
   const notes = [...area.notes];
   const horizons = p.horizons.map((h, i): HorizonResult => {
     const chamberlin = chamberlinDepth(h.excessArea, h.bedBeyond - h.regionalBeyond, p.resolution);
-    if (h.projectedLength > 0) {
-      notes.push(`Horizon "${h.name}": ${(100 * h.projectedAreaShare).toFixed(1)}% of its excess area and ${round(h.projectedLength)} ${p.units} of its bed length are projected (interpreted); treat its values as projected, not measured.`);
-    }
     return {
       name: h.name, included: h.included, excessArea: h.excessArea, bedLength: h.bedLength,
       regionalLength: h.regionalLength, regionalElevation: h.regionalElevation, depth: depths[i],
@@ -73,8 +70,4 @@ export function analysePrepared(p: PreparedSection): SectionAnalysis {
     };
   });
   return { units: p.units, pinWidth: p.pinWidth, referenceElevation: p.referenceElevation, horizons, areaDepth: ad, notes, regime: ad ? ad.regime : null };
-}
-
-function round(v: number): string {
-  return Number(v.toPrecision(4)).toString();
 }

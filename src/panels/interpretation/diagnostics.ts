@@ -3,8 +3,9 @@ import type { DocSection } from '../../core/model/docToSection';
 import type { LeftOutHorizon } from '../../core/analysis/analyseDocSection';
 import { leftOutText } from '../../format/leftOutText';
 import { analysisNotes } from '../../format/analysisNotes';
+import { formatR2 } from '../../format/formatQuantity';
 
-// What the pane says about the fit, in plain words (issue "Words on screen"). r² below 0.9 is
+// What the pane says about the fit, in plain words (the pane speaks in plain words). r² below 0.9 is
 // called a poor fit: our threshold, a common rule of thumb for area–depth lines.
 
 export interface Diagnostic { level: 'error' | 'warning' | 'info'; text: string }
@@ -29,7 +30,7 @@ export function diagnostics(docSection: DocSection, outcome: AnalysisOutcome | n
     out.push({ level: 'error', text: 'The area–depth line does not reach zero area below the deepest horizon in the fit (or it is flat), so there is no detachment below these horizons. Check the regionals and the included horizons.' });
   } else {
     if (ad.n === 2) out.push({ level: 'warning', text: 'Too few horizons for intervals: with two, the line passes through both exactly. Include a third horizon.' });
-    if (ad.n >= 3 && ad.r2 < POOR_FIT_R2) out.push({ level: 'warning', text: `Poor fit: r² = ${ad.r2.toFixed(3)}. The points scatter about one straight line; look at the flagged horizons, or fit a subset or a second segment.` });
+    if (ad.n >= 3 && ad.r2 < POOR_FIT_R2) out.push({ level: 'warning', text: `Poor fit: r² = ${formatR2(ad.r2)}. The points scatter about one straight line; look at the flagged horizons, or fit a subset or a second segment.` });
     if (ad.detachmentDepthInterval.kind === 'unbounded') out.push({ level: 'warning', text: 'The 95% interval on the detachment depth is unbounded: the slope is not clearly different from zero, so the data do not pin the depth down.' });
   }
   for (const note of analysisNotes(a)) {

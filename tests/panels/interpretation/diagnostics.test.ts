@@ -1,9 +1,12 @@
-// The pane's plain-word diagnostics name a horizon left out for its own problem, with the reason.
+// The pane's plain-word diagnostics name a horizon left out for its own problem, with the reason, and write
+// their numbers as the pane's summary does (src/format/formatQuantity.ts).
 import { describe, expect, it } from 'vitest';
 import { analyseSection } from '../../../src/core/analysis/analyseSection';
 import { diagnostics } from '../../../src/panels/interpretation/diagnostics';
 import { lineArrays, type FlatSection } from '../../../src/core/model/section';
-import { methodExample } from '../../core/analysis/sections';
+import { methodExample, triangleHorizon } from '../../core/analysis/sections';
+import { expectClose } from '../../expectClose';
+import { summaryRows } from '../../../src/panels/interpretation/summaryRows';
 
 describe('diagnostics(docSection, outcome, leftOut)', () => {
   it('lists each left-out horizon as "left out: <name> — <reason>"', () => {
@@ -15,5 +18,22 @@ describe('diagnostics(docSection, outcome, leftOut)', () => {
     const out = diagnostics(docSection, analyseSection(section), [{ id: 'e', name: 'Top E', reason: 'the regional does not reach the right pin (x = 10000); extend it across the pin or move the pin.' }]);
     expect(out.map((d) => d.text)).toContain('left out: Top E — the regional does not reach the right pin (x = 10000); extend it across the pin or move the pin.');
     expect(out.find((d) => d.text.startsWith('left out'))!.level).toBe('warning');
+  });
+
+  it('writes r² of a poor fit as the summary row does', () => {
+    // Hand-computed: areas 3.0, 1.4, 2.2, 0.6 × 10⁶ m² at depths 500, 1000, 1500, 2000 m give
+    // Sxy = −1.6e9, Sxx = 1.25e6, Syy = 3.2e12, so r² = Sxy² / (Sxx·Syy) = 0.64 (with a detachment at 2656 m).
+    const w = 10_000;
+    const section = { units: 'm' as const, pins: [0, w] as [number, number], referenceElevation: 0,
+      horizons: [[500, 3e6], [1000, 1.4e6], [1500, 2.2e6], [2000, 0.6e6]].map(([h, a], i) => triangleHorizon(`H${i + 1}`, a, -h, w)) };
+    const outcome = analyseSection(section);
+    if (!outcome.ok) throw new Error('no analysis');
+    const flat: FlatSection = { ...section, horizons: section.horizons.map(({ line, pieces: _pieces, ...h }) => ({ ...h, line: lineArrays(line) })), faults: [] };
+    const docSection = { ok: true as const, section: flat, fit: null as never, horizonIds: ['a', 'b', 'c', 'd'], skipped: [], skippedFaults: [] };
+    const r2 = summaryRows(outcome.analysis).find((r) => r.key === 'r2')!;
+    expectClose(r2.value!, 0.64, 1e-12);
+    const poor = diagnostics(docSection, outcome).find((d) => d.text.startsWith('Poor fit'))!;
+    expect(poor.text).toContain(`r² = ${r2.text}.`);
+    expect(r2.text).toBe('0.6400');
   });
 });
