@@ -6,11 +6,9 @@ import { isExactFit } from '../core/analysis/isExactFit';
 import { areaDepthAxes } from '../format/areaDepthAxes';
 import { escapeXml } from './escapeXml';
 import { EXACT_FIT_TEXT, formatInterval, formatNumber } from '../format/formatQuantity';
-import { MARK_COLOURS, SCENARIO_COLOURS } from '../core/model/horizonPalette';
+import { MARK_COLOURS } from '../core/model/horizonPalette';
 
 const RED = MARK_COLOURS.detachment;
-// The exported graph shows one scenario, in the first scenario colour.
-const BLUE = SCENARIO_COLOURS[0];
 
 /** Returns a horizon name cut to `max` characters (with an ellipsis) for a point label. */
 export function shortName(name: string, max = 12): string {
@@ -27,8 +25,11 @@ function intervalOf(analysis: SectionAnalysis): { lo: number; hi: number } | str
   return k === 'unbounded' ? '95% interval unbounded' : `no 95% interval (n = ${ad.n})`;
 }
 
-/** Returns an SVG <g> of the graph in the box (x, y, w, h), figure units; a note instead of a graph when there is no analysis. */
-export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: number, w: number, h: number): string {
+/**
+ * Returns an SVG <g> of the graph in the box (x, y, w, h), figure units, its line and points in `colour` (the
+ * scenario's, scenarioColour: as the pane draws it); a note instead of a graph when there is no analysis.
+ */
+export function areaDepthGroup(analysis: SectionAnalysis | null, colour: string, x: number, y: number, w: number, h: number): string {
   const parts: string[] = [`<g class="area-depth" font-family="DejaVu Sans, sans-serif">`];
   parts.push(`<rect x="${x}" y="${y}" width="${w}" height="${h}" fill="#ffffff" stroke="#9aa5ad"/>`);
   parts.push(`<text x="${x + 8}" y="${y + 16}" font-size="12" font-weight="bold" fill="#1d2731">Area–depth graph</text>`);
@@ -67,7 +68,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
     // The fitted line A = a + b·h over the depth range of the axis (areas in the display unit).
     const a0 = (ad.intercept + ad.slope * dLo) * unit.factor;
     const a1 = (ad.intercept + ad.slope * dHi) * unit.factor;
-    parts.push(`<line class="fitted-line" x1="${px(a0)}" y1="${py(dLo)}" x2="${px(a1)}" y2="${py(dHi)}" stroke="${BLUE}" stroke-width="1.5" clip-path="url(#ad-clip)"/>`);
+    parts.push(`<line class="fitted-line" x1="${px(a0)}" y1="${py(dLo)}" x2="${px(a1)}" y2="${py(dHi)}" stroke="${colour}" stroke-width="1.5" clip-path="url(#ad-clip)"/>`);
   }
   // Points with short names; a label near the right edge goes to the left of its point, and one that
   // would sit on the previous label's line (points close in depth) takes the other side.
@@ -75,7 +76,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   let lastY = -Infinity;
   let lastRight = false;
   for (const { r, cx, cy } of order) {
-    parts.push(`<circle cx="${cx}" cy="${cy}" r="4" fill="${r.included ? BLUE : '#ffffff'}" stroke="${BLUE}" stroke-width="1.5"><title>${escapeXml(r.name)}</title></circle>`);
+    parts.push(`<circle cx="${cx}" cy="${cy}" r="4" fill="${r.included ? colour : '#ffffff'}" stroke="${colour}" stroke-width="1.5"><title>${escapeXml(r.name)}</title></circle>`);
     let right = cx < R - 70;
     if (Math.abs(cy - lastY) < 11 && right === lastRight) right = !right && cx > L + 70;
     const text = escapeXml(shortName(r.name) + (r.included ? '' : ' (out)'));
@@ -102,7 +103,7 @@ export function areaDepthGroup(analysis: SectionAnalysis | null, x: number, y: n
   return parts.join('');
 }
 
-/** Returns a standalone SVG document of the area–depth graph (for the report page), w × h figure units. */
-export function renderAreaDepthSvg(analysis: SectionAnalysis | null, w = 520, h = 380): string {
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}">${areaDepthGroup(analysis, 0.5, 0.5, w - 1, h - 1)}</svg>`;
+/** Returns a standalone SVG document of the area–depth graph in the scenario's `colour` (for the report page), w × h figure units. */
+export function renderAreaDepthSvg(analysis: SectionAnalysis | null, colour: string, w = 520, h = 380): string {
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}">${areaDepthGroup(analysis, colour, 0.5, 0.5, w - 1, h - 1)}</svg>`;
 }

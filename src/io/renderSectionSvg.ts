@@ -21,7 +21,7 @@ import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../forma
 import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
-import { EXCESS_FILL, MARK_COLOURS } from '../core/model/horizonPalette';
+import { EXCESS_FILL, MARK_COLOURS, scenarioColour } from '../core/model/horizonPalette';
 import { FAULT_COLOURS } from '../core/model/commands/addFault';
 import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
 import { joinPieces } from '../core/model/joinPieces';
@@ -403,7 +403,7 @@ export function renderSectionSvgParts(input: Omit<SectionFigureInput, 'scanDataU
   const legend = legendRows(doc, drawn, 1030, PANEL.y);
   out.push(legend.svg);
   const insetTop = legend.bottom + 14;
-  out.push(areaDepthGroup(result, 1030, insetTop, 340, PANEL.y + PANEL.h - insetTop));
+  out.push(areaDepthGroup(result, scenarioColour(doc.scenarios.indexOf(scenario)), 1030, insetTop, 340, PANEL.y + PANEL.h - insetTop));
   // The caution (docs/method.md §Cautions), in every export.
   const cy = FIGURE_HEIGHT - 96;
   out.push(`<g class="caution"><rect x="30" y="${cy}" width="${FIGURE_WIDTH - 60}" height="76" fill="#fff8e6" stroke="#9a5b00"/>`);

@@ -27,7 +27,7 @@ import type { OutlierFlag } from './interpretation/outlierFlags';
 import type { AreaUnit } from '../format/formatQuantity';
 import type { GraphPoint } from './interpretation/areaDepthSeries';
 import { twoSegmentFit, type TwoSegmentFit } from '../core/analysis/twoSegmentFit';
-import { scenarioColour } from './interpretation/scenarioColour';
+import { scenarioColour } from '../core/model/horizonPalette';
 import './interpretation/interpretation.css';
 
 /** Whether the open project is the built-in invented demo (src/state/openDemo.ts). */

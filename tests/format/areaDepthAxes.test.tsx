@@ -2,6 +2,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { analyseSection, type SectionAnalysis } from '../../src/core/analysis/analyseSection';
 import type { Section } from '../../src/core/model/section';
+import { SCENARIO_COLOURS } from '../../src/core/model/horizonPalette';
 import { areaDepthGroup } from '../../src/io/renderAreaDepthSvg';
 import { AreaDepthGraph } from '../../src/panels/interpretation/AreaDepthGraph';
 import { areaDepthSeries } from '../../src/panels/interpretation/areaDepthSeries';
@@ -32,7 +33,7 @@ function paneTicks(a: SectionAnalysis): { across: string[]; down: string[]; unit
 
 /** The exported figure's tick labels, [across, down], and its area unit. */
 function figureTicks(a: SectionAnalysis): { across: string[]; down: string[]; unit: string } {
-  const svg = areaDepthGroup(a, 0, 0, 340, 300);
+  const svg = areaDepthGroup(a, SCENARIO_COLOURS[0], 0, 0, 340, 300);
   return {
     across: texts(svg, /class="area-tick"[^>]*>([^<]*)</g),
     down: texts(svg, /class="depth-tick"[^>]*>([^<]*)</g),

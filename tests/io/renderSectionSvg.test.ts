@@ -6,6 +6,8 @@ import { selectAnalysis } from '../../src/state/selectors';
 import { emptyProjectDoc } from '../../src/core/model/projectDoc';
 import { sampleDoc, SAMPLE_SECTION } from './sampleDoc';
 import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
+import { SCENARIO_COLOURS, scenarioColour } from '../../src/core/model/horizonPalette';
+import { scenarioDuplicate } from '../../src/core/model/commands/scenarioDuplicate';
 import { areaDepthGroup, shortName } from '../../src/io/renderAreaDepthSvg';
 import type { Section } from '../../src/core/model/section';
 
@@ -178,13 +180,27 @@ describe('renderSectionSvg', () => {
 });
 
 describe('the inset area–depth graph', () => {
+  it('draws the line and points in the active scenario\'s colour, as the pane does (scenario i takes colour i)', () => {
+    const first = scatteredDoc();
+    const second = scenarioDuplicate(first, first.activeScenarioId);
+    const strokes = (doc: typeof first) => {
+      const svg = renderSectionSvg({ doc, analysis: selectAnalysis(doc), scanDataUrl: null, date: '2024-05-01' });
+      const graph = /<g class="area-depth"[\s\S]*?<\/g>/.exec(svg)![0];
+      return { line: /class="fitted-line"[^>]*stroke="([^"]+)"/.exec(graph)![1], points: [...graph.matchAll(/<circle [^>]*r="4" [^>]*stroke="([^"]+)"/g)].map((m) => m[1]) };
+    };
+    expect(strokes(first)).toEqual({ line: SCENARIO_COLOURS[0], points: [SCENARIO_COLOURS[0], SCENARIO_COLOURS[0], SCENARIO_COLOURS[0]] });
+    expect(second.scenarios.findIndex((sc) => sc.id === second.activeScenarioId)).toBe(1);
+    expect(strokes(second)).toEqual({ line: SCENARIO_COLOURS[1], points: [SCENARIO_COLOURS[1], SCENARIO_COLOURS[1], SCENARIO_COLOURS[1]] });
+    expect(scenarioColour(1)).toBe(SCENARIO_COLOURS[1]);
+  });
+
   it('writes area ticks that do not run together, names the points and shows the Fieller bar', () => {
     // Areas of 0.8–2.0 km² as in a test user's section (the labels ran together in m²).
     const doc = scatteredDoc();
     const a = selectAnalysis(doc);
     const result = a.outcome!.ok ? a.outcome!.analysis : null;
     const scaled = { ...result!, horizons: result!.horizons.map((h) => ({ ...h, excessArea: h.excessArea * 10 })) };
-    const svg = areaDepthGroup(scaled, 0, 0, 340, 326);
+    const svg = areaDepthGroup(scaled, SCENARIO_COLOURS[0], 0, 0, 340, 326);
     expect(svg).toContain('excess area (km²)');
     const ticks = [...svg.matchAll(/<text x="([\d.]+)" y="[\d.]+" font-size="9.5" text-anchor="middle"[^>]*>([^<]+)<\/text>/g)].map((m) => ({ x: Number(m[1]), t: m[2] }));
     expect(ticks.length).toBeGreaterThanOrEqual(2);
@@ -205,7 +221,7 @@ describe('the inset area–depth graph', () => {
     const a = selectAnalysis(sectionToProjectDoc(section, 'Syncline'));
     const r = a.outcome!.ok ? a.outcome!.analysis : null;
     expect(r!.horizons[1].excessArea).toBeCloseTo(-200_000, 6);
-    const svg = areaDepthGroup(r, 0, 0, 340, 326);
+    const svg = areaDepthGroup(r, SCENARIO_COLOURS[0], 0, 0, 340, 326);
     const ticks = [...svg.matchAll(/<text x="[\d.]+" y="[\d.]+" font-size="9.5" text-anchor="middle"[^>]*>([^<]+)<\/text>/g)].map((m) => m[1]);
     expect(ticks.some((t) => /^\u22120\.\d+$/.test(t))).toBe(true);
     expect(ticks.filter((t) => t.includes('-'))).toEqual([]);
@@ -216,7 +232,7 @@ describe('the inset area–depth graph', () => {
     const a = selectAnalysis(scatteredDoc(320));
     const r = a.outcome!.ok ? a.outcome!.analysis : null;
     expect(r!.areaDepth!.detachmentDepthInterval.kind).toBe('unbounded');
-    const svg = areaDepthGroup(r, 0, 0, 340, 326);
+    const svg = areaDepthGroup(r, SCENARIO_COLOURS[0], 0, 0, 340, 326);
     expect(svg).toContain('95% interval unbounded');
     expect(svg).not.toContain('class="fieller-bar"');
   });

@@ -36,3 +36,8 @@ export const MARK_COLOURS = {
  * purple, red-brown, grey).
  */
 export const SCENARIO_COLOURS = ['#1f6f8b', '#d07a1f', '#2a9d7a', '#7a4fa3', '#a3412b', '#5f6b73'] as const;
+
+/** Returns the colour of the i-th scenario of a document (its line and points in the area–depth graph, pane and export), cycling after six. */
+export function scenarioColour(i: number): string {
+  return SCENARIO_COLOURS[((i % SCENARIO_COLOURS.length) + SCENARIO_COLOURS.length) % SCENARIO_COLOURS.length];
+}

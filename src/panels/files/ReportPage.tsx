@@ -12,6 +12,7 @@ import { useDocStore } from '../../state/docStore';
 import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { selectAnalysis } from '../../state/selectors';
 import { activeScenario } from '../../core/model/docToSection';
+import { scenarioColour } from '../../core/model/horizonPalette';
 import { useUncertaintyStore } from '../../state/uncertaintyStore';
 import { uncertaintyReport } from '../../io/uncertaintyReport';
 import { reportScenarioRows } from './reportScenarioRows';
@@ -52,10 +53,12 @@ export function ReportPage({ onClose, onEditInfo }: { onClose: () => void; onEdi
     return () => { live = false; };
   }, [doc, answered]);
   const figureUrl = useSvgUrl(figure);
-  const graphUrl = useSvgUrl(useMemo(() => renderAreaDepthSvg(result), [result]));
+  const scenario = activeScenario(doc);
+  // The graph in the scenario's colour, as the pane and the figure draw it.
+  const colour = scenarioColour(doc.scenarios.indexOf(scenario));
+  const graphUrl = useSvgUrl(useMemo(() => renderAreaDepthSvg(result, colour), [result, colour]));
   const u = doc.units;
   const ad = result?.areaDepth ?? null;
-  const scenario = activeScenario(doc);
   const runs = useUncertaintyStore((st) => st.byScenario);
   const uncertainty = uncertaintyReport(runs[scenario.id] ?? null, analysis.docSection.ok ? analysis.docSection.section : null, result);
   const compared = reportScenarioRows(doc, runs);

@@ -19,7 +19,7 @@ import { EXACT_FIT_TEXT, isExactFit } from '../../core/analysis/isExactFit';
 import { areaDepthSeries } from './areaDepthSeries';
 import { formatLength, formatNumber, formatR2 } from '../../format/formatQuantity';
 import { liveScenarioAnalysis, type ScenarioAnalysis } from './useScenarioAnalysis';
-import { scenarioColour } from './scenarioColour';
+import { scenarioColour } from '../../core/model/horizonPalette';
 
 /** Every scenario's analysis and the one reference they are compared on, made once per document (the live texts read it). */
 interface Compare {
