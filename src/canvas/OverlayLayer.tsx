@@ -187,7 +187,7 @@ function ToolPreviewShape() {
         const raw = ctx._context;
         raw.save();
         raw.lineWidth = 2 / scale;
-        raw.strokeStyle = preview.colour ?? '#111111';
+        raw.strokeStyle = preview.colour ?? MARK_COLOURS.preview;
         raw.setLineDash([6 / scale, 4 / scale]);
         for (const line of preview.lines ?? (preview.line ? [preview.line] : [])) {
           if (line.length < 2) continue;
@@ -215,7 +215,7 @@ function ToolPreviewShape() {
         if (preview.marks) {
           const half = 4 / scale;
           raw.fillStyle = '#ffffff';
-          raw.strokeStyle = preview.colour ?? '#111111';
+          raw.strokeStyle = preview.colour ?? MARK_COLOURS.preview;
           raw.lineWidth = 2 / scale;
           for (const [u, v] of preview.marks) {
             raw.fillRect(u - half, v - half, 2 * half, 2 * half);

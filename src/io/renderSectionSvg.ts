@@ -21,8 +21,7 @@ import { EXACT_FIT_TEXT, formatInterval, formatNumber, formatR2 } from '../forma
 import { niceStep } from '../format/niceTicks';
 import { halo, sectionAxes } from './sectionFigureAxes';
 import { fitSectionFrame, imageToFigureMatrix, sectionToFigure, type SectionFrame } from './sectionFigureFrame';
-import { EXCESS_FILL, MARK_COLOURS, scenarioColour } from '../core/model/horizonPalette';
-import { FAULT_COLOURS } from '../core/model/commands/addFault';
+import { EXCESS_FILL, FAULT_COLOURS, MARK_COLOURS, scenarioColour } from '../core/model/horizonPalette';
 import { fillHorizonPart, fillRegionalPart } from '../core/geometry/excessFillOutline';
 import { joinPieces } from '../core/model/joinPieces';
 import type { FaultArrays } from '../core/model/readFault';

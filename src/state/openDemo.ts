@@ -6,7 +6,7 @@ import demoSection from '../../public/demo/section.json';
 import demoCalibration from '../../public/demo/calibration.json';
 import thrustSection from '../../public/demo/thrust/section.json';
 import normalSection from '../../public/demo/normal/section.json';
-import { FAULT_COLOURS } from '../core/model/commands/addFault';
+import { faultColour } from '../core/model/horizonPalette';
 import { horizonPieces } from '../core/model/section';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { sectionToImage } from '../core/calibration/mapPoints';
@@ -38,7 +38,7 @@ export function demoDoc(scanId: string, widthPx: number, heightPx: number, which
   const zMid = section.horizons.reduce((s, h) => s + h.regional[0][1], 0) / section.horizons.length;
   const ids = freshHorizonIds(base, section.horizons.length);
   const faults = (section.faults ?? []).map((f, i) => ({
-    id: `fault-${i + 1}`, name: f.name, colour: FAULT_COLOURS[i % FAULT_COLOURS.length], visible: true, locked: false, pointsPx: f.line.map(toPx),
+    id: `fault-${i + 1}`, name: f.name, colour: faultColour(i), visible: true, locked: false, pointsPx: f.line.map(toPx),
   }));
   const horizons = section.horizons.map((h, i) => {
     const pieces = horizonPieces(h);

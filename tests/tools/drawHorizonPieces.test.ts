@@ -4,7 +4,7 @@ import { drawHorizonTool } from '../../src/tools/drawHorizon/drawHorizonTool';
 import { editHorizonTool } from '../../src/tools/editHorizon/editHorizonTool';
 import { drawFaultTool } from '../../src/tools/fault/drawFaultTool';
 import { nearestOnFault } from '../../src/tools/faultHits';
-import { FAULT_COLOURS } from '../../src/tools/faultStyle';
+import { FAULT_COLOURS } from '../../src/core/model/horizonPalette';
 import { HORIZON_PALETTE } from '../../src/core/model/horizonPalette';
 import { ToolHarness } from './toolHarness';
 import { toolDoc } from './toolFixture';

@@ -28,7 +28,17 @@ export function fillRgba(fill: { colour: string; opacity: number }): string {
 export const MARK_COLOURS = {
   detachment: '#b3261e',
   pin: '#263238',
+  /** A tool's preview line and marks when the tool gives no colour of its own. */
+  preview: '#111111',
 } as const;
+
+/** Colours given to faults in order: black and dark greys, so a fault never looks like a horizon (HORIZON_PALETTE holds only strong hues). */
+export const FAULT_COLOURS = ['#111111', '#555555', '#2b2b4a', '#3d3d3d'] as const;
+
+/** Returns the colour the n-th fault of a document is given (cycling through FAULT_COLOURS). */
+export function faultColour(n: number): string {
+  return FAULT_COLOURS[((n % FAULT_COLOURS.length) + FAULT_COLOURS.length) % FAULT_COLOURS.length];
+}
 
 /**
  * Line colours for scenarios in the area–depth graph (pane and export: scenario i takes colour i), chosen for

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import type { DocFault } from '../../core/model/projectDoc';
 import { useDocStore } from '../../state/docStore';
 import { deleteFaultAction, renameFaultAction, setFaultStyleAction } from '../../state/faultActions';
-import { FAULT_COLOURS } from '../../tools/faultStyle';
+import { FAULT_COLOURS } from '../../core/model/horizonPalette';
 import { EyeIcon, LockIcon } from './HorizonList';
 
 function FaultName({ f }: { f: DocFault }) {

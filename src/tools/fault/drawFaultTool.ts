@@ -6,7 +6,7 @@ import { addFault, nextFaultId } from '../../core/model/commands/addFault';
 import { setFaultPoints } from '../../core/model/commands/setFaultPoints';
 import type { ToolCommand } from '../toolTypes';
 import { drawLineTool, type DrawLineState } from '../drawHorizon/drawLineTool';
-import { faultColour } from '../faultStyle';
+import { faultColour } from '../../core/model/horizonPalette';
 
 export type DrawFaultState = DrawLineState;
 

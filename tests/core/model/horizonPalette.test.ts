@@ -3,7 +3,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { EXCESS_FILL, HORIZON_PALETTE, MARK_COLOURS, SCENARIO_COLOURS } from '../../../src/core/model/horizonPalette';
+import { EXCESS_FILL, FAULT_COLOURS, HORIZON_PALETTE, MARK_COLOURS, SCENARIO_COLOURS } from '../../../src/core/model/horizonPalette';
 
 const root = join(import.meta.dirname, '..', '..', '..');
 
@@ -15,8 +15,8 @@ function sources(dir: string): string[] {
 }
 
 describe('the one palette', () => {
-  it('no source file but horizonPalette.ts writes a horizon, mark, scenario or fill colour', () => {
-    const colours = [...HORIZON_PALETTE, ...Object.values(MARK_COLOURS), ...SCENARIO_COLOURS, EXCESS_FILL.above.colour, EXCESS_FILL.below.colour];
+  it('no source file but horizonPalette.ts writes a horizon, mark, scenario, fault or fill colour', () => {
+    const colours = [...HORIZON_PALETTE, ...Object.values(MARK_COLOURS), ...SCENARIO_COLOURS, ...FAULT_COLOURS, EXCESS_FILL.above.colour, EXCESS_FILL.below.colour];
     const found: string[] = [];
     for (const f of sources(join(root, 'src'))) {
       if (f.endsWith('horizonPalette.ts')) continue;

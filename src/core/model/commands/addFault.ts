@@ -1,7 +1,5 @@
+import { faultColour } from '../horizonPalette';
 import type { DocFault, ImagePx, ProjectDoc } from '../projectDoc';
-
-/** Colours given to faults in order: black and dark greys, so a fault never looks like a horizon (HORIZON_PALETTE holds only strong hues). */
-export const FAULT_COLOURS = ['#111111', '#555555', '#2b2b4a', '#3d3d3d'];
 
 /** Returns the next free fault id ("fault-1", "fault-2", …), from the highest numbered id in the document. */
 export function nextFaultId(doc: ProjectDoc): string {
@@ -36,7 +34,7 @@ export function freeFaultName(doc: ProjectDoc, faultId: string, name = ''): stri
 
 /**
  * Returns the document with a new fault at the end of the list (image-pixel vertices); unchanged if the id
- * exists. Defaults: id nextFaultId, a free name ("Fault n"), the next of FAULT_COLOURS, visible, unlocked.
+ * exists. Defaults: id nextFaultId, a free name ("Fault n"), the next fault colour (faultColour), visible, unlocked.
  */
 export function addFault(doc: ProjectDoc, fault: { pointsPx: ImagePx[] } & Partial<Omit<DocFault, 'pointsPx'>>): ProjectDoc {
   const id = fault.id ?? nextFaultId(doc);
@@ -44,7 +42,7 @@ export function addFault(doc: ProjectDoc, fault: { pointsPx: ImagePx[] } & Parti
   const f: DocFault = {
     id,
     name: freeFaultName(doc, id, fault.name),
-    colour: fault.colour ?? FAULT_COLOURS[doc.faults.length % FAULT_COLOURS.length],
+    colour: fault.colour ?? faultColour(doc.faults.length),
     visible: fault.visible ?? true,
     locked: fault.locked ?? false,
     pointsPx: fault.pointsPx.map(([u, v]) => [u, v]),

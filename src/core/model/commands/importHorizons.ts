@@ -8,7 +8,8 @@ import { canvasCalibration } from '../migrations/canvasCalibration';
 import { paletteColour } from '../horizonPalette';
 import { freshHorizonIds } from './addHorizon';
 import { nearestOnPolyline } from '../../geometry/nearestOnPolyline';
-import { FAULT_COLOURS, freeFaultName, nextFaultId } from './addFault';
+import { freeFaultName, nextFaultId } from './addFault';
+import { faultColour } from '../horizonPalette';
 import type { DocFault, DocHorizon, HorizonJoin, ImagePx, ProjectDoc } from '../projectDoc';
 import type { LengthUnit, XZ } from '../section';
 
@@ -58,7 +59,7 @@ export function importHorizons(doc: ProjectDoc, horizons: ImportedHorizon[], uni
   let withFaults: ProjectDoc = doc;
   for (const x of faultsIn) {
     const id = nextFaultId(withFaults);
-    const fault: DocFault = { id, name: freeFaultName(withFaults, id, x.name), colour: FAULT_COLOURS[withFaults.faults.length % FAULT_COLOURS.length], visible: true, locked: false, pointsPx: x.line.map(toPx) };
+    const fault: DocFault = { id, name: freeFaultName(withFaults, id, x.name), colour: faultColour(withFaults.faults.length), visible: true, locked: false, pointsPx: x.line.map(toPx) };
     withFaults = { ...withFaults, faults: [...withFaults.faults, fault] };
   }
   const names = new Set(doc.horizons.map((h) => h.name));

@@ -5,7 +5,7 @@
 import { fitCalibration } from '../../calibration/fitCalibration';
 import { sectionToImage } from '../../calibration/mapPoints';
 import { nearestOnPolyline } from '../../geometry/nearestOnPolyline';
-import { FAULT_COLOURS } from '../commands/addFault';
+import { faultColour } from '../horizonPalette';
 import { emptyProjectDoc, type DocFault, type DocHorizon, type HorizonJoin, type ImagePx, type ProjectDoc } from '../projectDoc';
 import { horizonPieces, type Section, type SectionFault, type SectionHorizon, type XZ } from '../section';
 import { ON_FAULT_TOLERANCE } from '../validateSectionArrays';
@@ -33,7 +33,7 @@ export function sectionToProjectDoc(section: Section, title = 'Section'): Projec
   const doc = emptyProjectDoc();
   const ids = freshHorizonIds(doc, section.horizons.length);
   const faults: DocFault[] = sectionFaults.map((f, i) => ({
-    id: `fault-${i + 1}`, name: f.name, colour: FAULT_COLOURS[i % FAULT_COLOURS.length], visible: true, locked: false, pointsPx: f.line.map(toPx),
+    id: `fault-${i + 1}`, name: f.name, colour: faultColour(i), visible: true, locked: false, pointsPx: f.line.map(toPx),
   }));
   const tolerance = ON_FAULT_TOLERANCE * Math.abs(section.pins[1] - section.pins[0]);
   const horizons: DocHorizon[] = section.horizons.map((h, i) => ({

@@ -2,7 +2,7 @@
 // them as one undo step each. Geometry checks are analytic (points on a straight segment, distances).
 import { beforeEach, describe, expect, it } from 'vitest';
 import { nearestOnPolyline } from '../../../../src/core/geometry/nearestOnPolyline';
-import { addFault, FAULT_COLOURS } from '../../../../src/core/model/commands/addFault';
+import { addFault } from '../../../../src/core/model/commands/addFault';
 import { addJoin } from '../../../../src/core/model/commands/addJoin';
 import { deleteFault } from '../../../../src/core/model/commands/deleteFault';
 import { deleteVertex } from '../../../../src/core/model/commands/deleteVertex';
@@ -12,7 +12,7 @@ import { removeJoin } from '../../../../src/core/model/commands/removeJoin';
 import { renameFault } from '../../../../src/core/model/commands/renameFault';
 import { setFaultPoints } from '../../../../src/core/model/commands/setFaultPoints';
 import { setFaultStyle } from '../../../../src/core/model/commands/setFaultStyle';
-import { HORIZON_PALETTE } from '../../../../src/core/model/horizonPalette';
+import { FAULT_COLOURS, HORIZON_PALETTE } from '../../../../src/core/model/horizonPalette';
 import type { ImagePx, ProjectDoc } from '../../../../src/core/model/projectDoc';
 import { checkProjectDoc } from '../../../../src/core/model/projectSchema';
 import { useDocStore } from '../../../../src/state/docStore';
