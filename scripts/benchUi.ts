@@ -3,7 +3,8 @@
 // in the same page, their ratio and the longest main-thread task it caused (PerformanceObserver 'longtask').
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
-//                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder]
+//                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder
+//                       --profile folder --first-move-trace folder --no-continuous]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -69,6 +70,10 @@ const MOVES = Math.max(1, Number(flag('moves') ?? 60));
 const TRACE_PROFILE = flag('trace-profile');
 /** A folder for a CPU profile of each big-document open and continuous drag (`open-12x<n>.cpuprofile`, `drag-12x<n>.cpuprofile`, opened by Chrome's DevTools); a summary is printed. */
 const PROFILE = flag('profile');
+/** A folder for a Chromium trace of each waited drag's first and second moves (`first-move-12x<n>[-shift].trace.json`, `second-…`), with the main thread's time in each by event. */
+const FIRST_MOVE_TRACE = flag('first-move-trace');
+/** Leaves out the continuous drags (e.g. to time only the open, first move, Shift-drag and autosave). */
+const WITH_CONTINUOUS = !process.argv.includes('--no-continuous');
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -317,12 +322,12 @@ function bigSection(vertices: number): Section {
 const DRAG_PROBE = `(() => {
   const b = { armed: false, t0: 0, t1: 0, t2: 0, before: '', done: null, resolve: null };
   const depth = () => document.querySelector('[data-testid="strip-detachment-depth"]')?.textContent ?? '';
-  window.addEventListener('pointermove', () => { if (b.armed && !b.t0) b.t0 = performance.now(); }, { capture: true });
+  window.addEventListener('pointermove', () => { if (b.armed && !b.t0) { b.t0 = performance.now(); performance.mark('bench-move'); } }, { capture: true });
   new MutationObserver(() => {
     window.__textChanges = (window.__textChanges || 0) + 1;
     if (!b.armed || !b.t0 || b.t1 || depth() === b.before) return;
     b.t1 = performance.now();
-    requestAnimationFrame(() => { b.t2 = performance.now(); b.armed = false; b.resolve(); });
+    requestAnimationFrame(() => { b.t2 = performance.now(); performance.mark('bench-move-frame'); b.armed = false; b.resolve(); });
   }).observe(document.querySelector('[data-testid="results-strip"]'), { subtree: true, childList: true, characterData: true });
   window.__drag = b;
   window.__arm = (wait) => {
@@ -403,7 +408,7 @@ async function openBigSection(page: Page, section: Section, vertices: number): P
 }
 
 /** Drags the top regional (with Shift: every regional) one pixel a move, waiting for the numbers after each move. */
-async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number): Promise<{ first: number; firstLongest: number; toFrame: number[]; changed: number; upAt: number }> {
+async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number, vertices: number): Promise<{ first: number; firstLongest: number; toFrame: number[]; changed: number; upAt: number }> {
   await page.mouse.move(grip.gx, grip.gy);
   if (shift) await page.keyboard.down('Shift');
   await page.mouse.down();
@@ -423,8 +428,20 @@ async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number)
       await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
       await cdp.send('Profiler.start');
     }
+    // The second move is traced too, to set beside the first.
+    const traced = FIRST_MOVE_TRACE && k <= 1;
+    if (traced) await page.context().browser()!.startTracing(page, { categories: FIRST_MOVE_CATEGORIES });
     await page.mouse.move(grip.gx, y);
     const r = (await page.evaluate('window.__drag.done.then(() => ({ t0: window.__drag.t0, t1: window.__drag.t1, t2: window.__drag.t2 }))')) as { t0: number; t1: number; t2: number };
+    if (traced) {
+      const trace = await page.context().browser()!.stopTracing();
+      const { writeFileSync, mkdirSync } = await import('node:fs');
+      mkdirSync(FIRST_MOVE_TRACE, { recursive: true });
+      const name = `${k === 0 ? 'first' : 'second'}-move-12x${vertices}${shift ? '-shift' : ''}`;
+      writeFileSync(`${FIRST_MOVE_TRACE}/${name}.trace.json`, trace);
+      console.log(`  ${k === 0 ? 'first' : 'second'} move${shift ? ' (Shift)' : ''} 12 × ${vertices}: ${(r.t2 - r.t0).toFixed(1)} ms (${name}.trace.json)`);
+      printMoveTrace(JSON.parse(trace.toString()) as { traceEvents: TraceEvent[] });
+    }
     if (cdp && PROFILE) {
       const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
       await cdp.detach();
@@ -466,6 +483,39 @@ function printTrace(trace: { traceEvents: TraceEvent[] }, moves: number): void {
   }
   console.log('    trace: ms a move by thread and event (nested events counted in each):');
   for (const [k, ms] of [...sums].sort((a, b) => b[1] - a[1]).slice(0, 30)) console.log(`      ${(ms / moves).toFixed(2).padStart(7)}  ${k}`);
+}
+
+const FIRST_MOVE_CATEGORIES = ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing', 'v8', 'v8.execute', 'disabled-by-default-v8.gc', 'toplevel', 'blink'];
+
+/**
+ * Prints the renderer main thread's time in a trace of one move, from the pointermove the probe marked to the frame
+ * after the numbers changed: each task, and the time of each kind of event of its own (without the events in it),
+ * JavaScript by the function the trace names.
+ */
+function printMoveTrace(trace: { traceEvents: TraceEvent[] }): void {
+  const main = trace.traceEvents.find((e) => e.ph === 'M' && e.name === 'thread_name' && e.args?.name === 'CrRendererMain' &&
+    trace.traceEvents.some((m) => m.pid === e.pid && m.name === 'bench-move'));
+  check(main, 'the trace of the first move has no main thread with the move mark');
+  const on = trace.traceEvents.filter((e) => e.pid === main.pid && e.tid === main.tid);
+  const from = on.find((e) => e.name === 'bench-move')?.ts;
+  const to = on.find((e) => e.name === 'bench-move-frame')?.ts;
+  check(from !== undefined && to !== undefined, 'the trace of the first move lacks its marks');
+  const spans = on.filter((e) => e.ph === 'X' && e.dur && e.ts! + e.dur > from && e.ts! < to).sort((a, b) => a.ts! - b.ts! || b.dur! - a.dur!);
+  const self = new Map<string, number>();
+  const stack: { end: number; key: string }[] = [];
+  const tasks: string[] = [];
+  const keyOf = (e: TraceEvent) => (e.name === 'FunctionCall' || e.name === 'EvaluateScript' || e.name === 'V8.Execute') && e.args?.data?.functionName ? `${e.name} ${e.args.data.functionName}` : e.name;
+  for (const e of spans) {
+    while (stack.length && stack[stack.length - 1].end <= e.ts!) stack.pop();
+    const key = keyOf(e);
+    if (stack.length === 0) tasks.push(`${(e.dur! / 1000).toFixed(1)} ${key}`);
+    else self.set(stack[stack.length - 1].key, (self.get(stack[stack.length - 1].key) ?? 0) - e.dur! / 1000);
+    self.set(key, (self.get(key) ?? 0) + e.dur! / 1000);
+    stack.push({ end: e.ts! + e.dur!, key });
+  }
+  console.log(`    main thread from the move to the frame after the numbers (${((to - from) / 1000).toFixed(1)} ms): tasks (ms) ${tasks.join(', ')}`);
+  console.log('    time of its own by event (ms):');
+  for (const [k, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 24)) console.log(`      ${ms.toFixed(2).padStart(7)}  ${k}`);
 }
 
 /** The profile cut to its longest run of samples with no idle one between them (about the longest task). */
@@ -602,7 +652,7 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
       openFloor.push(o.floor);
       grip = o.grip;
       await page.getByTestId('tool-regional').click();
-      const d = await waitedDrag(page, o.grip, false, 24);
+      const d = await waitedDrag(page, o.grip, false, 24, vertices);
       first.push(d.first);
       firstLongest.push(d.firstLongest);
       plain.push(median(d.toFrame.slice(1)));
@@ -610,7 +660,7 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
       await page.waitForFunction('document.querySelector("[data-testid=autosave-status]")?.textContent?.length > 0', null, { timeout: 30_000 });
       await new Promise((r) => setTimeout(r, 3000));
       autosave.push(await longestSince(page, d.upAt));
-      const s = await waitedDrag(page, o.grip, true, 24);
+      const s = await waitedDrag(page, o.grip, true, 24, vertices);
       shifted.push(median(s.toFrame.slice(1)));
       await page.keyboard.press('Control+z');
       await page.keyboard.press('Control+z');
@@ -621,6 +671,10 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
     report({ work: `regional drag ${tag}, per move (event → frame)`, ms: median(plain), floor: FRAME_MS });
     report({ work: `Shift-drag every regional ${tag}, per move`, ms: median(shifted), floor: FRAME_MS });
     report({ work: `autosave after an edit ${tag}, longest task`, ms: median(autosave), floor: FRAME_MS, note: 'target: no task over 100 ms (0: none over 50 ms); includes the release\'s analysis' });
+    if (!WITH_CONTINUOUS) {
+      await page.keyboard.press('Control+z');
+      continue;
+    }
     // The floor first: the same moves over the view with no button held (the page's own handling of a move).
     const idle = await continuousDrag(page, grip!, 120, String(vertices), false);
     const changesBefore = (await page.evaluate('window.__textChanges || 0')) as number;
