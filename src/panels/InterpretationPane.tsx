@@ -169,7 +169,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
       {isDemo(doc) && <p className="interp-demo" data-testid="demo-note">Invented demo — Project ▸ New to start your own.</p>}
       <div className="interp-scroll">
         <DiagnosticList items={diag} flags={flags} unit={unit} read={paneOf} />
-        {analysis && <KeyResults analysis={analysis} />}
+        {analysis && <KeyResults />}
         {series && analysis && (
           <section className="interp-section">
             <h3>Area–depth graph</h3>

@@ -68,7 +68,9 @@ test('the pane shows the engine’s detachment for the demo, with an interval th
   // The demo is digitised by hand from its scan (jittered clicks): the points scatter, so the pane gives a
   // real 95% interval on the depth, and the section shows its band.
   await expect(page.getByTestId('interval-detachment-depth')).toHaveText(/^95%: \d+ to \d+ m$/);
-  await expect(page.getByTestId('interval-r2')).toHaveCount(0);
+  // r² has no interval: its place is empty and takes no room.
+  await expect(page.getByTestId('interval-r2')).toHaveText('');
+  await expect(page.getByTestId('interval-r2')).toBeHidden();
   const band = () => page.evaluate(`(() => window.Konva.stages[0].find('Line').filter((l) => l.closed() && Math.abs(l.opacity() - 0.14) < 1e-9).length)()`);
   await expect.poll(band).toBe(1);
   await expect(page.getByTestId('demo-note')).toHaveText('Invented demo — Project ▸ New to start your own.');

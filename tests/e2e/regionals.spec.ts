@@ -13,6 +13,10 @@ import { parseProjectText } from '../../src/io/projectFile';
 import { analyseDoc } from '../../src/core/analysis/analyseDocGesture';
 import { formatArea, formatLength } from '../../src/format/formatQuantity';
 import { HORIZON_COLUMNS, screenCell, tableAreaUnit } from '../../src/format/horizonColumns';
+import { forwardSection } from '../../src/core/forward/forwardSection';
+import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
+import { summaryRowsOf } from '../../src/panels/interpretation/summaryRows';
+import { EXACT_FIT_TEXT } from '../../src/core/analysis/isExactFit';
 
 const W = 1000;
 const H = 500;
@@ -263,4 +267,59 @@ test('the numbers written while a regional is dragged are those the panes show a
   const column = HORIZON_COLUMNS.find((c) => c.key === 'excessArea')!;
   await expect(page.getByTestId('horizon-table').locator('tbody tr').first()).toContainText(screenCell(column, a.horizons[0], unit));
   await expect(page.getByTestId('summary-table')).toContainText(formatLength(a.pinWidth, a.units));
+});
+
+test('a section that balances exactly, its top regional dragged: the intervals and the common reference follow as live numbers', async ({ page }) => {
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  // The forward model folds six beds over one detachment: their excess areas lie exactly on the area–depth line
+  // (Epard & Groshong's construction run forwards, docs/method.md §Check values), so the fit is exact and has no interval.
+  const { section } = forwardSection({
+    units: 'm', displacement: 2500, detachmentElevation: -4500, pins: [1000, 21000], extent: [0, 22000], samplesPerFold: 40,
+    horizons: ['First', 'Second', 'Third', 'Fourth', 'Fifth', 'Sixth'].map((name, i) => ({ name: `${name} bed`, regionalElevation: 1000 - 500 * i })),
+    folds: [{ shape: 'rounded', from: 3000, to: 11000, weight: 1 }, { shape: 'box', from: 12000, to: 19000, limb: 0.25, weight: 0.6 }],
+  });
+  await page.getByTestId('open-project').setInputFiles({ name: 'balanced.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(section)) });
+  await expect(page.getByTestId('interval-r2')).toHaveText(EXACT_FIT_TEXT);
+  await expect(page.getByTestId('interval-detachment-depth')).toBeHidden();
+  const reference = await page.getByTestId('scenario-reference').textContent();
+  expect(reference).toContain('1000 m, the highest regional of');
+
+  // The top regional at mid-span, where the app drew it (the shapes layer's transform of its image pixels).
+  const doc = sectionToProjectDoc(section);
+  const reg = doc.scenarios[0].regionals[doc.horizons[0].id];
+  const u = (reg[0][0] + reg[reg.length - 1][0]) / 2;
+  const v = reg[0][1] + ((reg[reg.length - 1][1] - reg[0][1]) * (u - reg[0][0])) / (reg[reg.length - 1][0] - reg[0][0]);
+  const at = await page.evaluate(([pu, pv]) => (window as unknown as { Konva: { stages: { findOne: (s: string) => { getAbsoluteTransform: () => { point: (p: { x: number; y: number }) => { x: number; y: number } } } }[] } })
+    .Konva.stages[0].findOne('Layer').getAbsoluteTransform().point({ x: pu, y: pv }), [u, v] as const);
+  const box = (await page.getByTestId('section-view').boundingBox())!;
+  await page.getByTestId('tool-regional').click();
+  await page.mouse.move(box.x + at.x, box.y + at.y);
+  await page.mouse.down();
+  const liveTexts = () => page.evaluate(() => [...document.querySelectorAll('[data-testid="interpretation-pane"] [data-live]')]
+    .map((e) => `${e.getAttribute('data-testid') ?? e.tagName} ${e.textContent}`));
+  for (let k = 1; k <= 2; k++) await page.mouse.move(box.x + at.x, box.y + at.y - k);
+  // Held: the fit is no longer exact, so the intervals appear, and the raised regional is the new reference.
+  await expect(page.getByTestId('interval-detachment-depth')).toHaveText(/^95%: /);
+  await expect(page.getByTestId('interval-r2')).toHaveText('');
+  await expect(page.getByTestId('interval-r2')).toBeHidden();
+  await expect(page.getByTestId('scenario-reference')).not.toHaveText(reference!);
+  const held = await liveTexts();
+  await page.mouse.up();
+  await expect(page.getByTestId('drag-readout')).toBeHidden();
+  // After the release the pane renders the document: the same texts, in the same places.
+  expect(await liveTexts()).toEqual(held);
+
+  // The saved document's analysis through the one formatter (the engine the app runs, here in Node).
+  await page.getByTestId('menu-project').click();
+  const opened = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
+  if (!opened.ok) throw new Error(opened.message);
+  const d = analyseDoc(opened.doc);
+  if (!d.outcome?.ok) throw new Error('the saved document has no analysis');
+  const a = d.outcome.analysis;
+  const depthRow = summaryRowsOf(a).find((r) => r.key === 'detachment-depth')!;
+  await expect(page.getByTestId('interval-detachment-depth')).toHaveText(`95%: ${depthRow.interval}`);
+  await expect(page.getByTestId('scenario-reference')).toContainText(`${formatLength(a.referenceElevation, a.units)}, the highest regional of`);
+  expect(a.referenceElevation).toBeGreaterThan(1000);
 });

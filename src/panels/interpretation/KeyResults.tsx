@@ -4,7 +4,7 @@ import type { SectionAnalysis } from '../../core/analysis/analyseSection';
 import { EXACT_FIT_TEXT } from '../../core/analysis/isExactFit';
 import type { ProjectDoc } from '../../core/model/projectDoc';
 import { formatPercent } from '../../format/formatQuantity';
-import { LiveText, useLiveShape, type LiveRead } from '../liveText';
+import { LiveText, type LiveRead } from '../liveText';
 import { regimeText } from './regimeText';
 import { summaryRowsOf } from './summaryRows';
 import { liveScenarioAnalysis } from './useScenarioAnalysis';
@@ -46,23 +46,16 @@ const strainLabel: LiveRead = (doc, gs) => {
   return a && (isExtension(a) ? 'Extension' : 'Shortening');
 };
 
-/** Which intervals are shown (an interval that comes or goes renders the pane). */
-function keyShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
-  const a = analysisOf(doc, gs);
-  const rows = a ? summaryRowsOf(a) : [];
-  return KEYS.map(([key]) => Boolean(rows.find((r) => r.key === key)?.interval)).join(' ');
-}
-
-export function KeyResults({ analysis }: { analysis: SectionAnalysis }) {
-  useLiveShape(keyShape);
-  const rows = summaryRowsOf(analysis);
+// Every interval has its element, empty (and not shown, interpretation.css) when there is none: an interval that
+// comes or goes during a drag (a section that balanced exactly no longer does) is a live text like the numbers.
+export function KeyResults() {
   return (
     <div className="key-results">
       {KEYS.map(([key, label]) => (
         <div className="key-result" key={key}>
           <div className="key-label">{label}</div>
           <LiveText as="div" className="key-value" testId={`result-${key}`} read={rowText(key, 'text')} />
-          {rows.find((r) => r.key === key)!.interval && <LiveText as="div" className="key-interval" testId={`interval-${key}`} read={rowText(key, 'interval')} />}
+          <LiveText as="div" className="key-interval" testId={`interval-${key}`} read={rowText(key, 'interval')} />
         </div>
       ))}
       <div className="key-result small">

@@ -68,13 +68,21 @@ function cellsOf(c: Compare, id: string): { ok: boolean; elevation: string; inte
 
 const cellRead = (id: string, key: 'elevation' | 'interval' | 'depth' | 'displacement' | 'n'): LiveRead => (doc, gs) => cellsOf(compareOf(doc, gs), id)?.[key] ?? null;
 
+/** The common reference as the comparison names it, and its elevation alone (a regional dragged above the others moves it). */
+const refRead: LiveRead = (doc, gs) => compareOf(doc, gs).refText || null;
+const refLevelRead: LiveRead = (doc, gs) => {
+  const ref = compareOf(doc, gs).commonRef;
+  return ref === null ? null : formatLength(ref, doc.units);
+};
+
 /**
- * What the comparison's live texts cannot change: the scenarios, which have a fit and an interval, the reference's
- * wording. The graph of every scenario's fit is drawn again when the gesture ends.
+ * What the comparison's live texts cannot change: the scenarios, which have a fit and an interval, whether there is a
+ * common reference. The graph of every scenario's fit (and its wording, and the titles) is drawn again when the
+ * gesture ends.
  */
 function compareShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
   const c = compareOf(doc, gs);
-  return [c.refText, ...c.rows.map((r) => `${r.scenario.id} ${Boolean(r.analysis)} ${r.docSection.ok ? '' : r.docSection.message} ${cellsOf(c, r.scenario.id)?.ok}`)].join('\n');
+  return [c.commonRef !== null, ...c.rows.map((r) => `${r.scenario.id} ${Boolean(r.analysis)} ${r.docSection.ok ? '' : r.docSection.message} ${cellsOf(c, r.scenario.id)?.ok}`)].join('\n');
 }
 
 export function ScenarioPanel() {
@@ -129,14 +137,14 @@ export function ScenarioPanel() {
         <button type="button" data-testid="scenario-rename" onClick={() => setRenaming({ id: active, name: doc.scenarios.find((s) => s.id === active)?.name ?? '' })}>Rename</button>
         <button type="button" data-testid="scenario-delete" disabled={doc.scenarios.length <= 1} onClick={() => apply((d) => scenarioDelete(d, d.activeScenarioId))} title="Delete the active scenario (undo brings it back)">Delete</button>
       </div>
-      {commonRef !== null && <p className="hint" data-testid="scenario-reference">Compared on detachment elevation; depths below {refText}.</p>}
+      {commonRef !== null && <p className="hint" data-testid="scenario-reference">Compared on detachment elevation; depths below <LiveText read={refRead} />.</p>}
       <div className="table-box">
         <table className="results-table compare" data-testid="scenario-compare">
           <thead>
             <tr>
               <th className="name-col">Scenario</th>
               <th title="95% interval below each value">Detachment elevation ({doc.units})</th>
-              <th title={commonRef !== null ? `Below ${refText}` : undefined}>Depth below {commonRef !== null ? formatLength(commonRef, doc.units) : 'ref.'}</th>
+              <th title={commonRef !== null ? `Below ${refText}` : undefined}>Depth below {commonRef !== null ? <LiveText read={refLevelRead} /> : 'ref.'}</th>
               <th>Displace&shy;ment ({doc.units})</th>
               <th title="Horizons in the fit">n</th>
             </tr>
