@@ -6,7 +6,7 @@ import { SECTION_CAUTION } from '../core/analysis/caution';
 import type { ImportedFault, ImportedHorizon } from '../core/model/commands/importHorizons';
 import type { LengthUnit, XZ } from '../core/model/section';
 import { cleanCoordinate } from './cleanCoordinate';
-import { parseCsvTable, toCsv } from './csvText';
+import { forEachCsvRow, toCsv } from './csvText';
 import { countLines, fileTooLargeMessage, lineCountProblem, LIMITS } from '../core/model/limits';
 import { MAX_IMPORT_BYTES, pushProblem, readUnit, type HorizonImport, type RowProblem } from './importTypes';
 
@@ -29,54 +29,58 @@ function parseNumber(s: string): number | null {
 export function parseHorizonsCsv(text: string): HorizonImport {
   const problems: RowProblem[] = [];
   if (text.length > MAX_IMPORT_BYTES) return { ok: false, message: `The CSV file cannot be imported: ${fileTooLargeMessage(text.length, MAX_IMPORT_BYTES)}.`, problems };
-  const { rows, quoted } = parseCsvTable(text);
-  // Only an unquoted '#' opens a comment: a quoted first field is data (a name that starts with '#').
-  const comment = (r: number) => (quoted[r] & 1) === 0 && rows[r][0].trim().startsWith('#');
+  // Rows are read one at a time (forEachCsvRow) and not kept: a file of a million rows holds only its vertices.
   let units: LengthUnit | null = null;
-  let line = 0;
-  while (line < rows.length && (rows[line].join('').trim() === '' || comment(line))) {
-    // The caution line (written by writeHorizonsCsv) is prose: never read a unit out of it.
-    const m = /^\s*#\s*caution\b/i.test(rows[line][0]) ? null : /units?\s*[:=]\s*([a-z-]+)/i.exec(rows[line].join(','));
-    if (m) units = readUnit(m[1]) ?? units;
-    line++;
-  }
-  if (line >= rows.length) return { ok: false, message: 'The CSV file has no header row (expected columns horizon, x, z).', problems };
-  const header = rows[line].map(columnUnit);
-  const nameCol = header.findIndex((h) => NAME_COLUMNS.includes(h.base));
-  const xCol = header.findIndex((h) => h.base === 'x');
-  const zCol = header.findIndex((h) => h.base === 'z' || h.base === 'elevation');
-  if (nameCol < 0 || xCol < 0 || zCol < 0) {
-    return { ok: false, message: 'The CSV header must name three columns: horizon (or name), x and z (e.g. "horizon,x_m,z_m").', problems };
-  }
-  const headerUnits = [header[xCol].unit, header[zCol].unit].filter((u): u is LengthUnit => u !== null);
-  if (headerUnits.length === 2 && headerUnits[0] !== headerUnits[1]) {
-    return { ok: false, message: 'The x and z columns are in different units; convert them to one unit.', problems };
-  }
-  units = headerUnits[0] ?? units;
-  const pieceCol = header.findIndex((h) => h.base === 'piece');
-  const kindCol = header.findIndex((h) => h.base === 'kind');
+  let columns: { nameCol: number; xCol: number; zCol: number; pieceCol: number; kindCol: number } | null = null;
+  let refused: HorizonImport | null = null;
   const byName = new Map<string, XZ[]>();
   const faultsByName = new Map<string, XZ[]>();
   const pieceStarts = new Map<string, { piece: string; starts: number[] }>();
   const counter = { n: 0 };
-  for (let r = line + 1; r < rows.length; r++) {
-    const row = rows[r];
-    if (row.join('').trim() === '' || comment(r)) continue;
+  forEachCsvRow(text, (row, quoted, r) => {
+    // Only an unquoted '#' opens a comment: a quoted first field is data (a name that starts with '#').
+    const skipped = row.join('').trim() === '' || ((quoted & 1) === 0 && row[0].trim().startsWith('#'));
+    if (!columns) {
+      if (skipped) {
+        // The caution line (written by writeHorizonsCsv) is prose: never read a unit out of it.
+        const m = /^\s*#\s*caution\b/i.test(row[0]) ? null : /units?\s*[:=]\s*([a-z-]+)/i.exec(row.join(','));
+        if (m) units = readUnit(m[1]) ?? units;
+        return;
+      }
+      const header = row.map(columnUnit);
+      const nameCol = header.findIndex((h) => NAME_COLUMNS.includes(h.base));
+      const xCol = header.findIndex((h) => h.base === 'x');
+      const zCol = header.findIndex((h) => h.base === 'z' || h.base === 'elevation');
+      if (nameCol < 0 || xCol < 0 || zCol < 0) {
+        refused = { ok: false, message: 'The CSV header must name three columns: horizon (or name), x and z (e.g. "horizon,x_m,z_m").', problems };
+        return false;
+      }
+      const headerUnits = [header[xCol].unit, header[zCol].unit].filter((u): u is LengthUnit => u !== null);
+      if (headerUnits.length === 2 && headerUnits[0] !== headerUnits[1]) {
+        refused = { ok: false, message: 'The x and z columns are in different units; convert them to one unit.', problems };
+        return false;
+      }
+      units = headerUnits[0] ?? units;
+      columns = { nameCol, xCol, zCol, pieceCol: header.findIndex((h) => h.base === 'piece'), kindCol: header.findIndex((h) => h.base === 'kind') };
+      return;
+    }
+    if (skipped) return;
+    const { nameCol, xCol, zCol, pieceCol, kindCol } = columns;
     const where = `line ${r + 1}`;
     // Names were written through spreadsheetText: its mark comes off, so a name comes back exactly. A quoted
     // name is taken as written (csvField quotes one with white space at an end); an unquoted one is trimmed.
     const cell = row[nameCol] ?? '';
-    const name = nameCol < 31 && (quoted[r] & (1 << nameCol)) !== 0 ? fromSpreadsheetText(cell) : fromSpreadsheetText(cell.trim()).trim();
-    if (name.trim() === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); continue; }
-    if (name.length > LIMITS.nameLength) { pushProblem(problems, { where, message: `horizon name longer than ${LIMITS.nameLength} characters` }, counter); continue; }
+    const name = nameCol < 31 && (quoted & (1 << nameCol)) !== 0 ? fromSpreadsheetText(cell) : fromSpreadsheetText(cell.trim()).trim();
+    if (name.trim() === '') { pushProblem(problems, { where, message: 'no horizon name' }, counter); return; }
+    if (name.length > LIMITS.nameLength) { pushProblem(problems, { where, message: `horizon name longer than ${LIMITS.nameLength} characters` }, counter); return; }
     const x = parseNumber(row[xCol] ?? '');
     const z = parseNumber(row[zCol] ?? '');
     if (x === null || z === null) {
       pushProblem(problems, { where, message: `${x === null ? 'x' : 'z'} is not a finite number (${JSON.stringify((row[x === null ? xCol : zCol] ?? '').slice(0, 40))})` }, counter);
-      continue;
+      return;
     }
     const kind = kindCol >= 0 ? (row[kindCol] ?? '').trim().toLowerCase() : '';
-    if (kind !== '' && kind !== 'horizon' && kind !== 'fault') { pushProblem(problems, { where, message: `kind must be "horizon" or "fault" (got ${JSON.stringify(kind.slice(0, 40))})` }, counter); continue; }
+    if (kind !== '' && kind !== 'horizon' && kind !== 'fault') { pushProblem(problems, { where, message: `kind must be "horizon" or "fault" (got ${JSON.stringify(kind.slice(0, 40))})` }, counter); return; }
     const into = kind === 'fault' ? faultsByName : byName;
     let pts = into.get(name);
     if (!pts) { pts = []; into.set(name, pts); }
@@ -88,7 +92,9 @@ export function parseHorizonsCsv(text: string): HorizonImport {
       else if (seen.piece !== piece) { seen.piece = piece; seen.starts.push(pts.length); }
     }
     pts.push([x, z]);
-  }
+  });
+  if (refused) return refused;
+  if (!columns) return { ok: false, message: 'The CSV file has no header row (expected columns horizon, x, z).', problems };
   const horizons: ImportedHorizon[] = [];
   for (const [name, pts] of byName) {
     if (pts.length < 2) { pushProblem(problems, { where: `horizon "${name}"`, message: 'has only one vertex; a horizon needs at least two' }, counter); continue; }

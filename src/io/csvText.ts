@@ -8,39 +8,64 @@ import { spreadsheetText } from '../format/spreadsheetText';
  */
 export interface CsvTable { rows: string[][]; quoted: number[] }
 
-/** Returns the rows of CSV text with which fields were quoted; stops after `maxRows` rows. */
-export function parseCsvTable(text: string, maxRows = 5_000_000): CsvTable {
-  const rows: string[][] = [];
-  const quotedRows: number[] = [];
+const QUOTE = 34, COMMA = 44, LF = 10, CR = 13;
+
+/**
+ * Calls `visit` with each row of CSV text in order (its fields, which were quoted as in CsvTable, its index from 0),
+ * keeping no row: a reader of a million rows holds only what it takes from them. Stops after `maxRows` rows, or
+ * when `visit` returns false. Plain runs of a field are sliced from the text, not built a character at a time.
+ */
+export function forEachCsvRow(text: string, visit: (row: string[], quoted: number, index: number) => boolean | void, maxRows = 5_000_000): void {
   let row: string[] = [];
   let mask = 0;
   let field = '';
   let quoted = false;
+  let count = 0;
+  let going = true;
+  const n = text.length;
   let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   const endRow = () => {
     row.push(field);
-    rows.push(row);
-    quotedRows.push(mask);
+    going = visit(row, mask, count++) !== false && count < maxRows;
     row = [];
     mask = 0;
     field = '';
   };
-  for (; i < text.length && rows.length < maxRows; i++) {
-    const c = text[i];
+  while (i < n && going) {
+    const c = text.charCodeAt(i);
     if (quoted) {
-      if (c === '"') {
-        if (text[i + 1] === '"') { field += '"'; i++; } else quoted = false;
-      } else field += c;
-    } else if (c === '"' && field === '') {
+      // Inside quotes everything up to the next quote is the field's; a doubled quote is one quote.
+      const q = text.indexOf('"', i);
+      if (q < 0) { field += text.slice(i); i = n; break; }
+      field += text.slice(i, q);
+      if (text.charCodeAt(q + 1) === QUOTE) { field += '"'; i = q + 2; } else { quoted = false; i = q + 1; }
+    } else if (c === QUOTE && field === '') {
       quoted = true;
       if (row.length < 31) mask |= 1 << row.length;
-    } else if (c === ',') { row.push(field); field = ''; }
-    else if (c === '\n') endRow();
-    else if (c === '\r') { if (text[i + 1] === '\n') i++; endRow(); }
-    else field += c;
+      i++;
+    } else if (c === COMMA) { row.push(field); field = ''; i++; }
+    else if (c === LF) { endRow(); i++; }
+    else if (c === CR) { i += text.charCodeAt(i + 1) === LF ? 2 : 1; endRow(); }
+    else {
+      // A plain run up to the next separator or line end; the field is no longer empty, so a quote in it is literal.
+      let j = i + 1;
+      for (; j < n; j++) {
+        const d = text.charCodeAt(j);
+        if (d === COMMA || d === LF || d === CR) break;
+      }
+      field += text.slice(i, j);
+      i = j;
+    }
   }
-  if (field !== '' || row.length > 0) endRow();
-  return { rows, quoted: quotedRows };
+  if (going && (field !== '' || row.length > 0)) endRow();
+}
+
+/** Returns the rows of CSV text with which fields were quoted; stops after `maxRows` rows. */
+export function parseCsvTable(text: string, maxRows = 5_000_000): CsvTable {
+  const rows: string[][] = [];
+  const quoted: number[] = [];
+  forEachCsvRow(text, (row, mask) => { rows.push(row); quoted.push(mask); }, maxRows);
+  return { rows, quoted };
 }
 
 /** Returns the rows of CSV text as arrays of fields (parseCsvTable without the quoting). */

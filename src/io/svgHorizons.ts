@@ -181,16 +181,22 @@ function svgFrame(a: Record<string, string>, ctm: Matrix, parent: Frame, isRoot:
   return { ctm: multiply(ctm, vp.matrix), viewport: vp.size, hidden: false };
 }
 
-/** Returns the lines in section units, scaling each axis through the two reference points, or a message when they share an x or a y. */
-export function svgToSectionAxes(lines: SvgLine[], refs: [SvgReference, SvgReference]): { ok: true; horizons: ImportedHorizon[] } | { ok: false; message: string } {
+/** Returns the map from the drawing's root user units to the section that the two reference points give (each axis scaled on its own), or a message when they share an x or a y. */
+export function svgSectionMap(refs: [SvgReference, SvgReference]): { ok: true; map: (p: Pt) => XZ } | { ok: false; message: string } {
   const [p, q] = refs;
   const dsx = q.svg[0] - p.svg[0];
   const dsy = q.svg[1] - p.svg[1];
-  if (![...p.svg, ...q.svg, ...p.section, ...q.section].every(Number.isFinite)) return { ok: false, message: 'Enter all eight numbers of the two reference points.' };
+  if (![p.svg[0], p.svg[1], q.svg[0], q.svg[1], p.section[0], p.section[1], q.section[0], q.section[1]].every(Number.isFinite)) return { ok: false, message: 'Enter all eight numbers of the two reference points.' };
   if (dsx === 0 || dsy === 0) return { ok: false, message: 'The two reference points must differ both across and up the drawing.' };
   const kx = (q.section[0] - p.section[0]) / dsx;
   const kz = (q.section[1] - p.section[1]) / dsy;
   if (kx === 0 || kz === 0) return { ok: false, message: 'The two reference points must have different section x and different z.' };
-  const map = ([sx, sy]: Pt): XZ => [p.section[0] + (sx - p.svg[0]) * kx, p.section[1] + (sy - p.svg[1]) * kz];
-  return { ok: true, horizons: lines.map((l) => ({ name: l.name, line: l.points.map(map) })) };
+  return { ok: true, map: ([sx, sy]: Pt): XZ => [p.section[0] + (sx - p.svg[0]) * kx, p.section[1] + (sy - p.svg[1]) * kz] };
+}
+
+/** Returns the lines in section units, scaling each axis through the two reference points, or a message when they share an x or a y. */
+export function svgToSectionAxes(lines: SvgLine[], refs: [SvgReference, SvgReference]): { ok: true; horizons: ImportedHorizon[] } | { ok: false; message: string } {
+  const m = svgSectionMap(refs);
+  if (!m.ok) return m;
+  return { ok: true, horizons: lines.map((l) => ({ name: l.name, line: l.points.map(m.map) })) };
 }

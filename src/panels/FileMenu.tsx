@@ -136,7 +136,19 @@ export function FileMenu() {
   const onImportFile = (kind: ImportKind) => async (e: React.ChangeEvent<HTMLInputElement>) => {
     const file = e.currentTarget.files?.[0];
     e.currentTarget.value = '';
-    if (file) setPending(await readImport(kind, file));
+    if (!file) return;
+    // Read and parsed in a worker (panels/files/readImport): the busy bar shows the stage and offers a Cancel.
+    const session = useSessionStore.getState();
+    const stop = new AbortController();
+    const busy = (stage: string, done: number | null = null) => session.setBusy(`Reading ${file.name} … ${stage}`, { done, cancel: () => stop.abort() });
+    busy('reading');
+    try {
+      const read = await readImport(kind, file, (p) => (p.stage === 'lines' ? busy('lines', p.fraction) : busy(p.stage)), stop.signal);
+      if (read) setPending(read);
+      else session.showMessage('info', `Reading ${file.name} was cancelled; nothing was imported.`);
+    } finally {
+      session.setBusy(null);
+    }
   };
   const toggle = (id: MenuId) => () => setMenu((m) => (m === id ? null : id));
 

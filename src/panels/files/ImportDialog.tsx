@@ -2,25 +2,40 @@
 // and for SVG the two reference points that place the drawing in the section.
 import { docLimitProblem } from '../../core/model/docLimitProblem';
 import { useMemo, useState } from 'react';
-import { importHorizons, type ImportedFault, type ImportedHorizon } from '../../core/model/commands/importHorizons';
+import { importHorizons, type ImportedHorizon } from '../../core/model/commands/importHorizons';
 import { importedCoordinateProblem } from '../../core/model/importedCoordinateProblem';
-import type { LengthUnit } from '../../core/model/section';
-import { svgToSectionAxes } from '../../io/svgHorizons';
+import type { LengthUnit, XZ } from '../../core/model/section';
+import { svgSectionMap, svgToSectionAxes, type SvgReference } from '../../io/svgHorizons';
+import type { LineBox } from '../../io/importedForTransfer';
 import { fitViewToDoc } from '../../state/projectActions';
 import { formatNumber } from '../../format/formatQuantity';
 import type { RowProblem } from '../../io/importTypes';
 import { useDocStore } from '../../state/docStore';
 import { useSessionStore } from '../../state/sessionStore';
 import type { PendingImport } from './readImport';
-import { minOf, maxOf } from '../../core/stats/minMax';
 
 type Ref = { sx: string; sy: string; x: string; z: string };
 
-function bbox(lines: [number, number][][]): [number, number, number, number] {
-  const all = lines.flat();
-  const xs = all.map((p) => p[0]), ys = all.map((p) => p[1]);
-  return [minOf(xs), minOf(ys), maxOf(xs), maxOf(ys)];
+/** The union of the lines' extents (measured where the file was read), as [min x, min y, max x, max y]. */
+function unionBox(boxes: readonly LineBox[]): [number, number, number, number] {
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const b of boxes) {
+    x0 = Math.min(x0, b[0]); x1 = Math.max(x1, b[1]);
+    y0 = Math.min(y0, b[2]); y1 = Math.max(y1, b[3]);
+  }
+  return [x0, y0, x1, y1];
 }
+
+/** Returns a line's extent mapped to the section: each axis is scaled on its own, so the extremes map to extremes. */
+function mappedBox(map: (p: [number, number]) => XZ, b: LineBox): LineBox {
+  const [ax, az] = map([b[0], b[2]]);
+  const [bx, bz] = map([b[1], b[3]]);
+  return [Math.min(ax, bx), Math.max(ax, bx), Math.min(az, bz), Math.max(az, bz)];
+}
+
+/** What the preview shows of each line: its name, vertex count and extent in section units. */
+interface PreviewRow { name: string; vertices: number; box: LineBox }
+type Mapped = { ok: true; rows: PreviewRow[]; horizons: () => ImportedHorizon[] } | { ok: false; message: string };
 
 function RefInputs({ n, value, onChange }: { n: 1 | 2; value: Ref; onChange: (r: Ref) => void }) {
   const field = (key: keyof Ref, label: string) => (
@@ -58,22 +73,40 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
   const docUnits = useDocStore((s) => s.doc.units);
   const stated = pending.kind !== 'svg' && pending.result.ok ? pending.result.units : null;
   const [units, setUnits] = useState<LengthUnit>(stated ?? docUnits);
-  const svgBox = pending.kind === 'svg' && pending.result.ok ? bbox(pending.result.lines.map((l) => l.points)) : null;
+  // The extents were measured where the file was read (a worker): nothing here walks every vertex until Import.
+  const svgBox = pending.kind === 'svg' && pending.result.ok ? unionBox(pending.boxes) : null;
   const [ref1, setRef1] = useState<Ref>(() => (svgBox ? { sx: String(svgBox[0]), sy: String(svgBox[3]), x: '0', z: '0' } : { sx: '', sy: '', x: '', z: '' }));
   const [ref2, setRef2] = useState<Ref>(() => (svgBox ? { sx: String(svgBox[2]), sy: String(svgBox[1]), x: String(svgBox[2] - svgBox[0]), z: String(svgBox[3] - svgBox[1]) } : { sx: '', sy: '', x: '', z: '' }));
-  const mapped = useMemo((): { ok: true; horizons: ImportedHorizon[] } | { ok: false; message: string } => {
+  const mapped = useMemo((): Mapped => {
     if (!pending.result.ok) return { ok: false, message: pending.result.message };
     // The same coordinate range as a section file (core/model/limits.ts), before anything reaches the document.
-    const inRange = (r: { ok: true; horizons: ImportedHorizon[] }, faults: readonly ImportedFault[] = []) => {
-      const far = importedCoordinateProblem(r.horizons) ?? importedCoordinateProblem(faults, 'Fault');
-      return far ? { ok: false as const, message: `Nothing can be imported from ${pending.fileName}: ${far}.` } : r;
-    };
-    if (pending.kind !== 'svg') return inRange({ ok: true, horizons: pending.result.horizons }, pending.result.faults);
+    const far = (problem: string) => ({ ok: false as const, message: `Nothing can be imported from ${pending.fileName}: ${problem}.` });
+    if (pending.kind !== 'svg') {
+      if (pending.rangeProblem) return far(pending.rangeProblem);
+      const horizons = pending.result.horizons;
+      return { ok: true, rows: horizons.map((h, i) => ({ name: h.name, vertices: h.line.length, box: pending.boxes[i] })), horizons: () => horizons };
+    }
     const num = (r: Ref) => ({ svg: [Number(r.sx), Number(r.sy)] as [number, number], section: [Number(r.x), Number(r.z)] as [number, number] });
     const bad = [ref1, ref2].some((r) => Object.values(r).some((v) => v.trim() === ''));
     if (bad) return { ok: false, message: 'Enter all eight numbers of the two reference points.' };
-    const onAxes = svgToSectionAxes(pending.result.lines, [num(ref1), num(ref2)]);
-    return onAxes.ok ? inRange(onAxes) : onAxes;
+    const refs: [SvgReference, SvgReference] = [num(ref1), num(ref2)];
+    const axes = svgSectionMap(refs);
+    if (!axes.ok) return axes;
+    const lines = pending.result.lines;
+    const boxes = pending.boxes.map((b) => mappedBox(axes.map, b));
+    // A coordinate out of range lies at a corner of its line's extent (each axis is scaled on its own): the corners
+    // are checked as the vertices are; only when one is out are the vertices mapped, to name the first such one.
+    const corners = boxes.map((b, i) => ({ name: lines[i].name, line: [[b[0], b[2]], [b[1], b[3]]] as XZ[] }));
+    if (importedCoordinateProblem(corners)) {
+      const onAxes = svgToSectionAxes(lines, refs);
+      const problem = onAxes.ok ? importedCoordinateProblem(onAxes.horizons) : onAxes.message;
+      return far(problem ?? importedCoordinateProblem(corners)!);
+    }
+    return {
+      ok: true,
+      rows: lines.map((l, i) => ({ name: l.name, vertices: l.points.length, box: boxes[i] })),
+      horizons: () => lines.map((l) => ({ name: l.name, line: l.points.map(axes.map) })),
+    };
   }, [pending, ref1, ref2]);
 
   const confirm = () => {
@@ -81,16 +114,18 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
     const before = useDocStore.getState().doc;
     const faultsIn = pending.kind !== 'svg' && pending.result.ok ? pending.result.faults ?? [] : [];
     // The horizons already drawn count too: the document after the import must stay within the limits.
-    const over = docLimitProblem(importHorizons(before, mapped.horizons, units, faultsIn));
+    const horizons = mapped.horizons();
+    const withImport = importHorizons(before, horizons, units, faultsIn);
+    const over = docLimitProblem(withImport);
     if (over) {
       useSessionStore.getState().showMessage('error', `Nothing was imported from ${pending.fileName}: with the horizons already in the project there would be ${over}.`);
       onClose();
       return;
     }
-    useDocStore.getState().apply((doc) => importHorizons(doc, mapped.horizons, units, faultsIn));
+    useDocStore.getState().apply((doc) => (doc === before ? withImport : importHorizons(doc, horizons, units, faultsIn)));
     const after = useDocStore.getState().doc;
     if (!before.scan && after !== before) fitViewToDoc(after);
-    useSessionStore.getState().showMessage('info', `Imported ${mapped.horizons.length} horizon${mapped.horizons.length === 1 ? '' : 's'}${faultsIn.length ? ` and ${faultsIn.length} fault${faultsIn.length === 1 ? '' : 's'}` : ''} from ${pending.fileName}.`);
+    useSessionStore.getState().showMessage('info', `Imported ${horizons.length} horizon${horizons.length === 1 ? '' : 's'}${faultsIn.length ? ` and ${faultsIn.length} fault${faultsIn.length === 1 ? '' : 's'}` : ''} from ${pending.fileName}.`);
     onClose();
   };
 
@@ -127,17 +162,14 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
           <table className="files-table" data-testid="import-preview">
             <thead><tr><th>Horizon</th><th>Vertices</th><th>x from – to</th><th>z from – to</th></tr></thead>
             <tbody>
-              {mapped.horizons.slice(0, 100).map((h, i) => {
-                const xs = h.line.map((p) => p[0]), zs = h.line.map((p) => p[1]);
-                return (
-                  <tr key={i}>
-                    <td>{h.name}</td>
-                    <td>{h.line.length}</td>
-                    <td>{formatNumber(minOf(xs))} – {formatNumber(maxOf(xs))}</td>
-                    <td>{formatNumber(minOf(zs))} – {formatNumber(maxOf(zs))}</td>
-                  </tr>
-                );
-              })}
+              {mapped.rows.slice(0, 100).map((h, i) => (
+                <tr key={i}>
+                  <td>{h.name}</td>
+                  <td>{h.vertices}</td>
+                  <td>{formatNumber(h.box[0])} – {formatNumber(h.box[1])}</td>
+                  <td>{formatNumber(h.box[2])} – {formatNumber(h.box[3])}</td>
+                </tr>
+              ))}
             </tbody>
           </table>
         )}
@@ -145,7 +177,7 @@ export function ImportDialog({ pending, onClose }: { pending: PendingImport; onC
         <div className="button-row files-dialog-buttons">
           <button type="button" onClick={onClose} data-testid="import-cancel">Cancel</button>
           <button type="button" className="primary" disabled={!mapped.ok} onClick={confirm} data-testid="import-confirm">
-            {mapped.ok ? `Import ${mapped.horizons.length} horizon${mapped.horizons.length === 1 ? '' : 's'}` : 'Import'}
+            {mapped.ok ? `Import ${mapped.rows.length} horizon${mapped.rows.length === 1 ? '' : 's'}` : 'Import'}
           </button>
         </div>
       </div>
