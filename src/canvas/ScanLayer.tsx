@@ -7,6 +7,8 @@
 // drawn it: "tiles" (the tiles the zoom wants, at their level), "whole" (the whole bitmap standing in for a level
 // not made yet) or "drawing" (the view changed and the layer has not drawn it yet); absent without a scan. A
 // picture of the scan is final once it reads "tiles" (the browser tests wait for that instead of for time).
+// A task after the layer first draws a newly opened scan (the frame that shows it is then done), it says so
+// (noteScanShown): the scan's reduced views start then, and the benchmark reads the mark that sets.
 import { memo, useEffect, useRef, useSyncExternalStore, type RefObject } from 'react';
 import Konva from 'konva';
 import { Layer, Group, Rect } from 'react-konva';
@@ -14,7 +16,7 @@ import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
 import { TILE_PX, visibleTiles } from '../state/scanTiles';
-import { getTilePyramid, pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
+import { getTilePyramid, noteScanShown, pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
 
 /** Screen pixels past the view's edge that are kept drawn, so a short pan never shows a gap. */
 const MARGIN_PX = 64;
@@ -41,8 +43,15 @@ export const ScanLayer = memo(function ScanLayer({ viewRef }: { viewRef: RefObje
     const nodes = new Map<string, Konva.Image>();
     let drawing: ScanDrawn = 'tiles';
     const mark = (drawn: ScanDrawn) => view?.setAttribute('data-scan-drawn', drawn);
+    let shown = false;
     // Fired by Konva once the layer's scene is on its canvas.
-    layer.on('draw.scanDrawn', () => mark(drawing));
+    layer.on('draw.scanDrawn', () => {
+      mark(drawing);
+      if (shown) return;
+      shown = true;
+      // The first drawing of this bitmap: the frame that puts it on screen ends with this task.
+      setTimeout(() => noteScanShown(bitmap, useDocStore.getState().doc.scan?.name ?? ''), 0);
+    });
     const place = (key: string, attrs: Konva.ImageConfig) => {
       if (nodes.has(key)) return;
       const node = new Konva.Image({ ...attrs, listening: false, perfectDrawEnabled: false });

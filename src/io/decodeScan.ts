@@ -46,9 +46,9 @@ export function scanTooLargeMessage(name: string, w: number, h: number): string 
 }
 const tooLarge = scanTooLargeMessage;
 
-async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Promise<DecodeResult> {
+async function decodeBrowserImage(file: Blob, head: Uint8Array, name: string, kind: ImageKind): Promise<DecodeResult> {
   // The size is in the header; a JPEG may put it after a metadata block longer than the head read first.
-  const size = decodeImageSize(new Uint8Array(await file.slice(0, HEAD_BYTES).arrayBuffer()), kind)
+  const size = decodeImageSize(head, kind)
     ?? (file.size > HEAD_BYTES ? decodeImageSize(new Uint8Array(await file.arrayBuffer()), kind) : null);
   if (size && size.widthPx * size.heightPx > MAX_PIXELS) return { ok: false, message: tooLarge(name, size.widthPx, size.heightPx) };
   let bitmap: ImageBitmap;
@@ -72,7 +72,9 @@ async function decodeBrowserImage(file: Blob, name: string, kind: ImageKind): Pr
 export async function decodeScan(file: Blob & { name?: string }, choose: AskScanChoice, options: DecodeOptions = {}): Promise<DecodeResult> {
   const name = file.name || 'the file';
   if (file.size === 0) return { ok: false, message: `${name} is empty.` };
-  const kind = sniffImageType(new Uint8Array(await file.slice(0, 16).arrayBuffer()));
+  // One read of the head serves the type and the pixel size: every read of a file is a round trip to the browser.
+  const head = new Uint8Array(await file.slice(0, HEAD_BYTES).arrayBuffer());
+  const kind = sniffImageType(head.subarray(0, 16));
   if (kind === 'unknown') {
     return { ok: false, message: `${name} is not a PNG, JPEG, WebP, TIFF or PDF image. Choose a scanned section image.` };
   }
@@ -85,7 +87,7 @@ export async function decodeScan(file: Blob & { name?: string }, choose: AskScan
     const r = await decodePdf(file, name, MAX_PIXELS, choose, saved);
     result = r.ok ? { ok: true, bitmap: r.bitmap, kind, widthPx: r.bitmap.width, heightPx: r.bitmap.height, mime: MIME.pdf, page: r.page, pageCount: r.pageCount, dpi: r.dpi } : r;
   } else {
-    result = await decodeBrowserImage(file, name, kind);
+    result = await decodeBrowserImage(file, head, name, kind);
   }
   // The header check cannot see every file's size (and a PDF page's size depends on the resolution).
   if (result.ok && result.widthPx * result.heightPx > MAX_PIXELS) {

@@ -1,7 +1,9 @@
 // How long decoded scans live. A 100 MP scan holds about 0.4 GB as a bitmap (and a twelfth more as reduced tiles), so
 // only the scan the open project shows stays decoded. A scan the undo history can bring back keeps its bytes
 // (closed bitmap, no tiles) and is decoded again from them when it returns; any other scan is dropped.
-// Releases wait one task after the change, so the scan layer has let go of the old tiles before they close.
+// Releases wait until after the frame that shows the change (and the task that frame leaves for its end), so the
+// scan layer has let go of the old tiles before they close, and closing a big scan never delays the picture of the
+// one that replaces it.
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore, type DocState } from './docStore';
 import { reopenSavedScan } from './projectActions';
@@ -31,16 +33,43 @@ export function retainScansFor(state: Pick<DocState, 'doc' | 'past' | 'future' |
   });
 }
 
+/** Longest wait for the next frame (ms): a hidden tab draws none, and its closed scans still go. */
+const FRAME_WAIT_MS = 500;
+
+/** Calls `work` two tasks after the next frame (or after FRAME_WAIT_MS without one; two tasks later where there is no screen). */
+function afterNextFrame(work: () => void): void {
+  const twoTurns = () => setTimeout(() => setTimeout(work, 0), 0);
+  if (typeof requestAnimationFrame === 'undefined') {
+    twoTurns();
+    return;
+  }
+  let started = false;
+  const start = () => {
+    if (started) return;
+    started = true;
+    clearTimeout(timer);
+    twoTurns();
+  };
+  const timer = setTimeout(start, FRAME_WAIT_MS);
+  requestAnimationFrame(start);
+}
+
 /** Starts applying the lifetime rule whenever the shown scan or the history changes; returns the stop function. */
 export function startScanLifetime(): () => void {
-  let timer: ReturnType<typeof setTimeout> | undefined;
+  let pending = false;
+  let stopped = false;
+  const run = () => {
+    pending = false;
+    if (!stopped) retainScansFor(useDocStore.getState());
+  };
   const unsubscribe = useDocStore.subscribe((s, prev) => {
     if (s.doc.scan === prev.doc.scan && s.past === prev.past && s.future === prev.future) return;
-    clearTimeout(timer);
-    timer = setTimeout(() => retainScansFor(useDocStore.getState()), 0);
+    if (pending) return;
+    pending = true;
+    afterNextFrame(run);
   });
   return () => {
-    clearTimeout(timer);
+    stopped = true;
     unsubscribe();
   };
 }

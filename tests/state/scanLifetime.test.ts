@@ -10,7 +10,7 @@ vi.mock('../../src/io/reopenScan', () => ({ reopenScan }));
 const { useDocStore } = await import('../../src/state/docStore');
 const { getScan, heldScanIds, putScan, scanMemoryHeld } = await import('../../src/state/scanCache');
 const { heldPyramidIds } = await import('../../src/state/scanTilesPyramid');
-const { retainScansFor } = await import('../../src/state/scanLifetime');
+const { retainScansFor, startScanLifetime } = await import('../../src/state/scanLifetime');
 
 function fakeBitmap(width = 40, height = 20) {
   return { width, height, close: vi.fn() } as unknown as ImageBitmap & { close: ReturnType<typeof vi.fn> };
@@ -81,5 +81,32 @@ describe('retainScansFor(doc store state)', () => {
     // 40 × 20 px each; scan-a is kept as bytes only (undo can bring it back).
     expect(scanMemoryHeld()).toMatchObject({ decoded: 1, fullBytes: 40 * 20 * 4, tiles: 0, building: false });
     expect(heldPyramidIds()).toEqual(['scan-b']);
+  });
+});
+
+describe('startScanLifetime', () => {
+  it('closes a replaced scan only after the frame that shows its successor', async () => {
+    useDocStore.getState().replace(emptyProjectDoc());
+    retainScansFor(useDocStore.getState());
+    const frames: FrameRequestCallback[] = [];
+    vi.stubGlobal('requestAnimationFrame', (f: FrameRequestCallback) => frames.push(f));
+    const stop = startScanLifetime();
+    try {
+      const a = fakeBitmap();
+      putScan('scan-a', { bitmap: a, bytes: new Blob(['scan-a'], { type: 'image/png' }) });
+      useDocStore.getState().apply((d) => setScan(d, ref('scan-a')));
+      putScan('scan-b', { bitmap: fakeBitmap(), bytes: new Blob(['scan-b'], { type: 'image/png' }) });
+      useDocStore.getState().apply((d) => setScan(d, ref('scan-b')));
+      // Several tasks pass with no frame drawn: the replaced scan is still decoded.
+      for (let k = 0; k < 5; k++) await new Promise((r) => setTimeout(r, 0));
+      expect(a.close).not.toHaveBeenCalled();
+      expect(frames.length).toBeGreaterThan(0);
+      frames.splice(0).forEach((f) => f(0));
+      await vi.waitFor(() => expect(a.close).toHaveBeenCalledTimes(1));
+      expect(getScan('scan-a')).toMatchObject({ bitmap: null, released: true });
+    } finally {
+      stop();
+      vi.unstubAllGlobals();
+    }
   });
 });

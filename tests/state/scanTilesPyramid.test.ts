@@ -3,7 +3,7 @@
 // OffscreenCanvas is a browser API: a stand-in records each canvas's size and the tiles made from it.
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { TILE_PX, levelHeld, tileLevels } from '../../src/state/scanTiles';
-import { pyramidRegion, pyramidsHeld, releaseTilePyramid, scratchesHeld, startTilePyramid } from '../../src/state/scanTilesPyramid';
+import { SCAN_SHOWN_MARK, noteScanShown, pyramidRegion, pyramidsHeld, releaseTilePyramid, scratchesHeld, startTilePyramid } from '../../src/state/scanTilesPyramid';
 
 class FakeCanvas {
   static made: FakeCanvas[] = [];
@@ -72,5 +72,49 @@ describe('scan tile pyramid scratch canvases', () => {
     expect(FakeCanvas.peakScratchBytes).toBeGreaterThan(0);
     await pyramid.ready;
     expect(scratchesHeld().canvases).toBe(0);
+  });
+
+  describe('in a page with a screen (requestAnimationFrame)', () => {
+    beforeEach(() => {
+      vi.stubGlobal('requestAnimationFrame', (f: FrameRequestCallback) => setTimeout(() => f(0), 0));
+    });
+    afterEach(() => {
+      vi.useRealTimers();
+      performance.clearMarks(SCAN_SHOWN_MARK);
+    });
+
+    it('makes no reduced level before the scan is shown, and makes them once it is', async () => {
+      const full = bitmap(9000, 5000);
+      const pyramid = startTilePyramid('big', full);
+      // Many turns of the page pass: the first picture (the full bitmap) is not held up by a slice of tiles.
+      for (let k = 0; k < 20; k++) await new Promise((r) => setTimeout(r, 0));
+      expect(pyramidsHeld()).toMatchObject({ tiles: 0, building: true });
+      expect(pyramid.tiles.every((t) => t === null)).toBe(true);
+      noteScanShown(full, 'big.png');
+      await pyramid.ready;
+      expect(pyramidsHeld().building).toBe(false);
+      expect(pyramidsHeld().tiles).toBeGreaterThan(0);
+      expect(performance.getEntriesByName(SCAN_SHOWN_MARK).map((m) => (m as PerformanceMark).detail)).toEqual(['big.png']);
+    });
+
+    it('makes them anyway when nothing shows the scan (no view draws it)', async () => {
+      vi.useFakeTimers();
+      const pyramid = startTilePyramid('big', bitmap(9000, 5000));
+      await vi.runAllTimersAsync();
+      await pyramid.ready;
+      expect(pyramidsHeld()).toMatchObject({ building: false });
+      expect(pyramidsHeld().tiles).toBeGreaterThan(0);
+    });
+
+    it('a scan shown other than the one building starts nothing', async () => {
+      const pyramid = startTilePyramid('big', bitmap(9000, 5000));
+      noteScanShown(bitmap(9000, 5000), 'other.png');
+      for (let k = 0; k < 20; k++) await new Promise((r) => setTimeout(r, 0));
+      expect(pyramidsHeld()).toMatchObject({ tiles: 0, building: true });
+      releaseTilePyramid('big');
+      noteScanShown(pyramid.full, 'big.png');
+      await pyramid.ready;
+      expect(pyramidsHeld().tiles).toBe(0);
+    });
   });
 });
