@@ -10,7 +10,7 @@
 // Rows (each the median of --runs runs where a run is repeatable):
 // - pan: frame intervals while panning a 1 MP and the largest scan (fitted, and at 1:1); floor: the page's idle
 //   frame interval. Twice: frame rate capped at the display's, and uncapped (a frame then takes what its work takes).
-// - open scan at each size: drop → shown; floor: createImageBitmap of the same file in the same page. With it the
+// - open scan at each size: drop → shown (timed in the page: the frame that first draws it done); floor: createImageBitmap of the same file in the same page. With it the
 //   renderer's memory (resident and private) against the scan's RGBA size, and against the renderer before any
 //   scan plus that RGBA size (what holding the decoded scan cannot go under), with Chromium's own account of it by
 //   allocator (scripts/rendererMemory.ts); last, the renderer once the largest scan is replaced by a 1 MP one.
@@ -37,6 +37,7 @@ import { forwardSection } from '../src/core/forward/forwardSection';
 import { sectionToProjectDoc } from '../src/core/model/migrations/sectionToProjectDoc';
 import type { LineSection as Section } from '../src/core/model/section';
 import { fitCamera } from '../src/state/camera';
+import { SCAN_SHOWN_MARK } from '../src/state/scanTilesPyramid';
 import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
 import { startPreview } from './previewServer';
 import { allocatorLine, rendererAllocators } from './rendererMemory';
@@ -68,7 +69,7 @@ const SHOTS = flag('shots');
 const MOVES = Math.max(1, Number(flag('moves') ?? 60));
 /** A folder for a Chromium trace of the later pointer positions (`trace-moves.json`), with a summary of the slowest. */
 const TRACE_PROFILE = flag('trace-profile');
-/** A folder for a CPU profile of each big-document open and continuous drag (`open-12x<n>.cpuprofile`, `drag-12x<n>.cpuprofile`, opened by Chrome's DevTools); a summary is printed. */
+/** A folder for a CPU profile of each big-document open and continuous drag (`open-12x<n>.cpuprofile`, `drag-12x<n>.cpuprofile`) and of each size's first scan open (`open-scan-<n>mp.cpuprofile`), opened by Chrome's DevTools; a summary is printed. */
 const PROFILE = flag('profile');
 /** A folder for a Chromium trace of each waited drag's first and second moves (`first-move-12x<n>[-shift].trace.json`, `second-…`), with the main thread's time in each by event. */
 const FIRST_MOVE_TRACE = flag('first-move-trace');
@@ -171,17 +172,47 @@ const decodeFloor = (page: Page) => page.evaluate(`(async () => {
   return ms;
 })()`) as Promise<number>;
 
-/** Drops window.__scanFile on the view; returns drop → shown (ms), the longest task meanwhile, and drop → its reduced views made (ms). */
-async function openScan(page: Page, name: string): Promise<{ ms: number; longest: number; reduced: number }> {
-  const t0 = await now(page);
-  await page.evaluate(`(() => {
+/**
+ * Drops window.__scanFile on the view; returns drop → shown (ms), the longest task meanwhile, and drop → its reduced
+ * views made (ms). Shown is timed in the page, from the drop's dispatch to the scan layer's SCAN_SHOWN_MARK for this
+ * file (a task after the frame that first draws it: src/canvas/ScanLayer.tsx, state/scanTilesPyramid noteScanShown): what the user sees, without the
+ * polling of Playwright's waits (20, 50, 100, 100, 500 ms apart), which the floor does not pay either. With --profile
+ * a CPU profile of the open (open-scan-<n>mp.cpuprofile) is written and summarised.
+ */
+async function openScan(page: Page, name: string, profileTag?: string): Promise<{ ms: number; longest: number; reduced: number }> {
+  const cdp = PROFILE && profileTag ? await page.context().newCDPSession(page) : null;
+  if (cdp) {
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    await cdp.send('Profiler.start');
+  }
+  const [t0, shownAt] = (await page.evaluate(`new Promise((resolve) => {
+    const name = ${JSON.stringify(name)};
+    let t0 = 0;
+    const seen = new PerformanceObserver((l) => {
+      const m = l.getEntries().find((e) => e.name === ${JSON.stringify(SCAN_SHOWN_MARK)} && e.detail === name);
+      if (!m) return;
+      seen.disconnect();
+      resolve([t0, m.startTime]);
+    });
+    seen.observe({ type: 'mark' });
     const d = new DataTransfer();
     d.items.add(window.__scanFile);
+    t0 = performance.now();
     document.querySelector('.view-box').dispatchEvent(new DragEvent('drop', { dataTransfer: d, bubbles: true, cancelable: true }));
-  })()`);
+  })`)) as [number, number];
+  const ms = shownAt - t0;
   await page.getByTestId('scan-name').filter({ hasText: name }).waitFor({ timeout: 120_000 });
   await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
-  const ms = (await now(page)) - t0;
+  if (cdp && PROFILE) {
+    const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+    await cdp.detach();
+    const { writeFileSync, mkdirSync } = await import('node:fs');
+    mkdirSync(PROFILE, { recursive: true });
+    writeFileSync(`${PROFILE}/open-scan-${profileTag}.cpuprofile`, JSON.stringify(profile));
+    console.log(`  open a ${profileTag} scan: drop → shown ${ms.toFixed(1)} ms; the main thread's work from the drop until a little after:`);
+    printProfile(profile, 1);
+  }
   // The reduced views for zooming out are made after the scan is shown (state/scanTilesPyramid).
   await page.locator('[data-testid="scan-memory"][data-building="no"]').waitFor({ timeout: 120_000 });
   const reduced = (await now(page)) - t0;
@@ -714,7 +745,7 @@ async function scans(page: Page): Promise<void> {
       const name = `bench-${mp}mp-${run}.jpg`;
       await page.evaluate(`window.__scanFile = new File([window.__scanFile], ${JSON.stringify(name)}, { type: 'image/jpeg' })`);
       floor.push(await decodeFloor(page));
-      const o = await openScan(page, name);
+      const o = await openScan(page, name, run === 0 ? `${mp}mp` : undefined);
       open.push(o.ms);
       openLongest.push(o.longest);
       reduced.push(o.reduced);
