@@ -4,7 +4,7 @@
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
 //                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder
-//                       --profile folder --first-move-trace folder --no-continuous]
+//                       --profile folder --first-move-trace folder --no-continuous --drag-trace folder --drag-invalidations]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -21,7 +21,10 @@
 //   share (src/io/exportFigure.ts PNG_STEP_MARK). --no-documents leaves out the big-document rows.
 // - big documents (12 horizons × each --vertices): opening the section file, the first move of a regional drag,
 //   single and Shift (every regional) drags waiting for the numbers, a continuous drag at 60 moves a second, the
-//   autosave task after the edit; floor: one 16.7 ms frame.
+//   autosave task after the edit; floor: one 16.7 ms frame. --profile keeps a CPU profile (and a trace) of the opens,
+//   first moves and continuous drags; --drag-trace keeps only a Chromium trace of each continuous drag and prints
+//   one move by phase (script, style, layout, paint, raster) and what was painted; with --drag-invalidations also
+//   what invalidated style, layout and paint.
 // - tracing on a --trace-mp scan (default 200 MP): Draw horizon, an anchor on a drawn line, the pointer moved
 //   3,000 px along it; the first preview that follows the line (the rough one), the full-resolution preview (when
 //   the preview stops changing), and each of --moves later pointer positions of a few pixels: move → preview
@@ -41,6 +44,7 @@ import { SCAN_SHOWN_MARK } from '../src/state/scanTilesPyramid';
 import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
 import { startPreview } from './previewServer';
 import { allocatorLine, rendererAllocators } from './rendererMemory';
+import { DRAG_TRACE_CATEGORIES, INVALIDATION_CATEGORY, printDragTrace, type DragTraceEvent } from './dragTrace';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
 const VITE = 'node_modules/vite/bin/vite.js';
@@ -75,6 +79,10 @@ const PROFILE = flag('profile');
 const FIRST_MOVE_TRACE = flag('first-move-trace');
 /** Leaves out the continuous drags (e.g. to time only the open, first move, Shift-drag and autosave). */
 const WITH_CONTINUOUS = !process.argv.includes('--no-continuous');
+/** A folder for a Chromium trace of each continuous drag (`drag-12x<n>.trace.json`), taken without the CPU profiler (which slows a move about 2×); one move is printed by phase (scripts/dragTrace.ts). */
+const DRAG_TRACE = flag('drag-trace');
+/** With --drag-trace, also list what invalidated style, layout and paint (slows the traced drag several times over). */
+const DRAG_INVALIDATIONS = process.argv.includes('--drag-invalidations');
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -619,6 +627,8 @@ async function continuousDrag(page: Page, grip: Grip, moves: number, tag: string
     await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
     await cdp.send('Profiler.start');
   }
+  const traced = DRAG_TRACE && pressed && !cdp;
+  if (traced) await page.context().browser()!.startTracing(page, { categories: DRAG_INVALIDATIONS ? [...DRAG_TRACE_CATEGORIES, INVALIDATION_CATEGORY] : DRAG_TRACE_CATEGORIES });
   const got = (await page.evaluate(`new Promise((resolve) => {
     const target = document.querySelector('[data-testid="section-view"]');
     const x = ${grip.gx}; let y = ${grip.gy - 3};
@@ -652,6 +662,13 @@ async function continuousDrag(page: Page, grip: Grip, moves: number, tag: string
     printTrace(JSON.parse(trace.toString()) as { traceEvents: TraceEvent[] }, moves);
     writeFileSync(`${PROFILE}/drag-12x${tag}.cpuprofile`, JSON.stringify(profile));
     printProfile(profile, moves);
+  }
+  if (traced) {
+    const trace = await page.context().browser()!.stopTracing();
+    const { writeFileSync, mkdirSync } = await import('node:fs');
+    mkdirSync(DRAG_TRACE, { recursive: true });
+    writeFileSync(`${DRAG_TRACE}/drag-12x${tag}.trace.json`, trace);
+    printDragTrace(JSON.parse(trace.toString()) as { traceEvents: DragTraceEvent[] }, moves);
   }
   if (pressed) await page.mouse.up();
   check(got.frames.length > 10 && got.handle.length === moves && got.toFrame.length === moves, 'the continuous drag drew nothing');
