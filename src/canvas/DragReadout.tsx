@@ -1,6 +1,8 @@
 // A small label beside the pointer while a regional handle or a pin is dragged, with the dragged point's
 // section z (regional) or x (pin). Updated straight on the element from the store and the pointer, never
-// through React state, so a drag does not re-render anything.
+// through React state, so a drag does not re-render anything. Its size, to keep it inside the view, comes from a
+// ResizeObserver (told after the frame's own layout) rather than read after its text changes: a read then laid out
+// the whole page again in the middle of the frame, every frame of a drag.
 import { useEffect, useRef } from 'react';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
@@ -20,6 +22,13 @@ export function DragReadout() {
     if (!el || !box) return;
     let pointer = { x: 0, y: 0 };
     let frame = 0;
+    // The label's border box as last laid out (a frame late at most: its text's width changes by a digit or so).
+    let size = { width: 0, height: 0 };
+    const sized = new ResizeObserver((entries) => {
+      const b = entries[entries.length - 1].borderBoxSize[0];
+      if (b) size = { width: b.inlineSize, height: b.blockSize };
+    });
+    sized.observe(el, { box: 'border-box' });
     const show = () => {
       frame = 0;
       const { doc, gestureStart } = useDocStore.getState();
@@ -32,8 +41,8 @@ export function DragReadout() {
       el.textContent = text;
       el.hidden = false;
       const r = cachedClientRect(box);
-      const x = Math.min(Math.max(pointer.x - r.left + OFFSET_X, 4), Math.max(4, r.width - el.offsetWidth - 4));
-      const y = Math.min(Math.max(pointer.y - r.top + OFFSET_Y, 4), Math.max(4, r.height - el.offsetHeight - 4));
+      const x = Math.min(Math.max(pointer.x - r.left + OFFSET_X, 4), Math.max(4, r.width - size.width - 4));
+      const y = Math.min(Math.max(pointer.y - r.top + OFFSET_Y, 4), Math.max(4, r.height - size.height - 4));
       el.style.transform = `translate(${Math.round(x)}px, ${Math.round(y)}px)`;
     };
     const onMove = (e: PointerEvent) => {
@@ -42,8 +51,7 @@ export function DragReadout() {
     // Capture phase: the pointer is known before the tool's own move handler edits the document.
     window.addEventListener('pointermove', onMove, true);
     window.addEventListener('pointerdown', onMove, true);
-    // Once a frame, not once a move: its size is read after its text changes, which lays out the page, and in the
-    // frame that layout is due anyway.
+    // Once a frame, not once a move.
     const unsubscribe = useDocStore.subscribe((s, prev) => {
       if ((s.doc !== prev.doc || s.gestureStart !== prev.gestureStart) && !frame) frame = requestAnimationFrame(show);
     });
@@ -51,6 +59,7 @@ export function DragReadout() {
       window.removeEventListener('pointermove', onMove, true);
       window.removeEventListener('pointerdown', onMove, true);
       cancelAnimationFrame(frame);
+      sized.disconnect();
       unsubscribe();
     };
   }, []);
