@@ -1,6 +1,7 @@
 // A Chromium trace of a continuous drag broken into the browser's phases, for bench:ui's --drag-trace. Each moment
 // of the renderer's main thread is counted once, in the innermost event whose phase is known (script, style, layout,
-// paint, …), as DevTools' summary does; a layout or style pass inside script is counted apart as forced. The other
+// paint, …), as DevTools' summary does, in thread time (the CPU the thread had, which a loaded machine stretches far
+// less than the wall clock; the wall-clock total is printed beside it); a layout or style pass inside script is counted apart as forced. The other
 // threads (raster workers, compositor, display compositor) are given by their busy time. What invalidated layout
 // and paint (the invalidation-tracking events) is listed by node and reason, and each forced layout by the script
 // frame that asked for it.
@@ -15,7 +16,7 @@ export const INVALIDATION_CATEGORY = 'disabled-by-default-devtools.timeline.inva
 
 interface StackFrame { functionName?: string; url?: string; lineNumber?: number }
 export interface DragTraceEvent {
-  name: string; ph: string; ts?: number; dur?: number; tid: number; pid: number;
+  name: string; ph: string; ts?: number; dur?: number; tdur?: number; tid: number; pid: number;
   args?: {
     name?: string;
     beginData?: { dirtyObjects?: number; totalObjects?: number; stackTrace?: StackFrame[] };
@@ -61,6 +62,7 @@ export function printDragTrace(trace: { traceEvents: DragTraceEvent[] }, moves: 
   }
   const phases = new Map<string, number>();
   const busy = new Map<string, number>();
+  const wall = new Map<string, number>();
   const forcedBy = new Map<string, number>();
   let frames = 0;
   let layouts = 0;
@@ -69,14 +71,18 @@ export function printDragTrace(trace: { traceEvents: DragTraceEvent[] }, moves: 
   for (const [k, list] of byThread) {
     list.sort((a, b) => a.ts! - b.ts! || b.dur! - a.dur!);
     const main = k === mainKey;
-    // The open events, outermost first, with each one's phase (inherited) and the time its children took.
+    // The open events, outermost first, with each one's phase (inherited) and the thread time its children took.
     const stack: { e: DragTraceEvent; phase: string; inner: number }[] = [];
     const close = (upTo: number) => {
       while (stack.length && stack[stack.length - 1].e.ts! + stack[stack.length - 1].e.dur! <= upTo) {
         const s = stack.pop()!;
-        if (main) add(phases, s.phase, (s.e.dur! - s.inner) / 1000);
-        if (stack.length) stack[stack.length - 1].inner += s.e.dur!;
-        else add(busy, threads.get(k) ?? '?', s.e.dur! / 1000);
+        const cpu = s.e.tdur ?? s.e.dur!;
+        if (main) add(phases, s.phase, Math.max(0, cpu - s.inner) / 1000);
+        if (stack.length) stack[stack.length - 1].inner += cpu;
+        else {
+          add(busy, threads.get(k) ?? '?', cpu / 1000);
+          add(wall, threads.get(k) ?? '?', s.e.dur! / 1000);
+        }
       }
     };
     for (const e of list) {
@@ -98,12 +104,12 @@ export function printDragTrace(trace: { traceEvents: DragTraceEvent[] }, moves: 
     close(Infinity);
   }
   const mainMs = [...phases.values()].reduce((a, b) => a + b, 0);
-  console.log(`    trace: ${(frames / moves).toFixed(2)} main frames a move; renderer main thread ${(mainMs / moves).toFixed(2)} ms a move, by phase:`);
+  console.log(`    trace: ${(frames / moves).toFixed(2)} main frames a move; renderer main thread ${(mainMs / moves).toFixed(2)} ms of thread time a move (wall clock ${((wall.get('CrRendererMain') ?? 0) / moves).toFixed(2)} ms), by phase:`);
   for (const [p, ms] of top(phases, 20)) console.log(`      ${(ms / moves).toFixed(2).padStart(7)}  ${p}`);
   console.log(`    layouts: ${(layouts / moves).toFixed(2)} a move, ${layouts ? (dirty / layouts).toFixed(0) : 0} of ${layouts ? (total / layouts).toFixed(0) : 0} objects dirty on average`);
   for (const [f, n] of top(forcedBy, 6)) console.log(`      ${(n / moves).toFixed(2).padStart(7)}  forced: ${f}`);
-  console.log('    busy time of each thread, ms a move:');
-  for (const [t, ms] of top(busy, 8)) console.log(`      ${(ms / moves).toFixed(2).padStart(7)}  ${t}`);
+  console.log('    busy time of each thread, ms of thread time a move (wall clock):');
+  for (const [t, ms] of top(busy, 8)) console.log(`      ${(ms / moves).toFixed(2).padStart(7)}  ${t} (${((wall.get(t) ?? 0) / moves).toFixed(2)})`);
   // What asked for layout, style and paint again: node and reason, counted a move.
   const why = new Map<string, number>();
   for (const e of trace.traceEvents) {
