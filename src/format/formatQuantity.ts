@@ -85,6 +85,11 @@ export function formatAreaNumber(v: number | null | undefined, unit: AreaUnit, d
   return formatNumber(v === null || v === undefined ? v : v * unit.factor, digits);
 }
 
+/** Returns a pixel count in megapixels, without the unit: two significant figures, whole numbers kept ("2.9", "300", "4096"). */
+export function formatMegapixels(pixels: number): string {
+  return formatNumber(pixels / 1e6, 2);
+}
+
 /** Returns a share (0.123) as a percentage with its sign ("12.3 %"; "—" when missing). */
 export function formatPercent(share: number | null | undefined, digits = 3): string {
   const n = formatNumber(share === null || share === undefined ? share : 100 * share, digits);

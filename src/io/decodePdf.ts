@@ -3,6 +3,7 @@
 // from elsewhere.
 import type { AskScanChoice } from './decodeScanChoice';
 import { PDF_STANDARD_FONTS_PATH } from './pdfStandardFonts';
+import { formatMegapixels } from '../format/formatQuantity';
 
 export type PdfDecodeResult =
   | { ok: true; bitmap: ImageBitmap; page: number; dpi: number; pageCount: number }
@@ -81,7 +82,7 @@ export async function decodePdf(file: Blob, name: string, maxPixels: number, cho
     const w = Math.round(viewport.width);
     const h = Math.round(viewport.height);
     if (w * h > maxPixels || Math.max(w, h) > PDF_MAX_SIDE_PX) {
-      return { ok: false, message: `Page ${pageNo} of ${name} at ${Math.round(scale * 72)} dpi would be ${((w * h) / 1e6).toFixed(0)} megapixels; choose a lower resolution (the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels).` };
+      return { ok: false, message: `Page ${pageNo} of ${name} at ${Math.round(scale * 72)} dpi would be ${formatMegapixels(w * h)} megapixels; choose a lower resolution (the largest scan Foldroot opens is ${formatMegapixels(maxPixels)} megapixels).` };
     }
     const canvas = document.createElement('canvas');
     canvas.width = w;

@@ -4,6 +4,7 @@ import { sniffImageType, type ImageKind } from './sniffImageType';
 import { decodeImageSize } from './decodeImageSize';
 import { decodeTiff } from './decodeTiff';
 import { decodePdf } from './decodePdf';
+import { formatMegapixels } from '../format/formatQuantity';
 import type { AskScanChoice } from './decodeScanChoice';
 
 /** Largest scan accepted, in megapixels. */
@@ -42,7 +43,7 @@ const BROWSER_MAX_SIDE = 32_767;
 
 /** Returns the message for a scan over the size limit: "… is too large (4096 megapixels, 64000 × 64000 px; the limit is 200 megapixels)". */
 export function scanTooLargeMessage(name: string, w: number, h: number): string {
-  return `${name} is too large to open (${((w * h) / 1e6).toFixed(0)} megapixels, ${w} × ${h} px; the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels).`;
+  return `${name} is too large to open (${formatMegapixels(w * h)} megapixels, ${w} × ${h} px; the largest scan Foldroot opens is ${MAX_SCAN_MEGAPIXELS} megapixels).`;
 }
 const tooLarge = scanTooLargeMessage;
 

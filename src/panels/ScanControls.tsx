@@ -1,7 +1,7 @@
 // Opening a scan and fitting the view: the first things a user does.
 import { useRef, useSyncExternalStore } from 'react';
 import { useDocStore } from '../state/docStore';
-import { formatNumber } from '../format/formatQuantity';
+import { formatNumber, formatPercent } from '../format/formatQuantity';
 import { getScan, scanCacheVersion, scanMemoryHeld, subscribeScans } from '../state/scanCache';
 import { pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
 import { useSessionStore } from '../state/sessionStore';
@@ -76,7 +76,7 @@ export function ScanControls() {
       )}
       <div className="button-row">
         <button type="button" onClick={() => zoomByStep(1 / 1.25)} title="Zoom out (−)" aria-label="Zoom out">−</button>
-        <span className="zoom-readout" data-testid="zoom-readout">{(scale * 100).toFixed(scale < 0.1 ? 1 : 0)}%</span>
+        <span className="zoom-readout" data-testid="zoom-readout">{formatPercent(scale, 2)}</span>
         <button type="button" onClick={() => zoomByStep(1.25)} title="Zoom in (+)" aria-label="Zoom in">+</button>
         <button type="button" onClick={zoomToFit} title="Zoom to fit (F)" data-testid="zoom-fit">Fit</button>
         <button type="button" onClick={zoomToActualSize} title="Actual size: one scan pixel per screen pixel (1)" data-testid="zoom-actual">1:1</button>

@@ -6,10 +6,11 @@ import { useScanChoiceStore } from '../state/scanChoiceStore';
 import { PDF_DEFAULT_DPI, PDF_DPI_CHOICES, PDF_MAX_SIDE_PX, pdfPagePixels } from '../io/decodePdf';
 import { MAX_SCAN_MEGAPIXELS } from '../io/decodeScan';
 import { defaultTiffPage } from '../io/decodeTiff';
+import { formatMegapixels } from '../format/formatQuantity';
 import './scanControls.css';
 
 function megapixels(w: number, h: number): string {
-  return `${((w * h) / 1e6).toFixed(1)} MP`;
+  return `${formatMegapixels(w * h)} MP`;
 }
 
 function TiffChoice({ request, onChoose }: { request: Extract<ScanChoiceRequest, { kind: 'tiff' }>; onChoose: (page: number) => void }) {

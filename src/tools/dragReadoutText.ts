@@ -11,7 +11,8 @@ import { stepDecimals } from '../format/niceTicks';
 /** Returns v as formatFixed writes it, with "+" before a positive value when `signed`. */
 function fixed(v: number, decimals: number, signed = false): string {
   const text = formatFixed(v, decimals);
-  return signed && !text.startsWith(MINUS) && Number(v.toFixed(decimals)) !== 0 ? `+${text}` : text;
+  // A value that rounds to zero ("0.0") takes no sign.
+  return signed && !text.startsWith(MINUS) && /[1-9]/.test(text) ? `+${text}` : text;
 }
 
 const moved = (a: ImagePx, b: ImagePx) => a[0] !== b[0] || a[1] !== b[1];

@@ -117,7 +117,7 @@ test('a generated 100-megapixel scan opens with progress shown, and pans and zoo
   // 1:1 keeps the view's centre and shows full-resolution tiles there.
   const centreBefore = await viewPixel(page, cx, cy);
   await page.getByTestId('zoom-actual').click();
-  await expect(page.getByTestId('zoom-readout')).toHaveText('100%');
+  await expect(page.getByTestId('zoom-readout')).toHaveText('100 %');
   const centreAfter = await viewPixel(page, cx, cy);
   expect(near(centreAfter[0], centreBefore[0], 4) && near(centreAfter[1], centreBefore[1], 4)).toBe(true);
   // At 1:1, 200 screen pixels to the right are 200 image pixels on: red rises by 200/9999 × 255 ≈ 5.
@@ -421,10 +421,10 @@ test('pasting an image opens it, and a trackpad pinch zooms', async ({ page }) =
   expect(near(r, 128, 8) && near(g, 128, 8)).toBe(true);
   // A trackpad pinch arrives as a wheel with ctrlKey: 50 units zoom by 1.01^50 ≈ 1.64.
   await page.getByTestId('zoom-actual').click();
-  await expect(page.getByTestId('zoom-readout')).toHaveText('100%');
+  await expect(page.getByTestId('zoom-readout')).toHaveText('100 %');
   await page.mouse.move(box.x + cx, box.y + cy);
   await page.keyboard.down('Control');
   await page.mouse.wheel(0, -50);
   await page.keyboard.up('Control');
-  await expect(page.getByTestId('zoom-readout')).toHaveText('164%');
+  await expect(page.getByTestId('zoom-readout')).toHaveText('164 %');
 });

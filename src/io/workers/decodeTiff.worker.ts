@@ -2,6 +2,7 @@
 // sizes; 'decode' (a page index) answers with an ImageBitmap of that page, transferred, not copied.
 import * as UTIF from 'utif2';
 import { decodeTiffLayout } from '../decodeTiffLayout';
+import { formatMegapixels } from '../../format/formatQuantity';
 import { tiffTruncation } from '../tiffTruncation';
 import { tiffPageInfo, tiffToRgba, type TiffIfd, type TiffPageInfo } from '../decodeTiffPixels';
 
@@ -23,7 +24,7 @@ async function decodePage(page: number): Promise<void> {
   const ifd = ifds[page];
   if (!buffer || !ifd) return reply({ type: 'error', message: 'has no such page' });
   const info = tiffPageInfo(ifd, page);
-  if (info.widthPx * info.heightPx > maxPixels) return reply({ type: 'error', message: `(page ${page + 1}) is ${((info.widthPx * info.heightPx) / 1e6).toFixed(0)} megapixels; the largest scan Foldroot opens is ${(maxPixels / 1e6).toFixed(0)} megapixels` });
+  if (info.widthPx * info.heightPx > maxPixels) return reply({ type: 'error', message: `(page ${page + 1}) is ${formatMegapixels(info.widthPx * info.heightPx)} megapixels; the largest scan Foldroot opens is ${formatMegapixels(maxPixels)} megapixels` });
   const cut = tiffTruncation(ifd, buffer.byteLength, page);
   if (cut) return reply({ type: 'error', message: cut });
   (UTIF.decodeImage as (b: ArrayBuffer, i: TiffIfd, all: TiffIfd[]) => void)(buffer, ifd, ifds);
