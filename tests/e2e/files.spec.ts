@@ -303,7 +303,7 @@ test('opening a file over unsaved changes asks first; Cancel keeps the project, 
 });
 
 // Seeded corrupt files through the real inputs: 100 project files (open-project) and 100 horizon
-// CSV files (import-csv), 200 in all as the issue asks; about 20 s on 2 cores. The timeout set in the
+// CSV files (import-csv), 200 in all; about 20 s on 2 cores. The timeout set in the
 // test is room for a loaded CI machine, not a check on speed. Vitest runs the same kinds of
 // corruption 200 times per parser without a browser (tests/io/corruptFiles.test.ts).
 const FUZZ_SEED = 20240501;

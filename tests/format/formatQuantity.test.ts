@@ -112,7 +112,7 @@ const ALLOWED: Record<string, { count: number; why: string }> = {
   'src/panels/FileMenu.tsx': { count: 2, why: 'a time of day in the reader\'s locale, not a quantity' },
   'src/panels/files/StorageBanner.tsx': { count: 1, why: 'a date and time in the reader\'s locale, not a quantity' },
   'src/state/autosave.ts': { count: 1, why: 'a date and time in the reader\'s locale, not a quantity' },
-  // The engine's own messages: core may not import src/format (DEVELOPERS.md §Layout), so these still round
+  // The engine's own messages: core may not import src/format (DEVELOPERS.md §Layout: the folders show the architecture), so these still round
   // their numbers themselves. Left to do: give them as data that src/format writes, as the Chamberlin reason is.
   'src/core/analysis/fitAreaDepth.ts': { count: 2, why: 'engine note: the one depth of all regionals; Fieller\'s g' },
   'src/core/analysis/prepareHorizon.ts': { count: 1, why: 'engine message: where a line crosses itself' },
