@@ -58,7 +58,29 @@ export interface FigureScanSource {
   pyramid: {
     levels: { factor: number; widthPx: number; heightPx: number }[];
     region: (level: number, x0: number, y0: number, x1: number, y1: number) => Promise<ImageBitmap>;
+    /** A level's tiles once made (row by row, `cols` a row, each `tilePx` level pixels a side but at the edges), else null. */
+    heldTiles?: (level: number) => { tiles: ImageBitmap[]; cols: number; tilePx: number } | null;
   } | null;
+}
+
+/**
+ * The tiles of a made level that overlap [x0, x1) × [y0, y1) (level pixels), each as a new bitmap of the same
+ * pixels (the browser shares them: no copy is drawn on this page), placed at its offset from the region's corner;
+ * the worker puts them together. Null when the level is not made.
+ */
+async function heldRegionTiles(py: NonNullable<FigureScanSource['pyramid']>, level: number, x0: number, y0: number, x1: number, y1: number): Promise<FigureScanRegion['tiles'] | null> {
+  const held = py.heldTiles?.(level);
+  if (!held) return null;
+  const { tiles, cols, tilePx } = held;
+  const wanted: Promise<{ bitmap: ImageBitmap; x: number; y: number }>[] = [];
+  for (let row = Math.floor(y0 / tilePx); row * tilePx < y1; row++) {
+    for (let col = Math.floor(x0 / tilePx); col * tilePx < x1; col++) {
+      const tile = tiles[row * cols + col];
+      if (!tile) continue;
+      wanted.push(createImageBitmap(tile).then((bitmap) => ({ bitmap, x: col * tilePx - x0, y: row * tilePx - y0 })));
+    }
+  }
+  return Promise.all(wanted);
 }
 
 /** The outcome of a PNG export. */
@@ -90,11 +112,16 @@ async function scanRegion(parts: SectionSvgParts, source: FigureScanSource, widt
     return { ...base, regionW: rw, regionH: rh, tiles: [{ bitmap, x: 0, y: 0 }], originPx: [sx, sy], pxPerRegionPx: [sw / rw, sh / rh] };
   }
   if (!stopped()) {
-    // Full resolution: one crop of the bitmap (a copy made by the browser in one call); a reduced level is put
-    // together from its tiles, or halved from the finer level, in blocks.
+    // Full resolution: one crop of the bitmap (a copy made by the browser in one call); a reduced level that is made
+    // goes as its tiles, which the worker puts together (putting them together here cost this page 20-50 ms at a
+    // screen-sized PNG); one not made yet is halved from the finer level, in blocks.
     const [sw, sh] = [choice.x1 - choice.x0, choice.y1 - choice.y0];
-    const bitmap = choice.level === 0 ? await createImageBitmap(source.bitmap, choice.x0, choice.y0, sw, sh) : await py.region(choice.level, choice.x0, choice.y0, choice.x1, choice.y1);
-    tiles.push({ bitmap, x: 0, y: 0 });
+    const held = choice.level === 0 ? null : await heldRegionTiles(py, choice.level, choice.x0, choice.y0, choice.x1, choice.y1);
+    if (held) for (const t of held) tiles.push(t);
+    else {
+      const bitmap = choice.level === 0 ? await createImageBitmap(source.bitmap, choice.x0, choice.y0, sw, sh) : await py.region(choice.level, choice.x0, choice.y0, choice.x1, choice.y1);
+      tiles.push({ bitmap, x: 0, y: 0 });
+    }
   }
   return { ...base, tiles, originPx: [choice.x0 * choice.factor, choice.y0 * choice.factor], pxPerRegionPx: [choice.factor, choice.factor] };
 }

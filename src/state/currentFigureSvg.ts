@@ -5,6 +5,7 @@ import { renderSectionSvgParts, type SectionSvgParts } from '../io/renderSection
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
 import { getScan } from './scanCache';
+import { TILE_PX } from './scanTiles';
 import { getTilePyramid, pyramidRegion } from './scanTilesPyramid';
 import { selectAnalysis } from './selectors';
 
@@ -27,5 +28,9 @@ export function currentFigureParts(): { parts: SectionSvgParts; scan: FigureScan
   const pyramid = getTilePyramid(doc.scan.id);
   if (!pyramid) return { parts, scan: { bitmap, pyramid: null } };
   const region = (level: number, x0: number, y0: number, x1: number, y1: number) => pyramidRegion(pyramid, level, x0, y0, x1, y1);
-  return { parts, scan: { bitmap, pyramid: { levels: pyramid.levels, region } } };
+  const heldTiles = (level: number) => {
+    const tiles = pyramid.tiles[level];
+    return tiles ? { tiles, cols: pyramid.levels[level].cols, tilePx: TILE_PX } : null;
+  };
+  return { parts, scan: { bitmap, pyramid: { levels: pyramid.levels, region, heldTiles } } };
 }

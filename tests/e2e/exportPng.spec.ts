@@ -25,18 +25,22 @@ const SECTION: Section = {
   ],
 };
 const [W, H] = [1500, 1100];
-/** Section (x, z) → scan pixel: 1 px per metre, x from −200 m, z down from 1000 m. */
-const toPx = ([x, z]: XZ): ImagePx => [x + 200, 1000 - z];
+/** Section (x, z) → scan pixel: `k` px per metre, x from −200 m, z down from 1000 m. */
+const toPxAt = (k: number) => ([x, z]: XZ): ImagePx => [(x + 200) * k, (1000 - z) * k];
 
-/** A small synthetic scan: a smooth two-way colour ramp with broad dark bands (nothing finer than the figure can show). */
-function syntheticScan(): Buffer {
-  const png = new PNG({ width: W, height: H });
-  for (let v = 0; v < H; v++) {
-    for (let u = 0; u < W; u++) {
-      const i = (v * W + u) * 4;
-      const band = Math.floor(v / 120) % 2 === 0 ? 0 : 40;
-      png.data[i] = 230 - Math.round((u / W) * 90) - band;
-      png.data[i + 1] = 215 - Math.round((v / H) * 70) - band;
+/**
+ * A synthetic scan of (W × H)·k px: a smooth two-way colour ramp with broad dark bands (nothing finer than the
+ * figure can show), the same picture at every k.
+ */
+function syntheticScan(k: number): Buffer {
+  const [w, h] = [W * k, H * k];
+  const png = new PNG({ width: w, height: h });
+  for (let v = 0; v < h; v++) {
+    for (let u = 0; u < w; u++) {
+      const i = (v * w + u) * 4;
+      const band = Math.floor(v / (120 * k)) % 2 === 0 ? 0 : 40;
+      png.data[i] = 230 - Math.round((u / w) * 90) - band;
+      png.data[i + 1] = 215 - Math.round((v / h) * 70) - band;
       png.data[i + 2] = 170 - band;
       png.data[i + 3] = 255;
     }
@@ -44,19 +48,21 @@ function syntheticScan(): Buffer {
   return PNG.sync.write(png);
 }
 
-function project(): string {
-  const scan = { id: 'synthetic-scan', name: 'synthetic.png', widthPx: W, heightPx: H, bytes: new Uint8Array(syntheticScan()) };
-  return calibratedProject(SECTION, 'Worker figure', scan, toPx, [[-200, 1000], [1300, 1000], [-200, -100]], [[0, 300], [1000, 450]]);
+function project(k: number): string {
+  const scan = { id: 'synthetic-scan', name: 'synthetic.png', widthPx: W * k, heightPx: H * k, bytes: new Uint8Array(syntheticScan(k)) };
+  return calibratedProject(SECTION, 'Worker figure', scan, toPxAt(k), [[-200, 1000], [1300, 1000], [-200, -100]], [[0, 300], [1000, 450]]);
 }
 
 
-async function openProject(page: Page): Promise<void> {
+/** Opens the project on a scan of (W × H)·k px; with k > 1, waits until its reduced views are made (the export then draws from their tiles). */
+async function openProject(page: Page, k = 1): Promise<void> {
   page.on('dialog', (d) => void d.accept());
   await gotoStarted(page);
   await expect(page.getByTestId('busy')).toHaveCount(0);
-  await page.getByTestId('open-project').setInputFiles({ name: 'worker.foldroot.json', mimeType: 'application/json', buffer: Buffer.from(project()) });
-  await expect(page.getByTestId('scan-name')).toContainText(`synthetic.png — ${W} × ${H} px`);
+  await page.getByTestId('open-project').setInputFiles({ name: 'worker.foldroot.json', mimeType: 'application/json', buffer: Buffer.from(project(k)) });
+  await expect(page.getByTestId('scan-name')).toContainText(`synthetic.png — ${W * k} × ${H * k} px`);
   await expect(page.getByTestId('busy')).toHaveCount(0);
+  if (k > 1) await expect(page.locator('[data-testid="scan-memory"][data-building="no"]:not([data-reduced-tiles="0"])')).toHaveCount(1);
 }
 
 /** The browser's own rendering of an SVG document at width × height, as RGBA bytes. */
@@ -103,8 +109,8 @@ function difference(a: Buffer, b: Buffer, width: number, height: number): { mean
   return { mean: total / (width * height), worstBlock, diff };
 }
 
-test('the PNG drawn in the worker is the picture the browser draws from the exported SVG', async ({ page }) => {
-  await openProject(page);
+/** Exports the SVG and then the PNG at each size, and compares each PNG with the browser's own drawing of the SVG. */
+async function comparePngWithSvg(page: Page, tag: string): Promise<void> {
   await page.getByTestId('menu-export').click();
   const svg = (await download(page, () => page.getByTestId('export-svg').click())).toString('utf8');
   for (const [id, w, h] of [['screen', 1400, 990], ['a4-150', 1754, 1240]] as const) {
@@ -115,13 +121,24 @@ test('the PNG drawn in the worker is the picture the browser draws from the expo
     expect([png.width, png.height]).toEqual([w, h]);
     const reference = await renderSvgInPage(page, svg, w, h);
     const { mean, worstBlock, diff } = difference(png.data, reference, w, h);
-    writeFileSync(test.info().outputPath(`worker-${id}.png`), bytes);
-    writeFileSync(test.info().outputPath(`svg-${id}.png`), PNG.sync.write(Object.assign(new PNG({ width: w, height: h }), { data: reference })));
-    writeFileSync(test.info().outputPath(`diff-${id}.png`), PNG.sync.write(diff));
+    writeFileSync(test.info().outputPath(`worker-${tag}${id}.png`), bytes);
+    writeFileSync(test.info().outputPath(`svg-${tag}${id}.png`), PNG.sync.write(Object.assign(new PNG({ width: w, height: h }), { data: reference })));
+    writeFileSync(test.info().outputPath(`diff-${tag}${id}.png`), PNG.sync.write(diff));
     // Anti-aliasing and glyph placement differ by a level or two; a missing line, fill or label moves a block by far more.
-    expect(mean, `mean difference at ${id}`).toBeLessThan(1);
-    expect(worstBlock, `worst 16 × 16 block at ${id}`).toBeLessThan(16);
+    expect(mean, `mean difference at ${tag}${id}`).toBeLessThan(1);
+    expect(worstBlock, `worst 16 × 16 block at ${tag}${id}`).toBeLessThan(16);
   }
+}
+
+test('the PNG drawn in the worker is the picture the browser draws from the exported SVG', async ({ page }) => {
+  await openProject(page);
+  await comparePngWithSvg(page, '');
+});
+
+test('from a scan large enough for reduced views, the PNG (drawn from their tiles) is the picture the browser draws from the SVG', async ({ page }) => {
+  // 4500 × 3300 px: the figure shows it at about a quarter, from the level of 1125 × 825 px, two tiles put together in the worker.
+  await openProject(page, 3);
+  await comparePngWithSvg(page, 'reduced-');
 });
 
 test('a PNG export shows its progress, stops on Cancel without a download or a change, and runs again', async ({ page }) => {
