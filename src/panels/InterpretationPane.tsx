@@ -17,6 +17,7 @@ import { ScenarioPanel } from './interpretation/ScenarioPanel';
 import { SensitivityPanel } from './interpretation/SensitivityPanel';
 import { diagnostics } from './interpretation/diagnostics';
 import { formatLength } from '../format/formatQuantity';
+import { fitNotes } from '../format/analysisNotes';
 import { tableAreaUnit } from '../format/horizonColumns';
 import { outlierFlags } from './interpretation/outlierFlags';
 import { liveScenarioAnalysis, useScenarioAnalysis, type ScenarioAnalysis } from './interpretation/useScenarioAnalysis';
@@ -196,7 +197,7 @@ function PaneBody({ onCollapse }: { onCollapse: () => void }) {
                     <li>Below the split: {two.lower.result ? `D = ${formatLength(two.lower.result.displacement, u)}, detachment ${formatLength(two.lower.result.detachmentDepth, u)} deep, n = ${two.lower.result.n}` : 'no line (fewer than two horizons)'}</li>
                     <li>Upper detachment: {two.upperDisplacement !== null ? `displacement ${formatLength(two.upperDisplacement, u)}` : '—'}
                       {two.upperDetachmentDepth !== null ? `, depth ${formatLength(two.upperDetachmentDepth, u)} (elevation ${formatLength(two.upperDetachmentElevation, u)})` : ''}</li>
-                    {two.notes.map((n) => <li key={n} className="hint">{n}</li>)}
+                    {[...new Set([...two.notes, ...fitNotes(two.upper.result), ...fitNotes(two.lower.result)])].map((n) => <li key={n} className="hint">{n}</li>)}
                   </ul>
                 )}
               </div>

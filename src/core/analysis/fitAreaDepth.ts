@@ -1,7 +1,6 @@
 import { fiellerInterval, type FiellerResult } from '../stats/fiellerInterval';
 import { leastSquares, type LineFit } from '../stats/leastSquares';
 import { slopeInterval } from '../stats/slopeInterval';
-import { studentTQuantile } from '../stats/studentTQuantile';
 import type { LengthUnit } from '../model/section';
 import { detachmentOfLine, type Regime } from './detachmentOfLine';
 
@@ -27,6 +26,7 @@ export interface AreaDepthFit {
   result: AreaDepthResult | null;
   /** The underlying least-squares fit (residuals in input order of the given points). */
   fit: LineFit | null;
+  /** The notes in words; an unbounded Fieller interval's g is data on the result, written by src/format/analysisNotes.ts (fitNotes). */
   notes: string[];
 }
 
@@ -60,8 +60,6 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
   const zd = found.depth;
   if (fit.n === 2) {
     notes.push('Only two horizons in the fit: the line passes through both exactly, so there are no intervals (0 degrees of freedom).');
-  } else if (!noDetachment && interval.kind === 'unbounded') {
-    notes.push(`The 95% Fieller interval on the detachment depth is unbounded (g = ${fiellerG(fit).toPrecision(3)} ≥ 1): the slope is not clearly different from zero, so the data do not bound the depth.`);
   } else if (!noDetachment && interval.kind === 'none') {
     notes.push(`No interval on the detachment depth: ${interval.reason}`);
   }
@@ -80,12 +78,6 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
       detachmentDepthInterval: interval,
     },
   };
-}
-
-/** Fieller's g = t² s² / (b² Sxx) at 95% (docs/method.md §Fieller interval), as fiellerInterval computes it. */
-function fiellerG(fit: LineFit): number {
-  const t = studentTQuantile(0.975, fit.df);
-  return (t * t * fit.s * fit.s) / (fit.slope * fit.slope * fit.sxx);
 }
 
 function maxOf(a: ArrayLike<number>): number {

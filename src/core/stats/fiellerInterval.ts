@@ -8,7 +8,8 @@ import { studentTQuantile } from './studentTQuantile';
 
 export type FiellerResult =
   | { kind: 'bounded'; estimate: number; lo: number; hi: number }
-  | { kind: 'unbounded'; estimate: number; reason: string }
+  /** g = t² s² / (b² Sxx) ≥ 1: the slope is not distinguishable from zero at this level. */
+  | { kind: 'unbounded'; estimate: number; g: number; reason: string }
   | { kind: 'none'; estimate: number | null; reason: string };
 
 /** Interval on x where the fitted mean equals y0, in x units, at the given level; 'none' when df < 1 or the slope is 0, 'unbounded' when g ≥ 1. */
@@ -33,7 +34,9 @@ export function fiellerInterval(fit: LineFit, y0: number, level = 0.95): Fieller
     return {
       kind: 'unbounded',
       estimate,
-      reason: `The slope is not distinguishable from zero at this level (g = ${g.toPrecision(3)} ≥ 1), so the interval is unbounded.`,
+      g,
+      // g itself is data: src/format writes it where it is shown.
+      reason: 'The slope is not distinguishable from zero at this level (g ≥ 1), so the interval is unbounded.',
     };
   }
   const offset = estimate - xMean;
