@@ -8,7 +8,7 @@ import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { downloadFile, safeFileName } from '../io/downloadFile';
 import { markPngStep, prepareFigurePng, startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
-import { currentFigureParts, currentFigureSvgBlob } from '../state/currentFigureSvg';
+import { currentFigureParts, currentFigureSvgBlob, prepareCurrentFigure } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
@@ -193,7 +193,7 @@ export function FileMenu() {
         )}
       </div>
       <div className="menu">
-        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={() => { if (menu !== 'export') prepareFigurePng(); setMenu((m) => (m === 'export' ? null : 'export')); }} data-testid="menu-export">Export ▾</button>
+        <button type="button" aria-haspopup="menu" aria-expanded={menu === 'export'} onClick={() => { if (menu !== 'export') { prepareFigurePng(); prepareCurrentFigure(); } setMenu((m) => (m === 'export' ? null : 'export')); }} data-testid="menu-export">Export ▾</button>
         {menu === 'export' && (
           <div className="menu-list" role="menu">
             <button type="button" role="menuitem" data-testid="export-project-info" onClick={choose(() => setInfo(true))}>Title and author… <span className="hint">for the figure and report</span></button>

@@ -18,11 +18,34 @@ export async function currentFigureSvgBlob(): Promise<Blob> {
   return sectionSvgBlob(parts, urlParts);
 }
 
+/** The figure's markup last written, and what it was written from (the same document, analysis, exaggeration and date give the same markup). */
+let lastParts: { doc: object; analysis: object; verticalExaggeration: number | null; date: string; parts: SectionSvgParts } | null = null;
+
+/** Returns the figure's markup for the open project now: the one written last when nothing it is drawn from has changed. */
+function figureMarkup(): SectionSvgParts {
+  const doc = useDocStore.getState().doc;
+  const analysis = selectAnalysis(doc);
+  const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
+  const date = new Date().toISOString().slice(0, 10);
+  const last = lastParts;
+  if (last && last.doc === doc && last.analysis === analysis && last.verticalExaggeration === verticalExaggeration && last.date === date) return last.parts;
+  const parts = renderSectionSvgParts({ doc, analysis, date, verticalExaggeration });
+  lastParts = { doc, analysis, verticalExaggeration, date, parts };
+  return parts;
+}
+
+/**
+ * Writes the figure's markup of the open project a task from now (when the export menu opens), so that an export
+ * chosen from it starts drawing at once; an edit meanwhile has it written again at the export.
+ */
+export function prepareCurrentFigure(): void {
+  setTimeout(() => void figureMarkup(), 0);
+}
+
 /** Returns the figure of the open project in its parts below and above the scan, with the decoded scan (and its tile pyramid when cut) to draw between them (null when none is shown). */
 export function currentFigureParts(): { parts: SectionSvgParts; scan: FigureScanSource | null } {
   const doc = useDocStore.getState().doc;
-  const verticalExaggeration = useSessionStore.getState().figureVerticalExaggeration;
-  const parts = renderSectionSvgParts({ doc, analysis: selectAnalysis(doc), date: new Date().toISOString().slice(0, 10), verticalExaggeration });
+  const parts = figureMarkup();
   const bitmap = (doc.scan && getScan(doc.scan.id)?.bitmap) || null;
   if (!doc.scan || !bitmap) return { parts, scan: null };
   const pyramid = getTilePyramid(doc.scan.id);
