@@ -93,6 +93,59 @@ export async function unpackDocInSteps(stored: unknown, perStep: number, step: (
   return unpackWith(stored, (x) => (x instanceof Float64Array ? lines.get(x) : x));
 }
 
+/** A line in a keyed document (packedDelta): the number the receiver holds it under. */
+export interface LineKey { lineKey: number }
+
+/** What a sender of packed documents remembers: a number for each packed line, and the lines the receiver holds. */
+export interface LineSender { keys: WeakMap<Float64Array, number>; next: number; held: Set<number> }
+
+/** Returns a sender that has sent nothing yet (its receiver holds no line). */
+export function createLineSender(): LineSender {
+  return { keys: new WeakMap(), next: 1, held: new Set() };
+}
+
+/** A packed document for a receiver that keeps lines between documents: each line a key, with the lines it lacks. */
+export interface PackedDelta { doc: unknown; lines: [number, Float64Array][] }
+
+/**
+ * Returns the packed document with each line replaced by its key, and copies of the lines the receiver does not hold
+ * yet (their buffers may be transferred); afterwards the receiver holds exactly this document's lines
+ * (receivePackedDelta drops the others), so a line unchanged since the last document is not sent again.
+ */
+export function packedDelta(sender: LineSender, doc: PackedDoc): PackedDelta {
+  const lines: [number, Float64Array][] = [];
+  const used = new Set<number>();
+  const keyed = unpackWith(doc, (x) => {
+    if (!(x instanceof Float64Array)) return x;
+    let key = sender.keys.get(x);
+    if (key === undefined) sender.keys.set(x, (key = sender.next++));
+    if (!sender.held.has(key) && !used.has(key)) lines.push([key, x.slice()]);
+    used.add(key);
+    return { lineKey: key } satisfies LineKey;
+  });
+  sender.held = used;
+  return { doc: keyed, lines };
+}
+
+/**
+ * Returns the packed document of a delta, its lines from `held` and the delta's new ones; `held` then keeps only
+ * this document's lines. Throws when a key is neither (the sender and receiver disagree).
+ */
+export function receivePackedDelta(held: Map<number, Float64Array>, delta: PackedDelta): PackedDoc {
+  for (const [key, line] of delta.lines) held.set(key, line);
+  const used = new Set<number>();
+  const doc = unpackWith(delta.doc, (x) => {
+    const key = (x as Partial<LineKey> | null)?.lineKey;
+    if (typeof key !== 'number') return x;
+    const line = held.get(key);
+    if (!line) throw new Error(`line ${key} of the kept document was never sent`);
+    used.add(key);
+    return line;
+  });
+  for (const key of [...held.keys()]) if (!used.has(key)) held.delete(key);
+  return doc as PackedDoc;
+}
+
 /** The stored document with each line replaced by `line(it)`; the shape is not checked (the schema does that). */
 function unpackWith(stored: unknown, line: (x: unknown) => unknown): unknown {
   if (typeof stored !== 'object' || stored === null) return stored;

@@ -11,6 +11,7 @@ import { clearJournal, nextStamp, readJournal, writeJournal } from './autosaveJo
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import { announceKept, useTabStore } from './tabLock';
 import { useAutosaveStatus } from './autosaveStatus';
+import { writeSnapshotOffPage } from './autosaveWriter';
 import { useDocStore } from './docStore';
 import { fitViewToDoc, reopenSavedScan, SCAN_NOT_SHOWN_WORDS } from './projectActions';
 import { getScan, putScan } from './scanCache';
@@ -54,7 +55,10 @@ export async function autosaveNow(): Promise<void> {
       scan = { id: doc.scan.id, type: doc.scan.type, name: doc.scan.name, bytes: fresh ? cached.bytes : new Blob([]) };
     }
     const stamp = nextStamp();
-    await writeSnapshot(dbOpen ?? (await db()), { savedAt: new Date(stamp).toISOString(), stamp, doc, dirty: revision !== savedRevision }, scan, fresh);
+    const meta = { savedAt: new Date(stamp).toISOString(), stamp, dirty: revision !== savedRevision };
+    const onPage = async () => writeSnapshot(dbOpen ?? (await db()), { ...meta, doc }, scan, fresh);
+    // A big document (written after a pause anyway) is serialised by the worker; a small one in the edit's own task.
+    await (vertexCount(doc) > WRITE_AT_ONCE_VERTICES ? writeSnapshotOffPage(meta, doc, scan, fresh, onPage) : onPage());
     if (fresh) writtenScanId = doc.scan?.id ?? null;
     if (!doc.scan) writtenScanId = null;
     useAutosaveStatus.setState({ lastSavedAt: new Date().toISOString(), keptRevision: revision, quotaFull: false });

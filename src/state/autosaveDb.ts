@@ -4,7 +4,7 @@
 // the project files' migration (migrateKeptDoc), so work kept by an older version is not lost.
 import { migrateKeptDoc } from '../core/model/migrations/migrateKeptDoc';
 import type { ProjectDoc } from '../core/model/projectDoc';
-import { packDoc, unpackDoc } from '../io/packedDoc';
+import { packDoc, unpackDoc, type PackedDoc } from '../io/packedDoc';
 
 const DB_NAME = 'foldroot-autosave';
 const DB_VERSION = 1;
@@ -81,12 +81,20 @@ export function openAutosaveDb(factory: IDBFactory = indexedDB): Promise<IDBData
 
 /** Writes the snapshot in one transaction; the scan's bytes are written only when `writeScanBytes` (other scans are dropped, but a set-aside record's). Rejects with the browser's error (see isQuotaError). */
 export async function writeSnapshot(db: IDBDatabase, snap: { savedAt: string; doc: ProjectDoc; dirty: boolean; stamp?: number }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
+  // Lines packed into typed arrays (io/packedDoc): the browser copies each as one block.
+  return writePackedSnapshot(db, { ...snap, doc: packDoc(snap.doc) }, scan, writeScanBytes);
+}
+
+/** The kept record's fields besides the document. */
+export interface SnapshotMeta { savedAt: string; dirty: boolean; stamp?: number }
+
+/** As writeSnapshot, with the document already packed (packDoc): the autosave's worker writes what the page packed. */
+export async function writePackedSnapshot(db: IDBDatabase, snap: SnapshotMeta & { doc: PackedDoc }, scan: StoredScan | null, writeScanBytes: boolean): Promise<void> {
   // 'strict': the write is on disk when the transaction completes, not only in the browser's memory (Chromium's
   // default), so a browser killed after "Saved" still has the edit.
   const tx = db.transaction([STATE, SCANS], 'readwrite', { durability: 'strict' });
   const finished = done(tx);
-  // Lines packed into typed arrays (io/packedDoc): the browser copies each as one block.
-  tx.objectStore(STATE).put({ savedAt: snap.savedAt, stamp: snap.stamp ?? Date.parse(snap.savedAt), doc: packDoc(snap.doc), dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
+  tx.objectStore(STATE).put({ savedAt: snap.savedAt, stamp: snap.stamp ?? Date.parse(snap.savedAt), doc: snap.doc, dirty: snap.dirty, scanId: scan?.id ?? null }, CURRENT);
   if (writeScanBytes || !scan) {
     // Other scans are dropped, except the one of a set-aside record (setAsideKept).
     const scans = tx.objectStore(SCANS);

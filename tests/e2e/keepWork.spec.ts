@@ -5,6 +5,10 @@
 import type { Page } from '@playwright/test';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { download } from './download';
+import { parseProjectText } from '../../src/io/projectFile';
+import { sectionToProjectDoc } from '../../src/core/model/migrations/sectionToProjectDoc';
+import type { Section } from '../../src/core/model/section';
 
 const firstName = (page: Page) => page.getByTestId('horizon-list').getByLabel('Horizon name').first();
 
@@ -23,6 +27,46 @@ test('an edit made just before a reload comes back after it', async ({ page }) =
   await page.reload();
   await expect(page.locator('[data-startup="done"]')).toHaveCount(1, { timeout: 30_000 });
   await expect(firstName(page)).toHaveValue('Renamed just before reload');
+});
+
+test('a big document is kept in the browser as it is edited, and comes back after a reload vertex for vertex', async ({ page }) => {
+  test.setTimeout(180_000);
+  page.on('dialog', (d) => void d.accept());
+  await gotoStarted(page);
+  // Two lines of 80,000 vertices (more than a document written in the edit's own task: the kept copy is written off
+  // the page): an invented sin² fold over the 10,000 m between the pins, 800 m high, area aλ/2 = 4 km² each
+  // (docs/method.md §Check values), sampled finely.
+  const N = 80_000;
+  const line = (base: number) => Array.from({ length: N }, (_, k) => {
+    const x = -500 + (11_000 * k) / (N - 1);
+    return [x, base + (x > 0 && x < 10_000 ? 800 * Math.sin((Math.PI * x) / 10_000) ** 2 : 0)];
+  });
+  const section = { units: 'm', pins: [0, 10_000], horizons: [
+    { name: 'Upper long line', line: line(2000), regional: [[-500, 2000], [10_500, 2000]] },
+    { name: 'Lower long line', line: line(0), regional: [[-500, 0], [10_500, 0]] },
+  ] };
+  const opened = sectionToProjectDoc(section as Section, 'long');
+  await page.getByTestId('open-project').setInputFiles({ name: 'long.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(section)) });
+  await expect(firstName(page)).toHaveValue('Upper long line');
+  const status = page.getByTestId('autosave-status');
+  // Two edits, each kept before the next: the first write carries every line, the second none of them.
+  await rename(page, 'First rename');
+  await expect(status).toHaveText('Unsaved changes · kept in browser', { timeout: 60_000 });
+  const areas = await page.getByTestId('horizon-table').locator('tbody tr').allTextContents();
+  expect(areas.join()).toContain('First rename');
+  await rename(page, 'Second rename');
+  await expect(firstName(page)).toHaveValue('Second rename');
+  await expect(status).toHaveText('Unsaved changes · kept in browser', { timeout: 60_000 });
+  await page.reload();
+  await expect(page.locator('[data-startup="done"]')).toHaveCount(1, { timeout: 60_000 });
+  await expect(firstName(page)).toHaveValue('Second rename', { timeout: 60_000 });
+  // Every vertex came back: the same areas (the table shows them to the formatter's figures), the same vertex count.
+  await expect.poll(async () => (await page.getByTestId('horizon-table').locator('tbody tr').allTextContents()).join()).toBe(areas.join().replace('First rename', 'Second rename'));
+  await page.getByTestId('menu-project').click();
+  const saved = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
+  if (!saved.ok) throw new Error(saved.message);
+  expect(saved.doc.horizons.map((h) => h.pointsPx.length)).toEqual([N, N]);
+  expect(saved.doc.horizons[1].pointsPx[N - 1]).toEqual(opened.horizons[1].pointsPx[N - 1]);
 });
 
 test('a second tab opens read-only, cannot overwrite the first, and takes over only when asked', async ({ page, context }) => {
