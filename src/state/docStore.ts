@@ -1,7 +1,9 @@
 // The document slice: the saved, undoable project, with one undo entry per gesture.
 // Every edit is a pure command (doc -> doc) from src/core; this store only applies them.
 import { create } from 'zustand';
+import { addedOverLimit } from '../core/model/addedOverLimit';
 import { emptyProjectDoc, type ProjectDoc } from '../core/model/projectDoc';
+import { useSessionStore } from './sessionStore';
 
 export type DocCommand = (doc: ProjectDoc) => ProjectDoc;
 
@@ -21,7 +23,8 @@ export interface DocState {
   readOnly: boolean;
   /** Bumped by every replace (new, open, restore): what the session derived for one project means nothing for the next. */
   opened: number;
-  apply: (command: DocCommand) => void;
+  /** Applies the command; false when nothing changed (read-only, the same document, or an addition over a limit, refused with a message). */
+  apply: (command: DocCommand) => boolean;
   beginGesture: () => void;
   endGesture: () => void;
   cancelGesture: () => void;
@@ -42,12 +45,19 @@ export const useDocStore = create<DocState>()((set, get) => ({
   savedRevision: 0,
   opened: 0,
   apply: (command) => {
-    if (get().readOnly) return;
+    if (get().readOnly) return false;
     const { doc, past, gestureStart, revision } = get();
     const next = command(doc);
-    if (next === doc) return;
+    if (next === doc) return false;
+    // Every way of making a horizon, fault or scenario passes here: one beyond its limit is refused where it is made.
+    const over = addedOverLimit(doc, next);
+    if (over) {
+      useSessionStore.getState().showMessage('error', over);
+      return false;
+    }
     if (gestureStart) set({ doc: next, revision: revision + 1 });
     else set({ doc: next, past: [...past, doc].slice(-HISTORY_LIMIT), future: [], revision: revision + 1 });
+    return true;
   },
   beginGesture: () => {
     if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc });

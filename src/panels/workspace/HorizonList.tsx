@@ -154,7 +154,8 @@ function TypedHorizon({ selected }: { selected: DocHorizon | undefined }) {
     if (replace && selected) apply((d) => setHorizonPoints(d, selected.id, pointsPx));
     else {
       const id = nextHorizonId(doc);
-      apply((d) => addHorizon(d, { id, colour: paletteColour(doc.horizons.length), pointsPx }));
+      // Refused (with its message) when the project already holds as many horizons as it may.
+      if (!apply((d) => addHorizon(d, { id, colour: paletteColour(doc.horizons.length), pointsPx }))) return;
       useSessionStore.getState().selectHorizon(id);
     }
     show('info', `${parsed.points.length} points read${parsed.skipped ? `, ${parsed.skipped} lines skipped` : ''}.`);
