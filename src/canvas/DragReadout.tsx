@@ -38,7 +38,10 @@ export function DragReadout() {
         el.hidden = true;
         return;
       }
-      el.textContent = text;
+      // Its one text node changed in place: a new node each frame would be styled and laid out afresh.
+      const t = el.firstChild;
+      if (t instanceof Text && !t.nextSibling) t.data = text;
+      else el.textContent = text;
       el.hidden = false;
       const r = cachedClientRect(box);
       const x = Math.min(Math.max(pointer.x - r.left + OFFSET_X, 4), Math.max(4, r.width - size.width - 4));

@@ -41,7 +41,17 @@ function writeLive(): void {
       return showDocNow();
     } else if (e.el.textContent !== text) writes.push([e.el, text]);
   }
-  for (const [el, text] of writes) el.textContent = text;
+  for (const [el, text] of writes) writeText(el, text);
+}
+
+/**
+ * Sets an element's text, changing its one text node in place where it has one: setting textContent replaced the
+ * node, and each new node was styled and laid out afresh (sixty a move at 12 horizons), not merely its text.
+ */
+export function writeText(el: HTMLElement, text: string): void {
+  const t = el.firstChild;
+  if (t && !t.nextSibling && t.nodeType === Node.TEXT_NODE) (t as Text).data = text;
+  else el.textContent = text;
 }
 
 // Written after the task that moved the pointer (its microtasks, where the canvases' React renders run too), so the
