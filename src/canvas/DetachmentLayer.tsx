@@ -1,7 +1,11 @@
-// The proposed detachment drawn back onto the section, with its 95% band (interpretation pane).
-// Derived from the document through the selectors, so it follows a regional or pin while it is dragged.
-import { useMemo } from 'react';
+// The proposed detachment drawn back onto the section, with its 95% band (interpretation pane). Derived from the
+// one live analysis, so it follows a regional or pin while it is dragged. Per-frame work stays out of React: a store
+// subscription writes the line, band and label into their Konva nodes and asks the layer for one batched draw; React
+// renders only when what is drawn changes kind (a band comes or goes, the detachment appears or goes).
+import { memo, useLayoutEffect, useRef, useState } from 'react';
 import { Label, Layer, Line, Tag, Text } from 'react-konva';
+import type Konva from 'konva';
+import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { selectLiveAnalysis } from '../state/selectors';
@@ -18,49 +22,93 @@ const FONT = 11;
 const LINE_HEIGHT = 1.2;
 const PAD = 3;
 
-export function DetachmentLayer() {
-  const doc = useDocStore((s) => s.doc);
-  const gestureStart = useDocStore((s) => s.gestureStart);
-  const scale = useSessionStore((s) => s.camera.scale);
-  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): read it again then.
-  const answered = useCrossingChecks((s) => s.answered);
-  const shapes = useMemo(() => {
-    if (!doc.settings.showDetachment) return null;
-    const { docSection, outcome } = selectLiveAnalysis(doc, gestureStart);
-    if (!docSection.ok || !outcome?.ok) return null;
-    const trace = detachmentTrace(docSection.section, outcome.analysis);
-    if (!trace) return null;
-    const px = (pts: [number, number][]) => pts.flatMap((q) => sectionToImage(docSection.fit, q));
-    const u = outcome.analysis.units;
-    // The one formatting rule (src/format), so the section, the strip and the pane show one number.
-    const len = (v: number) => formatLength(v, u);
-    const e = trace.elevationInterval;
-    const interval = e === 'unbounded' ? '95% interval unbounded' : e === 'none' ? 'no interval (two horizons)' : e === 'exact' ? EXACT_FIT_TEXT
-      : `95%: ${formatInterval(e, u)}`;
-    return {
-      line: px(trace.line),
-      band: trace.band ? px([trace.band.upper[0], trace.band.upper[1], trace.band.lower[1], trace.band.lower[0]]) : null,
-      label: `Proposed detachment ${len(trace.elevation)}\ndepth ${len(trace.depth)} below ${len(outcome.analysis.referenceElevation)}; ${interval}`,
-      // Just under the line where it crosses the left pin: nothing is drawn below a basal detachment
-      // (every horizon lies above it, and the beds at a pin are back at their regional), so the label
-      // covers the least of the section there; only the faint 95% band runs under it.
-      anchor: sectionToImage(docSection.fit, trace.atLeftPin),
+interface Drawn { line: number[]; band: number[] | null; label: string; anchor: [number, number] }
+
+/** The detachment of a document as drawn on the section (image px), or null when there is none to show. */
+function detachmentDrawn(doc: ProjectDoc, gestureStart: ProjectDoc | null): Drawn | null {
+  if (!doc.settings.showDetachment) return null;
+  const { docSection, outcome } = selectLiveAnalysis(doc, gestureStart);
+  if (!docSection.ok || !outcome?.ok) return null;
+  const trace = detachmentTrace(docSection.section, outcome.analysis);
+  if (!trace) return null;
+  const px = (pts: [number, number][]) => pts.flatMap((q) => sectionToImage(docSection.fit, q));
+  const u = outcome.analysis.units;
+  // The one formatting rule (src/format), so the section, the strip and the pane show one number.
+  const len = (v: number) => formatLength(v, u);
+  const e = trace.elevationInterval;
+  const interval = e === 'unbounded' ? '95% interval unbounded' : e === 'none' ? 'no interval (two horizons)' : e === 'exact' ? EXACT_FIT_TEXT
+    : `95%: ${formatInterval(e, u)}`;
+  return {
+    line: px(trace.line),
+    band: trace.band ? px([trace.band.upper[0], trace.band.upper[1], trace.band.lower[1], trace.band.lower[0]]) : null,
+    label: `Proposed detachment ${len(trace.elevation)}\ndepth ${len(trace.depth)} below ${len(outcome.analysis.referenceElevation)}; ${interval}`,
+    // Just under the line where it crosses the left pin: nothing is drawn below a basal detachment
+    // (every horizon lies above it, and the beds at a pin are back at their regional), so the label
+    // covers the least of the section there; only the faint 95% band runs under it.
+    anchor: sectionToImage(docSection.fit, trace.atLeftPin),
+  };
+}
+
+type Kind = 'none' | 'line' | 'band';
+const kindOf = (d: Drawn | null): Kind => (d ? (d.band ? 'band' : 'line') : 'none');
+
+export const DetachmentLayer = memo(function DetachmentLayer() {
+  const [kind, setKind] = useState<Kind>('none');
+  const layer = useRef<Konva.Layer>(null);
+  const band = useRef<Konva.Line>(null);
+  const line = useRef<Konva.Line>(null);
+  const label = useRef<Konva.Label>(null);
+  const text = useRef<Konva.Text>(null);
+
+  useLayoutEffect(() => {
+    // The inputs last drawn: the document and its gesture's start, the zoom, and the self-crossing verdicts (a
+    // verdict changes the analysis of the same document, crossingChecks.ts).
+    let last: unknown[] = [];
+    let drawn: Drawn | null = null;
+    const write = () => {
+      const scale = useSessionStore.getState().camera.scale;
+      const k = 1 / scale;
+      if (!drawn) return;
+      band.current?.points(drawn.band ?? []);
+      line.current?.setAttrs({ points: drawn.line, strokeWidth: 2.2 * k, dash: [12 * k, 6 * k] });
+      // The label is laid out in screen pixels and scaled to the view: a font of FONT / scale image pixels (over a
+      // thousand on a big document fitted to the view) made the canvas resolve a new font size on every zoom, and
+      // one that large took a tenth of a second to set.
+      label.current?.setAttrs({ x: drawn.anchor[0] + 4 * k, y: drawn.anchor[1] + 5 * k, scaleX: k, scaleY: k });
+      text.current?.text(drawn.label);
     };
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- `answered` stands for the verdicts selectLiveAnalysis reads
-  }, [doc, gestureStart, answered]);
-  if (!shapes) return <Layer listening={false} />;
-  const k = 1 / scale;
+    const update = () => {
+      const { doc, gestureStart } = useDocStore.getState();
+      const scale = useSessionStore.getState().camera.scale;
+      const answered = useCrossingChecks.getState().answered;
+      const now = [doc, gestureStart, scale, answered];
+      if (now.every((v, i) => v === last[i])) return;
+      const moved = doc !== last[0] || gestureStart !== last[1] || answered !== last[3];
+      last = now;
+      if (moved) drawn = detachmentDrawn(doc, gestureStart);
+      const want = kindOf(drawn);
+      // A new kind is mounted by React, and written by the layout effect below.
+      if (want !== kind) return setKind(want);
+      write();
+      layer.current?.batchDraw();
+    };
+    update();
+    const stop = [useDocStore.subscribe(update), useSessionStore.subscribe(update), useCrossingChecks.subscribe(update)];
+    return () => stop.forEach((s) => s());
+  }, [kind]);
+
   return (
-    <Layer listening={false}>
-      {shapes.band && <Line points={shapes.band} closed fill={COLOUR} opacity={0.14} perfectDrawEnabled={false} />}
-      <Line points={shapes.line} stroke={COLOUR} strokeWidth={2.2 * k} dash={[12 * k, 6 * k]} perfectDrawEnabled={false} />
-      {/* The label is laid out in screen pixels and scaled to the view: a font of FONT / scale image pixels (over a
-          thousand on a big document fitted to the view) made the canvas resolve a new font size on every zoom, and
-          one that large took a tenth of a second to set. */}
-      <Label x={shapes.anchor[0] + 4 * k} y={shapes.anchor[1] + 5 * k} scaleX={k} scaleY={k} listening={false}>
-        <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2} perfectDrawEnabled={false} />
-        <Text text={shapes.label} fontSize={FONT} lineHeight={LINE_HEIGHT} padding={PAD} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
-      </Label>
+    <Layer ref={layer} listening={false}>
+      {kind === 'band' && <Line ref={band} closed fill={COLOUR} opacity={0.14} perfectDrawEnabled={false} listening={false} />}
+      {kind !== 'none' && (
+        <>
+          <Line ref={line} stroke={COLOUR} perfectDrawEnabled={false} listening={false} />
+          <Label ref={label} listening={false}>
+            <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2} perfectDrawEnabled={false} />
+            <Text ref={text} fontSize={FONT} lineHeight={LINE_HEIGHT} padding={PAD} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
+          </Label>
+        </>
+      )}
     </Layer>
   );
-}
+});
