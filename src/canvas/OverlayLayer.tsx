@@ -15,6 +15,7 @@ import { handlesInView, type HandlesInView } from './handlesInView';
 import { getToolPreview, subscribeToolPreview } from './toolDispatch';
 import { pinLinePx } from './pinLinePx';
 import { MARK_COLOURS } from '../core/model/horizonPalette';
+import { useShallow } from 'zustand/react/shallow';
 
 type Ctx = Konva.Context;
 
@@ -117,21 +118,37 @@ const FaultHandles = memo(function FaultHandles() {
   );
 });
 
+// A regional's handles are drawn from the store's document at draw time: a drag moves them without a React render,
+// its move asking the layer for one batched draw.
 const RegionalHandles = memo(function RegionalHandles({ scale }: { scale: number }) {
   const tool = useSessionStore((s) => s.activeTool);
   const selectedId = useSessionStore((s) => s.selectedHorizonId);
-  const regionals = useDocStore((s) => activeScenario(s.doc).regionals);
+  const withRegional = useDocStore(useShallow((s) => {
+    const regionals = activeScenario(s.doc).regionals;
+    return s.doc.horizons.filter((h) => h.visible && regionals[h.id]).map((h) => h.id);
+  }));
   const horizons = useDocStore((s) => s.doc.horizons);
-  if (tool !== 'regional') return null;
+  const first = useRef<Konva.Shape>(null);
+  const on = tool === 'regional' && withRegional.length > 0;
+  useEffect(() => {
+    if (!on) return;
+    return useDocStore.subscribe((s, prev) => {
+      if (activeScenario(s.doc).regionals !== activeScenario(prev.doc).regionals) first.current?.getLayer()?.batchDraw();
+    });
+  }, [on]);
+  if (!on) return null;
   return (
     <>
-      {horizons.filter((h) => h.visible && regionals[h.id]).map((h) => {
+      {withRegional.map((id, i) => {
+        const h = horizons.find((k) => k.id === id)!;
         const half = (h.id === selectedId ? 5 : 3.5) / scale;
         return (
-          <Shape key={h.id} listening={false} perfectDrawEnabled={false} fill={h.colour} stroke="#ffffff" strokeWidth={1.5} strokeScaleEnabled={false}
+          <Shape key={h.id} ref={i === 0 ? first : undefined} listening={false} perfectDrawEnabled={false} fill={h.colour} stroke="#ffffff" strokeWidth={1.5} strokeScaleEnabled={false}
             sceneFunc={(ctx, shape) => {
+              const regional = activeScenario(useDocStore.getState().doc).regionals[h.id];
+              if (!regional) return;
               ctx.beginPath();
-              for (const [u, v] of regionals[h.id]) {
+              for (const [u, v] of regional) {
                 ctx.moveTo(u + half, v);
                 ctx.arc(u, v, half, 0, 2 * Math.PI, false);
               }
