@@ -29,6 +29,14 @@ const NO_ARGUMENT_SPREAD = [
   { selector: "CallExpression[callee.property.name=/^(push|unshift)$/] > SpreadElement", message: 'push(...list) overflows the call stack on long lists: push in a loop.' },
   { selector: "CallExpression[callee.property.name='apply'][callee.object.property.name=/^(min|max|push|unshift)$/]", message: 'min/max/push.apply(null, list) overflows the call stack on long lists: use a loop.' },
 ];
+// In src/ every spread into a call's arguments (any callee, `new` too) is banned, not only the known ones above:
+// whether a list is small is not something the linter can prove. Where it is small by construction (a fixed tuple,
+// a handful of values), the line says so in an eslint-disable-next-line comment naming the reason. An array
+// literal's spread ([...xs]) is iterated, not put on the stack, and stays allowed.
+const NO_CALL_SPREAD_IN_SRC = [
+  { selector: "CallExpression:not([callee.object.name='Math'][callee.property.name=/^(min|max|hypot)$/]):not([callee.property.name=/^(push|unshift)$/]) > SpreadElement", message: 'A spread into a call puts every element on the call stack and throws past about 100,000: pass the list itself or loop; if the list is small by construction, say why in an eslint-disable-next-line comment.' },
+  { selector: 'NewExpression > SpreadElement', message: 'A spread into a constructor puts every element on the call stack and throws past about 100,000: pass the list itself or loop; if the list is small by construction, say why in an eslint-disable-next-line comment.' },
+];
 
 function importDirection(folder) {
   const allowed = MAY_IMPORT[folder];
@@ -44,7 +52,7 @@ function importDirection(folder) {
     rules: {
       'no-restricted-imports': ['error', { patterns }],
       // import('…') is not seen by no-restricted-imports.
-      'no-restricted-syntax': ['error', { selector: `ImportExpression[source.value=/${regex.replaceAll('/', '\\/')}/]`, message }, ...NO_ARGUMENT_SPREAD],
+      'no-restricted-syntax': ['error', { selector: `ImportExpression[source.value=/${regex.replaceAll('/', '\\/')}/]`, message }, ...NO_ARGUMENT_SPREAD, ...NO_CALL_SPREAD_IN_SRC],
     },
   };
 }

@@ -20,4 +20,13 @@ describe('lint: no spread of a list into a call', () => {
     const code = 'export function g(xs: number[]) {\n  let m = Infinity;\n  for (const x of xs) m = Math.min(m, x);\n  const ys = [0, ...xs];\n  return [m, ys, new Set([...xs])];\n}\n';
     expect(await messages(code)).toEqual([]);
   }, 60_000);
+
+  it('flags in src every other spread into a call or constructor, and an array literal\'s spread not', async () => {
+    const code = 'export function h(xs: number[], f: (...a: number[]) => number) {\n  const d = new Date(...(xs as [number]));\n  return [f(...xs), String.fromCharCode(...xs), d, [...xs]];\n}\n';
+    const found = await messages(code, 'src/io/example.ts');
+    expect(found).toHaveLength(3);
+    expect(found.every((m) => m.includes('puts every element on the call stack'))).toBe(true);
+    // Outside src (tests, scripts) only the known forms are banned.
+    expect(await messages(code, 'tests/io/example.test.ts')).toEqual([]);
+  }, 60_000);
 });

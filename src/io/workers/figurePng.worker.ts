@@ -32,7 +32,8 @@ function drawScan(ctx: Ctx, req: FigurePngRequest, scan: FigureScanRegion): void
   ctx.beginPath();
   ctx.rect(panel.x, panel.y, panel.w, panel.h);
   ctx.clip();
-  ctx.transform(...scan.matrix);
+  const [a, b, c, d, e, f] = scan.matrix;
+  ctx.transform(a, b, c, d, e, f);
   // Region pixels → scan pixels: its origin and the pyramid level's size.
   ctx.translate(scan.originPx[0], scan.originPx[1]);
   ctx.scale(scan.pxPerRegionPx[0], scan.pxPerRegionPx[1]);
