@@ -7,6 +7,8 @@ import { Circle, Group, Layer, Line } from 'react-konva';
 import { useShallow } from 'zustand/react/shallow';
 import { pinXs } from '../core/model/commands/pinXs';
 import { sectionFrame } from '../core/model/commands/sectionFrame';
+import type { ClippedPolyline } from '../core/geometry/clipPolylineToPins';
+import { keptClippedLine } from '../state/selectors';
 import { activeScenario } from '../core/model/docToSection';
 import type { DocHorizon, ImagePx } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
@@ -195,11 +197,15 @@ function clipTo(poly: number[]) {
 const headCache = new WeakMap<readonly ImagePx[], { pins: [number, number]; frame: FittedCalibration; head: ClippedHorizonPx | null }>();
 const prefixCache = new WeakMap<ClippedHorizonPx, { decimation: Decimation; prefix: DecimatedPrefix }>();
 
-/** Returns the horizon's line clipped to the pins for its fill, from the cache when the line, pins and calibration are the same. */
-function cachedHead(line: readonly ImagePx[], pins: [number, number], frame: FittedCalibration): ClippedHorizonPx | null {
+/**
+ * Returns the horizon's line clipped to the pins for its fill, from the cache when the line, pins and calibration are
+ * the same; else from the analysis's own clipped line when it has one for an unbroken line (the same clip of the same
+ * section coordinates), else clipped here.
+ */
+function cachedHead(line: readonly ImagePx[], pins: [number, number], frame: FittedCalibration, clipped: () => ClippedPolyline | null): ClippedHorizonPx | null {
   const kept = headCache.get(line);
   if (kept && kept.frame === frame && kept.pins[0] === pins[0] && kept.pins[1] === pins[1]) return kept.head;
-  const head = clippedHorizonPx(line as ImagePx[], pins, frame);
+  const head = clippedHorizonPx(line as ImagePx[], pins, frame, clipped());
   headCache.set(line, { pins, frame, head });
   return head;
 }
@@ -223,7 +229,9 @@ const FillShape = memo(function FillShape({ id }: { id: string }) {
   const pins = useMemo(() => (pinsPx ? pinXs(pinsPx, frame) : null), [pinsPx, frame]);
   // A horizon in pieces is filled along its joined line (the line the analysis measures).
   const joined = useJoinedLine(h?.joins.length ? h : undefined);
-  const head = useMemo(() => (h && pins ? cachedHead(joined ? joined.points : h.pointsPx, pins, frame) : null), [h, joined, pins, frame]);
+  const head = useMemo(() => (h && pins
+    ? cachedHead(joined ? joined.points : h.pointsPx, pins, frame, () => (joined ? null : keptClippedLine(useDocStore.getState().doc, h.id, pins, frame)))
+    : null), [h, joined, pins, frame]);
   const geometry = useMemo(() => (head && regional && pins ? excessFillSides(regional, pins, frame, head) : null), [regional, pins, frame, head]);
   // The loop follows the horizon between the pins: as long, and decimated the same way.
   const decimation = useDecimation(head && geometry ? (head.loopHead.length + geometry.loopTail.length) / 2 : 0);

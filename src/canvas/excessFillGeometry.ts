@@ -4,7 +4,8 @@
 // moves) followed by the regional's part (excessFillSides), so a regional drag rebuilds only the regional's side.
 import type { FittedCalibration } from '../core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../core/calibration/mapPoints';
-import { fillHorizonPart, fillRegionalPart, type FillHorizonPart } from '../core/geometry/excessFillOutline';
+import { fillHorizonPart, fillHorizonPartOf, fillRegionalPart, type FillHorizonPart } from '../core/geometry/excessFillOutline';
+import { lineToSection } from '../core/calibration/lineToSection';
 import type { XZ } from '../core/model/section';
 import type { ImagePx } from '../core/model/projectDoc';
 
@@ -41,19 +42,20 @@ function flatPoints(frame: FittedCalibration, points: readonly XZ[]): number[] {
 /** The horizon's part of the fill: its line clipped to the pins (image pixels, left to right) and its part in section units. */
 export interface ClippedHorizonPx { loopHead: number[]; part: FillHorizonPart }
 
-/** Returns the horizon clipped to the pins for the fill (reused while only its regional moves), or null when it does not cross both pins once. */
-export function clippedHorizonPx(linePx: ImagePx[], pins: [number, number], frame: FittedCalibration): ClippedHorizonPx | null {
-  // imageToSection's arithmetic, written out: no pair array a vertex.
-  const { a, b } = frame;
-  const xs = new Float64Array(linePx.length);
-  const zs = new Float64Array(linePx.length);
-  for (let i = 0; i < linePx.length; i++) {
-    const u = linePx[i][0];
-    const v = linePx[i][1];
-    xs[i] = a[0] + a[1] * u + a[2] * v;
-    zs[i] = b[0] + b[1] * u + b[2] * v;
+/**
+ * Returns the horizon clipped to the pins for the fill (reused while only its regional moves), or null when it does
+ * not cross both pins once. `clipped`: the same line already clipped to the same pins by the analysis (its
+ * preparation), which is then not clipped again.
+ */
+export function clippedHorizonPx(linePx: ImagePx[], pins: [number, number], frame: FittedCalibration,
+  clipped?: { xs: ArrayLike<number>; zs: ArrayLike<number> } | null): ClippedHorizonPx | null {
+  let part: FillHorizonPart | null;
+  if (clipped) part = fillHorizonPartOf(clipped);
+  else {
+    // The line in section units as the analysis converts it (kept per line): no pair array a vertex.
+    const { xs, zs } = lineToSection(frame, linePx);
+    part = fillHorizonPart(xs, zs, pins);
   }
-  const part = fillHorizonPart(xs, zs, pins);
   if (!part) return null;
   const loopHead: number[] = [];
   flatPx(frame, part.xs, part.zs, loopHead);

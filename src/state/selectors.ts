@@ -7,6 +7,8 @@ import { activeScenario } from '../core/model/docToSection';
 import { crossingVerdictsVersion } from '../core/geometry/crossingVerdicts';
 import { createPreparationBuffer } from '../core/analysis/preparationBuffer';
 import type { ProjectDoc, Scenario } from '../core/model/projectDoc';
+import type { ClippedPolyline } from '../core/geometry/clipPolylineToPins';
+import type { FittedCalibration } from '../core/calibration/fitCalibration';
 
 // docToSection reads the scenario, the horizons, the faults, the calibration, the units, the stated
 // resolution and whether there is a scan (digitisingResolution), and nothing else, so the result is memoised
@@ -32,6 +34,22 @@ export function selectAnalysis(doc: ProjectDoc, scenarioId?: string): DocAnalysi
   const result = analyseDoc(doc, scenarioId, analysisBuffer);
   if (scenario) cache.set(scenario, { horizons: doc.horizons, faults: doc.faults, calibration: doc.calibration, units: doc.units, resolution: doc.resolution, scanned: doc.scan !== null, verdicts, result });
   return result;
+}
+
+/**
+ * Returns the horizon's line clipped to the pins as the analysis of this document already holds it (its
+ * preparation), or null when there is none yet or it was clipped to other pins: it reads, it never analyses.
+ */
+export function keptClippedLine(doc: ProjectDoc, horizonId: string, pins: readonly [number, number], frame: FittedCalibration): ClippedPolyline | null {
+  const scenario = activeScenario(doc);
+  const hit = scenario ? cache.get(scenario) : undefined;
+  if (!hit || hit.horizons !== doc.horizons || hit.faults !== doc.faults || hit.calibration !== doc.calibration) return null;
+  const { prepared, docSection } = hit.result;
+  if (!prepared || !docSection.ok || prepared.pins[0] !== pins[0] || prepared.pins[1] !== pins[1]) return null;
+  const same = (p: readonly number[], q: readonly number[]) => p.length === q.length && p.every((x, k) => Object.is(x, q[k]));
+  if (!same(docSection.fit.a, frame.a) || !same(docSection.fit.b, frame.b)) return null;
+  const i = docSection.horizonIds.indexOf(horizonId);
+  return i >= 0 ? prepared.horizons[i]?.line ?? null : null;
 }
 
 // While a gesture moves only regionals, the gesture's start is prepared once and each step re-measures

@@ -8,6 +8,11 @@ import { fitCalibration } from '../../src/core/calibration/fitCalibration';
 import { imageToSection, sectionToImage } from '../../src/core/calibration/mapPoints';
 import { fillHorizonPart } from '../../src/core/geometry/excessFillOutline';
 import type { ControlPoint, ImagePx } from '../../src/core/model/projectDoc';
+import { keptClippedLine, selectAnalysis } from '../../src/state/selectors';
+import { sectionFrame } from '../../src/core/model/commands/sectionFrame';
+import { pinXs } from '../../src/core/model/commands/pinXs';
+import { activeScenario } from '../../src/core/model/docToSection';
+import { sampleDoc } from '../io/sampleDoc';
 
 const v = (lo: number, hi: number) => fc.double({ min: lo, max: hi, noNaN: true });
 
@@ -44,5 +49,24 @@ describe('clippedHorizonPx(linePx, pins, frame)', () => {
     }), { numRuns: 200 });
     // Most random lines cross each pin once; the comparison above must have run on them.
     expect(clipped).toBeGreaterThan(20);
+  });
+});
+
+describe('clippedHorizonPx from the analysis\'s clipped line', () => {
+  it('is, to the last bit, the fill clipped here; the analysis is read once it is made, never made for it', () => {
+    const doc = sampleDoc();
+    const frame = sectionFrame(doc);
+    const pins = pinXs(activeScenario(doc).pinsPx, frame)!;
+    const id = doc.horizons[1].id;
+    expect(keptClippedLine(doc, id, pins, frame)).toBeNull();
+    selectAnalysis(doc);
+    const line = keptClippedLine(doc, id, pins, frame);
+    expect(line).not.toBeNull();
+    const own = clippedHorizonPx(doc.horizons[1].pointsPx, pins, frame);
+    const fromAnalysis = clippedHorizonPx(doc.horizons[1].pointsPx, pins, frame, line);
+    expect(fromAnalysis).toEqual(own);
+    expect(Array.from(fromAnalysis!.part.xs)).toEqual(Array.from(own!.part.xs));
+    // Other pins than the analysis's: not its line.
+    expect(keptClippedLine(doc, id, [pins[0], pins[1] + 1], frame)).toBeNull();
   });
 });

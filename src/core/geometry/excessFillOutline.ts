@@ -15,7 +15,11 @@ export interface FillRegionalPart { tail: XZ[]; above: XZ[]; below: XZ[] }
 /** Returns the horizon clipped to the pins for the fill, or null when it does not cross each pin once. */
 export function fillHorizonPart(xs: ArrayLike<number>, zs: ArrayLike<number>, pins: readonly [number, number]): FillHorizonPart | null {
   const lc = clipPolylineToPins(xs, zs, pins[0], pins[1]).clipped;
-  if (!lc) return null;
+  return lc ? fillHorizonPartOf(lc) : null;
+}
+
+/** Returns the fill's horizon part of a line already clipped to the pins (clipPolylineToPins, as the analysis clips it). */
+export function fillHorizonPartOf(lc: { xs: ArrayLike<number>; zs: ArrayLike<number> }): FillHorizonPart {
   let zMin = Infinity;
   let zMax = -Infinity;
   for (let i = 0; i < lc.zs.length; i++) {
