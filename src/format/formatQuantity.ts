@@ -1,4 +1,6 @@
-// The one rule for numbers a person reads — on screen, in the figure, in the report and in the terminal.
+// The one rule for numbers a person reads — on screen, in the figure, in the report and in the terminal. The
+// number itself is written by core/model/numberText.ts (so the engine's messages follow it too); this module adds
+// units, areas, intervals and the exact-fit wording.
 // Data files (CSV, GeoJSON, JSON, the clipboard's table) keep plain numbers (plainNumber) instead.
 // - Significant figures: about four by default, never rounding a whole number above its units digit
 //   (21519 stays 21519, so the same length reads the same wherever it is shown); trailing zeros dropped.
@@ -11,37 +13,9 @@
 //   when there is scatter, and "exact fit: no interval" instead of a zero-width interval.
 import { EXACT_FIT_TEXT } from '../core/analysis/isExactFit';
 import type { LengthUnit } from '../core/model/section';
+import { formatNumber, formatSmallNumber, minusSign, MINUS } from '../core/model/numberText';
 
-export { EXACT_FIT_TEXT };
-
-/** The minus sign U+2212 that every shown negative number takes. */
-export const MINUS = '\u2212';
-
-/** Returns decimal text with the minus sign (U+2212) for every hyphen-minus, and "0" for any "-0", "-0.00" … */
-export function minusSign(text: string): string {
-  if (/^-0(\.0*)?$/.test(text)) return '0';
-  return text.replace(/-/g, MINUS);
-}
-
-/** Returns v with about `digits` significant figures, as decimal text ("—" when null or not finite, "0" for ±0; exponent form from 10⁹). */
-export function formatNumber(v: number | null | undefined, digits = 4): string {
-  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
-  if (v === 0) return '0';
-  if (Math.abs(v) >= 1e9) return exponentForm(v, digits);
-  const mag = Math.floor(Math.log10(Math.abs(v)));
-  const decimals = Math.max(0, Math.min(6, digits - 1 - mag));
-  return minusSign(trimZeros(v.toFixed(decimals)));
-}
-
-/** v in exponent form with `digits` significant figures, trailing zeros dropped, the minus sign U+2212 ("3.7e10", "2e−6"). */
-function exponentForm(v: number, digits: number): string {
-  const [m, e] = v.toExponential(Math.max(0, digits - 1)).split('e');
-  return minusSign(`${trimZeros(m)}e${Number(e)}`);
-}
-
-function trimZeros(text: string): string {
-  return text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
-}
+export { EXACT_FIT_TEXT, formatNumber, minusSign, MINUS };
 
 /** Returns a length with its unit, e.g. "2950 m" ("—" when missing). */
 export function formatLength(v: number | null | undefined, units: string, digits = 4): string {
@@ -54,8 +28,8 @@ export function formatLength(v: number | null | undefined, units: string, digits
  * with its unit: as formatLength, but below 10⁻³ units in exponent form instead of rounding to "0" ("2e−6 m").
  */
 export function formatSmallLength(v: number, units: string, digits = 2): string {
-  if (Number.isFinite(v) && v !== 0 && Math.abs(v) < 1e-3) return `${exponentForm(v, digits)} ${units}`;
-  return formatLength(v, units, digits);
+  const n = formatSmallNumber(v, digits);
+  return n === '—' ? n : `${n} ${units}`;
 }
 
 /** The display unit of a set of areas: multiply by `factor` and write `label`. */

@@ -3,6 +3,7 @@ import { leastSquares, type LineFit } from '../stats/leastSquares';
 import { slopeInterval } from '../stats/slopeInterval';
 import type { LengthUnit } from '../model/section';
 import { detachmentOfLine, type Regime } from './detachmentOfLine';
+import { formatNumber } from '../model/numberText';
 
 // The area–depth line of Epard & Groshong (1993): least squares A = a + b·h over the included
 // horizons; D = −b, zd = −a/b, detachment elevation zref − zd; 95% interval on D from the
@@ -41,7 +42,7 @@ export function fitAreaDepth(depths: ArrayLike<number>, areas: ArrayLike<number>
     if (depths.length < 2) {
       notes.push(`Fewer than two usable horizons in ${label} (n = ${depths.length}): no area–depth line; include at least two horizons at different depths.`);
     } else {
-      const depth = `${Number(depths[0].toPrecision(6))}${units ? ` ${units}` : ''}`;
+      const depth = `${formatNumber(depths[0], 6)}${units ? ` ${units}` : ''}`;
       notes.push(`All regionals in ${label} lie at one depth (${depth}): no area–depth line; it needs horizons at two or more depths.`);
     }
     return { result: null, fit: null, notes };

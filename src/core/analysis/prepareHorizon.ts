@@ -5,6 +5,7 @@ import type { Cutoff } from '../model/joinPieces';
 import type { LengthUnit } from '../model/section';
 import type { SectionProblem } from '../model/validateSection';
 import { projectedContribution } from './projectedContribution';
+import { formatNumber } from '../model/numberText';
 
 /** One horizon clipped to the pins, with the measures that do not depend on the area–depth fit. */
 export interface PreparedHorizon {
@@ -63,7 +64,7 @@ function crossingProblem(c: ClippedPolyline, who: string, what: string, name: st
   // the smaller end of a clipped segment's source lies on its input segment, in either direction.
   const inputSegment = (k: number) => Math.floor(Math.min(c.source[k], c.source[k + 1]));
   const [i, j] = [inputSegment(s), inputSegment(t)].sort((a, b) => a - b);
-  const x = Number(crossingX(c.xs, c.zs, s, t).toPrecision(6));
+  const x = formatNumber(crossingX(c.xs, c.zs, s, t), 6);
   const where = `segments ${i}–${i + 1} and ${j}–${j + 1} cross at x ≈ ${x}${units ? ` ${units}` : ''}`;
   return { code: 'self-intersecting', horizon: name, message: `${who}: the ${what} crosses itself between the pins (${where}); redraw it so it does not cross itself.` };
 }

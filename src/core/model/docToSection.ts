@@ -8,6 +8,7 @@ import type { DocFault, DocHorizon, ProjectDoc, Scenario } from './projectDoc';
 import type { FlatLine, FlatSection, SectionFault, SectionHorizon, XZ } from './section';
 import { digitisingResolution } from './digitisingResolution';
 import { ON_FAULT_TOLERANCE } from './validateSectionArrays';
+import { formatSmallNumber } from './numberText';
 
 export interface SkippedHorizon { id: string; name: string; reason: string }
 /** A fault left out of the section (too few vertices, or a line that crosses itself), with the reason. */
@@ -143,5 +144,5 @@ function horizonShape(
 }
 
 function fmt(v: number): string {
-  return String(Number(v.toPrecision(3)));
+  return formatSmallNumber(v, 3);
 }

@@ -3,6 +3,7 @@ import type { FaultArrays } from './readFault';
 import type { Allocate, PointArrays } from './readPoints';
 import type { XZ } from './section';
 import type { SectionProblem } from './sectionProblem';
+import { formatNumber } from './numberText';
 
 // A horizon cut by faults is measured along its joined line (docs/method.md §Faults and horizons in pieces;
 // Epard & Groshong 1993 for area balance across fault-related folds): each piece in order, and
@@ -129,5 +130,5 @@ function faultVerticesBetween(cum: Float64Array, from: number, to: number): numb
 }
 
 function fmt(v: number): string {
-  return String(Number(v.toPrecision(6)));
+  return formatNumber(v, 6);
 }

@@ -3,6 +3,7 @@
 // copy in the browser — with the same words everywhere, so that nothing is accepted in one place and
 // refused in another (work accepted by the editor but refused on restore would be lost).
 // Generous for real sections, finite so that a hostile or broken file cannot exhaust memory or time.
+import { formatNumber, formatSmallNumber } from './numberText';
 
 export const LIMITS = {
   /** Characters in a name (horizon, scenario, project title, author). */
@@ -41,7 +42,7 @@ export function tooManyMessage(what: string, n: number, limit: number): string {
 
 /** Returns the message for a file over its size limit: "file too large (600 MB; the limit is 500 MB)". */
 export function fileTooLargeMessage(bytes: number, limit: number): string {
-  const mb = (b: number) => (b / MiB >= 10 ? Math.round(b / MiB).toString() : (b / MiB).toFixed(1));
+  const mb = (b: number) => formatNumber(b / MiB >= 10 ? Math.round(b / MiB) : b / MiB, 2);
   return `file too large (${mb(bytes)} MB; the limit is ${mb(limit)} MB)`;
 }
 
@@ -53,14 +54,14 @@ export function nameLengthProblem(name: string, what = 'name'): string | null {
 /** Returns the message for a coordinate outside the range Foldroot computes in, or null when it is inside. */
 export function coordinateProblem(v: number): string | null {
   if (!Number.isFinite(v)) return `a coordinate is not a finite number (${String(v)})`;
-  if (Math.abs(v) > LIMITS.coordinateMagnitude) return `a coordinate is outside the range Foldroot computes in (${v.toPrecision(3)}; coordinates must lie within ±${LIMITS.coordinateMagnitude.toExponential(0)} section units)`;
+  if (Math.abs(v) > LIMITS.coordinateMagnitude) return `a coordinate is outside the range Foldroot computes in (${formatNumber(v, 3)}; coordinates must lie within ±${formatNumber(LIMITS.coordinateMagnitude, 1)} section units)`;
   return null;
 }
 
 /** Returns the message for a section whose lines span less than the smallest extent, or null. `extent` is the larger of its x and z spans. */
 export function extentProblem(extent: number): string | null {
   if (extent > 0 && extent < LIMITS.minimumExtent) {
-    return `the section is too small to measure (it spans ${extent.toPrecision(3)} units; the smallest is ${LIMITS.minimumExtent} units)`;
+    return `the section is too small to measure (it spans ${formatSmallNumber(extent, 3)} units; the smallest is ${LIMITS.minimumExtent} units)`;
   }
   return null;
 }

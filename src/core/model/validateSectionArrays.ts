@@ -4,6 +4,7 @@ import { readHorizon, type HorizonArrays, type JoinContext } from './readHorizon
 import type { Allocate } from './readPoints';
 import { coordinateProblem, extentProblem, LIMITS, nameLengthProblem, tooManyMessage } from './limits';
 import type { SectionProblem } from './sectionProblem';
+import { formatSmallNumber } from './numberText';
 
 // The section-level checks of a section file (units, pins, reference elevation, the horizon
 // list, unique names); each horizon is read by readHorizon. Geometric checks (pins crossed once,
@@ -49,7 +50,7 @@ function readPins(v: unknown, out: SectionProblem[]): [number, number] | null {
   }
   const small = extentProblem(Math.abs(r - l));
   if (small) {
-    out.push({ code: 'out-of-range', message: `Section: ${small}; the pins are ${Math.abs(r - l).toPrecision(3)} units apart. Give the coordinates in larger units.` });
+    out.push({ code: 'out-of-range', message: `Section: ${small}; the pins are ${formatSmallNumber(Math.abs(r - l), 3)} units apart. Give the coordinates in larger units.` });
     return null;
   }
   if (l === r) out.push({ code: 'pins-invalid', message: `Section: both pins are at x = ${l}; move them apart, left pin first.` });

@@ -12,7 +12,7 @@ describe('importedCoordinateProblem', () => {
     for (const v of [1e160, -1e308, 1.0000001e9]) {
       const p = importedCoordinateProblem([line('Top', [[0, 0], [v, 10]])]);
       expect(p).toContain('Horizon "Top", vertex 2');
-      expect(p).toContain('coordinates must lie within ±1e+9 section units');
+      expect(p).toContain('coordinates must lie within ±1e9 section units');
     }
     expect(importedCoordinateProblem([line('F1', [[0, 0], [1, 1e200]])], 'Fault')).toContain('Fault "F1", vertex 2');
   });

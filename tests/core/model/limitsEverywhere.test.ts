@@ -121,7 +121,7 @@ describe('section files: the app and the command line read them through one chec
     far.horizons[0].line[2] = [500, 1e160];
     const v = validateSection(far);
     expect(!v.ok && v.problems[0].code).toBe('out-of-range');
-    expect(!v.ok && v.problems[0].message).toContain('outside the range Foldroot computes in (1.00e+160');
+    expect(!v.ok && v.problems[0].message).toContain('outside the range Foldroot computes in (1e160');
     const tiny = { units: 'm', pins: [1e-300, 3e-300], horizons: [{ name: 'A', line: [[0, -1e-300], [4e-300, -1e-300]], regional: [[0, 0], [4e-300, 0]] }] };
     const t = validateSection(tiny);
     expect(!t.ok && t.problems[0].message).toContain('the section is too small to measure');
