@@ -75,7 +75,12 @@ export const DetachmentLayer = memo(function DetachmentLayer() {
       // thousand on a big document fitted to the view) made the canvas resolve a new font size on every zoom, and
       // one that large took a tenth of a second to set.
       label.current?.setAttrs({ x: drawn.anchor[0] + 4 * k, y: drawn.anchor[1] + 5 * k, scaleX: k, scaleY: k });
-      text.current?.text(drawn.label);
+      // Drawn once per text into a canvas of its own (in screen pixels, the label's drawn scale): setting the font on
+      // the view's canvas made the browser bring the page's style up to date in the middle of each frame of a drag.
+      if (text.current && label.current && (text.current.text() !== drawn.label || !label.current.isCached())) {
+        text.current.text(drawn.label);
+        label.current.cache({ pixelRatio: window.devicePixelRatio || 1 });
+      }
     };
     const update = () => {
       const { doc, gestureStart } = useDocStore.getState();
