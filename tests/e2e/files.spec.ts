@@ -302,13 +302,14 @@ test('opening a file over unsaved changes asks first; Cancel keeps the project, 
   expect([opened.doc.title, opened.doc.horizons.length]).toEqual(['second', 2]);
 });
 
-// Seeded corrupt files through the real inputs: 100 project files (open-project) and 100 horizon
-// CSV files (import-csv), 200 in all; about 20 s on 2 cores. The timeout set in the
+// Seeded corrupt files through the real inputs: 100 project files and 100 section files (open-project) and 100
+// horizon CSV files (import-csv), 300 in all; about 20 s on 2 cores. The timeout set in the
 // test is room for a loaded CI machine, not a check on speed. Vitest runs the same kinds of
 // corruption 200 times per parser without a browser (tests/io/corruptFiles.test.ts).
 const FUZZ_SEED = 20240501;
-const FUZZ_PROJECT_CASES = 100;
-const FUZZ_CSV_CASES = 100;
+// FUZZ_CASES=1000 runs the full fuzz (1,000 files per input) on request.
+const FUZZ_PROJECT_CASES = Number(process.env.FUZZ_CASES ?? 100);
+const FUZZ_CSV_CASES = FUZZ_PROJECT_CASES;
 
 function flips(text: string) {
   return fc.array(fc.tuple(fc.nat(), fc.integer({ min: 1, max: 255 })), { minLength: 1, maxLength: 6 }).map((fl) => {
@@ -319,7 +320,7 @@ function flips(text: string) {
 }
 
 test('corrupt and hostile files give a message and leave the open project unchanged', async ({ page }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(120_000 * Math.max(1, FUZZ_PROJECT_CASES / 100));
   await ready(page);
   await openSection(page);
   await setTitleAndAuthor(page, 'Fuzz target', 'R. Tester');
@@ -338,6 +339,18 @@ test('corrupt and hostile files give a message and leave the open project unchan
     const expected = parseProjectText(text, name);
     if (expected.ok) await expectLastMessage(page, 'info', `Opened ${name}`);
     else await expect(page.getByTestId('message-error')).toContainText(expected.message.split(' (')[0]);
+  }
+  await expect(page.getByTestId('busy')).toHaveCount(0);
+  // Section files through the same input: truncated or with bytes flipped, only those the opener refuses (one
+  // that still reads would rightly replace the project).
+  const sectionText = JSON.stringify(SECTION);
+  const sectionCases = fc.sample(fc.oneof(fc.nat().map((n) => sectionText.slice(0, n % sectionText.length)), flips(sectionText))
+    .filter((text) => !parseProjectText(text, 'bad.json').ok), { seed: FUZZ_SEED + 1, numRuns: FUZZ_PROJECT_CASES });
+  for (const [i, text] of sectionCases.entries()) {
+    const name = `bad-section-${i}.json`;
+    await page.getByTestId('open-project').setInputFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text) });
+    const expected = parseProjectText(text, name);
+    await expect(page.getByTestId('message-error')).toContainText(!expected.ok ? expected.message.split(' (')[0] : 'never');
   }
   await expect(page.getByTestId('busy')).toHaveCount(0);
   // Horizon CSV: the app's own export, then corrupted; cases that still read cleanly are not corrupt and are left out.
