@@ -90,12 +90,13 @@ function paneReading(sa: ScenarioAnalysis): { diag: Diagnostic[]; flags: Outlier
 const paneOf = (doc: ProjectDoc, gs: ProjectDoc | null) => paneReading(liveScenarioAnalysis(doc, gs));
 
 /**
- * What the pane's live texts cannot change: which parts are shown. The diagnostics and the horizons flagged as far
- * off the line are judged again when the gesture ends; meanwhile their numbers follow where the same ones stand.
+ * What the pane's live texts cannot change: which parts are shown, and which diagnostics (by key: a diagnostic that
+ * appears or goes mid-drag renders the pane, so none shows a number from the gesture's start). The horizons flagged
+ * as far off the line are judged again when the gesture ends; meanwhile their distances follow where the same stand.
  */
 function paneShape(doc: ProjectDoc, gs: ProjectDoc | null): string {
   const sa = liveScenarioAnalysis(doc, gs);
-  return [Boolean(sa.analysis), Boolean(sa.series), sa.docSection.ok].join(' ');
+  return [Boolean(sa.analysis), Boolean(sa.series), sa.docSection.ok, ...paneReading(sa).diag.map((d) => `${d.level} ${d.key}`)].join('\n');
 }
 
 const referenceRead: LiveRead = (doc, gs) => {

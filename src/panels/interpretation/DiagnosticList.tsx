@@ -1,6 +1,6 @@
 // Plain-word diagnostics and the horizons flagged as far off the line. Their texts are live (panels/liveText.tsx):
 // a drag changes an r² or a distance off the line without the pane rendering. Which items and flags are shown is
-// judged again when the gesture ends.
+// judged again when the gesture ends; each diagnostic's text follows the one with its key.
 import type { Diagnostic } from './diagnostics';
 import { outlierFlagDistance, type OutlierFlag } from './outlierFlags';
 import type { AreaUnit } from '../../format/formatQuantity';
@@ -15,9 +15,10 @@ export function DiagnosticList({ items, flags, unit, read }: Props) {
   if (items.length === 0 && flags.length === 0) return null;
   return (
     <div className="diagnostics" data-testid="diagnostics">
-      {items.map((d, i) => (
-        <LiveText as="p" key={i} className={`diagnostic ${d.level}`} read={(doc, gs) => {
-          const now = read(doc, gs).diag[i];
+      {items.map((d) => (
+        // Matched by key, not by place: a diagnostic that appears above it mid-drag does not hand it another's text.
+        <LiveText as="p" key={d.key} className={`diagnostic ${d.level}`} read={(doc, gs) => {
+          const now = read(doc, gs).diag.find((x) => x.key === d.key);
           return now && now.level === d.level ? now.text : d.text;
         }} />
       ))}

@@ -7,6 +7,10 @@ import { lineArrays, type FlatSection } from '../../../src/core/model/section';
 import { methodExample, triangleHorizon } from '../../core/analysis/sections';
 import { expectClose } from '../../expectClose';
 import { summaryRows } from '../../../src/panels/interpretation/summaryRows';
+import type { Section } from '../../../src/core/model/section';
+import type { LeftOutHorizon } from '../../../src/core/analysis/analyseDocSection';
+import { sectionToProjectDoc } from '../../../src/core/model/migrations/sectionToProjectDoc';
+import { selectAnalysis } from '../../../src/state/selectors';
 
 describe('diagnostics(docSection, outcome, leftOut)', () => {
   it('lists each left-out horizon as "left out: <name> — <reason>"', () => {
@@ -35,5 +39,32 @@ describe('diagnostics(docSection, outcome, leftOut)', () => {
     const poor = diagnostics(docSection, outcome).find((d) => d.text.startsWith('Poor fit'))!;
     expect(poor.text).toContain(`r² = ${r2.text}.`);
     expect(r2.text).toBe('0.6400');
+  });
+});
+
+describe('diagnostic keys', () => {
+  // A box fold whose crest is projected (the analytic case of tests/format/analysisNotes.test.ts: 100·40 of the
+  // 5000 m² excess area, 80 %); widening the crest to 50 m changes the share (5000 of 5500 m², 90.9 %) and the
+  // length, and a horizon left out adds a
+  // diagnostic above the note. The note's key must stay the same, so the pane's live text follows its own note.
+  const box = (flank: number): Section => ({ units: 'm', pins: [0, 100], horizons: [
+    { name: 'Eroded', line: [[0, 0], [20, 0], [20 + flank, 100], [80 - flank, 100], [80, 0], [100, 0]], regional: [[0, 0], [100, 0]], projected: [[2, 3]] },
+    { name: 'Lower', line: [[0, -200], [40, -200], [50, -150], [60, -200], [100, -200]], regional: [[0, -200], [100, -200]] },
+  ] });
+  const projectedNote = (s: Section, leftOut: LeftOutHorizon[] = []) => {
+    const da = selectAnalysis(sectionToProjectDoc(s));
+    const all = diagnostics(da.docSection, da.outcome, leftOut);
+    expect(new Set(all.map((d) => d.key)).size).toBe(all.length);
+    const i = all.findIndex((d) => d.text.includes('projected (interpreted)'));
+    return { i, d: all[i] };
+  };
+
+  it('a note keeps its key while its numbers change and when a diagnostic appears before it', () => {
+    const before = projectedNote(box(10));
+    const raised = projectedNote(box(5), [{ id: 'x', name: 'Top X', reason: 'the regional misses the left pin' }]);
+    expect(before.d.text).toContain('80 %');
+    expect(raised.d.text).toContain('90.9 %');
+    expect(raised.i).toBe(before.i + 1);
+    expect(raised.d.key).toBe(before.d.key);
   });
 });
