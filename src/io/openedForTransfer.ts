@@ -5,16 +5,10 @@ import type { ProjectDoc } from '../core/model/projectDoc';
 import { packDoc, packedDocBuffers, unpackDocInSteps, type PackedDoc } from './packedDoc';
 import { parseProjectText, type OpenedProject, type ScanBytes } from './projectFile';
 
-/** What the page asks the opening worker: the file chosen, and the name to use in messages. */
-export interface OpenWorkerRequest { file: File; name: string }
-
 /** OpenedProject with the document's lines packed. */
 export type PackedOpened =
   | { ok: true; doc: PackedDoc; scan: ScanBytes | null; kind: 'project' | 'section'; migratedFrom: number | null; notes: string[] }
   | { ok: false; message: string };
-
-/** The worker's messages: the file is read (checking starts), it is opened (or not), or the disk refused it. */
-export type OpenWorkerReply = { type: 'read' } | { type: 'opened'; opened: PackedOpened } | { type: 'unreadable' };
 
 /** Returns the file text opened by parseProjectText with the lines packed, and the buffers to transfer. */
 export function openedForTransfer(text: string, fileName: string): { opened: PackedOpened; transfer: ArrayBuffer[] } {

@@ -3,21 +3,10 @@
 // file to scan pixels took seconds of one main-thread task for a document of a million vertices. The
 // document comes back with its lines packed (io/packedDoc.ts) in transferred buffers, and the scan's bytes
 // transferred too; the page unpacks the lines a few at a time.
-import { openedForTransfer, type OpenWorkerReply, type OpenWorkerRequest } from '../openedForTransfer';
+import { openedForTransfer, type PackedOpened } from '../openedForTransfer';
+import { serveFiles } from '../fileWorker';
 
-function reply(msg: OpenWorkerReply, transfer: Transferable[] = []): void {
-  (self as unknown as { postMessage(m: unknown, t: Transferable[]): void }).postMessage(msg, transfer);
-}
-
-self.onmessage = async (e: MessageEvent<OpenWorkerRequest>) => {
-  const { file, name } = e.data;
-  let text: string;
-  try {
-    text = await file.text();
-  } catch {
-    return reply({ type: 'unreadable' });
-  }
-  reply({ type: 'read' });
+serveFiles<{ name: string }, PackedOpened>((text, { name }) => {
   const { opened, transfer } = openedForTransfer(text, name);
-  reply({ type: 'opened', opened }, transfer);
-};
+  return { value: opened, transfer };
+});
