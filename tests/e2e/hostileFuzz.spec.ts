@@ -6,43 +6,14 @@ import type { Page } from '@playwright/test';
 import { download } from './download';
 import { test, expect } from './guard';
 import { gotoStarted } from './startup';
+import { mulberry32, mutateBytes, mutateText as mutate } from '../fixtures/fuzz/mutate';
 
 // FUZZ_CASES=1000 runs the full fuzz (1,000 files per input) on request; CI runs the sample of 40.
 const CASES = Math.max(2, Math.floor(Number(process.env.FUZZ_CASES ?? 40) / 2) * 2);
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 const NASTY = ['\u0000', '"', '<', '>', '&#0;', ']]>', '{', '[', '1e309', '-0', 'NaN', '\ud800', '<!ENTITY a "aaaa">', '&a;'];
-
 /** Truncations, insertions, deletions, long repeats (oversized) and changed characters. */
-function mutateText(text: string, rnd: () => number): string {
-  let t = text;
-  for (let s = 1 + Math.floor(rnd() * 4); s > 0; s--) {
-    const at = Math.floor(rnd() * (t.length + 1));
-    const kind = Math.floor(rnd() * 5);
-    if (kind === 0) t = t.slice(0, at);
-    else if (kind === 1) t = t.slice(0, at) + NASTY[Math.floor(rnd() * NASTY.length)] + t.slice(at);
-    else if (kind === 2) t = t.slice(0, at) + t.slice(at + Math.floor(rnd() * 20));
-    else if (kind === 3) t = t.slice(0, at) + t.slice(at, at + 40).repeat(1 + Math.floor(rnd() * 20_000)) + t.slice(at);
-    else t = t.slice(0, at) + String.fromCharCode(Math.floor(rnd() * 0x3000)) + t.slice(at + 1);
-  }
-  return t;
-}
-
-function mutateBytes(bytes: Uint8Array, rnd: () => number): Uint8Array {
-  const out = Uint8Array.from(bytes.subarray(0, Math.max(1, Math.floor(rnd() < 0.3 ? rnd() * bytes.length : bytes.length))));
-  for (let k = 1 + Math.floor(rnd() * 8); k > 0; k--) out[Math.floor(rnd() * out.length)] = Math.floor(rnd() * 256);
-  return out;
-}
+const mutateText = (text: string, rnd: () => number) => mutate(text, rnd, NASTY, 20_000);
 
 const GEOJSON = JSON.stringify({ type: 'FeatureCollection', units: 'm', features: [{ type: 'Feature', properties: { name: 'Top' }, geometry: { type: 'LineString', coordinates: [[0, 10], [500, 40], [1000, 10]] } }] });
 const SVG = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 100 50"><path id="Top" d="M0 10 L50 20 L100 10"/><polyline id="Base" points="0,40 50,45 100,40"/><path d="M0 0 A5 5 0 0 1 10 10"/></svg>';

@@ -73,6 +73,17 @@ async function grabFlatRegional(page: Page, cam: Cam): Promise<{ x: number; y: n
   return grab;
 }
 
+
+/** The project saved from the page, analysed in Node by the engine the app runs. */
+async function savedAnalysis(page: Page) {
+  await page.getByTestId('menu-project').click();
+  const opened = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
+  if (!opened.ok) throw new Error(opened.message);
+  const d = analyseDoc(opened.doc);
+  if (!d.outcome?.ok) throw new Error('the saved document has no analysis');
+  return d.outcome.analysis;
+}
+
 test('a regional is typed at the pins, flat, or through a point at a dip; drag and fields stay in step; one undo per value', async ({ page }) => {
   const cam = await setUp(page);
   const summary = page.getByTestId('regional-summary');
@@ -256,12 +267,7 @@ test('the numbers written while a regional is dragged are those the panes show a
   expect(await liveTexts()).toEqual(held);
 
   // The one formatter over the saved document's analysis (the engine the app runs, here in Node).
-  await page.getByTestId('menu-project').click();
-  const opened = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
-  if (!opened.ok) throw new Error(opened.message);
-  const d = analyseDoc(opened.doc);
-  if (!d.outcome?.ok) throw new Error('the saved document has no analysis');
-  const a = d.outcome.analysis;
+  const a = await savedAnalysis(page);
   const unit = tableAreaUnit(a);
   await expect(area).toHaveText(formatArea(a.horizons[0].excessArea, a.units, unit));
   const column = HORIZON_COLUMNS.find((c) => c.key === 'excessArea')!;
@@ -312,12 +318,7 @@ test('a section that balances exactly, its top regional dragged: the intervals a
   expect(await liveTexts()).toEqual(held);
 
   // The saved document's analysis through the one formatter (the engine the app runs, here in Node).
-  await page.getByTestId('menu-project').click();
-  const opened = parseProjectText((await download(page, () => page.getByTestId('save-project').click())).toString('utf8'));
-  if (!opened.ok) throw new Error(opened.message);
-  const d = analyseDoc(opened.doc);
-  if (!d.outcome?.ok) throw new Error('the saved document has no analysis');
-  const a = d.outcome.analysis;
+  const a = await savedAnalysis(page);
   const depthRow = summaryRowsOf(a).find((r) => r.key === 'detachment-depth')!;
   await expect(page.getByTestId('interval-detachment-depth')).toHaveText(`95%: ${depthRow.interval}`);
   await expect(page.getByTestId('scenario-reference')).toContainText(`${formatLength(a.referenceElevation, a.units)}, the highest regional of`);

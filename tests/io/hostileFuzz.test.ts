@@ -10,6 +10,7 @@ import { sniffImageType } from '../../src/io/sniffImageType';
 import { readSvgLines } from '../../src/io/svgHorizons';
 import { writeTiff } from '../fixtures/scans/writeTiff';
 import { sampleDoc, SAMPLE_SECTION } from './sampleDoc';
+import { mulberry32, mutateBytes, mutateText as mutate } from '../fixtures/fuzz/mutate';
 
 // Generated corrupt and oversized files, 1,000 per input, through the real import functions: each returns a
 // result or a message and never throws. The importers are pure (they take text or bytes and return data), so
@@ -17,41 +18,8 @@ import { sampleDoc, SAMPLE_SECTION } from './sampleDoc';
 // A seeded generator (mulberry32, a public-domain PRNG) makes every run the same cases.
 const CASES = 1000;
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 const NASTY = ['', '\u0000', '"', '[', '{', ']', '}', ',', '1e308', '-1e308', 'NaN', '1e-320', '\ufeff', '=HYPERLINK("x")', '<svg>', '</svg>', '<path d="M0 0 A1 1 0 0 0 ', '&lt;', '\r\n', '9'.repeat(400), '['.repeat(200), 'null', 'true', '"format":"x"'];
-
-/** Returns the text cut, spliced, repeated or sprinkled with hostile fragments at random places. */
-function mutateText(text: string, rnd: () => number): string {
-  let t = text;
-  const steps = 1 + Math.floor(rnd() * 4);
-  for (let s = 0; s < steps; s++) {
-    const at = Math.floor(rnd() * (t.length + 1));
-    const kind = Math.floor(rnd() * 5);
-    if (kind === 0) t = t.slice(0, at);
-    else if (kind === 1) t = t.slice(0, at) + NASTY[Math.floor(rnd() * NASTY.length)] + t.slice(at);
-    else if (kind === 2) t = t.slice(0, at) + t.slice(at + Math.floor(rnd() * 20));
-    else if (kind === 3) t = t.slice(0, at) + t.slice(at, at + 40).repeat(1 + Math.floor(rnd() * 50)) + t.slice(at);
-    else t = t.slice(0, at) + String.fromCharCode(Math.floor(rnd() * 0x3000)) + t.slice(at + 1);
-  }
-  return t;
-}
-
-function mutateBytes(bytes: Uint8Array, rnd: () => number): Uint8Array {
-  const out = Uint8Array.from(bytes.subarray(0, Math.max(1, Math.floor(rnd() < 0.3 ? rnd() * bytes.length : bytes.length))));
-  const flips = 1 + Math.floor(rnd() * 8);
-  for (let k = 0; k < flips; k++) out[Math.floor(rnd() * out.length)] = Math.floor(rnd() * 256);
-  return out;
-}
+const mutateText = (text: string, rnd: () => number) => mutate(text, rnd, NASTY, 50);
 
 /** Runs `read` on CASES mutations; every call must return without throwing, with a result or a non-empty message. */
 function fuzz<T>(seed: number, make: (rnd: () => number) => T, read: (input: T) => { ok: boolean; message?: string } | null): { tried: number; refused: number } {
