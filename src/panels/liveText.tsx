@@ -17,6 +17,8 @@ export type LiveRead = (doc: ProjectDoc, gestureStart: ProjectDoc | null) => str
 interface Entry {
   /** The element whose text is written (null before it is mounted); none for a shape (compared, never written). */
   el: HTMLElement | null | 'shape';
+  /** An input's value is written instead of its text (never while it has the focus: the person is typing there). */
+  value?: boolean;
   read: LiveRead;
   /** A shape's value as last rendered. */
   rendered: string | null;
@@ -31,6 +33,7 @@ function writeLive(): void {
   const { doc, gestureStart } = useDocStore.getState();
   if (!gestureStart || useShownDoc.getState().doc === doc) return;
   const writes: [HTMLElement, string][] = [];
+  const values: [HTMLInputElement, string][] = [];
   for (const e of entries) {
     const text = e.read(doc, gestureStart);
     if (e.el === 'shape') {
@@ -39,9 +42,13 @@ function writeLive(): void {
       continue;
     } else if (text === null) {
       return showDocNow();
+    } else if (e.value) {
+      const input = e.el as HTMLInputElement;
+      if (input.value !== text && input !== document.activeElement) values.push([input, text]);
     } else if (e.el.textContent !== text) writes.push([e.el, text]);
   }
   for (const [el, text] of writes) writeText(el, text);
+  for (const [input, text] of values) input.value = text;
 }
 
 /**
@@ -63,13 +70,18 @@ useDocStore.subscribe((s, prev) => {
 });
 
 /** Keeps the component's entry registered while it is mounted, with its latest element, reader and rendered shape. */
-function useEntry(el: { current: HTMLElement | null } | null, read: LiveRead, rendered: string | null): void {
+function useEntry(el: { current: HTMLElement | null } | null, read: LiveRead | null, rendered: string | null, value = false): void {
   const entry = useRef<Entry | null>(null);
   useLayoutEffect(() => {
+    if (!read) {
+      if (entry.current) entries.delete(entry.current);
+      return;
+    }
     const e = entry.current ?? (entry.current = { el: null, read, rendered });
     e.el = el ? el.current : 'shape';
     e.read = read;
     e.rendered = rendered;
+    e.value = value;
     entries.add(e);
   });
   useLayoutEffect(() => () => {
@@ -108,4 +120,13 @@ export function LiveText({ read, as = 'span', className, title, testId }: LiveTe
 export function useLiveShape(read: (doc: ProjectDoc, gestureStart: ProjectDoc | null) => string): void {
   const { doc, gestureStart } = useShownDoc();
   useEntry(null, read, read(doc, gestureStart));
+}
+
+/**
+ * Has an input's value follow the store's document after each move during a gesture, as a LiveText's text does
+ * (`read` gives the value's text; the input renders the shown document's own). Not while the input has the focus.
+ * With `read` null the input is not followed.
+ */
+export function useLiveValue(ref: { current: HTMLInputElement | null }, read: LiveRead | null): void {
+  useEntry(ref, read, null, true);
 }

@@ -1,7 +1,8 @@
 // A number field that commits on Enter or when it loses focus (one undo entry per value typed). Text that
 // is not a usable number keeps the value shown and says so (readNumberInput); Esc drops the typing quietly.
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { useSessionStore } from '../../state/sessionStore';
+import { useLiveValue, type LiveRead } from '../liveText';
 import { readNumberInput } from './readNumberInput';
 
 export { parseNumber } from './readNumberInput';
@@ -15,11 +16,19 @@ interface Props {
   width?: number;
   /** Why a finite value is refused (shown as a message), or null to accept it. */
   check?: (v: number) => string | null;
+  /**
+   * The value's text in a document (the text `value` shows): with it the field follows a gesture without a render
+   * (panels/liveText.tsx) while `value` is read from the shown document.
+   */
+  live?: LiveRead;
 }
 
 const textOf = (v: number | null) => (v === null ? '' : String(v));
 
-export function NumberField({ value, onCommit, label, testId, focusKey, width = 84, check }: Props) {
+/** A field's text for a value: what `live` readers give too. */
+export const numberFieldText = textOf;
+
+export function NumberField({ value, onCommit, label, testId, focusKey, width = 84, check, live }: Props) {
   const [text, setText] = useState(textOf(value));
   const [shown, setShown] = useState(value);
   const ref = useRef<HTMLInputElement>(null);
@@ -39,6 +48,11 @@ export function NumberField({ value, onCommit, label, testId, focusKey, width = 
     }, 0);
     return () => window.clearTimeout(t);
   }, [focusKey]);
+  useLiveValue(ref, live ?? null);
+  useLayoutEffect(() => {
+    // A gesture may have written the value in place: the render's text is put back even where React sees no change.
+    if (ref.current && ref.current.value !== text) ref.current.value = text;
+  });
   const discard = useRef(false);
   const commit = () => {
     const dropped = discard.current || !edited.current;
