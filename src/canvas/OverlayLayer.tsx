@@ -1,6 +1,7 @@
 // Handles, previews and calibration marks drawn above the shapes (section workspace). Handles are one
 // custom shape each (thousands of vertices stay cheap), for the vertices in view only (handlesInView); the tool preview is drawn from the ephemeral
-// preview outside React and redrawn with batchDraw when it changes.
+// preview outside React and redrawn with batchDraw when it changes. The proposed detachment (DetachmentMarks) is
+// drawn first, under them, in the same layer.
 import { memo, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { Label, Layer, Shape, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
@@ -16,6 +17,7 @@ import { getToolPreview, subscribeToolPreview } from './toolDispatch';
 import { pinLinePx } from './pinLinePx';
 import { MARK_COLOURS } from '../core/model/horizonPalette';
 import { useShallow } from 'zustand/react/shallow';
+import { DetachmentMarks } from './DetachmentMarks';
 
 type Ctx = Konva.Context;
 
@@ -248,6 +250,7 @@ export function OverlayLayer() {
   const scale = useSessionStore((s) => s.camera.scale);
   return (
     <Layer listening={false}>
+      <DetachmentMarks />
       <FaultHandles />
       <VertexHandles />
       <RegionalHandles scale={scale} />

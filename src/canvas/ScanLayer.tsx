@@ -9,6 +9,7 @@
 // picture of the scan is final once it reads "tiles" (the browser tests wait for that instead of for time).
 // A task after the layer first draws a newly opened scan (the frame that shows it is then done), it says so
 // (noteScanShown): the scan's reduced views start then, and the benchmark reads the mark that sets.
+// The optional grid (GridShape) is drawn over the scan in the same layer: both change only with the camera.
 import { memo, useEffect, useRef, useSyncExternalStore, type RefObject } from 'react';
 import Konva from 'konva';
 import { Layer, Group, Rect } from 'react-konva';
@@ -17,6 +18,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { getScan, scanCacheVersion, subscribeScans } from '../state/scanCache';
 import { TILE_PX, visibleTiles } from '../state/scanTiles';
 import { getTilePyramid, noteScanShown, pyramidsVersion, subscribePyramids } from '../state/scanTilesPyramid';
+import { GridShape } from './GridShape';
 
 /** Screen pixels past the view's edge that are kept drawn, so a short pan never shows a gap. */
 const MARGIN_PX = 64;
@@ -119,6 +121,7 @@ export const ScanLayer = memo(function ScanLayer({ viewRef }: { viewRef: RefObje
     <Layer listening={false} ref={layerRef}>
       <Rect x={0} y={0} width={scan.widthPx} height={scan.heightPx} fill="#ffffff" perfectDrawEnabled={false} />
       <Group ref={groupRef} />
+      <GridShape />
     </Layer>
   );
 });

@@ -13,9 +13,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { zoomAbout } from '../state/camera';
 import { ScanLayer } from './ScanLayer';
 import { ShapesLayer } from './ShapesLayer';
-import { DetachmentLayer } from './DetachmentLayer';
 import { OverlayLayer } from './OverlayLayer';
-import { GridLayer } from './GridLayer';
 import { CursorReadout } from './CursorReadout';
 import { usePinchZoom } from './usePinchZoom';
 import { toolPointerDown, useToolDispatch } from './toolDispatch';
@@ -144,9 +142,7 @@ export function SectionView() {
         onPointerLeave={endPan}
       >
         <ScanLayer viewRef={boxRef} />
-        <GridLayer />
         <ShapesLayer />
-        <DetachmentLayer />
         <OverlayLayer />
       </Stage>
       <CursorReadout />

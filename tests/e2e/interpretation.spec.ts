@@ -236,13 +236,18 @@ function expectFourFigures(displayed: number, value: number): void {
 
 interface Shown { strip: number; elevation: number; depth: number; displacement: number; graph: number; label: string; lineRow: number }
 
-/** The detachment drawn on the section: its label (canvas text) and the median screen row of its line right of the view's middle. */
+/**
+ * The detachment drawn on the section: its label (canvas text) and the median screen row of its line right of the
+ * view's middle. Its group is drawn alone at the view's size (the overlay's canvas also holds the handles, which a
+ * regional's colour can make as red as the line).
+ */
 async function sectionDetachment(page: Page): Promise<{ label: string; lineRow: number }> {
   return page.evaluate(`(() => {
     const stage = window.Konva.stages[0];
     const text = stage.find('Text').find((t) => t.text().startsWith('Proposed detachment'));
     if (!text) return { label: '', lineRow: NaN };
-    const canvas = text.getLayer().getCanvas()._canvas;
+    const marks = stage.findOne('.detachment');
+    const canvas = marks.toCanvas({ x: 0, y: 0, width: stage.width(), height: stage.height(), pixelRatio: window.devicePixelRatio || 1 });
     const ctx = canvas.getContext('2d');
     const ratio = canvas.width / stage.width();
     const rows = [];
@@ -282,7 +287,7 @@ function expectShownMatches(v: Shown, a: SectionAnalysis): void {
   expectRounded(v.depth, ad.detachmentDepth!);
   expectRounded(v.displacement, ad.displacement);
   expectRounded(v.graph, ad.detachmentDepth!);
-  // The label on the section (DetachmentLayer): elevation, then depth below the reference, rounded as the strip.
+  // The label on the section (DetachmentMarks): elevation, then depth below the reference, rounded as the strip.
   const m = /^Proposed detachment (-?\d+(?:\.\d+)?) m\ndepth (-?\d+(?:\.\d+)?) m below (-?\d+(?:\.\d+)?) m/.exec(v.label.replace(/\u2212/g, '-'));
   expect(m, `label "${v.label}"`).not.toBeNull();
   expectRounded(Number(m![1]), ad.detachmentElevation!);

@@ -1,9 +1,11 @@
 // An optional grid in section units above the scan, with labels along the view's top and left edges.
 // Drawn in screen pixels (lines stay one pixel wide at every zoom); it reads the camera when the layer
-// draws, so panning redraws it without re-rendering React.
+// draws, so panning redraws it without re-rendering React. It is a shape of the scan's layer (ScanLayer), not a
+// canvas of its own: the two change together (with the camera), and one full-view canvas fewer is sent to the
+// screen in every frame.
 import { memo } from 'react';
 import type Konva from 'konva';
-import { Layer, Shape } from 'react-konva';
+import { Shape } from 'react-konva';
 import { useDocStore } from '../state/docStore';
 import { useFittedCalibration } from '../state/useFittedCalibration';
 import { useSessionStore } from '../state/sessionStore';
@@ -57,14 +59,10 @@ function drawGrid(ctx: Konva.Context, shape: Konva.Shape, fit: FittedCalibration
   }
 }
 
-export const GridLayer = memo(function GridLayer() {
+export const GridShape = memo(function GridShape() {
   const show = useDocStore((s) => s.doc.settings.showGrid && s.doc.scan !== null);
   const unit = useDocStore((s) => s.doc.units);
   const fit = useFittedCalibration();
-  // The layer stays mounted (its place in the stack is fixed); only its content comes and goes.
-  return (
-    <Layer listening={false}>
-      {show && <Shape listening={false} perfectDrawEnabled={false} sceneFunc={(ctx, shape) => drawGrid(ctx, shape, fit, unit)} />}
-    </Layer>
-  );
+  if (!show) return null;
+  return <Shape listening={false} perfectDrawEnabled={false} sceneFunc={(ctx, shape) => drawGrid(ctx, shape, fit, unit)} />;
 });

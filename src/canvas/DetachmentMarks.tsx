@@ -2,8 +2,10 @@
 // one live analysis, so it follows a regional or pin while it is dragged. Per-frame work stays out of React: a store
 // subscription writes the line, band and label into their Konva nodes and asks the layer for one batched draw; React
 // renders only when what is drawn changes kind (a band comes or goes, the detachment appears or goes).
+// A group at the bottom of the overlay's layer (OverlayLayer), not a canvas of its own: during a regional or pin
+// drag it changes with the handles over it, so the two are one canvas redrawn and sent to the screen, not two.
 import { memo, useLayoutEffect, useRef, useState } from 'react';
-import { Label, Layer, Line, Tag, Text } from 'react-konva';
+import { Group, Label, Line, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
@@ -52,9 +54,9 @@ function detachmentDrawn(doc: ProjectDoc, gestureStart: ProjectDoc | null): Draw
 type Kind = 'none' | 'line' | 'band';
 const kindOf = (d: Drawn | null): Kind => (d ? (d.band ? 'band' : 'line') : 'none');
 
-export const DetachmentLayer = memo(function DetachmentLayer() {
+export const DetachmentMarks = memo(function DetachmentMarks() {
   const [kind, setKind] = useState<Kind>('none');
-  const layer = useRef<Konva.Layer>(null);
+  const group = useRef<Konva.Group>(null);
   const band = useRef<Konva.Line>(null);
   const line = useRef<Konva.Line>(null);
   const label = useRef<Konva.Label>(null);
@@ -95,7 +97,7 @@ export const DetachmentLayer = memo(function DetachmentLayer() {
       // A new kind is mounted by React, and written by the layout effect below.
       if (want !== kind) return setKind(want);
       write();
-      layer.current?.batchDraw();
+      group.current?.getLayer()?.batchDraw();
     };
     update();
     const stop = [useDocStore.subscribe(update), useSessionStore.subscribe(update), useCrossingChecks.subscribe(update)];
@@ -103,7 +105,7 @@ export const DetachmentLayer = memo(function DetachmentLayer() {
   }, [kind]);
 
   return (
-    <Layer ref={layer} listening={false}>
+    <Group ref={group} name="detachment" listening={false}>
       {kind === 'band' && <Line ref={band} closed fill={COLOUR} opacity={0.14} perfectDrawEnabled={false} listening={false} />}
       {kind !== 'none' && (
         <>
@@ -114,6 +116,6 @@ export const DetachmentLayer = memo(function DetachmentLayer() {
           </Label>
         </>
       )}
-    </Layer>
+    </Group>
   );
 });
