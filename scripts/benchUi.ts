@@ -16,7 +16,8 @@
 //   allocator (scripts/rendererMemory.ts); last, the renderer once the largest scan is replaced by a 1 MP one.
 // - export PNG at each offered size (--png-sizes screen,a4-150,a4-300,a3-300) and scan size: the button's click event →
 //   the file handed to the browser's download, both in the page (Playwright's click → download event in the note);
-//   floor: drawing the scan at the PNG's size and encoding that canvas as PNG in the same page; with the longest
+//   floor: the same figure (the markup of the app's SVG export) drawn by the browser with the scan at the PNG's
+//   resolution through its matrix, and that canvas encoded as PNG, in the same page (exportFloor); with the longest
 //   main-thread task and the main thread's heap peak against the PNG's pixel bytes; the app's own time (its click
 //   handler → the file handed to the download, without Playwright's click and download event) and each step's
 //   share (src/io/exportFigure.ts PNG_STEP_MARK). --no-documents leaves out the big-document rows.
@@ -228,20 +229,92 @@ async function openScan(page: Page, name: string, profileTag?: string): Promise<
   return { ms, longest: await longestSince(page, t0), reduced };
 }
 
-// Export floor: the scan drawn at the figure's size onto a canvas and that canvas encoded as PNG.
+/**
+ * The figure the PNG export draws, for its floor: the app's own SVG export of the same figure (its markup), split
+ * where the scan goes into the part below the scan and the part above it (each a whole SVG document without the
+ * scan), with the scan's place (matrix, opacity) and the panel it is clipped to; kept in the page as
+ * window.__floorFigure. Its file size is returned.
+ */
+async function figureForFloor(page: Page): Promise<number> {
+  await page.getByTestId('menu-export').click();
+  const [download] = await Promise.all([page.waitForEvent('download', { timeout: 300_000 }), page.getByTestId('export-svg').click()]);
+  await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
+  const path = await download.path();
+  check(path, 'the SVG export produced no file');
+  const { readFileSync } = await import('node:fs');
+  const svg = readFileSync(path, 'latin1');
+  const at = svg.indexOf('<image class="scan"');
+  check(at > 0, 'the SVG export holds no scan');
+  const end = svg.indexOf('"/>', svg.indexOf('href="', at) + 6) + 3;
+  const before = svg.slice(0, at);
+  const groupAt = before.lastIndexOf('<g ');
+  const headEnd = svg.indexOf('</defs>') + '</defs>'.length;
+  const image = svg.slice(at, svg.indexOf('href="', at));
+  const matrix = /transform="matrix\(([^)]*)\)"/.exec(image)?.[1].split(/[\s,]+/).map(Number);
+  const opacity = Number(/opacity="([^"]*)"/.exec(image)?.[1] ?? 1);
+  const clip = /<clipPath id="panel-clip"><rect x="([^"]*)" y="([^"]*)" width="([^"]*)" height="([^"]*)"\/>/.exec(svg);
+  const size = /<svg[^>]*\bwidth="([\d.]+)"[^>]*\bheight="([\d.]+)"/.exec(svg) ?? /viewBox="0 0 ([\d.]+) ([\d.]+)"/.exec(svg);
+  check(matrix?.length === 6 && matrix.every(Number.isFinite) && clip && size && groupAt > 0 && headEnd > 0, 'the SVG export has no scan place, panel or size');
+  const figure = {
+    under: `${before.slice(0, groupAt)}</svg>`, over: `${svg.slice(0, headEnd)}${before.slice(groupAt)}${svg.slice(end)}`,
+    matrix, opacity, panel: clip.slice(1, 5).map(Number), width: Number(size[1]), height: Number(size[2]),
+  };
+  await page.evaluate(`window.__floorFigure = ${JSON.stringify(figure)}`);
+  return svg.length;
+}
+
+/**
+ * Export floor: the same figure drawn and encoded at w × h in the same page, by the browser's own means, without the
+ * app's code: white, the figure's part below the scan (its SVG markup, rasterised by the browser), the scan through
+ * its matrix clipped to the panel, the part above, then the canvas encoded as PNG (OffscreenCanvas.convertToBlob, as
+ * the app's worker does). The scan is drawn from a copy already at the PNG's resolution, made before the timing (the
+ * app draws from its reduced views, made when the scan opened), and the markup is parsed and decoded before the
+ * timing (the app writes it when the Export menu opens). Returns the time, the drawing's share and the PNG's size in bytes.
+ */
 const exportFloor = (page: Page, w: number, h: number) => page.evaluate(`(async () => {
-  const b = await createImageBitmap(window.__scanFile);
+  const f = window.__floorFigure;
+  const svgImage = async (markup) => {
+    const img = new Image(f.width, f.height);
+    img.src = URL.createObjectURL(new Blob([markup], { type: 'image/svg+xml' }));
+    await img.decode();
+    return img;
+  };
+  const [under, over] = [await svgImage(f.under), await svgImage(f.over)];
+  const [a, b, c, d] = f.matrix;
+  const [sx, sy] = [${w} / f.width, ${h} / f.height];
+  const k = Math.min(1, Math.max(Math.hypot(a * sx, b * sy), Math.hypot(c * sx, d * sy)));
+  const full = await createImageBitmap(window.__scanFile);
+  const scan = await createImageBitmap(full, { resizeWidth: Math.max(1, Math.round(full.width * k)), resizeHeight: Math.max(1, Math.round(full.height * k)), resizeQuality: 'high' });
+  const [kx, ky] = [full.width / scan.width, full.height / scan.height];
+  full.close();
   const t = performance.now();
-  const c = new OffscreenCanvas(${w}, ${h});
-  const ctx = c.getContext('2d');
+  const cv = new OffscreenCanvas(${w}, ${h});
+  const ctx = cv.getContext('2d');
   ctx.fillStyle = '#ffffff';
   ctx.fillRect(0, 0, ${w}, ${h});
-  ctx.drawImage(b, 0, 0, ${w}, ${h});
-  await c.convertToBlob({ type: 'image/png' });
+  ctx.scale(sx, sy);
+  ctx.drawImage(under, 0, 0, f.width, f.height);
+  ctx.save();
+  ctx.beginPath();
+  ctx.rect(f.panel[0], f.panel[1], f.panel[2], f.panel[3]);
+  ctx.clip();
+  ctx.transform(f.matrix[0], f.matrix[1], f.matrix[2], f.matrix[3], f.matrix[4], f.matrix[5]);
+  ctx.scale(kx, ky);
+  ctx.globalAlpha = f.opacity;
+  ctx.imageSmoothingQuality = 'high';
+  ctx.drawImage(scan, 0, 0);
+  ctx.restore();
+  ctx.drawImage(over, 0, 0, f.width, f.height);
+  // One pixel read back makes the canvas draw what it recorded, so the drawing and the encoding are timed apart.
+  ctx.getImageData(0, 0, 1, 1);
+  const drawn = performance.now();
+  const png = await cv.convertToBlob({ type: 'image/png' });
   const ms = performance.now() - t;
-  b.close();
-  return ms;
-})()`) as Promise<number>;
+  scan.close();
+  URL.revokeObjectURL(under.src);
+  URL.revokeObjectURL(over.src);
+  return { ms, draw: drawn - t, bytes: png.size };
+})()`) as Promise<{ ms: number; draw: number; bytes: number }>;
 
 /** The PNG sizes the export offers (src/io/exportFigure.ts PNG_SIZES), or those --png-sizes names. */
 const PNG_SIZES = [['screen', 1400, 990], ['a4-150', 1754, 1240], ['a4-300', 3508, 2480], ['a3-300', 4961, 3508]] as const;
@@ -773,7 +846,7 @@ async function scans(page: Page): Promise<void> {
     const openLongest: number[] = [];
     const reduced: number[] = [];
     const floor: number[] = [];
-    const exp = EXPORT_SIZES.map(() => ({ ms: [] as number[], longest: [] as number[], floor: [] as number[], heap: [] as number[], steps: [] as Map<string, number>[] }));
+    const exp = EXPORT_SIZES.map(() => ({ ms: [] as number[], longest: [] as number[], floor: [] as number[], heap: [] as number[], steps: [] as Map<string, number>[], bytes: [] as number[], floorBytes: [] as number[], floorDraw: [] as number[] }));
     await makeScan(page, side, `bench-${mp}mp.jpg`);
     // The heavy sizes once: a 100 MP scan takes seconds per step on a shared machine.
     const runs = mp >= 100 ? 1 : RUNS;
@@ -802,13 +875,18 @@ async function scans(page: Page): Promise<void> {
           }
         }
       }
+      if (EXPORT_SIZES.length > 0 && run === 0) await figureForFloor(page);
       for (const [k, [id, w, h]] of EXPORT_SIZES.entries()) {
         const e = await exportPng(page, id);
         exp[k].ms.push(e.ms);
         exp[k].longest.push(e.longest);
         exp[k].heap.push(e.heapPeak);
         exp[k].steps.push(e.steps);
-        exp[k].floor.push(await exportFloor(page, w, h));
+        exp[k].bytes.push(e.bytes);
+        const fl = await exportFloor(page, w, h);
+        exp[k].floor.push(fl.ms);
+        exp[k].floorBytes.push(fl.bytes);
+        exp[k].floorDraw.push(fl.draw);
       }
     }
     report({ work: `open a ${mp} MP scan (${side} × ${side} JPEG)`, ms: median(open), floor: median(floor), longest: median(openLongest), note: `floor: createImageBitmap of the file; target ≤ 1.3×${runs < RUNS ? '; 1 run' : ''}` });
@@ -817,7 +895,7 @@ async function scans(page: Page): Promise<void> {
       const pixelMb = (w * h * 4) / 1048576;
       report({
         work: `export PNG ${w} × ${h} with a ${mp} MP scan`, ms: median(exp[k].ms), floor: median(exp[k].floor), longest: median(exp[k].longest),
-        note: `in the app (its click handler → the file handed over) ${median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)).toFixed(0)} ms = ${(median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)) / median(exp[k].floor)).toFixed(2)}×; ${DRIVER_TIME} ${median(exp[k].steps.map((st) => st.get(DRIVER_TIME) ?? 0)).toFixed(0)} ms; heap peak +${(median(exp[k].heap) / 1048576).toFixed(1)} MB (target < 2 × ${pixelMb.toFixed(1)} MB pixels)${runs < RUNS ? '; 1 run' : ''}; steps (ms): ${stepsNote(exp[k].steps)}`,
+        note: `in the app (its click handler → the file handed over) ${median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)).toFixed(0)} ms = ${(median(exp[k].steps.map((st) => st.get(APP_TIME) ?? 0)) / median(exp[k].floor)).toFixed(2)}×; ${DRIVER_TIME} ${median(exp[k].steps.map((st) => st.get(DRIVER_TIME) ?? 0)).toFixed(0)} ms; heap peak +${(median(exp[k].heap) / 1048576).toFixed(1)} MB (target < 2 × ${pixelMb.toFixed(1)} MB pixels); PNG ${(median(exp[k].bytes) / 1e6).toFixed(2)} MB, the floor's ${(median(exp[k].floorBytes) / 1e6).toFixed(2)} MB (floor: draw ${median(exp[k].floorDraw).toFixed(0)} · encode ${(median(exp[k].floor) - median(exp[k].floorDraw)).toFixed(0)} ms)${runs < RUNS ? '; 1 run' : ''}; steps (ms): ${stepsNote(exp[k].steps)}`,
       });
     }
     if (mp === 1 || mp === big) {
