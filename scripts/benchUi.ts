@@ -83,7 +83,7 @@ const FIRST_MOVE_TRACE = flag('first-move-trace');
 const WITH_CONTINUOUS = !process.argv.includes('--no-continuous');
 /** A folder for a Chromium trace of each continuous drag (`drag-12x<n>.trace.json`), taken without the CPU profiler (which slows a move about 2×); one move is printed by phase (scripts/dragTrace.ts). */
 const DRAG_TRACE = flag('drag-trace');
-/** With --drag-trace, also list what invalidated style, layout and paint (slows the traced drag several times over). */
+/** With --drag-trace or --first-move-trace, also list what invalidated style, layout and paint (slows the traced moves several times over). */
 const DRAG_INVALIDATIONS = process.argv.includes('--drag-invalidations');
 
 class BenchFailure extends Error {}
@@ -561,7 +561,7 @@ async function waitedDrag(page: Page, grip: Grip, shift: boolean, moves: number,
     }
     // The second move is traced too, to set beside the first.
     const traced = FIRST_MOVE_TRACE && k <= 1;
-    if (traced) await page.context().browser()!.startTracing(page, { categories: FIRST_MOVE_CATEGORIES });
+    if (traced) await page.context().browser()!.startTracing(page, { categories: DRAG_INVALIDATIONS ? [...FIRST_MOVE_CATEGORIES, INVALIDATION_CATEGORY] : FIRST_MOVE_CATEGORIES });
     await page.mouse.move(grip.gx, y);
     const r = (await page.evaluate('window.__drag.done.then(() => ({ t0: window.__drag.t0, t1: window.__drag.t1, t2: window.__drag.t2 }))')) as { t0: number; t1: number; t2: number };
     if (traced) {
@@ -647,6 +647,19 @@ function printMoveTrace(trace: { traceEvents: TraceEvent[] }): void {
   console.log(`    main thread from the move to the frame after the numbers (${((to - from) / 1000).toFixed(1)} ms): tasks (ms) ${tasks.join(', ')}`);
   console.log('    time of its own by event (ms):');
   for (const [k, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 24)) console.log(`      ${ms.toFixed(2).padStart(7)}  ${k}`);
+  // With --drag-invalidations: what asked for style, layout and paint again in that window, by node, reason and the
+  // script frame that did it.
+  const why = new Map<string, number>();
+  for (const e of on) {
+    if (!e.name.endsWith('InvalidationTracking') || e.ts === undefined || e.ts < from || e.ts > to) continue;
+    const d = (e.args as { data?: { nodeName?: string; reason?: string; stackTrace?: { functionName?: string; url?: string; lineNumber?: number }[] } } | undefined)?.data;
+    const f = d?.stackTrace?.[0];
+    const at = f ? `${f.functionName || '(anonymous)'} ${(f.url ?? '').split('/').pop()}:${(f.lineNumber ?? 0) + 1}` : '(no stack)';
+    const k = `${e.name.replace('InvalidationTracking', '')}: ${d?.nodeName ?? '?'} — ${d?.reason ?? '?'} ← ${at}`;
+    why.set(k, (why.get(k) ?? 0) + 1);
+  }
+  if (why.size) console.log('    invalidations (kind: node — reason ← script):');
+  for (const [k, n] of [...why].sort((a, b) => b[1] - a[1]).slice(0, 30)) console.log(`      ${String(n).padStart(5)}  ${k}`);
 }
 
 /** The profile cut to its longest run of samples with no idle one between them (about the longest task). */
