@@ -215,6 +215,10 @@ function clickCount(evt: PointerEvent, p: [number, number]): number {
 /** Forwards a pointer-down on the stage (not a pan) to the active tool. */
 export function toolPointerDown(evt: PointerEvent): void {
   if (!boxElement) return;
+  // The press belongs to the tool: no text selection or dragged element starts from it (the view takes the focus
+  // itself). Left to the browser, the first move with the button held hit-tested the press point for something to
+  // drag, and that forced a layout of everything the press and the move had changed, before the move's frame.
+  evt.preventDefault();
   dragging = true;
   const p = imagePoint(boxElement, evt.clientX, evt.clientY);
   dispatchToolEvent({ type: 'pointerDown', p, button: evt.button, clicks: clickCount(evt, p), shift: evt.shiftKey, alt: evt.altKey });
