@@ -2,7 +2,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { selectAnalysis } from '../state/selectors';
 import { afterLinesChecked } from '../state/linesChecked';
-import { useDocStore } from '../state/docStore';
+import { shownRevision, useDocStore } from '../state/docStore';
 import { useSessionStore } from '../state/sessionStore';
 import { useTabStore } from '../state/tabLock';
 import { useAutosaveStatus } from '../state/autosaveStatus';
@@ -109,11 +109,12 @@ export function FileMenu() {
   const [pngSize, setPngSize] = useState<string>('a4-150');
   const figureVe = useSessionStore((s) => s.figureVerticalExaggeration);
   const lastSaved = useAutosaveStatus((s) => s.lastSavedAt);
-  const dirty = useDocStore((s) => s.revision !== s.savedRevision);
+  // Both read the revision as the gesture began while one is under way (shownRevision): they turn at its end.
+  const dirty = useDocStore((s) => shownRevision(s) !== s.savedRevision);
   // Whether the kept revision is the document's, selected as one flag: a drag bumps the revision every frame, and
   // the menu renders only when the flag turns.
   const keptRevision = useAutosaveStatus((s) => s.keptRevision);
-  const kept = useDocStore((s) => s.revision === keptRevision);
+  const kept = useDocStore((s) => shownRevision(s) === keptRevision);
   const readOnly = useTabStore((s) => s.role === 'read-only');
   const shownKeptAt = useTabStore((s) => s.shownKeptAt);
   const openRef = useRef<HTMLInputElement>(null);

@@ -17,6 +17,8 @@ export interface DocState {
   gestureStart: ProjectDoc | null;
   /** Bumped whenever the document changes (autosave and dirty tracking listen to it). */
   revision: number;
+  /** The revision when the gesture in progress began (see shownRevision). */
+  gestureRevision: number;
   /** Revision of the last save or open, to warn before closing with unsaved changes. */
   savedRevision: number;
   /** True while another tab edits the kept work (set by tabLock.ts): this one only shows it, and edits do nothing. */
@@ -42,6 +44,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
   gestureStart: null,
   readOnly: false,
   revision: 0,
+  gestureRevision: 0,
   savedRevision: 0,
   opened: 0,
   apply: (command) => {
@@ -60,7 +63,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
     return true;
   },
   beginGesture: () => {
-    if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc });
+    if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc, gestureRevision: get().revision });
   },
   endGesture: () => {
     const { gestureStart, doc, past } = get();
@@ -88,3 +91,12 @@ export const useDocStore = create<DocState>()((set, get) => ({
   },
   markSaved: () => set({ savedRevision: get().revision }),
 }));
+
+/**
+ * The revision the status line speaks of: during a gesture, the one it began at. "Unsaved changes" and "kept in
+ * browser" then turn when the gesture ends (autosave waits for it too) instead of on its first move, where
+ * re-rendering the menu bar and laying out its text cost the frame that has to show the move.
+ */
+export function shownRevision(s: Pick<DocState, 'gestureStart' | 'revision' | 'gestureRevision'>): number {
+  return s.gestureStart ? s.gestureRevision : s.revision;
+}
