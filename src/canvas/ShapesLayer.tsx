@@ -290,14 +290,18 @@ const PinLines = memo(function PinLines() {
 
 const NO_IDS: string[] = [];
 
-/** Returns the ids of the horizons whose regional the gesture in progress has moved, in document order (none outside a gesture). */
+/**
+ * Returns the ids of the horizons whose regional the gesture in progress moves, in document order (none outside a
+ * gesture): those its press named (the docStore's gestureRegionals) and any other it has moved.
+ */
 function useMovingRegionalIds(): string[] {
   return useDocStore(useShallow((s) => {
     if (!s.gestureStart) return NO_IDS;
     const now = activeScenario(s.doc).regionals;
     const was = activeScenario(s.gestureStart).regionals;
-    if (now === was) return NO_IDS;
-    const moved = s.doc.horizons.filter((h) => now[h.id] !== was[h.id]).map((h) => h.id);
+    const named = s.gestureRegionals;
+    if (now === was && named.length === 0) return NO_IDS;
+    const moved = s.doc.horizons.filter((h) => now[h.id] !== was[h.id] || named.includes(h.id)).map((h) => h.id);
     return moved.length ? moved : NO_IDS;
   }));
 }
@@ -308,7 +312,8 @@ function useMovingRegionalIds(): string[] {
  * (and the browser rasterises) the one or few fills and regionals that move, and the others, like the long horizon
  * lines, stay as they were drawn. A fill moves to the second canvas at the drag's first move and back at the
  * release (its clipped line and decimation are kept, so neither is made again); meanwhile it lies over the still
- * regionals rather than under them.
+ * regionals rather than under them. A drag whose press names the regionals it moves (the regional tool's) moves
+ * their fills at the press instead: the still canvas is redrawn without them then, not in the first move's frame.
  */
 export function ShapesLayer() {
   const allIds = useDocStore(useShallow((s) => s.doc.horizons.map((h) => h.id)));

@@ -108,7 +108,7 @@ export function executeToolCommands(commands: readonly ToolCommand[]): void {
         useDocStore.getState().apply(c.edit);
         break;
       case 'beginGesture':
-        store.beginGesture();
+        store.beginGesture(c.regionals);
         break;
       case 'gestureEdit': {
         const start = useDocStore.getState().gestureStart;

@@ -8,6 +8,7 @@ import { useSessionStore } from './sessionStore';
 export type DocCommand = (doc: ProjectDoc) => ProjectDoc;
 
 const HISTORY_LIMIT = 500;
+const NO_REGIONALS: readonly string[] = [];
 
 export interface DocState {
   doc: ProjectDoc;
@@ -19,6 +20,11 @@ export interface DocState {
   revision: number;
   /** The revision when the gesture in progress began (see shownRevision). */
   gestureRevision: number;
+  /**
+   * The horizons whose regionals the gesture in progress moves, as known when it began (empty when it moves none, or
+   * outside a gesture): the section view sets their fills apart on the press rather than on the first move.
+   */
+  gestureRegionals: readonly string[];
   /** Revision of the last save or open, to warn before closing with unsaved changes. */
   savedRevision: number;
   /** True while another tab edits the kept work (set by tabLock.ts): this one only shows it, and edits do nothing. */
@@ -27,7 +33,8 @@ export interface DocState {
   opened: number;
   /** Applies the command; false when nothing changed (read-only, the same document, or an addition over a limit, refused with a message). */
   apply: (command: DocCommand) => boolean;
-  beginGesture: () => void;
+  /** Starts a gesture (one undo entry); `regionals` names the horizons whose regionals it will move, if known. */
+  beginGesture: (regionals?: readonly string[]) => void;
   endGesture: () => void;
   cancelGesture: () => void;
   undo: () => void;
@@ -45,6 +52,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
   readOnly: false,
   revision: 0,
   gestureRevision: 0,
+  gestureRegionals: [],
   savedRevision: 0,
   opened: 0,
   apply: (command) => {
@@ -62,18 +70,18 @@ export const useDocStore = create<DocState>()((set, get) => ({
     else set({ doc: next, past: [...past, doc].slice(-HISTORY_LIMIT), future: [], revision: revision + 1 });
     return true;
   },
-  beginGesture: () => {
-    if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc, gestureRevision: get().revision });
+  beginGesture: (regionals = NO_REGIONALS) => {
+    if (!get().gestureStart && !get().readOnly) set({ gestureStart: get().doc, gestureRevision: get().revision, gestureRegionals: regionals });
   },
   endGesture: () => {
     const { gestureStart, doc, past } = get();
     if (!gestureStart) return;
-    if (gestureStart === doc) set({ gestureStart: null });
-    else set({ gestureStart: null, past: [...past, gestureStart].slice(-HISTORY_LIMIT), future: [] });
+    if (gestureStart === doc) set({ gestureStart: null, gestureRegionals: NO_REGIONALS });
+    else set({ gestureStart: null, gestureRegionals: NO_REGIONALS, past: [...past, gestureStart].slice(-HISTORY_LIMIT), future: [] });
   },
   cancelGesture: () => {
     const { gestureStart, revision } = get();
-    if (gestureStart) set({ doc: gestureStart, gestureStart: null, revision: revision + 1 });
+    if (gestureStart) set({ doc: gestureStart, gestureStart: null, gestureRegionals: NO_REGIONALS, revision: revision + 1 });
   },
   undo: () => {
     const { past, doc, future, gestureStart, revision } = get();
@@ -87,7 +95,7 @@ export const useDocStore = create<DocState>()((set, get) => ({
   },
   replace: (doc) => {
     const revision = get().revision + 1;
-    set({ doc, past: [], future: [], gestureStart: null, revision, savedRevision: revision, opened: get().opened + 1 });
+    set({ doc, past: [], future: [], gestureStart: null, gestureRegionals: NO_REGIONALS, revision, savedRevision: revision, opened: get().opened + 1 });
   },
   markSaved: () => set({ savedRevision: get().revision }),
 }));

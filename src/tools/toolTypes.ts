@@ -68,7 +68,8 @@ export interface ToolPreview {
 export type ToolCommand =
   /** One undoable edit (its own undo entry unless inside a gesture). */
   | { type: 'edit'; edit: DocEdit }
-  | { type: 'beginGesture' }
+  /** Starts a gesture; `regionals`: the horizons whose regionals it will move, when the press already knows them. */
+  | { type: 'beginGesture'; regionals?: string[] }
   /** Applied to the document as it was when the gesture began (start snapshot plus the total delta). */
   | { type: 'gestureEdit'; edit: DocEdit }
   | { type: 'endGesture' }

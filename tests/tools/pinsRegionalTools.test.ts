@@ -5,6 +5,7 @@ import { setPins } from '../../src/core/model/commands/setPins';
 import { setRegional } from '../../src/core/model/commands/setRegional';
 import { pinsTool } from '../../src/tools/pins/pinsTool';
 import { regionalTool } from '../../src/tools/regional/regionalTool';
+import { useDocStore } from '../../src/state/docStore';
 import { ToolHarness } from './toolHarness';
 import { toolDoc } from './toolFixture';
 
@@ -70,6 +71,28 @@ describe('regionalTool', () => {
     expect(t.doc.scenarios[0].regionals.h1[1][1]).toBeCloseTo(80, 9);
     expect(t.doc.scenarios[0].regionals.h2[1][1]).toBeCloseTo(280, 9);
     expect(t.history).toHaveLength(1);
+  });
+
+  it('regionalTool: the press names the regionals the drag moves (one, or with Shift every one that exists); the release clears them', () => {
+    const two = toolDoc();
+    two.horizons = [...two.horizons, { ...two.horizons[0], id: 'h2', name: 'Lower', pointsPx: [[0, 320], [1000, 320]] }];
+    let doc = setRegional(two, 'h1', [[0, 100], [1000, 100]]);
+    doc = setRegional(doc, 'h2', [[0, 300], [1000, 300]]);
+    const t = new ToolHarness(regionalTool, doc);
+    t.down([500, 300]);
+    expect(useDocStore.getState().gestureRegionals).toEqual(['h2']);
+    t.up([500, 300]);
+    expect(useDocStore.getState().gestureRegionals).toEqual([]);
+    t.down([1000, 101], { shift: true });
+    // A handle drag moves that one point whatever Shift says.
+    expect(useDocStore.getState().gestureRegionals).toEqual(['h1']);
+    t.cancel();
+    expect(useDocStore.getState().gestureRegionals).toEqual([]);
+    t.down([500, 100], { shift: true });
+    expect(useDocStore.getState().gestureRegionals).toEqual(['h1', 'h2']);
+    t.move([500, 90]).up([500, 90]);
+    expect(useDocStore.getState().gestureRegionals).toEqual([]);
+    expect(t.doc.scenarios[0].regionals.h2[0][1]).toBeCloseTo(290, 9);
   });
 
   it('regionalTool: a polyline regional by clicks and Enter; Backspace and Esc while placing', () => {

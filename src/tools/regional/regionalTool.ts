@@ -66,11 +66,14 @@ export const regionalTool: Tool<RegionalState> = {
         if (e.button !== 0) return {};
         const hit = regionalUnder(ctx.doc, ctx.selectedHorizonId, e.p, ctx.tolerancePx);
         if (hit) {
-          const origin = activeScenario(ctx.doc).regionals[hit.horizonId];
+          const regionals = activeScenario(ctx.doc).regionals;
+          const origin = regionals[hit.horizonId];
           const mode = hit.kind === 'handle' ? 'handle' : e.shift ? 'all' : 'whole';
+          // The press names what the drag will move, so the view gets ready for it before the first move.
+          const moving = mode === 'all' ? ctx.doc.horizons.filter((h) => regionals[h.id]).map((h) => h.id) : [hit.horizonId];
           return {
             next: { name: 'dragging', mode, horizonId: hit.horizonId, index: hit.index, start: e.p, origin },
-            commands: [{ type: 'select', horizonId: hit.horizonId }, { type: 'beginGesture' }],
+            commands: [{ type: 'select', horizonId: hit.horizonId }, { type: 'beginGesture', regionals: moving }],
           };
         }
         const id = ctx.selectedHorizonId;
