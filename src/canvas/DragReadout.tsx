@@ -29,6 +29,8 @@ export function DragReadout() {
       if (b) size = { width: b.inlineSize, height: b.blockSize };
     });
     sized.observe(el, { box: 'border-box' });
+    // A text of the usual width from the start, so the first showing changes a text node in place and its size is known.
+    if (!el.firstChild) el.textContent = 'Δz +0.0 m';
     const show = () => {
       frame = 0;
       const { doc, gestureStart } = useDocStore.getState();
