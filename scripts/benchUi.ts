@@ -4,7 +4,7 @@
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
 //                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder
-//                       --profile folder --first-move-trace folder --no-continuous --drag-trace folder --drag-invalidations]
+//                       --profile folder --first-move-trace folder --open-trace folder --no-continuous --drag-trace folder --drag-invalidations]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -85,6 +85,8 @@ const WITH_CONTINUOUS = !process.argv.includes('--no-continuous');
 const DRAG_TRACE = flag('drag-trace');
 /** With --drag-trace or --first-move-trace, also list what invalidated style, layout and paint (slows the traced moves several times over). */
 const DRAG_INVALIDATIONS = process.argv.includes('--drag-invalidations');
+/** A folder for a Chromium trace of each big-document open and each size's first scan open (`open-12x<n>.trace.json`, `open-scan-<n>mp.trace.json`), with the main thread's longest tasks by event. */
+const OPEN_TRACE = flag('open-trace');
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -196,6 +198,8 @@ async function openScan(page: Page, name: string, profileTag?: string): Promise<
     await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
     await cdp.send('Profiler.start');
   }
+  const traced = OPEN_TRACE && profileTag;
+  if (traced) await page.context().browser()!.startTracing(page, { categories: FIRST_MOVE_CATEGORIES });
   const [t0, shownAt] = (await page.evaluate(`new Promise((resolve) => {
     const name = ${JSON.stringify(name)};
     let t0 = 0;
@@ -209,11 +213,13 @@ async function openScan(page: Page, name: string, profileTag?: string): Promise<
     const d = new DataTransfer();
     d.items.add(window.__scanFile);
     t0 = performance.now();
+    performance.mark('bench-open');
     document.querySelector('.view-box').dispatchEvent(new DragEvent('drop', { dataTransfer: d, bubbles: true, cancelable: true }));
   })`)) as [number, number];
   const ms = shownAt - t0;
   await page.getByTestId('scan-name').filter({ hasText: name }).waitFor({ timeout: 120_000 });
   await page.getByTestId('busy').waitFor({ state: 'detached', timeout: 120_000 });
+  if (traced) await saveOpenTrace(page, `open-scan-${profileTag}`, `open a ${profileTag} scan: drop → shown ${ms.toFixed(1)} ms`);
   if (cdp && PROFILE) {
     const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
     await cdp.detach();
@@ -488,8 +494,14 @@ async function openBigSection(page: Page, section: Section, vertices: number): P
     await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
     await cdp.send('Profiler.start');
   }
+  if (OPEN_TRACE) await page.context().browser()!.startTracing(page, { categories: FIRST_MOVE_CATEGORIES });
   const t0 = await now(page);
+  // The discard question is answered yes in the page, as a user's instant click would: through Playwright's dialog
+  // event the answer takes a round trip to the driver (20–50 ms), all inside the task that asked.
   await page.evaluate(`(() => {
+    window.__confirmed = window.confirm;
+    window.confirm = () => true;
+    performance.mark('bench-open');
     const input = document.querySelector('[data-testid="open-project"]');
     const d = new DataTransfer();
     d.items.add(window.__docFile);
@@ -505,6 +517,8 @@ async function openBigSection(page: Page, section: Section, vertices: number): P
   // longest task is read once the sweeps are shown (or after 20 s without them).
   await page.getByTestId('sensitivity-amplification').waitFor({ state: 'attached', timeout: 20_000 }).catch(() => undefined);
   const longest = await longestSince(page, t0);
+  await page.evaluate('window.confirm = window.__confirmed');
+  if (OPEN_TRACE) await saveOpenTrace(page, `open-12x${vertices}`, `open 12 × ${vertices}: ${ms.toFixed(1)} ms, longest task ${longest.toFixed(0)} ms`);
   if (cdp && PROFILE) {
     const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
     await cdp.detach();
@@ -631,22 +645,10 @@ function printMoveTrace(trace: { traceEvents: TraceEvent[] }): void {
   const from = on.find((e) => e.name === 'bench-move')?.ts;
   const to = on.find((e) => e.name === 'bench-move-frame')?.ts;
   check(from !== undefined && to !== undefined, 'the trace of the first move lacks its marks');
-  const spans = on.filter((e) => e.ph === 'X' && e.dur && e.ts! + e.dur > from && e.ts! < to).sort((a, b) => a.ts! - b.ts! || b.dur! - a.dur!);
-  const self = new Map<string, number>();
-  const stack: { end: number; key: string }[] = [];
-  const tasks: string[] = [];
-  const keyOf = (e: TraceEvent) => (e.name === 'FunctionCall' || e.name === 'EvaluateScript' || e.name === 'V8.Execute') && e.args?.data?.functionName ? `${e.name} ${e.args.data.functionName}` : e.name;
-  for (const e of spans) {
-    while (stack.length && stack[stack.length - 1].end <= e.ts!) stack.pop();
-    const key = keyOf(e);
-    if (stack.length === 0) tasks.push(`${(e.dur! / 1000).toFixed(1)} ${key}`);
-    else self.set(stack[stack.length - 1].key, (self.get(stack[stack.length - 1].key) ?? 0) - e.dur! / 1000);
-    self.set(key, (self.get(key) ?? 0) + e.dur! / 1000);
-    stack.push({ end: e.ts! + e.dur!, key });
-  }
-  console.log(`    main thread from the move to the frame after the numbers (${((to - from) / 1000).toFixed(1)} ms): tasks (ms) ${tasks.join(', ')}`);
+  const { tasks, self } = mainThreadBetween(on, from, to);
+  console.log(`    main thread from the move to the frame after the numbers (${((to - from) / 1000).toFixed(1)} ms): tasks (ms) ${tasks.map((t) => `${t.ms.toFixed(1)} ${t.key}`).join(', ')}`);
   console.log('    time of its own by event (ms):');
-  for (const [k, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 24)) console.log(`      ${ms.toFixed(2).padStart(7)}  ${k}`);
+  printSelf(self, 24);
   // With --drag-invalidations: what asked for style, layout and paint again in that window, by node, reason and the
   // script frame that did it.
   const why = new Map<string, number>();
@@ -660,6 +662,67 @@ function printMoveTrace(trace: { traceEvents: TraceEvent[] }): void {
   }
   if (why.size) console.log('    invalidations (kind: node — reason ← script):');
   for (const [k, n] of [...why].sort((a, b) => b[1] - a[1]).slice(0, 30)) console.log(`      ${String(n).padStart(5)}  ${k}`);
+}
+
+/** The main thread's tasks between two trace times (µs), and each event's time of its own (ms), overall and per task. */
+function mainThreadBetween(on: TraceEvent[], from: number, to: number): { tasks: { ms: number; at: number; key: string; self: Map<string, number> }[]; self: Map<string, number> } {
+  const spans = on.filter((e) => e.ph === 'X' && e.dur && e.ts! + e.dur > from && e.ts! < to).sort((a, b) => a.ts! - b.ts! || b.dur! - a.dur!);
+  const self = new Map<string, number>();
+  const stack: { end: number; key: string }[] = [];
+  const tasks: { ms: number; at: number; key: string; self: Map<string, number> }[] = [];
+  const keyOf = (e: TraceEvent) => (e.name === 'FunctionCall' || e.name === 'EvaluateScript' || e.name === 'V8.Execute') && e.args?.data?.functionName ? `${e.name} ${e.args.data.functionName}` : e.name;
+  const add = (m: Map<string, number>, k: string, ms: number) => m.set(k, (m.get(k) ?? 0) + ms);
+  for (const e of spans) {
+    while (stack.length && stack[stack.length - 1].end <= e.ts!) stack.pop();
+    const key = keyOf(e);
+    if (stack.length === 0) tasks.push({ ms: e.dur! / 1000, at: (e.ts! - from) / 1000, key, self: new Map() });
+    else {
+      add(self, stack[stack.length - 1].key, -e.dur! / 1000);
+      add(tasks[tasks.length - 1].self, stack[stack.length - 1].key, -e.dur! / 1000);
+    }
+    add(self, key, e.dur! / 1000);
+    add(tasks[tasks.length - 1].self, key, e.dur! / 1000);
+    stack.push({ end: e.ts! + e.dur!, key });
+  }
+  return { tasks, self };
+}
+
+function printSelf(self: Map<string, number>, k: number, indent = '      '): void {
+  for (const [key, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, k)) console.log(`${indent}${ms.toFixed(2).padStart(7)}  ${key}`);
+}
+
+/**
+ * Prints a trace of an open (--open-trace) between the page's marks `bench-open` and `bench-open-done`: the main
+ * thread's busy time, its longest tasks with what each spent its own time in, and the whole open's time by event.
+ */
+function printOpenTrace(trace: { traceEvents: TraceEvent[] }): void {
+  const main = trace.traceEvents.find((e) => e.ph === 'M' && e.name === 'thread_name' && e.args?.name === 'CrRendererMain' &&
+    trace.traceEvents.some((m) => m.pid === e.pid && m.name === 'bench-open'));
+  check(main, 'the trace of the open has no main thread with the open mark');
+  const on = trace.traceEvents.filter((e) => e.pid === main.pid && e.tid === main.tid);
+  const from = on.find((e) => e.name === 'bench-open')?.ts;
+  const to = on.find((e) => e.name === 'bench-open-done')?.ts;
+  check(from !== undefined && to !== undefined, 'the trace of the open lacks its marks');
+  const { tasks, self } = mainThreadBetween(on, from, to);
+  const busy = tasks.reduce((a, t) => a + t.ms, 0);
+  console.log(`    main thread over the open (${((to - from) / 1000).toFixed(1)} ms): ${tasks.length} tasks, busy ${busy.toFixed(1)} ms; the longest (ms at ms after the start):`);
+  for (const t of [...tasks].sort((a, b) => b.ms - a.ms).slice(0, 6)) {
+    console.log(`      ${t.ms.toFixed(1).padStart(7)} at ${t.at.toFixed(0).padStart(5)}  ${t.key}; of its own:`);
+    printSelf(t.self, 10, '          ');
+  }
+  console.log('    the whole open, time of its own by event (ms):');
+  printSelf(self, 24);
+}
+
+/** Marks the open's end in the page, stops the trace begun before it, writes it to --open-trace and prints it. */
+async function saveOpenTrace(page: Page, name: string, title: string): Promise<void> {
+  await page.evaluate("performance.mark('bench-open-done')");
+  const trace = await page.context().browser()!.stopTracing();
+  const { writeFileSync, mkdirSync } = await import('node:fs');
+  mkdirSync(OPEN_TRACE!, { recursive: true });
+  writeFileSync(`${OPEN_TRACE}/${name}.trace.json`, trace);
+  console.log(`  ${title} (${name}.trace.json)`);
+  printOpenTrace(JSON.parse(trace.toString()) as { traceEvents: TraceEvent[] });
 }
 
 /** The profile cut to its longest run of samples with no idle one between them (about the longest task). */
