@@ -9,6 +9,7 @@ import { useSessionStore } from '../state/sessionStore';
 import { useAutosaveStatus } from '../state/autosaveStatus';
 import { startScanLifetime } from '../state/scanLifetime';
 import { startCrossingChecks } from '../state/crossingChecks';
+import { startOpeningWorker } from '../io/readProjectFile';
 
 let started = false;
 
@@ -33,5 +34,7 @@ export function startApp(): void {
     startAutosave();
     startGesturePreparation();
     useSessionStore.getState().setStarted();
+    // The worker that opens project and section files starts while the page is idle, not when a file is chosen.
+    startOpeningWorker();
   })();
 }

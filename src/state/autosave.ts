@@ -300,12 +300,11 @@ export function startAutosave(): () => void {
     if (gestureStart || useTabStore.getState().role === 'read-only' || docLimitProblem(doc)) return false;
     return writeJournal(doc, revision !== savedRevision, nextStamp());
   };
-  const unsubscribe = useDocStore.subscribe((s, prev) => {
-    const gestureEnded = prev.gestureStart !== null && s.gestureStart === null;
-    if (s.revision === prev.revision && s.savedRevision === prev.savedRevision && !gestureEnded) return;
+  const keep = (withJournal: boolean) => {
+    const { doc, gestureStart } = useDocStore.getState();
     // While a drag is under way the document changes every frame: it is kept when the gesture ends.
-    if (s.gestureStart) return;
-    const small = journal() || vertexCount(s.doc) <= WRITE_AT_ONCE_VERTICES;
+    if (gestureStart) return;
+    const small = (withJournal && journal()) || vertexCount(doc) <= WRITE_AT_ONCE_VERTICES;
     window.clearTimeout(timer);
     timer = undefined;
     // A small document goes to IndexedDB in this very task, before the page renders the edit: the journal in
@@ -313,10 +312,34 @@ export function startAutosave(): () => void {
     // (Chromium writes it to disk later), so there IndexedDB brings the edit back (benchKeepWork measures the window).
     if (small) run();
     else timer = window.setTimeout(run, AUTOSAVE_DELAY_MS);
+  };
+  let keepOpened: number | undefined;
+  const unsubscribe = useDocStore.subscribe((s, prev) => {
+    const gestureEnded = prev.gestureStart !== null && s.gestureStart === null;
+    if (s.revision === prev.revision && s.savedRevision === prev.savedRevision && !gestureEnded) return;
+    window.clearTimeout(keepOpened);
+    keepOpened = undefined;
+    // A document just opened or made new holds no edit yet and is on the disk already: it goes to IndexedDB in the
+    // next task, after the one that renders it, and not to the journal (writing its text to localStorage was the
+    // longest part of that task: tens of milliseconds for 24,000 vertices). The journal is cleared, so an older
+    // entry cannot come back over it; a reload before the write commits brings back the work kept before the open.
+    // An edit before then is kept at once, journal and all, as any edit.
+    if (s.opened !== prev.opened) {
+      clearJournal();
+      keepOpened = window.setTimeout(() => {
+        keepOpened = undefined;
+        keep(false);
+      }, 0);
+    } else keep(true);
   });
   // Leaving the page with a write still waiting: the journal now, and the write started (it may not finish).
   const flush = () => {
-    journal();
+    if (keepOpened === undefined) journal();
+    else {
+      window.clearTimeout(keepOpened);
+      keepOpened = undefined;
+      keep(true);
+    }
     if (timer === undefined) return;
     window.clearTimeout(timer);
     run();
@@ -328,6 +351,7 @@ export function startAutosave(): () => void {
   return () => {
     unsubscribe();
     window.clearTimeout(timer);
+    window.clearTimeout(keepOpened);
     window.removeEventListener('beforeunload', onBeforeUnload);
     window.removeEventListener('pagehide', flush);
     document.removeEventListener('visibilitychange', onHidden);

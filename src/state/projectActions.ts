@@ -5,6 +5,7 @@ import { downloadFile, safeFileName } from '../io/downloadFile';
 import { fileTooLargeMessage } from '../core/model/limits';
 import { MAX_PROJECT_FILE_BYTES, SCAN_NOT_STORED_MARK, serializeProject, type ScanBytes } from '../io/projectFile';
 import { readProjectFile, type OpenProgress } from '../io/readProjectFile';
+import { yieldToPage } from '../io/fileWorker';
 import { reopenScan } from '../io/reopenScan';
 import { fitCalibration } from '../core/calibration/fitCalibration';
 import { lineToSection } from '../core/calibration/lineToSection';
@@ -13,6 +14,9 @@ import { useDocStore } from './docStore';
 import { selectAnalysis } from './selectors';
 import { getScan, putScan, type CachedScan } from './scanCache';
 import { useSessionStore } from './sessionStore';
+
+/** Vertices converted and measured in one task while a file opens: a few milliseconds of work. */
+const MEASURED_PER_TASK = 150_000;
 
 /** Said after the reason a saved scan is not shown (reopenSavedScan). */
 export const SCAN_NOT_SHOWN_WORDS = 'The scan is not shown; the horizons, calibration, pins and regionals are unchanged (they are kept in scan pixels) and the scan stays in the project. To see it behind the lines, open the image they were digitised on again (Open scan…) at the same page and resolution.';
@@ -127,23 +131,26 @@ export async function openProjectFile(file: File): Promise<boolean> {
     // The first analysis of a big document takes a few hundred milliseconds: it runs in a task of its own before
     // the document is drawn (the views then read the remembered result), not inside the drawing's task.
     session.setBusy(`Opening ${file.name} … measuring`);
-    // Each line is first converted to section units and measured for the framing in a task of its own (both
-    // remembered per line: lineToSection, pointsBox), so neither the analysis nor the drawing's task reads a
-    // million vertices again.
+    // Each line is first converted to section units and measured for the framing, about MEASURED_PER_TASK vertices
+    // a task (both remembered per line: lineToSection, pointsBox), so neither the analysis nor the drawing's task
+    // reads a million vertices again; small lines share a task (a task each waited longer than its work).
     const cal = doc.calibration ? fitCalibration(doc.calibration) : null;
-    for (const f of doc.faults) {
-      await nextTask();
-      if (cal?.ok) lineToSection(cal.fit, f.pointsPx);
-    }
-    for (const h of doc.horizons) {
-      await nextTask();
-      if (cal?.ok) lineToSection(cal.fit, h.pointsPx);
+    let measured = 0;
+    const lines = [...doc.faults.map((f) => ({ pointsPx: f.pointsPx, framed: false })), ...doc.horizons.map((h) => ({ pointsPx: h.pointsPx, framed: true }))];
+    await yieldToPage();
+    for (const { pointsPx, framed } of lines) {
+      if (measured > 0 && measured + pointsPx.length > MEASURED_PER_TASK) {
+        await yieldToPage();
+        measured = 0;
+      }
+      measured += pointsPx.length;
+      if (cal?.ok) lineToSection(cal.fit, pointsPx);
       // Without a scan the view is framed on the horizons (fitViewToDoc).
-      if (!doc.scan) pointsBox(h.pointsPx);
+      if (framed && !doc.scan) pointsBox(pointsPx);
     }
-    await nextTask();
+    await yieldToPage();
     selectAnalysis(doc);
-    await nextTask();
+    await yieldToPage();
     useDocStore.getState().replace(doc);
     fitViewToDoc(doc);
     const said = [`Opened ${file.name}.`, ...openNotes(opened.notes, doc, Boolean(scan))];
@@ -179,7 +186,3 @@ export function newProject(): void {
   fitViewToDoc(doc);
 }
 
-/** Resolves in a later task, so that the page can draw and handle input in between. */
-function nextTask(): Promise<void> {
-  return new Promise((resolve) => setTimeout(resolve, 0));
-}

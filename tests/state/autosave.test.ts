@@ -379,4 +379,29 @@ describe('an edit is handed to IndexedDB in its own task', () => {
       stop();
     }
   });
+
+  // An opened document is on the disk already; its kept copy waits for the task after the one that shows it.
+  it('keeps an opened document in IndexedDB a task later, clearing the journal, and journals the next edit at once', async () => {
+    const { IDBObjectStore } = await import('fake-indexeddb');
+    const { startAutosave } = await import('../../src/state/autosave');
+    const { readJournal } = await import('../../src/state/autosaveJournal');
+    const db = await openAutosaveDb(factory);
+    useDocStore.getState().replace(sampleDoc());
+    const stop = startAutosave();
+    try {
+      useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Before the open' }));
+      expect((readJournal()?.doc as { title: string }).title).toBe('Before the open');
+      await vi.waitFor(async () => expect((await readSnapshot(db))?.doc.title).toBe('Before the open'));
+      const put = vi.spyOn(IDBObjectStore.prototype, 'put');
+      useDocStore.getState().replace({ ...sampleDoc(), title: 'Opened from a file' });
+      expect(readJournal()).toBeNull();
+      expect(put).not.toHaveBeenCalled();
+      await vi.waitFor(async () => expect((await readSnapshot(db))?.doc.title).toBe('Opened from a file'));
+      expect(readJournal()).toBeNull();
+      useDocStore.getState().apply((d) => setProjectInfo(d, { title: 'Edited after the open' }));
+      expect((readJournal()?.doc as { title: string }).title).toBe('Edited after the open');
+    } finally {
+      stop();
+    }
+  });
 });
