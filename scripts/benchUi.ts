@@ -4,7 +4,8 @@
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
 //                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder
-//                       --profile folder --first-move-trace folder --open-trace folder --no-continuous --drag-trace folder --drag-invalidations]
+//                       --profile folder --first-move-trace folder --open-trace folder --no-continuous --no-canvas-floor
+//                       --drag-trace folder --drag-invalidations]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
 // Rows (each the median of --runs runs where a run is repeatable):
@@ -24,7 +25,10 @@
 // - big documents (12 horizons × each --vertices): opening the section file, the first move of a regional drag,
 //   single and Shift (every regional) drags waiting for the numbers, a continuous drag at 60 moves a second, the
 //   autosave task after the edit; floor: one 16.7 ms frame. The first move is also timed to the end of its frame on
-//   the main thread (layout, paint and commit included), beside the same drag's later moves timed so. --profile keeps a CPU profile (and a trace) of the opens,
+//   the main thread (layout, paint and commit included), beside the same drag's later moves timed so. Each continuous
+//   drag again against the browser's floor for its canvases (unless --no-canvas-floor): a bare page with the same
+//   canvases, the ones a move redraws put back with one drawImage a move, timed the same way (canvasFloor).
+//   --profile keeps a CPU profile (and a trace) of the opens,
 //   first moves and continuous drags; --drag-trace keeps only a Chromium trace of each continuous drag and prints
 //   one move by phase (script, style, layout, paint, raster) and what was painted; with --drag-invalidations also
 //   what invalidated style, layout and paint.
@@ -84,6 +88,8 @@ const FIRST_MOVE_TRACE = flag('first-move-trace');
 const WITH_CONTINUOUS = !process.argv.includes('--no-continuous');
 /** A folder for a Chromium trace of each continuous drag (`drag-12x<n>.trace.json`), taken without the CPU profiler (which slows a move about 2×); one move is printed by phase (scripts/dragTrace.ts). */
 const DRAG_TRACE = flag('drag-trace');
+/** Leaves out the canvas floor of the continuous drags (a bare page with the section view's canvases, canvasFloor). */
+const WITH_CANVAS_FLOOR = !process.argv.includes('--no-canvas-floor');
 /** With --drag-trace or --first-move-trace, also list what invalidated style, layout and paint (slows the traced moves several times over). */
 const DRAG_INVALIDATIONS = process.argv.includes('--drag-invalidations');
 /** A folder for a Chromium trace of each big-document open and each size's first scan open (`open-12x<n>.trace.json`, `open-scan-<n>mp.trace.json`), with the main thread's longest tasks by event. */
@@ -794,8 +800,8 @@ function printProfile(profile: CpuProfile, moves: number): void {
  * it was handled after the next move's time on the clock (that move, and the screen, had to wait). With `pressed`
  * false the same moves pass over the view with no button held: the floor of the page's own event handling.
  */
-interface Continuous { handle: number[]; toFrame: number[]; frames: number[]; dropped: number; movesPerSecond: number; longest: number }
-async function continuousDrag(page: Page, grip: Grip, moves: number, tag: string, pressed = true): Promise<Continuous> {
+interface Continuous { handle: number[]; toFrame: number[]; frames: number[]; dropped: number; movesPerSecond: number; longest: number; canvases?: StageCanvases }
+async function continuousDrag(page: Page, grip: Grip, moves: number, tag: string, pressed = true, options: { canvases?: boolean } = {}): Promise<Continuous> {
   await page.mouse.move(grip.gx, grip.gy);
   if (pressed) await page.mouse.down();
   // A few real moves first: the drag has begun (its first move is its own row).
@@ -851,12 +857,76 @@ async function continuousDrag(page: Page, grip: Grip, moves: number, tag: string
     writeFileSync(`${DRAG_TRACE}/drag-12x${tag}.trace.json`, trace);
     printDragTrace(JSON.parse(trace.toString()) as { traceEvents: DragTraceEvent[] }, moves);
   }
+  // Still held: what the section view's canvases hold, and which of them a move redraws, for the canvas floor.
+  const canvases = pressed && options.canvases ? ((await page.evaluate(stageCanvases(grip.gx, grip.gy - 3))) as StageCanvases) : undefined;
   if (pressed) await page.mouse.up();
   check(got.frames.length > 10 && got.handle.length === moves && got.toFrame.length === moves, 'the continuous drag drew nothing');
   return {
     handle: got.handle, toFrame: got.toFrame, frames: got.frames, dropped: got.dropped,
-    movesPerSecond: moves / got.seconds, longest: await longestSince(page, t0),
+    movesPerSecond: moves / got.seconds, longest: await longestSince(page, t0), canvases,
   };
+}
+
+/** The section view's canvases during a drag: the view's place and size, and each Konva layer's bitmap and whether a move redrew it. */
+interface StageCanvases { x: number; y: number; width: number; height: number; ratio: number; layers: { name: string; url: string; live: boolean }[] }
+// One more move of the drag in progress (to page point x, y), noting which layers draw for it (Konva's draw event), then
+// each layer's bitmap.
+const stageCanvases = (x: number, y: number) => `new Promise((resolve) => {
+  const stage = window.Konva.stages[0];
+  const view = document.querySelector('[data-testid="section-view"]');
+  const box = view.getBoundingClientRect();
+  const layers = stage.getLayers();
+  const drew = new Set();
+  layers.forEach((l, i) => l.on('draw.canvasFloor', () => drew.add(i)));
+  view.dispatchEvent(new PointerEvent('pointermove', { clientX: ${x}, clientY: ${y}, bubbles: true, pointerId: 1, pointerType: 'mouse', isPrimary: true, buttons: 1 }));
+  requestAnimationFrame(() => requestAnimationFrame(() => {
+    layers.forEach((l) => l.off('draw.canvasFloor'));
+    resolve({ x: box.x, y: box.y, width: stage.width(), height: stage.height(), ratio: window.devicePixelRatio || 1,
+      layers: layers.map((l, i) => ({ name: l.name() || '(unnamed)', url: l.getCanvas()._canvas.toDataURL(), live: drew.has(i) })) });
+  }));
+})`;
+
+/**
+ * The browser's floor for the section view's canvas work during a drag: a bare page (nothing else on it) with the same
+ * number of canvases, of the same size and place, showing what the app's showed; each pointer move puts back the
+ * bitmap of every canvas the app redrew for a move, moved a pixel (one clear and one drawImage each: the least
+ * drawing a move can do), and the same clock and timing as the app's continuous drag measure it.
+ */
+async function canvasFloor(page: Page, canvases: StageCanvases, tag: string): Promise<Continuous> {
+  const bare = await page.context().browser()!.newPage({ viewport: page.viewportSize()! });
+  try {
+    await bare.setContent('<!doctype html><body style="margin:0;background:#e8ebee"></body>');
+    await bare.evaluate(LONG_TASKS);
+    await bare.evaluate(`(async (c) => {
+      const view = document.createElement('div');
+      view.dataset.testid = 'section-view';
+      Object.assign(view.style, { position: 'absolute', left: c.x + 'px', top: c.y + 'px', width: c.width + 'px', height: c.height + 'px', overflow: 'hidden' });
+      document.body.append(view);
+      const live = [];
+      for (const l of c.layers) {
+        const canvas = document.createElement('canvas');
+        canvas.width = Math.round(c.width * c.ratio);
+        canvas.height = Math.round(c.height * c.ratio);
+        Object.assign(canvas.style, { position: 'absolute', top: '0', left: '0', width: c.width + 'px', height: c.height + 'px' });
+        view.append(canvas);
+        const bitmap = await createImageBitmap(await (await fetch(l.url)).blob());
+        const ctx = canvas.getContext('2d');
+        ctx.drawImage(bitmap, 0, 0);
+        if (l.live) live.push({ ctx, bitmap });
+      }
+      view.addEventListener('pointermove', (e) => {
+        const dy = e.clientY % 2;
+        for (const { ctx, bitmap } of live) {
+          ctx.clearRect(0, 0, ctx.canvas.width, ctx.canvas.height);
+          ctx.drawImage(bitmap, 0, dy);
+        }
+      });
+    })(${JSON.stringify(canvases)})`);
+    const grip = { gx: canvases.x + canvases.width / 2, gy: canvases.y + canvases.height / 2 };
+    return await continuousDrag(bare, grip, 120, `${tag}-canvas-floor`);
+  } finally {
+    await bare.close();
+  }
 }
 
 async function bigDocuments(page: Page, label: string): Promise<void> {
@@ -915,7 +985,7 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
     // The floor first: the same moves over the view with no button held (the page's own handling of a move).
     const idle = await continuousDrag(page, grip!, 120, String(vertices), false);
     const changesBefore = (await page.evaluate('window.__textChanges || 0')) as number;
-    const c = await continuousDrag(page, grip!, 120, String(vertices));
+    const c = await continuousDrag(page, grip!, 120, String(vertices), true, { canvases: WITH_CANVAS_FLOOR });
     // The strip must have followed the drag (DRAG_PROBE counts its text changes): a drag that moved nothing measures nothing.
     const changes = ((await page.evaluate('window.__textChanges || 0')) as number) - changesBefore;
     check(changes >= 60, `the continuous drag changed the strip ${changes} times in 120 moves`);
@@ -926,6 +996,16 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
     });
     report({ work: `continuous drag ${tag}: event → next frame`, ms: median(c.toFrame), floor: median(idle.toFrame), note: `p95 ${percentile(c.toFrame, 0.95).toFixed(1)} ms (floor's p95 ${percentile(idle.toFrame, 0.95).toFixed(1)})` });
     report({ work: `continuous drag ${tag}: frame interval`, ms: median(c.frames), floor: median(idle.frames), note: `p95 ${percentile(c.frames, 0.95).toFixed(1)} ms` });
+    if (c.canvases) {
+      const f = await canvasFloor(page, c.canvases, String(vertices));
+      const live = c.canvases.layers.filter((l) => l.live).map((l) => l.name);
+      const what = `${c.canvases.layers.length} canvases of ${c.canvases.width} × ${c.canvases.height} px (pixel ratio ${c.canvases.ratio}), ${live.length} redrawn a move (${live.join(', ')})`;
+      report({
+        work: `continuous drag ${tag}: per move against its canvases`, ms: median(c.handle), floor: median(f.handle),
+        note: `floor: a bare page with ${what}, each put back with one drawImage a move; the floor's p95 ${percentile(f.handle, 0.95).toFixed(1)} ms, ${f.movesPerSecond.toFixed(1)} moves handled a second, ${f.dropped} of ${f.handle.length} dropped`,
+      });
+      report({ work: `continuous drag ${tag}: frame interval against its canvases`, ms: median(c.frames), floor: median(f.frames), note: `p95 ${percentile(c.frames, 0.95).toFixed(1)} ms (the floor's ${percentile(f.frames, 0.95).toFixed(1)})` });
+    }
     await page.keyboard.press('Control+z');
   }
   void label;

@@ -249,7 +249,7 @@ function ToolPreviewShape() {
 export function OverlayLayer() {
   const scale = useSessionStore((s) => s.camera.scale);
   return (
-    <Layer listening={false}>
+    <Layer listening={false} name="overlay">
       <DetachmentMarks />
       <FaultHandles />
       <VertexHandles />

@@ -116,9 +116,9 @@ export const ScanLayer = memo(function ScanLayer({ viewRef }: { viewRef: RefObje
     };
   }, [bitmap, pyramid, viewRef]);
 
-  if (!scan) return <Layer listening={false} />;
+  if (!scan) return <Layer listening={false} name="scan" />;
   return (
-    <Layer listening={false} ref={layerRef}>
+    <Layer listening={false} ref={layerRef} name="scan">
       <Rect x={0} y={0} width={scan.widthPx} height={scan.heightPx} fill="#ffffff" perfectDrawEnabled={false} />
       <Group ref={groupRef} />
       <GridShape />
