@@ -10,6 +10,7 @@ import { downloadFile, safeFileName } from '../io/downloadFile';
 import { markPngStep, prepareFigurePng, startFigurePng, PNG_SIZES, type FigurePngJob, type PngStep } from '../io/exportFigure';
 import { currentFigureParts, currentFigureSvgBlob, prepareCurrentFigure } from '../state/currentFigureSvg';
 import { currentUncertainty } from '../state/currentUncertainty';
+import { busyProgress } from '../state/busyProgress';
 import { docFaultsInSection, docHorizonsInSection, resultsCsv, sectionFileText } from '../io/exportTables';
 import { writeHorizonsCsv } from '../io/csvHorizons';
 import { writeHorizonsGeoJson } from '../io/geojsonHorizons';
@@ -61,7 +62,9 @@ async function exportPng(sizeId: string): Promise<void> {
   const steps: Record<PngStep, string> = { 'scan-region': 'taking the scan region', figure: 'drawing the figure', scan: 'drawing the scan', labels: 'drawing the lines and labels', encoding: 'encoding the PNG' };
   const order = Object.keys(steps) as PngStep[];
   const cancel = () => pngJob?.cancel();
-  const say = (step: PngStep) => session.setBusy(`PNG ${size.width} × ${size.height} px: ${steps[step]} …`, { done: order.indexOf(step) / order.length, cancel });
+  // A step at the small sizes lasts a few milliseconds: the message follows at most five times a second.
+  const progress = busyProgress((text, work) => session.setBusy(text, work));
+  const say = (step: PngStep) => progress.say(`PNG ${size.width} × ${size.height} px: ${steps[step]} …`, { done: order.indexOf(step) / order.length, cancel });
   say('figure');
   try {
     const { parts, scan } = currentFigureParts();
@@ -75,6 +78,7 @@ async function exportPng(sizeId: string): Promise<void> {
     else session.showMessage('error', png.message);
   } finally {
     pngJob = null;
+    progress.stop();
     session.setBusy(null);
   }
 }
