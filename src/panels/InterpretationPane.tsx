@@ -1,6 +1,6 @@
 // The area–depth graph, the results table, scenarios, sensitivity and uncertainty (interpretation pane):
 // a resizable, collapsible column on the right. Every number comes from the engine through the selectors.
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useMemo, useRef, useState, useSyncExternalStore } from 'react';
 import { useDocStore } from '../state/docStore';
 import { activeScenario } from '../core/model/docToSection';
 import type { ProjectDoc } from '../core/model/projectDoc';
@@ -8,6 +8,9 @@ import { scenarioSetIncluded } from '../core/model/commands/scenarioSetIncluded'
 import { scenarioSwitch } from '../core/model/commands/scenarioSwitch';
 import { setSettings } from '../core/model/commands/setSettings';
 import { AreaDepthGraph } from './interpretation/AreaDepthGraph';
+import { graphFit, graphFrame, unionFrame, type GraphFrame, type GraphSeriesSpec } from './interpretation/graphLayer';
+import type { AreaDepthSeries } from './interpretation/areaDepthSeries';
+import { useCrossingChecks } from '../state/crossingChecks';
 import { Cautions } from './interpretation/Cautions';
 import { DiagnosticList } from './interpretation/DiagnosticList';
 import { HorizonTable } from './interpretation/HorizonTable';
@@ -21,7 +24,7 @@ import { fitNotes } from '../format/analysisNotes';
 import { tableAreaUnit } from '../format/horizonColumns';
 import { outlierFlags } from './interpretation/outlierFlags';
 import { liveScenarioAnalysis, useScenarioAnalysis, type ScenarioAnalysis } from './interpretation/useScenarioAnalysis';
-import { useShownDoc } from '../state/shownDoc';
+import { useShownDoc, type ShownDoc } from '../state/shownDoc';
 import { LiveText, useLiveShape, type LiveRead } from './liveText';
 import type { Diagnostic } from './interpretation/diagnostics';
 import type { OutlierFlag } from './interpretation/outlierFlags';
@@ -105,26 +108,91 @@ const referenceRead: LiveRead = (doc, gs) => {
   return a && `Reference elevation for depths: ${formatLength(a.referenceElevation, doc.units)} (${scenario.referenceElevation !== undefined ? 'set for this scenario' : 'the highest regional'}).`;
 };
 
+const graphSpecs = new WeakMap<AreaDepthSeries, GraphSeriesSpec[]>();
+
+/** The pane graph's series for a document (made once per analysis, so a held graph keeps the same object). */
+function graphSpecsOf(doc: ProjectDoc, gs: ProjectDoc | null): GraphSeriesSpec[] | null {
+  const { series } = liveScenarioAnalysis(doc, gs);
+  if (!series) return null;
+  const hit = graphSpecs.get(series);
+  if (hit) return hit;
+  const scenario = activeScenario(doc);
+  const specs = [{ key: scenario.id, label: scenario.name, colour: scenarioColour(doc.scenarios.indexOf(scenario)), series }];
+  graphSpecs.set(series, specs);
+  return specs;
+}
+
+interface GraphDoc extends ShownDoc {
+  /** The axes kept during a gesture; null: the graph's own. */
+  frame: GraphFrame | null;
+}
+
 /**
- * The area–depth graph of the store's document: while a regional is dragged its points and line follow in the
- * graph's own render (the rest of the pane holds still and its numbers are live texts).
+ * The store's document as the pane's graph renders it. During a gesture, the one last rendered, while the store's
+ * graph fits in its axes (graphShape): its moves are drawn on the graph's canvas layer instead; when it does not, the
+ * store's, in axes widened to take it (unionFrame). Unless `hold` is false: then every move renders.
+ */
+function useGraphDoc(hold: boolean, dataOnly: boolean): GraphDoc {
+  const held = useRef<GraphDoc | null>(null);
+  const get = useCallback((): GraphDoc => {
+    const { doc, gestureStart } = useDocStore.getState();
+    const h = held.current;
+    if (h && h.doc === doc && h.gestureStart === gestureStart) return h;
+    const specs = graphSpecsOf(doc, gestureStart);
+    const heldSpecs = h && graphSpecsOf(h.doc, h.gestureStart);
+    const heldFrame = h && (h.frame ?? graphFrameOf(heldSpecs, dataOnly, h.doc.units));
+    if (hold && gestureStart && h && heldFrame && heldSpecs && specs && h.doc.units === doc.units) {
+      const now = graphFit(specs, heldFrame, dataOnly, doc.units);
+      const was = graphFit(heldSpecs, heldFrame, dataOnly, doc.units);
+      const own = graphFrameOf(specs, dataOnly, doc.units);
+      if (now && was && own && now.parts === was.parts) {
+        if (now.within) return h;
+        return (held.current = { doc, gestureStart, frame: unionFrame(heldFrame, own, GRAPH_HEIGHT) });
+      }
+    }
+    return (held.current = { doc, gestureStart, frame: null });
+  }, [hold, dataOnly]);
+  return useSyncExternalStore(useDocStore.subscribe, get, get);
+}
+
+/**
+ * The area–depth graph of the store's document: while a regional is dragged its points and line follow on the
+ * graph's canvas layer, and the graph renders only when its axes or parts change (the rest of the pane holds still
+ * and its numbers are live texts). With the second segment shown every move renders the graph.
  */
 function LiveGraph({ dataOnly, onTogglePoint, twoSegment }: { dataOnly: boolean; onTogglePoint: (p: GraphPoint) => void; twoSegment: TwoSegmentFit | null }) {
-  const doc = useDocStore((s) => s.doc);
-  const { series } = useScenarioAnalysis(undefined, true);
-  const scenario = activeScenario(doc);
-  if (!series) return null;
+  const hold = twoSegment === null;
+  const { doc, gestureStart, frame } = useGraphDoc(hold, dataOnly);
+  // A self-crossing verdict changes the analysis of the same document (crossingChecks.ts): render it then.
+  useCrossingChecks((s) => s.answered);
+  const specs = graphSpecsOf(doc, gestureStart);
+  if (!specs) return null;
   return (
     <AreaDepthGraph
-      series={[{ key: scenario.id, label: scenario.name, colour: scenarioColour(doc.scenarios.indexOf(scenario)), series }]}
+      series={specs}
       units={doc.units}
       dataOnly={dataOnly}
       interactive
       onTogglePoint={onTogglePoint}
       twoSegment={twoSegment}
       testId="area-depth-graph"
+      height={GRAPH_HEIGHT}
+      follow={hold ? { doc, read: graphSpecsOf, frame } : undefined}
     />
   );
+}
+
+const GRAPH_HEIGHT = 300;
+const graphFrames = new WeakMap<GraphSeriesSpec[], { dataOnly: boolean; units: string; frame: GraphFrame | null }>();
+
+/** The axes the pane's graph renders for its series (made once per series, zoom and units). */
+function graphFrameOf(specs: GraphSeriesSpec[] | null, dataOnly: boolean, units: string): GraphFrame | null {
+  if (!specs) return null;
+  const hit = graphFrames.get(specs);
+  if (hit && hit.dataOnly === dataOnly && hit.units === units) return hit.frame;
+  const frame = graphFrame(specs, dataOnly, units, GRAPH_HEIGHT);
+  graphFrames.set(specs, { dataOnly, units, frame });
+  return frame;
 }
 
 function PaneBody({ onCollapse }: { onCollapse: () => void }) {

@@ -1,20 +1,23 @@
 // The area–depth graph (Epard & Groshong 1993): excess area across, depth below the reference down.
 // One point per horizon (hollow when excluded), the fitted line, its 95% band for the mean, and the
-// zero-area intercept marked as the detachment with its Fieller interval. Plain SVG drawn by React.
-import { useMemo, useRef, useState } from 'react';
+// zero-area intercept marked as the detachment with its Fieller interval. Plain SVG drawn by React; with `follow`
+// its moving parts follow a gesture on a canvas over it instead (graphLayer.ts), one draw a frame.
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import type { TwoSegmentFit } from '../../core/analysis/twoSegmentFit';
+import type { ProjectDoc } from '../../core/model/projectDoc';
+import { useDocStore } from '../../state/docStore';
 import type { AreaDepthSeries, GraphPoint } from './areaDepthSeries';
-import { EXACT_FIT_TEXT, formatArea, formatInterval, formatLength, formatNumber } from '../../format/formatQuantity';
-import { graphDomain } from './graphDomain';
-import { linearScale } from './linearScale';
-import { linspace, meanBand } from './meanBand';
-import { isExactFit } from '../../core/analysis/isExactFit';
+import { formatArea, formatLength, formatNumber } from '../../format/formatQuantity';
+import { GRAPH_M as M, GRAPH_W as W, bandCorners, detachmentLabels, detachmentText, drawGraphLayer, graphFrame, graphShape, labelRight, lineAt, pointLabelText, type GraphFrame, type GraphLayerStyle, type GraphSeriesSpec } from './graphLayer';
 
-export interface GraphSeriesSpec {
-  key: string;
-  label: string;
-  colour: string;
-  series: AreaDepthSeries;
+export type { GraphSeriesSpec } from './graphLayer';
+
+/** How a graph follows a gesture: the document its series were made from, and the series of another document. */
+export interface GraphFollow {
+  doc: ProjectDoc;
+  read: (doc: ProjectDoc, gestureStart: ProjectDoc | null) => GraphSeriesSpec[] | null;
+  /** The axes to draw in (during a gesture, kept from earlier in it: graphShape); null: the series' own. */
+  frame: GraphFrame | null;
 }
 
 interface Props {
@@ -29,22 +32,21 @@ interface Props {
   height?: number;
   /** The depth axis title; default "Depth below reference (units)". */
   depthLabel?: string;
+  /** Draws the store's document on the graph's canvas during a gesture while its shape is the rendered one's. */
+  follow?: GraphFollow;
 }
 
-const W = 400;
-const M = { left: 58, right: 14, top: 14, bottom: 40 };
-
-export function AreaDepthGraph({ series, units, dataOnly, interactive = false, onTogglePoint, twoSegment, testId, height = 300, depthLabel }: Props) {
+export function AreaDepthGraph({ series, units, dataOnly, interactive = false, onTogglePoint, twoSegment, testId, height = 300, depthLabel, follow }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
   const [hover, setHover] = useState<{ area: number; depth: number } | null>(null);
   const [hoverPoint, setHoverPoint] = useState<GraphPoint | null>(null);
   const H = height;
-  const domain = useMemo(() => graphDomain(series.map((s) => s.series), dataOnly, units), [series, dataOnly, units]);
-  if (!domain) return <p className="hint">No horizons with a regional yet.</p>;
+  const kept = follow?.frame ?? null;
+  const frame = useMemo(() => kept ?? graphFrame(series, dataOnly, units, H), [kept, series, dataOnly, units, H]);
+  const layer = useFollowLayer(follow && frame ? { follow, frame, series, dataOnly, units, height: H, interactive } : null);
+  if (!frame) return <p className="hint">No horizons with a regional yet.</p>;
+  const { domain, xs, ys } = frame;
   const { unit, areaTicks, depthTicks } = domain;
-  const xs = linearScale(domain.area, [M.left, W - M.right]);
-  const ys = linearScale(domain.depth, [M.top, H - M.bottom]);
-  const depthsAcross = linspace(domain.depth[0], domain.depth[1], 48);
   const main = series[0];
 
   const toData = (e: React.MouseEvent): { area: number; depth: number } | null => {
@@ -56,11 +58,11 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
     return { area: xs.invert(p.x), depth: ys.invert(p.y) };
   };
 
-  const lineAt = (s: AreaDepthSeries, h: number): number | null => (s.fit.result ? s.fit.result.intercept + s.fit.result.slope * h : null);
   const refElev = main.series.referenceElevation;
 
   return (
     <div className="graph-box">
+      <div className="graph-plot">
       <svg
         ref={svgRef}
         viewBox={`0 0 ${W} ${H}`}
@@ -91,8 +93,8 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
         ))}
         <text x={(M.left + W - M.right) / 2} y={H - 6} className="axis-label" textAnchor="middle">Excess area ({unit.label})</text>
         <text transform={`translate(12 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} className="axis-label" textAnchor="middle">{depthLabel ?? `Depth below reference (${units})`}</text>
-        <g clipPath={`url(#plot-${testId ?? 'g'})`}>
-          {interactive && main.series.fit.fit && <Band s={main.series} depths={depthsAcross} xs={xs} ys={ys} colour={main.colour} />}
+        <g clipPath={`url(#plot-${testId ?? 'g'})`} ref={layer.clipped}>
+          {interactive && main.series.fit.fit && <Band s={main.series} frame={frame} colour={main.colour} />}
           {series.map((s) => s.series.fit.result && (
             <polyline key={`l${s.key}`} className="fit-line" stroke={s.colour}
               points={[domain.depth[0], domain.depth[1]].map((h) => `${xs.map(lineAt(s.series, h)!)},${ys.map(h)}`).join(' ')} />
@@ -103,6 +105,7 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
           ))}
           {series.map((s) => <Detachment key={`z${s.key}`} s={s} xs={xs} ys={ys} units={units} labelled={interactive || series.length === 1} testId={interactive ? 'graph-detachment' : undefined} />)}
         </g>
+        <g ref={layer.points}>
         {series.map((s, si) => s.series.points.map((p, i) => (
           <g
             key={`p${s.key}-${p.id}`}
@@ -112,13 +115,16 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
             onClick={interactive && si === 0 && onTogglePoint ? () => onTogglePoint(p) : undefined}
           >
             <circle cx={xs.map(p.area)} cy={ys.map(p.depth)} r={interactive ? 5 : 4} stroke={s.colour} fill={p.included ? s.colour : '#ffffff'} strokeWidth={1.6} />
-            {interactive && si === 0 && <PointLabel p={p} x={xs.map(p.area)} y={ys.map(p.depth)} right={xs.map(p.area) < (M.left + W - M.right) / 2 + 40} />}
+            {interactive && si === 0 && <PointLabel p={p} x={xs.map(p.area)} y={ys.map(p.depth)} right={labelRight(xs.map(p.area))} />}
             {/* The hit target last, on top of the label, so a click on the point always lands on it. */}
             <circle cx={xs.map(p.area)} cy={ys.map(p.depth)} r={10} fill="transparent"
               data-testid={interactive && si === 0 ? `graph-point-${i}` : undefined} data-included={p.included ? 'yes' : 'no'} data-name={p.name} />
           </g>
         )))}
+        </g>
       </svg>
+      {follow && <canvas ref={layer.canvas} className="graph-layer" aria-hidden="true" />}
+      </div>
       {series.length > 1 && (
         // Below the plot, not on it, so that it never covers a point.
         <ul className="graph-legend" data-testid={testId ? `${testId}-legend` : undefined}>
@@ -147,14 +153,12 @@ export function AreaDepthGraph({ series, units, dataOnly, interactive = false, o
   );
 }
 
-type Scale = ReturnType<typeof linearScale>;
+type Scale = GraphFrame['xs'];
 
-function Band({ s, depths, xs, ys, colour }: { s: AreaDepthSeries; depths: number[]; xs: Scale; ys: Scale; colour: string }) {
-  const fit = s.fit.fit!;
-  const band = meanBand(fit, depths, 0.95);
-  if (!band) return null;
-  const pts = [...band.map((b) => `${xs.map(b.lo)},${ys.map(b.x)}`), ...[...band].reverse().map((b) => `${xs.map(b.hi)},${ys.map(b.x)}`)];
-  return <polygon className="band" fill={colour} points={pts.join(' ')} data-testid="graph-band" />;
+function Band({ s, frame, colour }: { s: AreaDepthSeries; frame: GraphFrame; colour: string }) {
+  const corners = bandCorners(s, frame);
+  if (!corners) return null;
+  return <polygon className="band" fill={colour} points={corners.map(([x, y]) => `${x},${y}`).join(' ')} data-testid="graph-band" />;
 }
 
 function Detachment({ s, xs, ys, units, labelled, testId }: { s: GraphSeriesSpec; xs: Scale; ys: Scale; units: string; labelled: boolean; testId?: string }) {
@@ -173,12 +177,7 @@ function Detachment({ s, xs, ys, units, labelled, testId }: { s: GraphSeriesSpec
         </g>
       )}
       <path d={`M ${x0} ${y - 6} L ${x0 + 6} ${y} L ${x0} ${y + 6} L ${x0 - 6} ${y} Z`} fill={s.colour} stroke="#ffffff" strokeWidth={1} />
-      {labelled && (
-        <text x={x0 + 9} y={y + 4} className="detachment-label">
-          detachment {formatLength(r.detachmentDepth, units)}
-          {isExactFit(r) ? ` (${EXACT_FIT_TEXT})` : f.kind === 'bounded' ? ` (95%: ${formatInterval([f.lo, f.hi], units)})` : f.kind === 'unbounded' ? ' (95% interval unbounded)' : ''}
-        </text>
-      )}
+      {labelled && <text x={x0 + 9} y={y + 4} className="detachment-label">{detachmentText(s.series, units)}</text>}
     </g>
   );
 }
@@ -199,11 +198,122 @@ function TwoSegmentLines({ fit, domain, xs, ys }: { fit: TwoSegmentFit; domain: 
 }
 
 function PointLabel({ p, x, y, right }: { p: GraphPoint; x: number; y: number; right: boolean }) {
-  const name = p.name.replace(/^Top /, '');
-  const text = name.length > 18 ? `${name.slice(0, 17)}…` : name;
+  const text = pointLabelText(p);
   return (
     <text x={right ? x + 8 : x - 8} y={y - 6} textAnchor={right ? 'start' : 'end'} className={p.included ? 'point-label' : 'point-label excluded'}>
       {text}
     </text>
   );
+}
+
+interface FollowArgs {
+  follow: GraphFollow;
+  frame: GraphFrame;
+  series: GraphSeriesSpec[];
+  dataOnly: boolean;
+  units: string;
+  height: number;
+  interactive: boolean;
+}
+
+/**
+ * The canvas layer of a following graph: after each move of a gesture (one draw a frame) the store's document is
+ * drawn on it and the SVG's moving parts are hidden, as long as the store's graph has the rendered one's shape
+ * (otherwise the graph renders, see LiveGraph); after every render the SVG shows them again and the layer is clear.
+ * Its size comes from a ResizeObserver and its font and ink from the page once: a move reads no style or layout.
+ */
+function useFollowLayer(args: FollowArgs | null) {
+  const clipped = useRef<SVGGElement>(null);
+  const points = useRef<SVGGElement>(null);
+  const canvas = useRef<HTMLCanvasElement>(null);
+  const latest = useRef(args);
+  const on = Boolean(args);
+  useLayoutEffect(() => {
+    const before = latest.current;
+    latest.current = args;
+    // A render of other series or axes shows them in the SVG; one of the same (the pane rendering round the graph)
+    // leaves the layer as it is, so the SVG's moving parts are not restyled for nothing.
+    if (!args || !before || before.series !== args.series || before.frame.domain !== args.frame.domain || before.dataOnly !== args.dataOnly) {
+      hideLayer(clipped.current, points.current, canvas.current);
+    }
+  });
+  useEffect(() => {
+    const c = canvas.current;
+    if (!on || !c) return;
+    let width = 0;
+    const sized = new ResizeObserver((entries) => {
+      width = entries[entries.length - 1].contentRect.width;
+    });
+    sized.observe(c);
+    // Read once, after the graph is first shown (not during a gesture).
+    const css = getComputedStyle(c);
+    const style: GraphLayerStyle = { fontFamily: css.fontFamily, ink: css.getPropertyValue('--ink').trim() || '#1c2329' };
+    let rendered: { series: GraphSeriesSpec[]; frame: GraphFrame; shape: string } | null = null;
+    let frameAsked = 0;
+    const draw = () => {
+      frameAsked = 0;
+      const a = latest.current;
+      const { doc, gestureStart } = useDocStore.getState();
+      const specs = a && gestureStart && doc !== a.follow.doc ? a.follow.read(doc, gestureStart) : null;
+      if (!a || !specs || width === 0) return hideLayer(clipped.current, points.current, c);
+      if (rendered?.series !== a.series || rendered.frame !== a.frame) rendered = { series: a.series, frame: a.frame, shape: graphShape(a.series, a.frame, a.dataOnly, a.units) };
+      // A graph of another shape is rendered instead (its render clears the layer).
+      if (graphShape(specs, a.frame, a.dataOnly, a.units) !== rendered.shape) return;
+      const dpr = window.devicePixelRatio || 1;
+      const w = Math.max(1, Math.round(width * dpr));
+      const h = Math.max(1, Math.round((width * a.height * dpr) / W));
+      if (c.width !== w || c.height !== h) {
+        c.width = w;
+        c.height = h;
+      }
+      const ctx = c.getContext('2d');
+      if (!ctx) return;
+      ctx.setTransform(1, 0, 0, 1, 0, 0);
+      ctx.clearRect(0, 0, w, h);
+      ctx.setTransform(w / W, 0, 0, h / a.height, 0, 0);
+      drawGraphLayer(ctx, specs, a.frame, a.height, a.interactive, a.units, style);
+      // The hidden SVG's detachment labels keep the text drawn (what a reader of the page finds there).
+      const labels = clipped.current?.querySelectorAll('.detachment-label') ?? [];
+      const texts = detachmentLabels(specs, a.units, a.interactive);
+      if (labels.length === texts.length) labels.forEach((el, i) => writeSvgText(el, texts[i]));
+      drawn.add(c);
+      showLayer(clipped.current, points.current);
+    };
+    const unsubscribe = useDocStore.subscribe((s, prev) => {
+      if (s.gestureStart && s.doc !== prev.doc && !frameAsked) frameAsked = requestAnimationFrame(draw);
+    });
+    return () => {
+      unsubscribe();
+      sized.disconnect();
+      if (frameAsked) cancelAnimationFrame(frameAsked);
+    };
+  }, [on]);
+  return { clipped, points, canvas };
+}
+
+/** Sets an SVG text element's one text node in place. */
+function writeSvgText(el: Element, text: string): void {
+  const t = el.firstChild;
+  if (t && !t.nextSibling && t.nodeType === Node.TEXT_NODE) {
+    if ((t as Text).data !== text) (t as Text).data = text;
+  } else if (el.textContent !== text) el.textContent = text;
+}
+
+/** The layers with something drawn on them. */
+const drawn = new WeakSet<HTMLCanvasElement>();
+
+/** The layer in use: the SVG's moving parts hidden (once, at the first frame drawn). */
+function showLayer(clipped: SVGGElement | null, points: SVGGElement | null): void {
+  if (clipped && clipped.style.visibility !== 'hidden') clipped.style.visibility = 'hidden';
+  if (points && points.style.visibility !== 'hidden') points.style.visibility = 'hidden';
+}
+
+/** The SVG as rendered, the layer clear. */
+function hideLayer(clipped: SVGGElement | null, points: SVGGElement | null, canvas: HTMLCanvasElement | null): void {
+  if (clipped && clipped.style.visibility) clipped.style.visibility = '';
+  if (points && points.style.visibility) points.style.visibility = '';
+  if (canvas && drawn.has(canvas)) {
+    canvas.getContext('2d')?.clearRect(0, 0, canvas.width, canvas.height);
+    drawn.delete(canvas);
+  }
 }
