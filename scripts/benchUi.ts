@@ -4,7 +4,7 @@
 //
 //   npm run bench:ui [-- --scans 1,25,100,200 --png-sizes screen,a3-300 --vertices 2000,20000,100000 --runs 3 --no-uncapped --no-scans
 //                       --no-documents --trace-mp 200 --no-trace --only-trace --moves 60 --trace-profile folder
-//                       --profile folder --first-move-trace folder --open-trace folder --no-continuous --no-canvas-floor
+//                       --profile folder --first-move-trace folder --open-trace folder --export-trace folder --no-continuous --no-canvas-floor
 //                       --drag-trace folder --drag-invalidations]
 //   BENCH_DIST=folder skips the build and serves that folder.
 //
@@ -94,6 +94,8 @@ const WITH_CANVAS_FLOOR = !process.argv.includes('--no-canvas-floor');
 const DRAG_INVALIDATIONS = process.argv.includes('--drag-invalidations');
 /** A folder for a Chromium trace of each big-document open and each size's first scan open (`open-12x<n>.trace.json`, `open-scan-<n>mp.trace.json`), with the main thread's longest tasks by event. */
 const OPEN_TRACE = flag('open-trace');
+/** Folder for a Chromium trace of each PNG export's first run (export-<w>x<h>-<n>mp.trace.json), printed by thread. */
+const EXPORT_TRACE = flag('export-trace');
 
 class BenchFailure extends Error {}
 function check(ok: unknown, what: string): asserts ok {
@@ -329,6 +331,46 @@ const exportFloor = (page: Page, w: number, h: number) => page.evaluate(`(async 
   return { ms, draw: drawn - t, bytes: png.size };
 })()`) as Promise<{ ms: number; draw: number; bytes: number }>;
 
+const EXPORT_TRACE_CATEGORIES = ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing', 'v8.execute', 'toplevel', 'blink', 'cc', 'gpu'];
+
+/**
+ * Writes the trace of one PNG export (--export-trace) and prints, for each thread of the page's renderer busy between
+ * the export's 'asked' and 'handed' marks, its busy time, its longest top-level events (ms at ms after 'asked') and
+ * its time of its own by event.
+ */
+async function saveExportTrace(page: Page, name: string): Promise<void> {
+  const raw = await page.context().browser()!.stopTracing();
+  const { writeFileSync, mkdirSync } = await import('node:fs');
+  mkdirSync(EXPORT_TRACE!, { recursive: true });
+  writeFileSync(`${EXPORT_TRACE}/${name}.trace.json`, raw);
+  const trace = JSON.parse(raw.toString()) as { traceEvents: TraceEvent[] };
+  const marks = trace.traceEvents.filter((e) => e.name === 'foldroot-png-step');
+  const stepOf = (e: TraceEvent) => (e.args as { data?: { detail?: string } } | undefined)?.data?.detail ?? '';
+  const asked = marks.find((e) => stepOf(e).includes('asked'));
+  const handed = marks.find((e) => stepOf(e).includes('handed'));
+  if (!asked || !handed) {
+    console.log(`  ${name}: the trace holds no asked/handed marks`);
+    return;
+  }
+  const [from, to] = [asked.ts!, handed.ts!];
+  const threads = new Map<string, string>();
+  for (const e of trace.traceEvents) if (e.ph === 'M' && e.name === 'thread_name') threads.set(`${e.pid}:${e.tid}`, e.args?.name ?? '');
+  console.log(`  ${name} (${name}.trace.json): asked → handed ${((to - from) / 1000).toFixed(1)} ms; marks (ms after asked): ${marks.map((m) => `${stepOf(m).replace(/"/g, '')} ${((m.ts! - from) / 1000).toFixed(0)}`).join(' · ')}`);
+  const byThread = new Map<string, TraceEvent[]>();
+  for (const e of trace.traceEvents) {
+    if (e.pid !== asked.pid || e.ph !== 'X' || !e.dur || e.ts! + e.dur < from || e.ts! > to) continue;
+    const k = `${e.pid}:${e.tid}`;
+    byThread.set(k, [...(byThread.get(k) ?? []), e]);
+  }
+  for (const [k, on] of byThread) {
+    const { tasks, self } = mainThreadBetween(on, from, to);
+    const busy = tasks.reduce((a, t) => a + t.ms, 0);
+    if (busy < 1) continue;
+    console.log(`    ${threads.get(k) ?? k}: busy ${busy.toFixed(1)} ms in ${tasks.length} tasks; the longest: ${[...tasks].sort((a, b) => b.ms - a.ms).slice(0, 5).map((t) => `${t.ms.toFixed(1)} at ${t.at.toFixed(0)} ${t.key}`).join(', ')}`);
+    printSelf(self, 10, '        ');
+  }
+}
+
 /** The PNG sizes the export offers (src/io/exportFigure.ts PNG_SIZES), or those --png-sizes names. */
 const PNG_SIZES = [['screen', 1400, 990], ['a4-150', 1754, 1240], ['a4-300', 3508, 2480], ['a3-300', 4961, 3508]] as const;
 const WANTED_SIZES = flag('png-sizes')?.split(',');
@@ -341,7 +383,7 @@ const EXPORT_SIZES = PNG_SIZES.filter(([id]) => !WANTED_SIZES || WANTED_SIZES.in
  * 'download'), the longest task, and the main thread's JavaScript heap peak over its level before the export (bytes;
  * sampled every 5 ms, after a collection).
  */
-async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; longest: number; bytes: number; heapPeak: number; steps: Map<string, number> }> {
+async function exportPng(page: Page, sizeId: string, traceName?: string): Promise<{ ms: number; longest: number; bytes: number; heapPeak: number; steps: Map<string, number> }> {
   await page.getByTestId('menu-export').click();
   await page.getByTestId('png-size').selectOption(sizeId);
   const cdp = await page.context().newCDPSession(page);
@@ -356,9 +398,11 @@ async function exportPng(page: Page, sizeId: string): Promise<{ ms: number; long
     window.__pressedAt = 0;
     document.querySelector('[data-testid="export-png"]').addEventListener('click', (e) => { window.__pressedAt = e.timeStamp; }, { once: true, capture: true });
   })()`);
+  if (traceName) await page.context().browser()!.startTracing(page, { categories: EXPORT_TRACE_CATEGORIES });
   const t0 = await now(page);
   const [download] = await Promise.all([page.waitForEvent('download', { timeout: 300_000 }), page.getByTestId('export-png').click()]);
   const t1 = await now(page);
+  if (traceName) await saveExportTrace(page, traceName);
   const heapPeak = (await page.evaluate(`(() => { clearInterval(window.__heapTimer); const u = performance.memory.usedJSHeapSize; return Math.max(window.__heap.peak, u) - window.__heap.base; })()`)) as number;
   const path = await download.path();
   check(path, 'the PNG export produced no file');
@@ -1054,7 +1098,7 @@ async function scans(page: Page): Promise<void> {
       }
       if (EXPORT_SIZES.length > 0 && run === 0) await figureForFloor(page);
       for (const [k, [id, w, h]] of EXPORT_SIZES.entries()) {
-        const e = await exportPng(page, id);
+        const e = await exportPng(page, id, EXPORT_TRACE && run === 0 ? `export-${w}x${h}-${mp}mp` : undefined);
         exp[k].ms.push(e.ms);
         exp[k].longest.push(e.longest);
         exp[k].heap.push(e.heapPeak);
