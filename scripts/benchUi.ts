@@ -1089,6 +1089,7 @@ async function scans(page: Page): Promise<void> {
             report({ work: `  … against the app before any scan + its RGBA (${mp} MP)`, ms: m.rss, floor: before.rss + rgba, unit: 'MB', note: `floor: ${before.rss.toFixed(0)} + ${rgba.toFixed(0)} MB${alloc ? `; the page's renderer by allocator (MB): ${allocatorLine(alloc, 8)}` : ''}` });
           }
         }
+        if (mp === big && m) await bareScanMemory(page, side, m.rss - (before?.rss ?? 0));
         if (mp === big && before) await replacedMemory(page, mp, rgba, before, name);
       }
       if (EXPORT_SIZES.length > 0 && run === 0) await figureForFloor(page);
@@ -1134,6 +1135,41 @@ async function scans(page: Page): Promise<void> {
       work: `  … replaced again after its exports and their floors`, ms: after.rss, floor: before.rss, unit: 'MB',
       note: `the page's renderer process, resident; floor: before any scan; ${residentLine(after)} MB (the floors' image decoding in this page, not the app's); ${lastMp} MP RGBA is ${lastRgba.toFixed(0)} MB`,
     });
+  }
+}
+
+/**
+ * The browser's floor for holding a decoded scan: a bare page of the same size (a new tab, so a renderer process of
+ * its own) that makes the same file, decodes it with createImageBitmap and draws it fitted on a canvas the size of
+ * the view, measured as the app's page is (its renderer process, resident, after a collection), against that page
+ * before. `appMb` is what the app's page gained with the scan open.
+ */
+async function bareScanMemory(page: Page, side: number, appMb: number): Promise<void> {
+  const bare = await page.context().browser()!.newPage({ viewport: page.viewportSize()! });
+  try {
+    await bare.setContent('<canvas id="view" style="display:block"></canvas>');
+    await makeScan(bare, side, 'bare.jpg');
+    const empty = await rendererMemory(bare);
+    await bare.evaluate(`(async () => {
+      const bitmap = await createImageBitmap(window.__scanFile);
+      window.__scanFile = null;
+      window.__bitmap = bitmap;
+      const c = document.getElementById('view');
+      c.width = innerWidth;
+      c.height = innerHeight;
+      const k = Math.min(c.width / bitmap.width, c.height / bitmap.height);
+      c.getContext('2d').drawImage(bitmap, 0, 0, bitmap.width * k, bitmap.height * k);
+      await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+    })()`);
+    const held = await rendererMemory(bare);
+    if (!empty || !held) return;
+    const floorMb = held.rss - empty.rss;
+    report({
+      work: `  … what the scan added, against a bare page (${Math.round((side * side) / 1e6)} MP)`, ms: appMb, floor: floorMb, unit: 'MB',
+      note: `floor: a bare page's renderer (pid ${held.pid}) decoding the same file and drawing it fitted, ${residentLine(empty)} MB before, ${residentLine(held)} MB after`,
+    });
+  } finally {
+    await bare.close();
   }
 }
 
