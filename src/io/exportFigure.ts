@@ -7,7 +7,7 @@
 import { FIGURE_HEIGHT, FIGURE_WIDTH, scanImageOpen, type SectionSvgParts } from './renderSectionSvg';
 import { figureScanRegion } from './figureScanRegion';
 import { base64Pieces } from './base64Pieces';
-import type { FigurePngReply, FigurePngRequest, FigurePngScan, FigureScanRegion, PngStep } from './figurePngProtocol';
+import type { FigurePngPrepare, FigurePngReply, FigurePngRequest, FigurePngScan, FigureScanRegion, PngStep } from './figurePngProtocol';
 
 export type { PngStep } from './figurePngProtocol';
 
@@ -139,9 +139,23 @@ export const markPngStep = (step: string): void => void performance.mark(PNG_STE
 let idle: Worker | null = null;
 const newWorker = () => new Worker(new URL('./workers/figurePng.worker.ts', import.meta.url), { type: 'module' });
 
-/** Starts the PNG worker ahead of an export (e.g. when the export menu opens), so that its script is loaded and compiled by then; one is kept at most. */
-export function prepareFigurePng(): void {
+/**
+ * Starts the PNG worker ahead of an export (e.g. when the export menu opens), so that its script is loaded and
+ * compiled by then; one is kept at most. With the figure's parts, the worker also parses their markup meanwhile, so an
+ * export of the same figure starts painting at once.
+ */
+export function prepareFigurePng(parts?: SectionSvgParts): void {
+  // Outside a browser (the unit tests) there is no worker to start.
+  if (typeof Worker === 'undefined') return;
   idle ??= newWorker();
+  if (!parts) return;
+  const ahead: FigurePngPrepare = { kind: 'prepare', ...figureDocuments(parts) };
+  idle.postMessage(ahead);
+}
+
+/** The figure's part below the scan and its part above, each a whole SVG document (as the worker paints them). */
+function figureDocuments(parts: SectionSvgParts): { under: string; over: string } {
+  return { under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>` };
 }
 
 /**
@@ -191,7 +205,7 @@ export function startFigurePng(parts: SectionSvgParts, scan: FigureScanSource | 
       markPngStep('start');
       const showsScan = Boolean(scan && parts.scan);
       const req: FigurePngRequest = {
-        kind: 'figure', under: `${parts.head}${parts.under}</svg>`, over: `${parts.head}${parts.panelOpen}${parts.over}</svg>`,
+        kind: 'figure', ...figureDocuments(parts),
         figure: { width: FIGURE_WIDTH, height: FIGURE_HEIGHT }, panel: parts.panel, width, height, scanFollows: showsScan,
       };
       w.postMessage(req);

@@ -39,6 +39,12 @@ export interface FigurePngRequest {
 
 export interface FigurePngScan { kind: 'scan'; scan: FigureScanRegion | null }
 
-export type FigurePngMessage = FigurePngRequest | FigurePngScan;
+/**
+ * The figure's two parts sent ahead of an export (when the export menu opens): the worker parses them meanwhile and
+ * keeps the trees, and an export whose parts are the same markup paints from them instead of parsing again.
+ */
+export interface FigurePngPrepare { kind: 'prepare'; under: string; over: string }
+
+export type FigurePngMessage = FigurePngRequest | FigurePngScan | FigurePngPrepare;
 
 export type FigurePngReply = { kind: 'step'; step: PngStep } | { kind: 'done'; blob: Blob } | { kind: 'failed'; message: string };

@@ -1,6 +1,6 @@
 // The section figure of the open project: the document, its analysis and its scan, drawn by io/renderSectionSvg
 // (in parts: written out as the SVG file with the scan embedded once, or handed to the PNG worker with the scan region).
-import { scanDataUrlParts, sectionSvgBlob, type FigureScanSource } from '../io/exportFigure';
+import { prepareFigurePng, scanDataUrlParts, sectionSvgBlob, type FigureScanSource } from '../io/exportFigure';
 import { renderSectionSvgParts, type SectionSvgParts } from '../io/renderSectionSvg';
 import { useDocStore } from './docStore';
 import { useSessionStore } from './sessionStore';
@@ -35,11 +35,13 @@ function figureMarkup(): SectionSvgParts {
 }
 
 /**
- * Writes the figure's markup of the open project a task from now (when the export menu opens), so that an export
- * chosen from it starts drawing at once; an edit meanwhile has it written again at the export.
+ * Writes the figure's markup of the open project a task from now (when the export menu opens) and hands it to the PNG
+ * worker to parse, so that an export chosen from it starts drawing at once; an edit meanwhile has it written again at
+ * the export (and parsed there).
  */
 export function prepareCurrentFigure(): void {
-  setTimeout(() => void figureMarkup(), 0);
+  // The PNG worker parses the same markup meanwhile (io/exportFigure prepareFigurePng).
+  setTimeout(() => prepareFigurePng(figureMarkup()), 0);
 }
 
 /** Returns the figure of the open project in its parts below and above the scan, with the decoded scan (and its tile pyramid when cut) to draw between them (null when none is shown). */

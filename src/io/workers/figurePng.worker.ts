@@ -3,7 +3,8 @@
 // figure's matrix and clipped to the panel), the part above, and the PNG encoding. Both parts are the figure's
 // own SVG markup (io/renderSectionSvg), painted by io/paintFigureSvg. Reports each step as it starts; the page
 // cancels by ending the worker. The figure comes first and is painted while the page takes the scan region, which
-// follows in a second message (io/figurePngProtocol); the worker then stays for the next export.
+// follows in a second message (io/figurePngProtocol); the worker then stays for the next export. The figure's parts
+// may come ahead of the export (when the export menu opens): parsed then, an export of the same markup paints from them.
 import { paintFigureSvg, parseFigureSvg, type SvgNode } from '../paintFigureSvg';
 import type { FigurePngMessage, FigurePngReply, FigurePngRequest, FigureScanRegion } from '../figurePngProtocol';
 
@@ -46,6 +47,12 @@ function drawScan(ctx: Ctx, req: FigurePngRequest, scan: FigureScanRegion): void
   else image.width = image.height = 0;
 }
 
+/** The parts last sent ahead (FigurePngPrepare), with their trees; the next export reuses a tree whose markup is the same. */
+let prepared: { under: string; over: string; underTree: SvgNode; overTree: SvgNode } | null = null;
+
+const parsedUnder = (markup: string) => (prepared && prepared.under === markup ? prepared.underTree : parseFigureSvg(markup));
+const parsedOver = (markup: string) => (prepared && prepared.over === markup ? prepared.overTree : parseFigureSvg(markup));
+
 /** The export under way: its canvas with the figure's lower part painted, the upper part parsed, waiting for the scan. */
 let pending: { req: FigurePngRequest; canvas: OffscreenCanvas; ctx: Ctx; over: SvgNode } | null = null;
 
@@ -56,8 +63,8 @@ function begin(req: FigurePngRequest): void {
   post({ kind: 'step', step: 'figure' });
   ctx.fillStyle = '#ffffff';
   ctx.fillRect(0, 0, req.width, req.height);
-  paintFigureSvg(ctx, parseFigureSvg(req.under), req.width, req.height);
-  pending = { req, canvas, ctx, over: parseFigureSvg(req.over) };
+  paintFigureSvg(ctx, parsedUnder(req.under), req.width, req.height);
+  pending = { req, canvas, ctx, over: parsedOver(req.over) };
 }
 
 async function finish(scan: FigureScanRegion | null): Promise<Blob> {
@@ -84,6 +91,15 @@ function failed(err: unknown): void {
 
 self.onmessage = (e: MessageEvent<FigurePngMessage>) => {
   const m = e.data;
+  if (m.kind === 'prepare') {
+    try {
+      prepared = { under: m.under, over: m.over, underTree: parseFigureSvg(m.under), overTree: parseFigureSvg(m.over) };
+    } catch {
+      // Markup that does not parse is reported by the export that paints it.
+      prepared = null;
+    }
+    return;
+  }
   try {
     if (m.kind === 'figure') {
       begin(m);
