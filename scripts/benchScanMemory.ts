@@ -2,7 +2,8 @@
 // another in headless Chromium, and prints after each (its reduced views made) the page's JS heap (CDP
 // Performance.getMetrics, after a forced garbage collection), the renderer's resident and private memory and that
 // of all the browser's processes (Linux /proc, which is where decoded bitmaps and tiles live: they are not JS heap),
-// and what the scan panel says it holds (decoded scans, reduced-view tiles).
+// and what the scan panel says it holds (decoded scans, reduced-view tiles). The renderer is the page's own process
+// (scripts/rendererMemory.ts pageRendererPid); "browser processes" sums every process of the browser.
 // Each step also prints the renderer's peak since the step before (VmHWM), and with --breakdown the renderer by
 // allocator from Chromium's own memory-infra dump (the decoded bitmap is one direct-mapped block in malloc).
 //   BENCH_DIST=/path/to/dist [BENCH_PORT=4244] flock /tmp/foldroot-bigmem.lock npx tsx scripts/benchScanMemory.ts
@@ -10,7 +11,7 @@
 import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { chromium, type Page } from '@playwright/test';
 import { startPreview } from './previewServer';
-import { allocatorLine, rendererAllocators } from './rendererMemory';
+import { allocatorLine, pageRendererPid, rendererAllocators } from './rendererMemory';
 
 const DIST = process.env.BENCH_DIST || 'dist';
 const flag = (name: string, fallback: number) => {
@@ -126,9 +127,11 @@ async function main(): Promise<void> {
       const browserCdp = await browser.newBrowserCDPSession();
       const info = (await browserCdp.send('SystemInfo.getProcessInfo')) as { processInfo: { type: string; id: number }[] };
       await browserCdp.detach();
+      // The page's own renderer process: the browser's others (a spare one, its interface's) hold nothing of the app.
+      const pagePid = await pageRendererPid(page);
       let [rss, anon, peak] = [0, 0, 0];
       for (const p of info.processInfo) {
-        if (p.type !== 'renderer') continue;
+        if (p.type !== 'renderer' || (pagePid !== null && p.id !== pagePid)) continue;
         const status = readFileSync(`/proc/${p.id}/status`, 'utf8');
         rss += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
         anon += Number(/RssAnon:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
@@ -139,7 +142,7 @@ async function main(): Promise<void> {
       const held = await page.getByTestId('scan-memory').evaluate((el) => `${el.getAttribute('data-decoded-scans')} decoded, ${el.getAttribute('data-reduced-tiles')} tiles`).catch(() => 'no scan decoded');
       const ratio = rgbaMb > 0 ? `   = ${(rss / rgbaMb).toFixed(2)}× its RGBA ${rgbaMb.toFixed(0)} MB (over the app before any scan ${((rss - base.rss) / rgbaMb).toFixed(2)}×, private ${((anon - base.anon) / rgbaMb).toFixed(2)}×)` : '';
       console.log(`${what.padEnd(34)} JS heap ${heap.toFixed(1).padStart(7)} MB   renderer RSS ${rss.toFixed(0).padStart(6)} MB (private ${anon.toFixed(0).padStart(6)} MB, peak since the step began ${peak.toFixed(0)} MB)${ratio}   browser processes RSS ${treeRssMb(rootPid).toFixed(0).padStart(6)} MB   panel: ${held}`);
-      if (BREAKDOWN) console.log(`${''.padEnd(34)} renderer by allocator (MB): ${allocatorLine(await rendererAllocators(browser, DEPTH))}`);
+      if (BREAKDOWN) console.log(`${''.padEnd(34)} renderer by allocator (MB): ${allocatorLine(await rendererAllocators(browser, DEPTH, pagePid ?? undefined))}`);
     };
     await measure('after start-up (demo)', 0);
     const open = async (mp: number, name: string) => {

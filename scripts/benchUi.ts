@@ -12,9 +12,11 @@
 // - pan: frame intervals while panning a 1 MP and the largest scan (fitted, and at 1:1); floor: the page's idle
 //   frame interval. Twice: frame rate capped at the display's, and uncapped (a frame then takes what its work takes).
 // - open scan at each size: drop → shown (timed in the page: the frame that first draws it done); floor: createImageBitmap of the same file in the same page. With it the
-//   renderer's memory (resident and private) against the scan's RGBA size, and against the renderer before any
-//   scan plus that RGBA size (what holding the decoded scan cannot go under), with Chromium's own account of it by
-//   allocator (scripts/rendererMemory.ts); last, the renderer once the largest scan is replaced by a 1 MP one.
+//   memory of the renderer process that hosts the page (resident, and its private, file and shared parts; the
+//   browser's other renderer processes hold nothing of the app and are printed beside it) against the scan's RGBA
+//   size, and against that renderer before any scan plus the RGBA size (what holding the decoded scan cannot go
+//   under), with Chromium's own account of it by allocator (scripts/rendererMemory.ts); then, for the largest scan
+//   before its exports, the renderer once it is replaced by a 1 MP one (and again at the end, after the export floors).
 // - export PNG at each offered size (--png-sizes screen,a4-150,a4-300,a3-300) and scan size: the button's click event →
 //   the file handed to the browser's download, both in the page (Playwright's click → download event in the note);
 //   floor: the same figure (the markup of the app's SVG export) drawn by the browser with the scan at the PNG's
@@ -50,7 +52,7 @@ import { fitCamera } from '../src/state/camera';
 import { SCAN_SHOWN_MARK } from '../src/state/scanTilesPyramid';
 import { LONG_TASKS, longestSince, pageNow as now } from './pageTasks';
 import { startPreview } from './previewServer';
-import { allocatorLine, rendererAllocators } from './rendererMemory';
+import { allocatorLine, pageRendererMemory, rendererAllocators, residentLine, type ProcessMemory } from './rendererMemory';
 import { DRAG_TRACE_CATEGORIES, INVALIDATION_CATEGORY, printDragTrace, type DragTraceEvent } from './dragTrace';
 
 const DIST = process.env.BENCH_DIST || '/tmp/foldroot-bench-ui/dist';
@@ -130,35 +132,19 @@ function printRow(r: Row): void {
 // Long tasks: the page keeps every task over 50 ms from before the app loads (scripts/pageTasks.ts).
 
 /**
- * Memory (MB) of the browser's renderer processes (their ids from the browser, sizes from Linux /proc), after a
- * collection: resident (VmRSS, which counts the mapped program's pages too) and private anonymous (RssAnon: the heap,
- * bitmaps and canvases the page holds); null where it cannot be read.
+ * Memory (MB) of the renderer process that hosts the page (found by its main frame: scripts/rendererMemory.ts), from
+ * Linux /proc after a collection: resident (VmRSS) and its parts, private anonymous (RssAnon: the heap, bitmaps and
+ * canvases the page holds), mapped files (RssFile: Chromium's own program, shared with every process of it) and
+ * shared memory (RssShmem: regions shared with the browser and GPU processes); beside it the resident memory of the
+ * browser's other renderer processes together (its spare renderer and its interface's, neither holding anything of
+ * the app). Null where it cannot be read.
  */
-async function rendererMemory(page: Page): Promise<{ rss: number; anon: number } | null> {
-  const cdp = await page.context().newCDPSession(page);
-  await cdp.send('HeapProfiler.collectGarbage').catch(() => undefined);
-  await cdp.detach();
-  const browserCdp = await page.context().browser()!.newBrowserCDPSession();
-  try {
-    const info = (await browserCdp.send('SystemInfo.getProcessInfo')) as { processInfo: { type: string; id: number }[] };
-    const { readFileSync } = await import('node:fs');
-    let rss = 0;
-    let anon = 0;
-    for (const p of info.processInfo) {
-      if (p.type !== 'renderer') continue;
-      const status = readFileSync(`/proc/${p.id}/status`, 'utf8');
-      rss += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0);
-      anon += Number(/RssAnon:\s+(\d+)/.exec(status)?.[1] ?? 0);
-    }
-    return rss > 0 ? { rss: rss / 1024, anon: anon / 1024 } : null;
-  } catch {
-    return null;
-  } finally {
-    await browserCdp.detach();
-  }
+async function rendererMemory(page: Page): Promise<(ProcessMemory & { others: ProcessMemory }) | null> {
+  const m = await pageRendererMemory(page).catch(() => null);
+  return m ? { ...m.page, others: m.others } : null;
 }
 
-/** Resident memory (MB) of the renderer processes after a collection; null where it cannot be read. */
+/** Resident memory (MB) of the page's renderer process after a collection; null where it cannot be read. */
 async function rendererMb(page: Page): Promise<number | null> {
   return (await rendererMemory(page))?.rss ?? null;
 }
@@ -1058,7 +1044,12 @@ async function bigDocuments(page: Page, label: string): Promise<void> {
 async function scans(page: Page): Promise<void> {
   const big = SCAN_MP.reduce((m, x) => Math.max(m, x), 0);
   const before = await rendererMemory(page);
-  if (before) report({ work: 'renderer memory before any scan (the demo open)', ms: before.rss, floor: 0, unit: 'MB', note: `private ${before.anon.toFixed(0)} MB` });
+  if (before) {
+    report({
+      work: 'renderer memory before any scan (the demo open)', ms: before.rss, floor: 0, unit: 'MB',
+      note: `the page's renderer process (pid ${before.pid}): ${residentLine(before)} MB; the browser's other renderer processes (spare, interface) ${before.others.rss.toFixed(0)} MB`,
+    });
+  }
   let lastRgba = 0;
   let lastMp = 0;
   for (const mp of SCAN_MP) {
@@ -1088,13 +1079,18 @@ async function scans(page: Page): Promise<void> {
         const m = await rendererMemory(page);
         if (m) {
           const over = before ? `; over the app before any scan ${(m.rss - before.rss).toFixed(0)} MB = ${((m.rss - before.rss) / rgba).toFixed(2)}× (private ${((m.anon - before.anon) / rgba).toFixed(2)}×)` : '';
-          report({ work: `renderer memory with a ${mp} MP scan open`, ms: m.rss, floor: rgba, unit: 'MB', note: `floor: its RGBA size; target ≤ 1.5× (${(1.5 * rgba).toFixed(0)} MB); private ${m.anon.toFixed(0)} MB = ${(m.anon / rgba).toFixed(2)}×${over}` });
+          report({
+            work: `renderer memory with a ${mp} MP scan open`, ms: m.rss, floor: rgba, unit: 'MB',
+            note: `the page's renderer process, resident; floor: its RGBA size; target ≤ 1.5× (${(1.5 * rgba).toFixed(0)} MB); ${residentLine(m)} MB; private = ${(m.anon / rgba).toFixed(2)}×${over}; with the browser's other renderer processes ${(m.rss + m.others.rss).toFixed(0)} MB = ${((m.rss + m.others.rss) / rgba).toFixed(2)}×`,
+          });
           if (before) {
             // What holding the decoded scan cannot go under: the renderer as it was before any scan, plus the RGBA.
-            const alloc = await rendererAllocators(page.context().browser()!).catch(() => null);
-            report({ work: `  … against the app before any scan + its RGBA (${mp} MP)`, ms: m.rss, floor: before.rss + rgba, unit: 'MB', note: `floor: ${before.rss.toFixed(0)} + ${rgba.toFixed(0)} MB${alloc ? `; renderer by allocator (MB): ${allocatorLine(alloc, 8)}` : ''}` });
+            const alloc = await rendererAllocators(page.context().browser()!, 2, m.pid).catch(() => null);
+            report({ work: `  … against the app before any scan + its RGBA (${mp} MP)`, ms: m.rss, floor: before.rss + rgba, unit: 'MB', note: `floor: ${before.rss.toFixed(0)} + ${rgba.toFixed(0)} MB${alloc ? `; the page's renderer by allocator (MB): ${allocatorLine(alloc, 8)}` : ''}` });
           }
         }
+        if (mp === big && m) await bareScanMemory(page, side, m.rss - (before?.rss ?? 0));
+        if (mp === big && before) await replacedMemory(page, mp, rgba, before, name);
       }
       if (EXPORT_SIZES.length > 0 && run === 0) await figureForFloor(page);
       for (const [k, [id, w, h]] of EXPORT_SIZES.entries()) {
@@ -1128,13 +1124,73 @@ async function scans(page: Page): Promise<void> {
       report({ work: `pan over a ${mp} MP scan, 1:1: frame`, ms: median(actual), floor: median(idle), note: `p95 ${percentile(actual, 0.95).toFixed(1)} ms` });
     }
   }
-  // The last scan replaced by a 1 MP one: its bitmap and tiles are closed (its bytes stay for undo, outside the renderer).
+  // At the end, after the exports and their floors: the floors decode the scan file again in this page
+  // (createImageBitmap of the file, resized), which leaves Chromium's shared memory for image decoding behind
+  // (about a third of the RGBA at 200 MP); the app's own release is the row measured before them (replacedMemory).
+  await makeScan(page, 1000, 'bench-replacement-1mp-end.jpg');
+  await openScan(page, 'bench-replacement-1mp-end.jpg');
+  const after = await rendererMemory(page);
+  if (after && before) {
+    report({
+      work: `  … replaced again after its exports and their floors`, ms: after.rss, floor: before.rss, unit: 'MB',
+      note: `the page's renderer process, resident; floor: before any scan; ${residentLine(after)} MB (the floors' image decoding in this page, not the app's); ${lastMp} MP RGBA is ${lastRgba.toFixed(0)} MB`,
+    });
+  }
+}
+
+/**
+ * The browser's floor for holding a decoded scan: a bare page of the same size (a new tab, so a renderer process of
+ * its own) that makes the same file, decodes it with createImageBitmap and draws it fitted on a canvas the size of
+ * the view, measured as the app's page is (its renderer process, resident, after a collection), against that page
+ * before. `appMb` is what the app's page gained with the scan open.
+ */
+async function bareScanMemory(page: Page, side: number, appMb: number): Promise<void> {
+  const bare = await page.context().browser()!.newPage({ viewport: page.viewportSize()! });
+  try {
+    await bare.setContent('<canvas id="view" style="display:block"></canvas>');
+    await makeScan(bare, side, 'bare.jpg');
+    const empty = await rendererMemory(bare);
+    await bare.evaluate(`(async () => {
+      const bitmap = await createImageBitmap(window.__scanFile);
+      window.__scanFile = null;
+      window.__bitmap = bitmap;
+      const c = document.getElementById('view');
+      c.width = innerWidth;
+      c.height = innerHeight;
+      const k = Math.min(c.width / bitmap.width, c.height / bitmap.height);
+      c.getContext('2d').drawImage(bitmap, 0, 0, bitmap.width * k, bitmap.height * k);
+      await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+    })()`);
+    const held = await rendererMemory(bare);
+    if (!empty || !held) return;
+    const floorMb = held.rss - empty.rss;
+    report({
+      work: `  … what the scan added, against a bare page (${Math.round((side * side) / 1e6)} MP)`, ms: appMb, floor: floorMb, unit: 'MB',
+      note: `floor: a bare page's renderer (pid ${held.pid}) decoding the same file and drawing it fitted, ${residentLine(empty)} MB before, ${residentLine(held)} MB after`,
+    });
+  } finally {
+    await bare.close();
+  }
+}
+
+/**
+ * The scan `name` (mp MP, open now) replaced by a 1 MP one before anything else decodes it in this page: the page's
+ * renderer against itself before any scan, then the scan opened again (from the same file) for the rows that follow.
+ */
+async function replacedMemory(page: Page, mp: number, rgba: number, before: ProcessMemory & { others: ProcessMemory }, name: string): Promise<void> {
+  await page.evaluate('window.__heldScanFile = window.__scanFile');
   await makeScan(page, 1000, 'bench-replacement-1mp.jpg');
   await openScan(page, 'bench-replacement-1mp.jpg');
   const after = await rendererMemory(page);
-  if (after && before) {
-    report({ work: `renderer memory after the ${lastMp} MP scan is replaced by 1 MP`, ms: after.rss, floor: before.rss, unit: 'MB', note: `floor: before any scan; private ${after.anon.toFixed(0)} MB (before ${before.anon.toFixed(0)}); ${lastMp} MP RGBA is ${lastRgba.toFixed(0)} MB` });
+  if (after) {
+    report({
+      work: `renderer memory after the ${mp} MP scan is replaced by 1 MP`, ms: after.rss, floor: before.rss, unit: 'MB',
+      note: `the page's renderer process, resident; floor: before any scan; ${residentLine(after)} MB (before ${residentLine(before)}); with the browser's other renderer processes ${(after.rss + after.others.rss).toFixed(0)} MB (before ${(before.rss + before.others.rss).toFixed(0)}); ${mp} MP RGBA is ${rgba.toFixed(0)} MB`,
+    });
   }
+  const again = name.replace(/(\.jpg)$/, '-again$1');
+  await page.evaluate(`window.__scanFile = new File([window.__heldScanFile], ${JSON.stringify(again)}, { type: 'image/jpeg' }); window.__heldScanFile = null`);
+  await openScan(page, again);
 }
 
 // The preview line as the overlay draws it: each drawing sets a user-timing mark (canvas/OverlayLayer.tsx,
