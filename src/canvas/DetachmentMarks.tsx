@@ -5,7 +5,7 @@
 // A group at the bottom of the overlay's layer (OverlayLayer), not a canvas of its own: during a regional or pin
 // drag it changes with the handles over it, so the two are one canvas redrawn and sent to the screen, not two.
 import { memo, useLayoutEffect, useRef, useState } from 'react';
-import { Group, Label, Line, Tag, Text } from 'react-konva';
+import { Group, Line, Shape } from 'react-konva';
 import type Konva from 'konva';
 import type { ProjectDoc } from '../core/model/projectDoc';
 import { useDocStore } from '../state/docStore';
@@ -16,6 +16,7 @@ import { sectionToImage } from '../core/calibration/mapPoints';
 import { EXACT_FIT_TEXT, formatInterval, formatLength } from '../format/formatQuantity';
 import { detachmentTrace } from './detachmentTrace';
 import { MARK_COLOURS } from '../core/model/horizonPalette';
+import { drawLabelPicture, labelPicture, paintLabelPicture } from './labelPicture';
 
 const COLOUR = MARK_COLOURS.detachment;
 // Screen pixels: small type on a translucent white backing, so it stays legible over scan art and
@@ -59,8 +60,12 @@ export const DetachmentMarks = memo(function DetachmentMarks() {
   const group = useRef<Konva.Group>(null);
   const band = useRef<Konva.Line>(null);
   const line = useRef<Konva.Line>(null);
-  const label = useRef<Konva.Label>(null);
-  const text = useRef<Konva.Text>(null);
+  const label = useRef<Konva.Shape>(null);
+  // The label's text is drawn once per text into a canvas of its own, kept between texts (labelPicture.ts).
+  const [picture] = useState(() => labelPicture(
+    { fill: 'rgba(255, 255, 255, 0.78)', cornerRadius: 2, perfectDrawEnabled: false },
+    { fontSize: FONT, lineHeight: LINE_HEIGHT, padding: PAD, fill: COLOUR, fontStyle: 'bold', perfectDrawEnabled: false },
+  ));
 
   useLayoutEffect(() => {
     // The inputs last drawn: the document and its gesture's start, the zoom, and the self-crossing verdicts (a
@@ -75,14 +80,10 @@ export const DetachmentMarks = memo(function DetachmentMarks() {
       line.current?.setAttrs({ points: drawn.line, strokeWidth: 2.2 * k, dash: [12 * k, 6 * k] });
       // The label is laid out in screen pixels and scaled to the view: a font of FONT / scale image pixels (over a
       // thousand on a big document fitted to the view) made the canvas resolve a new font size on every zoom, and
-      // one that large took a tenth of a second to set.
-      label.current?.setAttrs({ x: drawn.anchor[0] + 4 * k, y: drawn.anchor[1] + 5 * k, scaleX: k, scaleY: k });
-      // Drawn once per text into a canvas of its own (in screen pixels, the label's drawn scale): setting the font on
-      // the view's canvas made the browser bring the page's style up to date in the middle of each frame of a drag.
-      if (text.current && label.current && (text.current.text() !== drawn.label || !label.current.isCached())) {
-        text.current.text(drawn.label);
-        label.current.cache({ pixelRatio: window.devicePixelRatio || 1 });
-      }
+      // one that large took a tenth of a second to set. It is drawn once per text into a canvas of its own: setting
+      // the font on the view's canvas made the browser bring the page's style up to date in each frame of a drag.
+      paintLabelPicture(picture, drawn.label, window.devicePixelRatio || 1);
+      label.current?.setAttrs({ x: drawn.anchor[0] + 4 * k, y: drawn.anchor[1] + 5 * k, scaleX: k, scaleY: k, label: drawn.label });
     };
     const update = () => {
       const { doc, gestureStart } = useDocStore.getState();
@@ -102,7 +103,7 @@ export const DetachmentMarks = memo(function DetachmentMarks() {
     update();
     const stop = [useDocStore.subscribe(update), useSessionStore.subscribe(update), useCrossingChecks.subscribe(update)];
     return () => stop.forEach((s) => s());
-  }, [kind]);
+  }, [kind, picture]);
 
   return (
     <Group ref={group} name="detachment" listening={false}>
@@ -110,10 +111,8 @@ export const DetachmentMarks = memo(function DetachmentMarks() {
       {kind !== 'none' && (
         <>
           <Line ref={line} stroke={COLOUR} perfectDrawEnabled={false} listening={false} />
-          <Label ref={label} listening={false}>
-            <Tag fill="rgba(255, 255, 255, 0.78)" cornerRadius={2} perfectDrawEnabled={false} />
-            <Text ref={text} fontSize={FONT} lineHeight={LINE_HEIGHT} padding={PAD} fill={COLOUR} fontStyle="bold" perfectDrawEnabled={false} />
-          </Label>
+          <Shape ref={label} name="detachment-label" listening={false} perfectDrawEnabled={false}
+            sceneFunc={(ctx) => drawLabelPicture(ctx, picture)} />
         </>
       )}
     </Group>

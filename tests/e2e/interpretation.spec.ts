@@ -244,7 +244,8 @@ interface Shown { strip: number; elevation: number; depth: number; displacement:
 async function sectionDetachment(page: Page): Promise<{ label: string; lineRow: number }> {
   return page.evaluate(`(() => {
     const stage = window.Konva.stages[0];
-    const text = stage.find('Text').find((t) => t.text().startsWith('Proposed detachment'));
+    // The label's text, as its picture was last drawn with (canvas/labelPicture.ts).
+    const text = stage.findOne('.detachment-label')?.getAttr('label');
     if (!text) return { label: '', lineRow: NaN };
     const marks = stage.findOne('.detachment');
     const canvas = marks.toCanvas({ x: 0, y: 0, width: stage.width(), height: stage.height(), pixelRatio: window.devicePixelRatio || 1 });
@@ -261,7 +262,7 @@ async function sectionDetachment(page: Page): Promise<{ label: string; lineRow: 
       if (hits.length) rows.push(hits.reduce((a, b) => a + b, 0) / hits.length / ratio);
     }
     rows.sort((a, b) => a - b);
-    return { label: text.text(), lineRow: rows.length ? rows[Math.floor(rows.length / 2)] : NaN };
+    return { label: text, lineRow: rows.length ? rows[Math.floor(rows.length / 2)] : NaN };
   })()`);
 }
 
